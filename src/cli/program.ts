@@ -1,0 +1,19 @@
+import { Command } from 'commander';
+import { registerPlan } from './plan.js';
+import { registerSites } from './sites.js';
+
+/** The `crest` program. Each command lives in its own file and registers itself here. */
+export function buildProgram(): Command {
+  const program = new Command('crest')
+    .description('Plan radial-velocity exoplanet campaigns: visibility, detectability and phase-aware scheduling.')
+    .version('0.1.0')
+    .option('--debug', 'show stack traces for internal errors')
+    .showHelpAfterError('(run with --help for usage)')
+    .exitOverride();
+  const commands: ((program: Command) => Command)[] = [
+    registerPlan,
+    registerSites,
+  ];
+  for (const register of commands) register(program).exitOverride();
+  return program;
+}

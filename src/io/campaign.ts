@@ -1,0 +1,84 @@
+import path from 'node:path';
+import { z } from 'zod';
+import { DateTime } from 'luxon';
+import { inputError } from '../errors.js';
+import type { Campaign } from '../model.js';
+import { readInstrument } from './instrument.js';
+import { INSTRUMENTS_DIR, SITES_DIR } from './paths.js';
+import { readStructured } from './read-text.js';
+import { resolveRef } from './resolve.js';
+import { readSite } from './site.js';
+import { readTargets } from './targets.js';
+import { issueToError } from './zod-issue.js';
+
+/** A calendar date, ISO 8601 (YAML may hand us a Date for an unquoted date). */
+export const isoDate = z.preprocess(
+  (v) => (v instanceof Date ? v.toISOString().slice(0, 10) : v),
+  z.string({ error: 'a date as YYYY-MM-DD' }).refine((s) => /^\d{4}-\d{2}-\d{2}$/.test(s) && DateTime.fromISO(s).isValid, 'a date as YYYY-MM-DD'),
+);
+
+const constraintsSchema = z.strictObject({
+  twilight: z.enum(['civil', 'nautical', 'astronomical'], { error: 'one of civil, nautical, astronomical' }).default('nautical'),
+  maxAirmass: z.number({ error: 'an airmass from 1 to 5' }).min(1, 'an airmass from 1 to 5').max(5, 'an airmass from 1 to 5').default(2),
+  moonSeparationDeg: z.number({ error: 'degrees from 0 to 180' }).min(0, 'degrees from 0 to 180').max(180, 'degrees from 0 to 180').default(30),
+  minSpacingHours: z.number({ error: 'hours, 0 or more' }).min(0, 'hours, 0 or more').max(24 * 365, 'hours, at most a year').default(20),
+  minWindowMinutes: z.number({ error: 'minutes, 0 or more' }).min(0, 'minutes, 0 or more').max(600, 'minutes, at most 600').default(20),
+});
+
+const timeSchema = z.discriminatedUnion(
+  'mode',
+  [
+    z.strictObject({ mode: z.literal('choose-nights'), nights: z.number().int('a whole number of nights').min(1, 'at least 1 night').max(366, 'at most 366 nights') }),
+    z.strictObject({ mode: z.literal('given-nights'), dates: z.array(isoDate).min(1, 'at least one date') }),
+    z.strictObject({ mode: z.literal('hours'), hours: z.number().positive('a positive number of hours').max(5000, 'at most 5000 hours') }),
+  ],
+  { error: 'mode is one of choose-nights, given-nights, hours' },
+);
+
+/** Campaign file schema (DESIGN.md "Input files"). Paths are relative to the campaign file. */
+export const campaignSchema = z.strictObject({
+  name: z.string({ error: 'a campaign name' }).min(1, 'a campaign name'),
+  site: z.string({ error: 'a site id or a path to a site file' }).min(1, 'a site id or a path to a site file'),
+  instrument: z.string({ error: 'an instrument id or a path to an instrument profile' }).min(1, 'an instrument id or a path'),
+  targets: z.string({ error: 'a path to a target list (CSV)' }).min(1, 'a path to a target list (CSV)'),
+  window: z
+    .strictObject({ start: isoDate, end: isoDate })
+    .refine((w) => w.start <= w.end, { path: ['end'], message: 'on or after window.start' })
+    .refine((w) => DateTime.fromISO(w.end).diff(DateTime.fromISO(w.start), 'days').days <= 731, { path: ['end'], message: 'at most two years after window.start' }),
+  time: timeSchema,
+  constraints: constraintsSchema.default(constraintsSchema.parse({})),
+  goals: z.strictObject({ significance: z.number().positive('a positive K/sigma_K').max(100, 'at most 100').default(5) }).default({ significance: 5 }),
+  seed: z.number().int('a whole number').min(0, 'a whole number, 0 or more').default(1),
+});
+
+export function readCampaign(file: string): Campaign {
+  const data = readStructured(file, 'campaign file');
+  const result = campaignSchema.safeParse(data);
+  if (!result.success) throw issueToError(file, data, result.error);
+  const c = result.data;
+  if (c.time.mode === 'given-nights') {
+    c.time.dates.forEach((date, i) => {
+      if (date < c.window.start || date > c.window.end) {
+        throw inputError({ file, field: `time.dates[${i}]`, value: date, allowed: `a date inside the window ${c.window.start} to ${c.window.end}` });
+      }
+    });
+  }
+  const baseDir = path.dirname(path.resolve(file));
+  const sitePath = resolveRef(c.site, SITES_DIR, 'site', { file, field: 'site', baseDir });
+  const instrumentPath = resolveRef(c.instrument, INSTRUMENTS_DIR, 'instrument', { file, field: 'instrument', baseDir });
+  const targetsFile = path.resolve(baseDir, c.targets);
+  const shown = (p: string) => path.relative(process.cwd(), p) || p;
+  return {
+    name: c.name,
+    file,
+    site: readSite(shown(sitePath)),
+    instrument: readInstrument(shown(instrumentPath)),
+    targets: readTargets(shown(targetsFile)),
+    targetsFile: shown(targetsFile),
+    window: c.window,
+    time: c.time,
+    constraints: c.constraints,
+    goals: c.goals,
+    seed: c.seed,
+  };
+}

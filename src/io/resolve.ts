@@ -1,0 +1,33 @@
+import { existsSync, readdirSync } from 'node:fs';
+import path from 'node:path';
+import { inputError } from '../errors.js';
+
+/** Ids of the JSON files in a folder (file name without extension), sorted. */
+export function listIds(dir: string): string[] {
+  if (!existsSync(dir)) return [];
+  return readdirSync(dir)
+    .filter((name) => name.endsWith('.json'))
+    .map((name) => name.slice(0, -'.json'.length))
+    .sort();
+}
+
+/**
+ * A reference is either a path (contains a slash or a file extension) or an id of a bundled file.
+ * `baseDir` resolves relative paths (the campaign file's folder).
+ */
+export function resolveRef(
+  ref: string,
+  bundledDir: string,
+  what: string,
+  context: { file: string; field: string; baseDir: string },
+): string {
+  if (/[\\/]/.test(ref) || /\.(json|ya?ml)$/i.test(ref)) return path.resolve(context.baseDir, ref);
+  const ids = listIds(bundledDir);
+  if (ids.includes(ref)) return path.join(bundledDir, `${ref}.json`);
+  throw inputError({
+    file: context.file,
+    field: context.field,
+    value: ref,
+    allowed: `unknown ${what} id; known: ${ids.join(', ')} (or give a path to a file)`,
+  });
+}

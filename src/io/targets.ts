@@ -1,0 +1,203 @@
+import { parse as parseCsv, CsvError } from 'csv-parse/sync';
+import { z } from 'zod';
+import { InputError, inputError } from '../errors.js';
+import type { Target } from '../model.js';
+import { DEFAULT_VSINI_KMS, defaultJitterMps, massFromTeffSun } from '../rv/star-defaults.js';
+import { readText } from './read-text.js';
+import { parseDecDeg, parseRaDeg } from './sexagesimal.js';
+
+type Cell = string | undefined;
+
+/** A number cell; blank means "not given". The text is what the error line says is allowed. */
+function numberField(allowed: string, min: number, max: number, opts: { exclusiveMin?: boolean } = {}) {
+  return z.preprocess(
+    (cell: Cell) => (cell === undefined || cell.trim() === '' ? undefined : Number(cell.trim())),
+    z
+      .number({ error: allowed })
+      .refine((v) => Number.isFinite(v) && (opts.exclusiveMin ? v > min : v >= min) && v <= max, allowed)
+      .optional(),
+  );
+}
+
+function angleField(parse: (text: string) => number, allowed: string, min: number, max: number) {
+  return z.preprocess(
+    (cell: Cell) => (cell === undefined || cell.trim() === '' ? undefined : parse(cell)),
+    z.number({ error: allowed }).refine((v) => Number.isFinite(v) && v >= min && v <= max, allowed),
+  );
+}
+
+/** Columns of a target list (DESIGN.md "Input files"); header names are case-insensitive. */
+const rowSchema = z.strictObject({
+  id: z.string({ error: 'required: a star name' }).trim().min(1, 'required: a star name'),
+  ra: angleField(parseRaDeg, 'right ascension as degrees 0 to 360 or hh:mm:ss.s (0h to 24h)', 0, 360),
+  dec: angleField(parseDecDeg, 'declination as degrees -90 to +90 or ±dd:mm:ss', -90, 90),
+  pmramasyr: numberField('proper motion in RA*cos(dec), mas/yr, -20000 to 20000', -20000, 20000),
+  pmdecmasyr: numberField('proper motion in Dec, mas/yr, -20000 to 20000', -20000, 20000),
+  epochyear: numberField('epoch of the coordinates as a year, 1900 to 2100', 1900, 2100),
+  vmag: numberField('V magnitude from -2 to 20', -2, 20),
+  teffk: numberField('effective temperature in kelvin, 2300 to 12000', 2300, 12000),
+  masssun: numberField('stellar mass in solar masses, more than 0.05 and at most 10', 0.05, 10, { exclusiveMin: true }),
+  vsinikms: numberField('projected rotation in km/s, 0 to 300', 0, 300),
+  jittermps: numberField('stellar jitter in m/s, 0 to 1000', 0, 1000),
+  priority: numberField('a priority weight, more than 0 and at most 100', 0, 100, { exclusiveMin: true }),
+  perioddays: numberField('orbital period in days, more than 0 and at most 100000', 0, 1e5, { exclusiveMin: true }),
+  perioderrdays: numberField('period uncertainty in days, 0 or more (below the period)', 0, 1e5),
+  tcbjdtdb: numberField('mid-transit time as a full BJD_TDB, 2400000 to 2600000', 2.4e6, 2.6e6),
+  tcerrdays: numberField('uncertainty of Tc in days, 0 to 100', 0, 100),
+  planetmassearth: numberField('planet mass in Earth masses, more than 0 and at most 30000', 0, 3e4, { exclusiveMin: true }),
+  planetkmps: numberField('semi-amplitude K in m/s, more than 0 and at most 10000', 0, 1e4, { exclusiveMin: true }),
+  ecc: z.preprocess(
+    (cell: Cell) => (cell === undefined || cell.trim() === '' ? undefined : Number(cell.trim())),
+    z.number({ error: 'eccentricity from 0 to 0.99' }).min(0, 'eccentricity from 0 to 0.99').max(0.99, 'eccentricity from 0 to 0.99 (e >= 1 is not a bound orbit)').optional(),
+  ),
+  omegadeg: numberField('argument of periastron in degrees, 0 to 360', 0, 360),
+  searchperiodmindays: numberField('shortest search period in days, more than 0.1 and at most 100000', 0.1, 1e5, { exclusiveMin: true }),
+  searchperiodmaxdays: numberField('longest search period in days, more than 0.1 and at most 100000', 0.1, 1e5, { exclusiveMin: true }),
+  searchmassearth: numberField('search mass in Earth masses, more than 0', 0, 3e4, { exclusiveMin: true }),
+});
+
+type Row = z.infer<typeof rowSchema>;
+const COLUMNS = Object.keys(rowSchema.shape);
+const CANONICAL: Record<string, string> = {
+  pmramasyr: 'pmRaMasYr', pmdecmasyr: 'pmDecMasYr', epochyear: 'epochYear', teffk: 'teffK', masssun: 'massSun',
+  vsinikms: 'vsiniKms', jittermps: 'jitterMps', perioddays: 'periodDays', perioderrdays: 'periodErrDays',
+  tcbjdtdb: 'tcBjdTdb', tcerrdays: 'tcErrDays', planetmassearth: 'planetMassEarth', planetkmps: 'planetKMps',
+  omegadeg: 'omegaDeg', searchperiodmindays: 'searchPeriodMinDays', searchperiodmaxdays: 'searchPeriodMaxDays',
+  searchmassearth: 'searchMassEarth',
+};
+const display = (column: string) => CANONICAL[column] ?? column;
+const REQUIRED = ['id', 'ra', 'dec', 'vmag', 'teffk'];
+
+interface Place {
+  file: string;
+  where: string;
+  raw: Record<string, string>;
+}
+
+function fail(place: Place, column: string, allowed: string): never {
+  throw inputError({ file: place.file, where: place.where, field: display(column), value: place.raw[column] ?? '', allowed });
+}
+
+/** Cross-field rules: what goes with what. */
+function buildTarget(row: Row, place: Place): Target {
+  const estimated: string[] = [];
+  const need = (column: keyof Row, allowed: string) => {
+    if (row[column] === undefined) fail(place, column, allowed);
+  };
+  need('vmag', 'required: V magnitude from -2 to 20');
+  need('teffk', 'required: effective temperature in kelvin');
+  const teffK = row.teffk!;
+  const withDefault = <T>(value: T | undefined, name: string, fallback: T): T => {
+    if (value !== undefined) return value;
+    estimated.push(name);
+    return fallback;
+  };
+
+  const hasPeriod = row.perioddays !== undefined;
+  for (const c of ['tcbjdtdb', 'planetmassearth', 'planetkmps', 'perioderrdays', 'tcerrdays'] as const) {
+    if (!hasPeriod && row[c] !== undefined) fail(place, c, 'needs periodDays in the same row');
+  }
+  if (hasPeriod && row.tcbjdtdb === undefined) fail(place, 'tcbjdtdb', 'required with periodDays: mid-transit time as a full BJD_TDB');
+  if (row.planetmassearth !== undefined && row.planetkmps !== undefined) {
+    fail(place, 'planetkmps', 'give planetMassEarth or planetKMps, not both');
+  }
+  if (hasPeriod && row.perioderrdays !== undefined && row.perioderrdays >= row.perioddays!) {
+    fail(place, 'perioderrdays', 'period uncertainty in days, smaller than the period');
+  }
+  const search = [row.searchperiodmindays, row.searchperiodmaxdays, row.searchmassearth];
+  const searchGiven = search.filter((v) => v !== undefined).length;
+  if (searchGiven > 0 && searchGiven < 3) {
+    const missing = (['searchperiodmindays', 'searchperiodmaxdays', 'searchmassearth'] as const).find((c) => row[c] === undefined)!;
+    fail(place, missing, 'the three search columns go together: searchPeriodMinDays, searchPeriodMaxDays, searchMassEarth');
+  }
+  if (searchGiven === 3 && row.searchperiodmindays! >= row.searchperiodmaxdays!) {
+    fail(place, 'searchperiodmaxdays', 'longer than searchPeriodMinDays');
+  }
+
+  const target: Target = {
+    id: row.id,
+    raDeg: row.ra,
+    decDeg: row.dec,
+    pmRaMasYr: row.pmramasyr ?? 0,
+    pmDecMasYr: row.pmdecmasyr ?? 0,
+    epochYear: row.epochyear ?? 2000,
+    vmag: row.vmag!,
+    teffK,
+    massSun: withDefault(row.masssun, 'massSun', massFromTeffSun(teffK)),
+    vsiniKms: withDefault(row.vsinikms, 'vsiniKms', DEFAULT_VSINI_KMS),
+    jitterMps: withDefault(row.jittermps, 'jitterMps', defaultJitterMps(teffK)),
+    priority: row.priority ?? 1,
+    estimated,
+    source: `${place.file} ${place.where}`,
+  };
+  if (hasPeriod) {
+    target.ephemeris = {
+      periodDays: row.perioddays!,
+      periodErrDays: withDefault(row.perioderrdays, 'periodErrDays', 0),
+      tcBjdTdb: row.tcbjdtdb!,
+      tcErrDays: withDefault(row.tcerrdays, 'tcErrDays', 0),
+    };
+    if (row.planetmassearth !== undefined || row.planetkmps !== undefined) {
+      target.planet = {
+        massEarth: row.planetmassearth,
+        kMps: row.planetkmps,
+        ecc: row.ecc ?? 0,
+        omegaDeg: row.omegadeg ?? 90,
+      };
+    }
+  }
+  if (searchGiven === 3) {
+    target.search = {
+      periodMinDays: row.searchperiodmindays!,
+      periodMaxDays: row.searchperiodmaxdays!,
+      massEarth: row.searchmassearth!,
+    };
+  }
+  return target;
+}
+
+/** Parses a target list (CSV, RFC 4180, header row). `file` names it in messages. */
+export function parseTargets(text: string, file: string): Target[] {
+  if (text.trim() === '') throw inputError({ file, field: '(file)', value: '', allowed: 'empty file; expected a header row and one row per target' });
+  let records: { record: string[]; info: { lines: number } }[];
+  try {
+    records = parseCsv(text, { bom: true, info: true, skip_empty_lines: true, trim: true, comment: '#', comment_no_infix: true }) as unknown as typeof records;
+  } catch (err) {
+    if (err instanceof CsvError) {
+      const line = (err as CsvError & { lines?: number }).lines;
+      throw new InputError(`${file}: line ${line ?? '?'}: malformed CSV: ${err.message.replace(/^Invalid Record Length: /, '')}`);
+    }
+    throw err;
+  }
+  const [header, ...rows] = records;
+  const columns = header!.record.map((name) => name.trim().toLowerCase());
+  columns.forEach((column, i) => {
+    if (!COLUMNS.includes(column)) {
+      throw inputError({ file, where: `header column ${i + 1}`, field: 'column', value: header!.record[i], allowed: `unknown column; known: ${COLUMNS.map(display).join(', ')}` });
+    }
+    if (columns.indexOf(column) !== i) throw inputError({ file, where: `header column ${i + 1}`, field: 'column', value: header!.record[i], allowed: 'each column once' });
+  });
+  for (const column of REQUIRED.filter((c) => c !== 'vmag' && c !== 'teffk')) {
+    if (!columns.includes(column)) throw inputError({ file, where: 'header', field: display(column), value: undefined, allowed: `required column missing; the header has: ${header!.record.join(', ')}` });
+  }
+  if (rows.length === 0) throw inputError({ file, field: '(file)', value: '', allowed: 'no target rows after the header' });
+
+  const seen = new Set<string>();
+  return rows.map(({ record, info }, index) => {
+    const raw = Object.fromEntries(columns.map((c, i) => [c, record[i] ?? '']));
+    const place: Place = { file, where: `row ${index + 1} (line ${info.lines})`, raw };
+    const result = rowSchema.safeParse(raw);
+    if (!result.success) {
+      const issue = result.error.issues[0]!;
+      const column = String(issue.path[0]);
+      fail(place, column, issue.message.startsWith('Invalid input') ? 'a valid value' : issue.message);
+    }
+    if (seen.has(result.data.id)) fail(place, 'id', 'each target id once');
+    seen.add(result.data.id);
+    return buildTarget(result.data, place);
+  });
+}
+
+export function readTargets(file: string): Target[] {
+  return parseTargets(readText(file, 'target list'), file);
+}

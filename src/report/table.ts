@@ -1,0 +1,21 @@
+/** A column of a plain-text table: header, and right alignment for numbers. */
+export interface Column {
+  header: string;
+  align?: 'left' | 'right';
+}
+
+/** Renders rows as an aligned plain-text table with a rule under the header. */
+export function renderTable(columns: Column[], rows: string[][]): string {
+  const widths = columns.map((c, i) => Math.max(c.header.length, ...rows.map((r) => (r[i] ?? '').length)));
+  const line = (cells: string[]) =>
+    cells
+      .map((cell, i) => (columns[i]!.align === 'right' ? cell.padStart(widths[i]!) : cell.padEnd(widths[i]!)))
+      .join('  ')
+      .trimEnd();
+  return [line(columns.map((c) => c.header)), widths.map((w) => '-'.repeat(w)).join('  '), ...rows.map(line)].join('\n');
+}
+
+/** Fixed decimals, or a dash for a missing value. */
+export function fmt(value: number | undefined | null, decimals: number): string {
+  return value === undefined || value === null || !Number.isFinite(value) ? '-' : value.toFixed(decimals);
+}

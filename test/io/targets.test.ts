@@ -1,0 +1,39 @@
+import { describe, expect, it } from 'vitest';
+import { parseTargets } from '../../src/io/targets.js';
+import { parseDecDeg, parseRaDeg } from '../../src/io/sexagesimal.js';
+
+const header = 'id,ra,dec,vmag,teffK';
+
+describe('target list', () => {
+  it('reads sexagesimal and decimal coordinates', () => {
+    const [a, b] = parseTargets(`${header}\nA,14:29:43.0,-62:40:46,11,3000\nB,217.43,-62.68,11,3000\n`, 't.csv');
+    // 14h29m43s = 217.4292 deg; -62d40m46s = -62.6794 deg (arithmetic)
+    expect(a!.raDeg).toBeCloseTo(217.42917, 5);
+    expect(a!.decDeg).toBeCloseTo(-62.67944, 5);
+    expect(b!.raDeg).toBe(217.43);
+  });
+
+  it('fills documented defaults and flags them as estimated', () => {
+    const [t] = parseTargets(`${header}\nA,10:00:00,-10:00:00,9,5770\n`, 't.csv');
+    expect(t!.massSun).toBeCloseTo(1.0, 2);
+    expect(t!.estimated).toEqual(['massSun', 'vsiniKms', 'jitterMps']);
+  });
+
+  it('accepts case-insensitive headers and a negative zero-degree declination', () => {
+    const [t] = parseTargets('ID,RA,DEC,VMAG,TEFFK\nA,01:00:00,-00:30:00,9,5000\n', 't.csv');
+    expect(t!.decDeg).toBeCloseTo(-0.5, 9);
+  });
+
+  it.each([
+    ['RA 25h', 'A,25:00:00,-10:00:00,9,5000', /row 1 \(line 2\): ra = "25:00:00"/],
+    ['Dec +95', 'A,10:00:00,+95:00:00,9,5000', /dec = "\+95:00:00": declination/],
+    ['bad number', 'A,10:00:00,-10:00:00,bright,5000', /vmag = "bright"/],
+  ])('names the place of a bad value: %s', (_name, row, pattern) => {
+    expect(() => parseTargets(`${header}\n${row}\n`, 't.csv')).toThrow(pattern);
+  });
+
+  it('rejects sexagesimal with minutes of 60 or more', () => {
+    expect(parseRaDeg('10:60:00')).toBeNaN();
+    expect(parseDecDeg('-10:00:61')).toBeNaN();
+  });
+});
