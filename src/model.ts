@@ -132,3 +132,95 @@ export interface Campaign {
   goals: Goals;
   seed: number;
 }
+
+/** One night of the site (DESIGN.md "Data model"). Instants are UTC; null where the Sun never gets that low/high. */
+export interface Night {
+  /** The local date of the evening (site time zone), YYYY-MM-DD. */
+  localDate: string;
+  sunset: Date | null;
+  sunrise: Date | null;
+  civil: { dusk: Date | null; dawn: Date | null };
+  nautical: { dusk: Date | null; dawn: Date | null };
+  astronomical: { dusk: Date | null; dawn: Date | null };
+  /** Dark span for the chosen twilight level; null when there is none this night. */
+  darkStart: Date | null;
+  darkEnd: Date | null;
+  darkHours: number;
+  /** Why a field is null (e.g. "Sun never below -12 deg"), or undefined. */
+  note?: string;
+  moon: {
+    /** Illuminated fraction at the middle of the night, 0..1. */
+    illumination: number;
+    rise: Date | null;
+    set: Date | null;
+    upDuringDark: boolean;
+  };
+}
+
+/** When one target is observable in one night. */
+export interface Window {
+  targetId: string;
+  localDate: string;
+  start: Date;
+  end: Date;
+  bestTime: Date;
+  minAirmass: number;
+  moonSeparationDeg: number;
+}
+
+/** One planned observation. */
+export interface PlannedVisit {
+  targetId: string;
+  localDate: string;
+  /** Start of the exposure, ISO 8601 UTC. */
+  startUtc: string;
+  /** Start of the exposure in the site's zone, ISO 8601 with offset. */
+  startLocal: string;
+  /** Mid-exposure time as BJD_TDB. */
+  midBjdTdb: number;
+  exposureSec: number;
+  /** Exposure plus readout plus acquisition. */
+  durationSec: number;
+  airmass: number;
+  moonSeparationDeg: number;
+  /** Predicted orbital phase (0 = mid-transit) and its 1-sigma error, for targets with an ephemeris. */
+  phase?: number;
+  phaseErr?: number;
+  /** Per-visit precision (photon + floor) and with jitter. */
+  sigmaMps: number;
+  sigmaEffMps: number;
+}
+
+export interface TargetSummary {
+  targetId: string;
+  kind: 'ephemeris' | 'search' | 'monitor';
+  priority: number;
+  kMps?: number;
+  visits: number;
+  hours: number;
+  sigmaKMps?: number;
+  kOverSigmaK?: number;
+  goal?: number;
+  /** Probability of reaching the goal under the site's weather (simulated). */
+  goalProbability?: number;
+  /** (sigma^2/N) / Var(K): 1 is the best any schedule can do. */
+  informationEfficiency?: number;
+  /** 1-sigma phase error at the window's end. */
+  phaseErrAtEnd?: number;
+  warnings: string[];
+}
+
+export interface Plan {
+  schemaVersion: 1;
+  generator: string;
+  campaign: Campaign;
+  nights: Night[];
+  /** Nights chosen (choose-nights), given, or used (hours). */
+  plannedDates: string[];
+  /** Next-best nights in choose-nights mode, best first. */
+  backups: { localDate: string; rank: number; utilityGain: number }[];
+  visits: PlannedVisit[];
+  targets: TargetSummary[];
+  totals: { nights: number; visits: number; exposureHours: number; overheadHours: number; totalHours: number; utility: number };
+  warnings: string[];
+}
