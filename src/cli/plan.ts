@@ -1,6 +1,7 @@
 import type { Command } from 'commander';
 import { readCampaign } from '../io/campaign.js';
 import { DEMO_CAMPAIGN } from '../io/paths.js';
+import { targetKMps } from '../orbit/target-k.js';
 import { fmt, renderTable } from '../report/table.js';
 import { printJson } from './options.js';
 
@@ -15,8 +16,8 @@ export function registerPlan(program: Command): Command {
       if (opts.json) return printJson(campaign);
       console.log(`Campaign: ${campaign.name}`);
       console.log(`Site: ${campaign.site.name}; instrument: ${campaign.instrument.name}; window ${campaign.window.start} to ${campaign.window.end}`);
-      const rows = campaign.targets.map((t) => [t.id, fmt(t.vmag, 2), fmt(t.teffK, 0), fmt(t.massSun, 2), fmt(t.ephemeris?.periodDays, 4)]);
-      console.log(renderTable([{ header: 'target' }, { header: 'V', align: 'right' }, { header: 'Teff (K)', align: 'right' }, { header: 'M* (Msun)', align: 'right' }, { header: 'P (d)', align: 'right' }], rows));
+      const rows = campaign.targets.map((t) => [t.id, fmt(t.vmag, 2), fmt(t.teffK, 0), fmt(t.massSun, 2), fmt(t.ephemeris?.periodDays, 4), fmt(targetKMps(t), 2)]);
+      console.log(renderTable([{ header: 'target' }, { header: 'V', align: 'right' }, { header: 'Teff (K)', align: 'right' }, { header: 'M* (Msun)', align: 'right' }, { header: 'P (d)', align: 'right' }, { header: 'K (m/s)', align: 'right' }], rows));
       console.log('\nThe scheduler is not built yet: this lists the campaign targets only.');
     });
 }

@@ -1,4 +1,5 @@
 import { Command } from 'commander';
+import { registerAmplitude } from './amplitude.js';
 import { registerPlan } from './plan.js';
 import { registerSites } from './sites.js';
 
@@ -11,6 +12,7 @@ export function buildProgram(): Command {
     .showHelpAfterError('(run with --help for usage)')
     .exitOverride();
   const commands: ((program: Command) => Command)[] = [
+    registerAmplitude,
     registerPlan,
     registerSites,
   ];
