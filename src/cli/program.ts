@@ -1,6 +1,8 @@
 import { Command } from 'commander';
 import { registerAmplitude } from './amplitude.js';
+import { registerDetect } from './detect.js';
 import { registerPlan } from './plan.js';
+import { registerPrecision } from './precision.js';
 import { registerSites } from './sites.js';
 
 /** The `crest` program. Each command lives in its own file and registers itself here. */
@@ -13,7 +15,9 @@ export function buildProgram(): Command {
     .exitOverride();
   const commands: ((program: Command) => Command)[] = [
     registerAmplitude,
+    registerDetect,
     registerPlan,
+    registerPrecision,
     registerSites,
   ];
   for (const register of commands) register(program).exitOverride();

@@ -1,0 +1,214 @@
+// One target's detectability on one instrument: its planet (given, searched for, or
+// hypothetical), the exposure and σ per visit, visits and hours needed, and a plain verdict.
+
+import type { Instrument, Target } from '../model.js';
+import { semiAmplitudeMps } from '../orbit/semi-amplitude.js';
+import {
+  detectionProbability,
+  massLimitTable,
+  PHASE_LAYOUTS,
+  sigmaKMps,
+  visitsNeeded,
+  type MassLimitRow,
+  type PhaseLayout,
+} from './detect.js';
+import { chooseExposureSec, fixedExposure, visitCostSec, type ExposureChoice } from './exposure.js';
+
+/** Airmass assumed when none is given: a target observed reasonably high (common practice). */
+export const TYPICAL_AIRMASS = 1.2;
+/** More visits than this for the goal at random phases: out of reach (Crest's choice). */
+export const OUT_OF_REACH_VISITS = 200;
+/** More visits than this: demanding, about a semester's allocation for one star (Crest's choice). */
+export const DEMANDING_VISITS = 50;
+
+/** What detectability needs of a target: a Target, or a star given on the command line. */
+export type DetectStar = Pick<Target, 'id' | 'vmag' | 'teffK' | 'massSun' | 'vsiniKms' | 'jitterMps' | 'estimated'> &
+  Partial<Pick<Target, 'planet' | 'ephemeris' | 'search'>>;
+
+export interface DetectPlanet {
+  source: 'given' | 'search' | 'hypothetical';
+  massEarth?: number;
+  kMps: number;
+  periodDays: number;
+  ecc: number;
+  /** How the planet was made up, in words. */
+  note: string;
+}
+
+export interface HypotheticalPlanet {
+  massEarth: number;
+  periodDays: number;
+  ecc?: number;
+}
+
+/**
+ * The planet to test for a target: the hypothetical one when given; else the target's planet
+ * (mass → K with semiAmplitudeMps, or K as given); else its search spec, at the search mass and
+ * the logarithmic middle √(Pmin · Pmax) of the period range (the median of a log-uniform period
+ * prior); else none.
+ */
+export function planetOfTarget(target: DetectStar, hypothetical?: HypotheticalPlanet): DetectPlanet | undefined {
+  const kOf = (massEarth: number, periodDays: number, ecc: number) =>
+    semiAmplitudeMps({ starMassSun: target.massSun, planetMassEarth: massEarth, periodDays, ecc });
+  if (hypothetical) {
+    const ecc = hypothetical.ecc ?? 0;
+    return { source: 'hypothetical', massEarth: hypothetical.massEarth, kMps: kOf(hypothetical.massEarth, hypothetical.periodDays, ecc), periodDays: hypothetical.periodDays, ecc, note: `hypothetical ${hypothetical.massEarth} M_earth at P = ${hypothetical.periodDays} d` };
+  }
+  const { planet, ephemeris, search } = target;
+  if (planet && ephemeris) {
+    const periodDays = ephemeris.periodDays;
+    if (planet.kMps !== undefined) return { source: 'given', kMps: planet.kMps, periodDays, ecc: planet.ecc, note: `K = ${planet.kMps} m/s as given` };
+    const massEarth = planet.massEarth!;
+    return { source: 'given', massEarth, kMps: kOf(massEarth, periodDays, planet.ecc), periodDays, ecc: planet.ecc, note: `${massEarth} M_earth at P = ${periodDays} d` };
+  }
+  if (search) {
+    const periodDays = Math.sqrt(search.periodMinDays * search.periodMaxDays);
+    return {
+      source: 'search',
+      massEarth: search.massEarth,
+      kMps: kOf(search.massEarth, periodDays, 0),
+      periodDays,
+      ecc: 0,
+      note: `search: ${search.massEarth} M_earth at P = ${periodDays.toFixed(1)} d, the logarithmic middle of ${search.periodMinDays}-${search.periodMaxDays} d`,
+    };
+  }
+  return undefined;
+}
+
+export interface DetectOptions {
+  /** K/σ_K to reach (the goal); visits are also reported for 3 and 5. */
+  significance: number;
+  airmass: number;
+  /** Fixed exposure (s); otherwise chooseExposureSec picks one. */
+  exposureSec?: number;
+  /** Requested σ_visit for the exposure choice. */
+  targetSigmaMps?: number;
+  /** A planet number of visits: σ_K, detection probability and mass limits at that N. */
+  visits?: number;
+  hypothetical?: HypotheticalPlanet;
+  /** Period grid for the mass-limit table (needs `visits`). */
+  periodsDays?: readonly number[];
+}
+
+export interface VisitsAt {
+  significance: number;
+  random: number;
+  quadrature: number;
+  hoursRandom: number;
+  hoursQuadrature: number;
+}
+
+export interface AtPlannedVisits {
+  visits: number;
+  sigmaKRandomMps: number;
+  sigmaKQuadratureMps: number;
+  /** Φ(K/σ_K − n) at random phases and at quadratures; undefined without a planet. */
+  probabilityRandom?: number;
+  probabilityQuadrature?: number;
+  /** Smallest detectable m sin i at the planet's period (random phases, quadratures). */
+  massMinRandomEarth?: number;
+  massMinQuadratureEarth?: number;
+  massLimits?: MassLimitRow[];
+}
+
+export type VerdictLevel = 'feasible' | 'demanding' | 'out of reach' | 'no planet';
+
+export interface TargetDetectability {
+  targetId: string;
+  vmag: number;
+  teffK: number;
+  massSun: number;
+  estimated: string[];
+  planet?: DetectPlanet;
+  exposure: ExposureChoice;
+  /** σ_eff per visit (m/s): photon, floor and jitter in quadrature. */
+  sigmaMps: number;
+  /** The largest term of σ_eff. */
+  dominantNoise: 'photon' | 'floor' | 'jitter';
+  visitCostSec: number;
+  /** Visits and hours for 3σ, 5σ and the goal (deduplicated, ascending); empty without a planet. */
+  needed: VisitsAt[];
+  atPlannedVisits?: AtPlannedVisits;
+  verdict: { level: VerdictLevel; text: string };
+}
+
+/** Detectability of one target's planet on one instrument (see the interfaces above). */
+export function targetDetectability(target: DetectStar, instrument: Instrument, options: DetectOptions): TargetDetectability {
+  const planet = planetOfTarget(target, options.hypothetical);
+  const exposure =
+    options.exposureSec === undefined
+      ? chooseExposureSec(instrument, target, options.airmass, options.targetSigmaMps)
+      : fixedExposure(instrument, target, options.airmass, options.exposureSec);
+  const { budget } = exposure;
+  const sigmaMps = budget.effMps;
+  const costSec = visitCostSec(instrument, exposure.exposureSec);
+  const hours = (visits: number) => (visits * costSec) / 3600;
+  const levels = [...new Set([3, 5, options.significance])].sort((a, b) => a - b);
+  const needed: VisitsAt[] = planet
+    ? levels.map((n) => {
+        const [random, quadrature] = PHASE_LAYOUTS.map((layout) => visitsNeeded(planet.kMps, sigmaMps, n, layout)) as [number, number];
+        return { significance: n, random, quadrature, hoursRandom: hours(random), hoursQuadrature: hours(quadrature) };
+      })
+    : [];
+  const terms = { photon: budget.photonMps, floor: budget.floorMps, jitter: budget.jitterMps };
+  const dominantNoise = (Object.keys(terms) as (keyof typeof terms)[]).reduce((a, b) => (terms[b] > terms[a] ? b : a));
+  const result: TargetDetectability = {
+    targetId: target.id,
+    vmag: target.vmag,
+    teffK: target.teffK,
+    massSun: target.massSun,
+    estimated: target.estimated,
+    planet,
+    exposure,
+    sigmaMps,
+    dominantNoise,
+    visitCostSec: costSec,
+    needed,
+    verdict: { level: 'no planet', text: '' },
+  };
+  if (options.visits !== undefined) result.atPlannedVisits = atPlannedVisits(result, options);
+  result.verdict = verdict(result, instrument, options.significance, target.ephemeris !== undefined && planet?.source === 'given');
+  return result;
+}
+
+function atPlannedVisits(row: TargetDetectability, options: DetectOptions): AtPlannedVisits {
+  const visits = options.visits!;
+  const n = options.significance;
+  const sigmaK = (layout: PhaseLayout) => sigmaKMps(row.sigmaMps, visits, layout);
+  const at: AtPlannedVisits = { visits, sigmaKRandomMps: sigmaK('random'), sigmaKQuadratureMps: sigmaK('quadrature') };
+  const planet = row.planet;
+  if (planet) {
+    at.probabilityRandom = detectionProbability(planet.kMps, at.sigmaKRandomMps, n);
+    at.probabilityQuadrature = detectionProbability(planet.kMps, at.sigmaKQuadratureMps, n);
+    const [limit] = massLimitTable({ starMassSun: row.massSun, sigmaMps: row.sigmaMps, visits, significance: n, periodsDays: [planet.periodDays], ecc: planet.ecc });
+    at.massMinRandomEarth = limit!.massMinRandomEarth;
+    at.massMinQuadratureEarth = limit!.massMinQuadratureEarth;
+  }
+  if (options.periodsDays) {
+    at.massLimits = massLimitTable({ starMassSun: row.massSun, sigmaMps: row.sigmaMps, visits, significance: n, periodsDays: options.periodsDays, ecc: planet?.ecc ?? 0 });
+  }
+  return at;
+}
+
+function verdict(row: TargetDetectability, instrument: Instrument, significance: number, phaseKnown: boolean): { level: VerdictLevel; text: string } {
+  const notes = [row.exposure.warning, row.dominantNoise === 'jitter' ? 'jitter-limited: longer exposures barely help' : undefined].filter((x) => x);
+  const withNotes = (level: VerdictLevel, text: string) => ({ level, text: [text, ...notes].join('; ') });
+  const planet = row.planet;
+  if (!planet) return withNotes('no planet', 'no planet mass, K or search given: precision only');
+  const k = planet.kMps.toFixed(2);
+  if (planet.kMps < instrument.floorMps) {
+    return withNotes('out of reach', `K = ${k} m/s is below the instrument floor of ${instrument.floorMps} m/s, which does not average down over visits`);
+  }
+  const goal = row.needed.find((v) => v.significance === significance)!;
+  const n = `${significance} sigma`;
+  const quad = `${goal.quadrature} (${goal.hoursQuadrature.toFixed(1)} h) at quadratures`;
+  if (goal.random > OUT_OF_REACH_VISITS) {
+    if (goal.quadrature <= OUT_OF_REACH_VISITS && phaseKnown) {
+      return withNotes('demanding', `only with visits timed at quadrature: ${quad} for ${n}; random phases would need ${goal.random} (more than ${OUT_OF_REACH_VISITS})`);
+    }
+    const why = goal.quadrature > OUT_OF_REACH_VISITS ? `and ${goal.quadrature} even at ideal quadratures` : `${quad}, but the orbital phase is not known`;
+    return withNotes('out of reach', `K = ${k} m/s against sigma ${row.sigmaMps.toFixed(2)} m/s per visit needs ${goal.random} visits for ${n} at random phases (more than ${OUT_OF_REACH_VISITS}), ${why}`);
+  }
+  const text = `${goal.random} visits (${goal.hoursRandom.toFixed(1)} h) for ${n} at random phases; ${quad}`;
+  return withNotes(goal.random > DEMANDING_VISITS ? 'demanding' : 'feasible', text);
+}
