@@ -22,3 +22,15 @@ export const EARTH_PER_SUN = GM_SUN / GM_EARTH;
 export const EARTH_PER_JUPITER = GM_JUPITER / GM_EARTH;
 /** Julian date of the J2000.0 epoch (2000 January 1, 12h TT). */
 export const JD_J2000 = 2_451_545.0;
+/** Ratio of the sidereal to the solar rotation rate of the Earth (IAU 1982 GMST expression; Meeus 1998, eq. 12.4). */
+export const SIDEREAL_PER_SOLAR = 1.002_737_909_35;
+/** Milliseconds per day. */
+export const DAY_MS = 86_400_000;
+/** Julian date of the Unix epoch 1970-01-01T00:00:00 UTC. */
+export const JD_UNIX_EPOCH = 2_440_587.5;
+/** TT - TAI in seconds (IAU 1991 Resolution A4). */
+export const TT_MINUS_TAI_SEC = 32.184;
+/** Sunrise and sunset: the Sun's centre at -0.833 deg (34' refraction plus 16' semidiameter; the almanac convention). */
+export const SUNRISE_ALTITUDE_DEG = -0.833;
+/** Twilight levels: the Sun's centre at -6, -12 and -18 deg (the almanac convention). */
+export const TWILIGHT_ALTITUDE_DEG = { civil: -6, nautical: -12, astronomical: -18 } as const;

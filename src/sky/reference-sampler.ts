@@ -1,0 +1,72 @@
+// The slow reference for visibility windows (tests and bench only): astronomy-engine's Horizon every minute.
+import { Body, DefineStar, Equator, Horizon, MakeTime, SiderealTime } from 'astronomy-engine';
+import { kastenYoungAirmass } from '../astro/airmass.js';
+import { observerOf } from '../astro/bodies.js';
+import { properMotionJ2000 } from '../astro/position.js';
+import { julianYearsSinceJ2000 } from '../astro/time-scales.js';
+import { angleBetweenDeg, type Vec3 } from '../astro/vectors.js';
+import type { Constraints, Night, Site, Target } from '../model.js';
+import { maskAltitudeDeg } from './horizon-mask.js';
+import { requiredMoonSeparationDeg } from './moon-track.js';
+import { MOON_UP_ALTITUDE_DEG } from './nights.js';
+
+export interface ReferenceWindow {
+  targetId: string;
+  /** First and last whole-minute sample (from the dark start) at which every limit holds. */
+  start: Date;
+  end: Date;
+}
+
+const STEP_MS = 60_000;
+
+/**
+ * Windows of each target in one night by brute force: at every minute of the dark span, the star
+ * (astronomy-engine DefineStar with proper motion carried to that minute; Equator of date with
+ * aberration; Horizon with normal refraction), the Moon (topocentric Equator and Horizon) and the
+ * sidereal time are computed afresh, and each limit is tested; runs of passing minutes are the
+ * windows. No window-length filter. Independent of the fast engine except for the shared
+ * definitions (airmass formula, mask interpolation, Moon rule).
+ */
+export function referenceWindows(site: Site, targets: Target[], night: Night, constraints: Constraints): ReferenceWindow[] {
+  if (!night.darkStart || !night.darkEnd) return [];
+  const observer = observerOf(site);
+  const times: Date[] = [];
+  for (let t = night.darkStart.getTime(); t <= night.darkEnd.getTime(); t += STEP_MS) times.push(new Date(t));
+  const moonLimitDeg = requiredMoonSeparationDeg(constraints.moonSeparationDeg, night.moon.illumination);
+  const moon = times.map((date) => {
+    const eq = Equator(Body.Moon, MakeTime(date), observer, true, true);
+    const up = Horizon(MakeTime(date), observer, eq.ra, eq.dec).altitude > MOON_UP_ALTITUDE_DEG;
+    const r = Math.hypot(eq.vec.x, eq.vec.y, eq.vec.z);
+    return { up, vector: [eq.vec.x / r, eq.vec.y / r, eq.vec.z / r] as Vec3 };
+  });
+  const out: ReferenceWindow[] = [];
+  for (const target of targets) {
+    let runStart: Date | null = null;
+    let last: Date | null = null;
+    times.forEach((date, i) => {
+      const time = MakeTime(date);
+      const j2000 = properMotionJ2000(target, 2000 + julianYearsSinceJ2000(date));
+      DefineStar(Body.Star1, j2000.raDeg / 15, j2000.decDeg, 1000);
+      const eq = Equator(Body.Star1, time, observer, true, true);
+      const hor = Horizon(time, observer, eq.ra, eq.dec, 'normal');
+      const haHours = ((((SiderealTime(time) + site.longitudeDeg / 15 - eq.ra) % 24) + 36) % 24) - 12;
+      const r = Math.hypot(eq.vec.x, eq.vec.y, eq.vec.z);
+      const vector: Vec3 = [eq.vec.x / r, eq.vec.y / r, eq.vec.z / r];
+      const ok =
+        hor.altitude >= site.minAltitudeDeg &&
+        kastenYoungAirmass(hor.altitude) <= constraints.maxAirmass &&
+        (!site.horizon || hor.altitude >= maskAltitudeDeg(site.horizon, hor.azimuth)) &&
+        (!site.hourAngleLimitsHours || (haHours >= site.hourAngleLimitsHours.east && haHours <= site.hourAngleLimitsHours.west)) &&
+        (!(moonLimitDeg > 0) || !moon[i]!.up || angleBetweenDeg(vector, moon[i]!.vector) >= moonLimitDeg);
+      if (ok) {
+        runStart ??= date;
+        last = date;
+      } else if (runStart) {
+        out.push({ targetId: target.id, start: runStart, end: last! });
+        runStart = null;
+      }
+    });
+    if (runStart) out.push({ targetId: target.id, start: runStart, end: last! });
+  }
+  return out;
+}
