@@ -1,6 +1,7 @@
 import { Command } from 'commander';
 import { registerAmplitude } from './amplitude.js';
 import { registerDetect } from './detect.js';
+import { registerPeriodogram } from './periodogram.js';
 import { registerPlan } from './plan.js';
 import { registerPrecision } from './precision.js';
 import { registerSites } from './sites.js';
@@ -16,6 +17,7 @@ export function buildProgram(): Command {
   const commands: ((program: Command) => Command)[] = [
     registerAmplitude,
     registerDetect,
+    registerPeriodogram,
     registerPlan,
     registerPrecision,
     registerSites,

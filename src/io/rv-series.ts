@@ -1,0 +1,71 @@
+import { parse as parseCsv, CsvError } from 'csv-parse/sync';
+import { z } from 'zod';
+import { InputError, inputError } from '../errors.js';
+import { readText } from './read-text.js';
+
+/** A radial-velocity time series as read from a user's CSV file. */
+export interface RvSeries {
+  file: string;
+  /** Times, BJD_TDB (days). */
+  timesBjd: number[];
+  rvMps: number[];
+  sigmaMps: number[];
+}
+
+/** Fewest rows accepted: the FAP of a floating-offset sinusoid needs N − 4 ≥ 1. */
+export const MIN_RV_POINTS = 5;
+
+const cell = (allowed: string, ok: (v: number) => boolean) =>
+  z.preprocess(
+    (text: string | undefined) => (text === undefined || text.trim() === '' ? undefined : Number(text.trim())),
+    z.number({ error: (issue) => (issue.input === undefined ? `required: ${allowed}` : allowed) }).refine((v) => Number.isFinite(v) && ok(v), allowed),
+  );
+
+/** Columns `bjd,rvMps,sigmaMps` (header names case-insensitive); keys are the lower-case names. */
+const rowSchema = z.strictObject({
+  bjd: cell('a full BJD_TDB in days, 2400000 to 2600000', (v) => v >= 2.4e6 && v <= 2.6e6),
+  rvmps: cell('radial velocity in m/s, -1e6 to 1e6', (v) => Math.abs(v) <= 1e6),
+  sigmamps: cell('uncertainty in m/s, more than 0 and at most 10000', (v) => v > 0 && v <= 1e4),
+});
+const HEADER: Record<string, string> = { bjd: 'bjd', rvmps: 'rvMps', sigmamps: 'sigmaMps' };
+
+/** Parses an RV series (CSV, RFC 4180, header `bjd,rvMps,sigmaMps`; `#` starts a comment line). */
+export function parseRvSeries(text: string, file: string): RvSeries {
+  let records: { record: string[]; info: { lines: number } }[];
+  try {
+    records = parseCsv(text, { bom: true, info: true, skip_empty_lines: true, trim: true, comment: '#', comment_no_infix: true }) as unknown as typeof records;
+  } catch (err) {
+    if (!(err instanceof CsvError)) throw err;
+    throw new InputError(`${file}: line ${(err as CsvError & { lines?: number }).lines ?? '?'}: malformed CSV: ${err.message}`);
+  }
+  if (records.length === 0) throw inputError({ file, field: '(file)', value: '', allowed: 'empty file; expected the header bjd,rvMps,sigmaMps and one row per visit' });
+  const [header, ...rows] = records;
+  const columns = header!.record.map((name) => name.trim().toLowerCase());
+  const expected = Object.keys(HEADER);
+  if (columns.length !== expected.length || !expected.every((c) => columns.includes(c))) {
+    throw inputError({ file, where: 'header', field: 'columns', value: header!.record.join(','), allowed: 'exactly the columns bjd, rvMps, sigmaMps (any order, any case)' });
+  }
+  const series: RvSeries = { file, timesBjd: [], rvMps: [], sigmaMps: [] };
+  rows.forEach(({ record, info }, index) => {
+    const raw = Object.fromEntries(columns.map((c, i) => [c, record[i]]));
+    const result = rowSchema.safeParse(raw);
+    if (!result.success) {
+      const column = String(result.error.issues[0]!.path[0]);
+      throw inputError({ file, where: `row ${index + 1} (line ${info.lines})`, field: HEADER[column] ?? column, value: raw[column], allowed: result.error.issues[0]!.message });
+    }
+    series.timesBjd.push(result.data.bjd);
+    series.rvMps.push(result.data.rvmps);
+    series.sigmaMps.push(result.data.sigmamps);
+  });
+  if (rows.length < MIN_RV_POINTS) {
+    throw inputError({ file, field: 'rows', value: rows.length, allowed: `at least ${MIN_RV_POINTS} visits for a periodogram and its false-alarm probability` });
+  }
+  if (Math.min(...series.timesBjd) === Math.max(...series.timesBjd)) {
+    throw inputError({ file, field: 'bjd', value: series.timesBjd[0], allowed: 'visits at two or more distinct times' });
+  }
+  return series;
+}
+
+export function readRvSeries(file: string): RvSeries {
+  return parseRvSeries(readText(file, 'RV series'), file);
+}
