@@ -1,0 +1,46 @@
+import { describe, expect, it } from 'vitest';
+import { parse } from 'csv-parse/sync';
+import { runCli } from '../cli/run-cli.js';
+
+const DEMO = 'examples/demo/targets.csv';
+
+describe('crest detect', () => {
+  it('one row per demo target, with verdicts', () => {
+    const r = runCli(['detect', '--targets', DEMO, '--instrument', 'stable-4m']);
+    expect(r.status).toBe(0);
+    for (const id of ['SELVA-12', 'SELVA-85', 'Vira', 'Castell']) expect(r.stdout).toContain(id);
+    expect(r.stdout).toMatch(/logarithmic middle of 2-60 d/);
+  });
+
+  it('--csv: one row per target; visits at random phases are about twice those at quadratures', () => {
+    const r = runCli(['detect', '--targets', DEMO, '--instrument', 'stable-2m', '--csv']);
+    expect(r.status).toBe(0);
+    const rows = parse(r.stdout, { columns: true }) as Record<string, string>[];
+    expect(rows).toHaveLength(10);
+    for (const row of rows) {
+      const [random, quad] = [Number(row.visits5Random), Number(row.visits5Quadrature)];
+      expect(Math.abs(random - 2 * quad)).toBeLessThanOrEqual(2);
+    }
+  });
+
+  it('a hypothetical planet around one star, with mass limits at a planned N (--json)', () => {
+    const r = runCli(['detect', '--instrument', 'stable-4m', '--vmag', '9', '--teff', '4800', '--planet-mass', '10', '--period', '20', '--visits', '40', '--json']);
+    expect(r.status).toBe(0);
+    const [row] = JSON.parse(r.stdout).targets;
+    expect(row.planet.source).toBe('hypothetical');
+    expect(row.atPlannedVisits.massLimits.map((m: { periodDays: number }) => m.periodDays)).toEqual([1, 2, 5, 10, 20, 50, 100, 200, 500, 1000]);
+    const at20 = row.atPlannedVisits.massLimits[4];
+    expect(at20.massMinRandomEarth).toBeCloseTo(row.atPlannedVisits.massMinRandomEarth, 9);
+  });
+
+  it.each([
+    [['--planet-mass', '10', '--vmag', '9', '--teff', '5000'], /--period = \(missing\): --planet-mass and --period go together/],
+    [['--vmag', '9', '--teff', '5000', '--targets', DEMO], /not both/],
+    [[], /--targets = \(missing\)/],
+  ])('bad input: one line, exit 2 (%s)', (args, pattern) => {
+    const r = runCli(['detect', '--instrument', 'stable-4m', ...(args as string[])]);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(pattern);
+    expect(r.stderr.trim().split('\n')).toHaveLength(1);
+  });
+});
