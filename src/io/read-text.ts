@@ -1,5 +1,5 @@
 import { readFileSync } from 'node:fs';
-import { parse as parseYaml, YAMLParseError } from 'yaml';
+import { LineCounter, parse as parseYaml, YAMLParseError } from 'yaml';
 import { InputError, inputError } from '../errors.js';
 
 /** Reads a whole text file, turning a missing or unreadable file into an input error. */
@@ -19,12 +19,14 @@ export function readStructured(file: string, what: string): unknown {
   if (text.trim() === '') {
     throw inputError({ file, field: '(file)', value: '', allowed: `empty file; expected a ${what}` });
   }
+  const lineCounter = new LineCounter();
   try {
-    return parseYaml(text, { prettyErrors: false });
+    return parseYaml(text, { prettyErrors: false, lineCounter });
   } catch (err) {
     if (err instanceof YAMLParseError) {
-      const line = err.linePos?.[0];
-      const where = line ? `line ${line.line}, column ${line.col}` : 'syntax';
+      // Without prettyErrors the error carries only an offset; the line counter turns it into line and column.
+      const line = lineCounter.linePos(err.pos[0]);
+      const where = line.line > 0 ? `line ${line.line}, column ${line.col}` : 'syntax';
       const firstLine = err.message.split('\n')[0];
       throw new InputError(`${file}: ${where}: malformed ${/\.json$/i.test(file) ? 'JSON' : 'YAML'}: ${firstLine}`);
     }

@@ -1,0 +1,63 @@
+import { describe, expect, it } from 'vitest';
+import { runCli, tempFiles } from './run-cli.js';
+
+const CAMPAIGN = (overrides: Record<string, string> = {}) => {
+  const fields: Record<string, string> = {
+    name: 'Test',
+    site: 'la-silla',
+    instrument: 'stable-2m',
+    targets: 'targets.csv',
+    window: '{ start: 2027-03-01, end: 2027-03-31 }',
+    time: '{ mode: choose-nights, nights: 3 }',
+    ...overrides,
+  };
+  return Object.entries(fields)
+    .map(([k, v]) => `${k}: ${v}`)
+    .join('\n');
+};
+const HEADER = 'id,ra,dec,vmag,teffK,periodDays,tcBjdTdb,planetMassEarth,ecc';
+const GOOD_ROW = 'Alba,10:00:00,-30:00:00,9.5,5200,4.1,2461000.5,10,';
+const targets = (...rows: string[]) => `${HEADER}\n${GOOD_ROW}\n${rows.join('\n')}\n`;
+
+/** A campaign in a temporary folder, run with `crest plan campaign.yaml` from that folder. */
+function planCase(files: Record<string, string>): string[] {
+  const dir = tempFiles({ 'campaign.yaml': CAMPAIGN(), 'targets.csv': targets(), ...files });
+  return ['--cwd', dir];
+}
+
+const AMP = ['amplitude', '--star-mass', '1', '--period', '10'];
+
+// Each case: the command line (or a campaign folder), and the place the one-line message must name.
+const CASES: [string, string[], RegExp][] = [
+  ['bad CSV row (too many cells)', planCase({ 'targets.csv': targets('Bruma,11:00:00,-20:00:00,9,5000,3,2461000.1,5,,extra') }), /^crest: targets\.csv: line 3: malformed CSV/],
+  ['bad CSV value', planCase({ 'targets.csv': targets('Bruma,11:00:00,-20:00:00,bright,5000,,,,') }), /^crest: targets\.csv: row 2 \(line 3\): vmag = "bright"/],
+  ['RA 25h', planCase({ 'targets.csv': targets('Bruma,25:00:00,-20:00:00,9,5000,,,,') }), /^crest: targets\.csv: row 2 \(line 3\): ra = "25:00:00"/],
+  ['Dec +95 deg', planCase({ 'targets.csv': targets('Bruma,11:00:00,+95:00:00,9,5000,,,,') }), /^crest: targets\.csv: row 2 \(line 3\): dec = "\+95:00:00"/],
+  ['negative period in the target list', planCase({ 'targets.csv': targets('Bruma,11:00:00,-20:00:00,9,5000,-3,2461000.1,5,') }), /^crest: targets\.csv: row 2 \(line 3\): periodDays = "-3"/],
+  ['negative period flag', [...AMP.slice(0, 3), '--period', '-3', '--k', '2'], /^crest: command line: --period = "-3"/],
+  ['e >= 1 in the target list', planCase({ 'targets.csv': targets('Bruma,11:00:00,-20:00:00,9,5000,3,2461000.1,5,1.2') }), /^crest: targets\.csv: row 2 \(line 3\): ecc = "1\.2"/],
+  ['e >= 1 flag', [...AMP, '--k', '2', '--ecc', '1'], /^crest: command line: --ecc = "1"/],
+  ['unknown site id', planCase({ 'campaign.yaml': CAMPAIGN({ site: 'nowhere-peak' }) }), /^crest: campaign\.yaml: site = "nowhere-peak": unknown site id/],
+  ['unknown instrument id', planCase({ 'campaign.yaml': CAMPAIGN({ instrument: 'hyper-9m' }) }), /^crest: campaign\.yaml: instrument = "hyper-9m": unknown instrument id/],
+  ['unknown mass unit', [...AMP, '--planet-mass', '3', '--mass-unit', 'moon'], /^crest: command line: --mass-unit = "moon": one of earth, jupiter/],
+  ['both --planet-mass and --k', [...AMP, '--planet-mass', '3', '--k', '2'], /^crest: command line: --k = 2: give --planet-mass or --k, not both/],
+  ['neither --planet-mass nor --k', AMP, /^crest: command line: --planet-mass = \(missing\)/],
+  ['malformed YAML', planCase({ 'campaign.yaml': 'name: [Test\nsite: la-silla\n' }), /^crest: campaign\.yaml: line \d+, column \d+: malformed YAML/],
+  ['missing required column', planCase({ 'targets.csv': 'id,ra,vmag,teffK\nAlba,10:00:00,9.5,5200\n' }), /^crest: targets\.csv: header: dec = \(missing\): required column missing/],
+  ['empty target list', planCase({ 'targets.csv': '' }), /^crest: targets\.csv: \(file\) = \(empty\)/],
+  ['empty campaign file', planCase({ 'campaign.yaml': '  \n' }), /^crest: campaign\.yaml: \(file\) = \(empty\)/],
+  ['window end before start', planCase({ 'campaign.yaml': CAMPAIGN({ window: '{ start: 2027-03-10, end: 2027-03-01 }' }) }), /^crest: campaign\.yaml: window\.end = "2027-03-01"/],
+  ['missing campaign file', ['plan', 'no-such-campaign.yaml'], /^crest: no-such-campaign\.yaml: campaign file no such file/],
+];
+
+describe('bad input: exit 2 and one line naming the place', () => {
+  it.each(CASES)('%s', (_name, args, place) => {
+    const r = args[0] === '--cwd' ? runCli(['plan', 'campaign.yaml'], args[1]) : runCli(args);
+    expect(r.status).toBe(2);
+    expect(r.stdout).toBe('');
+    const lines = r.stderr.trimEnd().split('\n');
+    expect(lines).toHaveLength(1);
+    expect(lines[0]).toMatch(place);
+    expect(r.stderr).not.toMatch(/^\s+at /m); // no stack trace
+  });
+});
