@@ -5,13 +5,14 @@ import { observerOf } from '../astro/bodies.js';
 import { properMotionJ2000 } from '../astro/position.js';
 import { julianYearsSinceJ2000 } from '../astro/time-scales.js';
 import { angleBetweenDeg, type Vec3 } from '../astro/vectors.js';
-import type { Constraints, Night, Site, Target } from '../model.js';
+import type { Constraints, Night, Site, Target, Window } from '../model.js';
 import { maskAltitudeDeg } from './horizon-mask.js';
 import { requiredMoonSeparationDeg } from './moon-track.js';
 import { MOON_UP_ALTITUDE_DEG } from './nights.js';
 
 export interface ReferenceWindow {
   targetId: string;
+  localDate: string;
   /** First and last whole-minute sample (from the dark start) at which every limit holds. */
   start: Date;
   end: Date;
@@ -62,11 +63,54 @@ export function referenceWindows(site: Site, targets: Target[], night: Night, co
         runStart ??= date;
         last = date;
       } else if (runStart) {
-        out.push({ targetId: target.id, start: runStart, end: last! });
+        out.push({ targetId: target.id, localDate: night.localDate, start: runStart, end: last! });
         runStart = null;
       }
     });
-    if (runStart) out.push({ targetId: target.id, start: runStart, end: last! });
+    if (runStart) out.push({ targetId: target.id, localDate: night.localDate, start: runStart, end: last! });
   }
   return out;
+}
+
+/** How far fast windows are from the reference: worst edge difference, and pieces only one side found. */
+export interface WindowComparison {
+  matched: number;
+  maxEdgeErrorMin: number;
+  /** Pieces found by one side only, each counted as an edge error equal to its length. */
+  unmatched: { side: 'fast' | 'reference'; targetId: string; localDate: string; minutes: number }[];
+}
+
+/**
+ * Pairs fast windows with reference windows of the same target and night that overlap (or lie
+ * within `slackMin` of each other) and reports the largest edge difference in minutes.
+ */
+export function compareWithReference(fast: Window[], reference: ReferenceWindow[], slackMin = 2.5): WindowComparison {
+  const key = (w: { targetId: string; localDate: string }) => `${w.localDate} ${w.targetId}`;
+  const byKey = new Map<string, { fast: Window[]; reference: ReferenceWindow[] }>();
+  const group = (k: string) => byKey.get(k) ?? byKey.set(k, { fast: [], reference: [] }).get(k)!;
+  for (const w of fast) group(key(w)).fast.push(w);
+  for (const w of reference) group(key(w)).reference.push(w);
+  const slackMs = slackMin * 60_000;
+  const result: WindowComparison = { matched: 0, maxEdgeErrorMin: 0, unmatched: [] };
+  const minutes = (w: { start: Date; end: Date }) => (w.end.getTime() - w.start.getTime()) / 60_000;
+  for (const { fast: f, reference: r } of byKey.values()) {
+    const used = new Set<Window>();
+    for (const ref of r) {
+      const partner = f.find((w) => !used.has(w) && w.start.getTime() <= ref.end.getTime() + slackMs && w.end.getTime() >= ref.start.getTime() - slackMs);
+      if (!partner) {
+        result.unmatched.push({ side: 'reference', targetId: ref.targetId, localDate: ref.localDate, minutes: minutes(ref) });
+        result.maxEdgeErrorMin = Math.max(result.maxEdgeErrorMin, minutes(ref) + 1);
+        continue;
+      }
+      used.add(partner);
+      result.matched++;
+      const errMin = Math.max(Math.abs(partner.start.getTime() - ref.start.getTime()), Math.abs(partner.end.getTime() - ref.end.getTime())) / 60_000;
+      result.maxEdgeErrorMin = Math.max(result.maxEdgeErrorMin, errMin);
+    }
+    for (const w of f.filter((x) => !used.has(x))) {
+      result.unmatched.push({ side: 'fast', targetId: w.targetId, localDate: w.localDate, minutes: minutes(w) });
+      result.maxEdgeErrorMin = Math.max(result.maxEdgeErrorMin, minutes(w));
+    }
+  }
+  return result;
 }

@@ -16,6 +16,7 @@ const DEG = Math.PI / 180;
  */
 export interface SiteClock {
   t0Ms: number;
+  elevationM: number;
   lst0Deg: number;
   latitudeDeg: number;
   sinLat: number;
@@ -24,10 +25,11 @@ export interface SiteClock {
 }
 
 /** Builds the clock for instants within about a day of `at` (e.g. the middle of a night). */
-export function siteClock(site: Pick<Site, 'latitudeDeg' | 'longitudeDeg'>, at: Date): SiteClock {
+export function siteClock(site: Pick<Site, 'latitudeDeg' | 'longitudeDeg' | 'elevationM'>, at: Date): SiteClock {
   const gastHours = SiderealTime(MakeTime(at));
   return {
     t0Ms: at.getTime(),
+    elevationM: site.elevationM,
     lst0Deg: gastHours * 15 + site.longitudeDeg,
     latitudeDeg: site.latitudeDeg,
     sinLat: Math.sin(site.latitudeDeg * DEG),
@@ -57,9 +59,14 @@ export function preparePosition(star: StarCoordinates, clock: SiteClock): Prepar
 
 const ms = (t: Date | number) => (typeof t === 'number' ? t : t.getTime());
 
+/** Local apparent sidereal time in degrees (not reduced to 0..360) at an instant in ms. */
+export function localSiderealDeg(clock: SiteClock, tMs: number): number {
+  return clock.lst0Deg + (360 * SIDEREAL_PER_SOLAR * (tMs - clock.t0Ms)) / DAY_MS;
+}
+
 /** Local hour angle in degrees, in (-180, 180]: west positive. */
 export function hourAngleDeg(p: PreparedPosition, t: Date | number): number {
-  const lstDeg = p.clock.lst0Deg + (360 * SIDEREAL_PER_SOLAR * (ms(t) - p.clock.t0Ms)) / DAY_MS;
+  const lstDeg = localSiderealDeg(p.clock, ms(t));
   const h = (((lstDeg - p.raDeg) % 360) + 540) % 360 - 180;
   return h === -180 ? 180 : h;
 }

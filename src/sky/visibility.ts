@@ -154,12 +154,13 @@ export function computeWindows(
       continue;
     }
     const dark: Span = [night.darkStart.getTime(), night.darkEnd.getTime()];
+    const clock = siteClock(site, new Date((dark[0] + dark[1]) / 2));
     const ctx: NightContext = {
       night,
       dark,
-      moon: moonTrack(site, night),
+      moon: moonTrack(night, clock),
       moonLimitDeg: requiredMoonSeparationDeg(constraints.moonSeparationDeg, night.moon.illumination),
-      clock: siteClock(site, new Date((dark[0] + dark[1]) / 2)),
+      clock,
     };
     for (const target of targets) {
       const result = targetNight(site, target, ctx, limits, constraints);
