@@ -1,5 +1,5 @@
-import { describe, expect, it } from 'vitest';
-import { runCli, tempFiles } from './run-cli.js';
+import { describe, it } from 'vitest';
+import { runCliAsync, tempFiles } from './run-cli.js';
 
 const CAMPAIGN = (overrides: Record<string, string> = {}) => {
   const fields: Record<string, string> = {
@@ -51,8 +51,8 @@ const CASES: [string, string[], RegExp][] = [
 ];
 
 describe('bad input: exit 2 and one line naming the place', () => {
-  it.each(CASES)('%s', (_name, args, place) => {
-    const r = args[0] === '--cwd' ? runCli(['plan', 'campaign.yaml'], args[1]) : runCli(args);
+  it.concurrent.for(CASES)('%s', async ([, args, place], { expect }) => {
+    const r = args[0] === '--cwd' ? await runCliAsync(['plan', 'campaign.yaml'], args[1]) : await runCliAsync(args);
     expect(r.status).toBe(2);
     expect(r.stdout).toBe('');
     const lines = r.stderr.trimEnd().split('\n');

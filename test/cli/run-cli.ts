@@ -1,4 +1,4 @@
-import { spawnSync } from 'node:child_process';
+import { execFile, spawnSync } from 'node:child_process';
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
@@ -17,6 +17,15 @@ export interface CliResult {
 export function runCli(args: string[], cwd?: string): CliResult {
   const result = spawnSync(process.execPath, [CLI, ...args], { encoding: 'utf8', cwd });
   return { status: result.status, stdout: result.stdout, stderr: result.stderr };
+}
+
+/** The same, without blocking: lets independent cases run side by side. */
+export function runCliAsync(args: string[], cwd?: string): Promise<CliResult> {
+  return new Promise((resolve) => {
+    const child = execFile(process.execPath, [CLI, ...args], { encoding: 'utf8', cwd }, (_err, stdout, stderr) =>
+      resolve({ status: child.exitCode, stdout, stderr }),
+    );
+  });
 }
 
 /** Writes the given files into a fresh temporary folder and returns its path. */
