@@ -1,10 +1,12 @@
 import { Command } from 'commander';
 import { registerAmplitude } from './amplitude.js';
 import { registerDetect } from './detect.js';
+import { registerNights } from './nights.js';
 import { registerPeriodogram } from './periodogram.js';
 import { registerPlan } from './plan.js';
 import { registerPrecision } from './precision.js';
 import { registerSites } from './sites.js';
+import { registerVisibility } from './visibility.js';
 
 /** The `crest` program. Each command lives in its own file and registers itself here. */
 export function buildProgram(): Command {
@@ -17,10 +19,12 @@ export function buildProgram(): Command {
   const commands: ((program: Command) => Command)[] = [
     registerAmplitude,
     registerDetect,
+    registerNights,
     registerPeriodogram,
     registerPlan,
     registerPrecision,
     registerSites,
+    registerVisibility,
   ];
   for (const register of commands) register(program).exitOverride();
   return program;
