@@ -43,7 +43,7 @@ export function visitsNeeded(kMps: number, sigmaMps: number, significance: numbe
  * Probability that K̂/σ_K exceeds n when K̂ is normal with mean K and spread σ_K:
  * P = Φ(K/σ_K − n) (REFERENCES.md, "Detection probability").
  */
-export function detectionProbability(kMps: number, sigmaK: number, significance: number): number {
+export function detectionProbabilityKnownPhase(kMps: number, sigmaK: number, significance: number): number {
   return normalCdf(kMps / sigmaK - significance);
 }
 

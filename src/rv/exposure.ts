@@ -18,7 +18,7 @@ export interface ExposureChoice {
   /** The σ the goal is about (m/s): the requested σ_visit, √(jitter² + floor²), or (fixed) the σ_visit reached. */
   goalMps: number;
   clippedTo: 'min' | 'max' | null;
-  /** True when the goal needs more than the maximum exposure (or cannot be reached at all). */
+  /** True when the goal needs more than the maximum exposure (or cannot be reached at all); see `warning`. */
   tooFaint: boolean;
   warning?: string;
   budget: PrecisionBudget;
@@ -55,13 +55,18 @@ export function chooseExposureSec(
 }
 
 function exposureWarning(choice: ExposureChoice, instrument: Instrument, targetSigmaMps: number | undefined): string {
-  const reached = `the maximum exposure of ${instrument.maxExposureSec} s gives σ_visit = ${choice.budget.visitMps.toFixed(2)} m/s`;
-  if (targetSigmaMps !== undefined && targetSigmaMps <= instrument.floorMps) {
-    return `requested σ ${targetSigmaMps} m/s is at or below the instrument floor of ${instrument.floorMps} m/s: no exposure reaches it; ${reached}`;
+  const max = `the maximum exposure of ${instrument.maxExposureSec} s`;
+  const b = choice.budget;
+  if (targetSigmaMps === undefined) {
+    // The default goal is a preference (longer exposures buy little beyond it), not a requirement.
+    const level = Number.isFinite(choice.requiredSec) ? `above jitter and floor (${choice.goalMps.toFixed(2)} m/s)` : 'with no jitter or floor to match';
+    return `photon-limited: ${max} leaves photon noise at ${b.photonMps.toFixed(2)} m/s, ${level}`;
   }
-  if (!Number.isFinite(choice.requiredSec)) return `no jitter and no floor to match: ${reached}`;
-  const wanted = targetSigmaMps === undefined ? `photon noise of ${choice.goalMps.toFixed(2)} m/s (jitter and floor)` : `σ_visit = ${targetSigmaMps} m/s`;
-  return `too faint: ${wanted} needs ${Math.ceil(choice.requiredSec)} s; ${reached}`;
+  const reached = `${max} gives sigma per visit ${b.visitMps.toFixed(2)} m/s`;
+  if (targetSigmaMps <= instrument.floorMps) {
+    return `requested sigma ${targetSigmaMps} m/s is at or below the instrument floor of ${instrument.floorMps} m/s: no exposure reaches it; ${reached}`;
+  }
+  return `too faint: sigma per visit ${targetSigmaMps} m/s needs ${Math.ceil(choice.requiredSec)} s; ${reached}`;
 }
 
 /** A given exposure, in the same shape as a chosen one; warns when outside the instrument's limits. */

@@ -4,7 +4,7 @@
 import type { Instrument, Target } from '../model.js';
 import { semiAmplitudeMps } from '../orbit/semi-amplitude.js';
 import {
-  detectionProbability,
+  detectionProbabilityKnownPhase,
   massLimitTable,
   PHASE_LAYOUTS,
   sigmaKMps,
@@ -178,8 +178,8 @@ function atPlannedVisits(row: TargetDetectability, options: DetectOptions): AtPl
   const at: AtPlannedVisits = { visits, sigmaKRandomMps: sigmaK('random'), sigmaKQuadratureMps: sigmaK('quadrature') };
   const planet = row.planet;
   if (planet) {
-    at.probabilityRandom = detectionProbability(planet.kMps, at.sigmaKRandomMps, n);
-    at.probabilityQuadrature = detectionProbability(planet.kMps, at.sigmaKQuadratureMps, n);
+    at.probabilityRandom = detectionProbabilityKnownPhase(planet.kMps, at.sigmaKRandomMps, n);
+    at.probabilityQuadrature = detectionProbabilityKnownPhase(planet.kMps, at.sigmaKQuadratureMps, n);
     const [limit] = massLimitTable({ starMassSun: row.massSun, sigmaMps: row.sigmaMps, visits, significance: n, periodsDays: [planet.periodDays], ecc: planet.ecc });
     at.massMinRandomEarth = limit!.massMinRandomEarth;
     at.massMinQuadratureEarth = limit!.massMinQuadratureEarth;

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
-  detectionProbability,
+  detectionProbabilityKnownPhase,
   massLimitTable,
   MIN_VISITS,
   periodGridDays,
@@ -96,7 +96,7 @@ describe('Monte Carlo (seeded): simulated fits at the computed N', () => {
         const v = s.map((x) => k * x + sigma * rng.normal());
         if (fitK(s, v, sigma).k / sigmaK > n) detected++;
       }
-      const p = detectionProbability(k, sigmaK, n);
+      const p = detectionProbabilityKnownPhase(k, sigmaK, n);
       expect(p).toBeCloseTo(normalCdf(offset), 12);
       expect(Math.abs(detected / trials - p)).toBeLessThan(4 * Math.sqrt((p * (1 - p)) / trials));
     }

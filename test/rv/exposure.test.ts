@@ -33,12 +33,20 @@ describe('chooseExposureSec', () => {
     expect(choice.tooFaint).toBe(false);
   });
 
-  it('clips to the maximum and warns when too faint', () => {
-    const choice = chooseExposureSec(stable4m, { ...kDwarf, vmag: 14 }, 1.5);
+  it('clips to the maximum and warns when too faint for a requested sigma', () => {
+    const choice = chooseExposureSec(stable4m, { ...kDwarf, vmag: 14 }, 1.5, 2);
     expect(choice.exposureSec).toBe(stable4m.maxExposureSec);
     expect(choice.tooFaint).toBe(true);
     expect(choice.requiredSec).toBeGreaterThan(stable4m.maxExposureSec);
-    expect(choice.warning).toMatch(/too faint: .* needs \d+ s; the maximum exposure of 3600 s gives/);
+    expect(choice.warning).toMatch(/too faint: sigma per visit 2 m\/s needs \d+ s; the maximum exposure of 3600 s gives/);
+  });
+
+  it('by default, a faint star is flagged photon-limited at the maximum exposure', () => {
+    const choice = chooseExposureSec(stable4m, { ...kDwarf, vmag: 14 }, 1.5);
+    expect(choice.exposureSec).toBe(stable4m.maxExposureSec);
+    expect(choice.tooFaint).toBe(true);
+    expect(choice.budget.photonMps).toBeGreaterThan(choice.goalMps);
+    expect(choice.warning).toMatch(/photon-limited: the maximum exposure of 3600 s leaves photon noise at [\d.]+ m\/s, above jitter and floor/);
   });
 
   it('says plainly when the requested σ is below the instrument floor', () => {
