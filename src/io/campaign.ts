@@ -28,9 +28,9 @@ const constraintsSchema = z.strictObject({
 const timeSchema = z.discriminatedUnion(
   'mode',
   [
-    z.strictObject({ mode: z.literal('choose-nights'), nights: z.number().int('a whole number of nights').min(1, 'at least 1 night').max(366, 'at most 366 nights') }),
+    z.strictObject({ mode: z.literal('choose-nights'), nights: z.number({ error: 'a whole number of nights, 1 to 366' }).int('a whole number of nights').min(1, 'at least 1 night').max(366, 'at most 366 nights') }),
     z.strictObject({ mode: z.literal('given-nights'), dates: z.array(isoDate).min(1, 'at least one date') }),
-    z.strictObject({ mode: z.literal('hours'), hours: z.number().positive('a positive number of hours').max(5000, 'at most 5000 hours') }),
+    z.strictObject({ mode: z.literal('hours'), hours: z.number({ error: 'a positive number of hours, at most 5000' }).positive('a positive number of hours').max(5000, 'at most 5000 hours') }),
   ],
   { error: 'mode is one of choose-nights, given-nights, hours' },
 );

@@ -1,0 +1,58 @@
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { readCampaign } from '../../src/io/campaign.js';
+import { DEMO_CAMPAIGN } from '../../src/io/paths.js';
+
+const TARGETS = 'id,ra,dec,vmag,teffK\nAlba,10:00:00,-30:00:00,9.5,5200\n';
+
+/** A campaign folder with a target list; returns the campaign file's path. */
+function campaignFile(text: string, name = 'campaign.yaml', extra: Record<string, string> = {}): string {
+  const dir = mkdtempSync(path.join(tmpdir(), 'crest-campaign-'));
+  writeFileSync(path.join(dir, 'targets.csv'), TARGETS);
+  for (const [file, content] of Object.entries(extra)) writeFileSync(path.join(dir, file), content);
+  writeFileSync(path.join(dir, name), text);
+  return path.join(dir, name);
+}
+
+const BASE = 'name: Test\nsite: la-silla\ninstrument: stable-2m\ntargets: targets.csv\nwindow: { start: 2027-03-01, end: 2027-03-31 }\n';
+
+describe('campaign files', () => {
+  it('reads the bundled demo with its site, instrument and targets', () => {
+    const c = readCampaign(DEMO_CAMPAIGN);
+    expect(c.site.id).toBe('la-silla');
+    expect(c.instrument.id).toBe('stable-4m');
+    expect(c.targets.length).toBeGreaterThanOrEqual(8);
+    expect(c.time).toEqual({ mode: 'choose-nights', nights: 10 });
+  });
+
+  it('fills documented defaults for constraints, goals and seed', () => {
+    const c = readCampaign(campaignFile(`${BASE}time: { mode: hours, hours: 12 }\n`));
+    expect(c.constraints).toEqual({ twilight: 'nautical', maxAirmass: 2, moonSeparationDeg: 30, minSpacingHours: 20, minWindowMinutes: 20 });
+    expect(c.goals).toEqual({ significance: 5 });
+    expect(c.seed).toBe(1);
+  });
+
+  it('reads JSON as well, and site or instrument files by path relative to the campaign', () => {
+    const site = JSON.stringify({ id: 'cerro-example', name: 'Cerro Example', latitudeDeg: -30, longitudeDeg: -70, elevationM: 2000, timeZone: 'America/Santiago', clearFraction: 0.7, sourceNote: 'invented' });
+    const json = JSON.stringify({ name: 'J', site: './my-site.json', instrument: 'compact-1m', targets: 'targets.csv', window: { start: '2027-01-01', end: '2027-01-05' }, time: { mode: 'given-nights', dates: ['2027-01-02'] } });
+    const c = readCampaign(campaignFile(json, 'campaign.json', { 'my-site.json': site }));
+    expect(c.site.id).toBe('cerro-example');
+    expect(c.time).toEqual({ mode: 'given-nights', dates: ['2027-01-02'] });
+  });
+
+  it.each([
+    ['a date outside the window', `${BASE}time: { mode: given-nights, dates: [2027-03-05, 2027-04-02] }\n`, /campaign\.yaml: time\.dates\[1\] = "2027-04-02": a date inside the window/],
+    ['an unknown time mode', `${BASE}time: { mode: every-night }\n`, /campaign\.yaml: time(\.mode)? = .*choose-nights, given-nights, hours/],
+    ['a misspelt constraint', `${BASE}time: { mode: hours, hours: 5 }\nconstraints: { maxAirmas: 2 }\n`, /campaign\.yaml: constraints\.maxAirmas = 2: unknown key/],
+    ['an airmass limit below 1', `${BASE}time: { mode: hours, hours: 5 }\nconstraints: { maxAirmass: 0.5 }\n`, /campaign\.yaml: constraints\.maxAirmass = 0\.5: an airmass from 1 to 5/],
+    ['a bad date', `${BASE.replace('2027-03-31', '2027-02-30')}time: { mode: hours, hours: 5 }\n`, /campaign\.yaml: window\.end = "2027-02-30": a date as YYYY-MM-DD/],
+    ['no time model', BASE, /campaign\.yaml: time = \(missing\)/],
+    ['hours mode without hours', `${BASE}time: { mode: hours }\n`, /campaign\.yaml: time\.hours = \(missing\): required: a positive number of hours, at most 5000$/],
+    ['nights given as text', `${BASE}time: { mode: choose-nights, nights: ten }\n`, /campaign\.yaml: time\.nights = "ten": a whole number of nights, 1 to 366$/],
+    ['a missing target list', `${BASE.replace('targets.csv', 'other.csv')}time: { mode: hours, hours: 5 }\n`, /other\.csv: target list no such file/],
+  ])('names the key of a bad value: %s', (_name, text, message) => {
+    expect(() => readCampaign(campaignFile(text))).toThrow(message);
+  });
+});
