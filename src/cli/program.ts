@@ -14,7 +14,6 @@ export function buildProgram(): Command {
     .description('Plan radial-velocity exoplanet campaigns: visibility, detectability and phase-aware scheduling.')
     .version('0.1.0')
     .option('--debug', 'show stack traces for internal errors')
-    .showHelpAfterError('(run with --help for usage)')
     .exitOverride();
   const commands: ((program: Command) => Command)[] = [
     registerAmplitude,

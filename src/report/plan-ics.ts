@@ -1,0 +1,36 @@
+import ical from 'ical-generator';
+import { getVtimezoneComponent } from '@touch4it/ical-timezones';
+import { DateTime } from 'luxon';
+import type { Plan } from '../model.js';
+
+/**
+ * plan.ics (RFC 5545): one event per visit in the site's time zone, with its VTIMEZONE.
+ * DTSTAMP is the window's first day (not the clock) so that the same inputs give the same bytes.
+ */
+export function renderPlanIcs(plan: Plan): string {
+  const c = plan.campaign;
+  const zone = c.site.timeZone;
+  const calendar = ical({
+    name: c.name,
+    prodId: { company: 'crest', product: 'crest-plan', language: 'EN' },
+    timezone: { name: zone, generator: getVtimezoneComponent },
+  });
+  const stamp = DateTime.fromISO(c.window.start, { zone: 'utc' });
+  for (const visit of plan.visits) {
+    const start = DateTime.fromISO(visit.startUtc, { zone: 'utc' }).setZone(zone);
+    const phase = visit.phase === undefined ? '' : `; predicted phase ${visit.phase.toFixed(3)} ± ${(visit.phaseErr ?? 0).toFixed(3)}`;
+    calendar.createEvent({
+      id: `${visit.targetId}-${start.toUTC().toFormat("yyyyLLdd'T'HHmmss")}@crest`,
+      start,
+      end: start.plus({ seconds: visit.durationSec }),
+      stamp,
+      timezone: zone,
+      summary: `RV ${visit.targetId}`,
+      location: c.site.name,
+      description:
+        `Target ${visit.targetId}; exposure ${visit.exposureSec.toFixed(0)} s (block ${visit.durationSec.toFixed(0)} s with overheads); ` +
+        `airmass ${visit.airmass.toFixed(2)}${phase}; expected sigma ${visit.sigmaEffMps.toFixed(2)} m/s. Advisory: observatory safety rules take precedence.`,
+    });
+  }
+  return calendar.toString();
+}

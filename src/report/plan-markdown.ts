@@ -1,0 +1,36 @@
+import type { Plan } from '../model.js';
+import { markdownTable } from './markdown.js';
+import { ADVISORY, nightHeading, TARGET_COLUMNS, targetRows, totalsLine, VISIT_COLUMNS, visitRow, visitsByNight } from './plan-rows.js';
+
+/** plan.md: the plan for people. */
+export function renderPlanMarkdown(plan: Plan): string {
+  const c = plan.campaign;
+  const zone = c.site.timeZone;
+  const out: string[] = [
+    `# ${c.name}`,
+    '',
+    `- Site: ${c.site.name} (${c.site.latitudeDeg.toFixed(4)}°, ${c.site.longitudeDeg.toFixed(4)}°, ${c.site.elevationM} m; ${zone})`,
+    `- Instrument: ${c.instrument.name}`,
+    `- Window: ${c.window.start} to ${c.window.end}; twilight ${c.constraints.twilight}, airmass ≤ ${c.constraints.maxAirmass}, Moon ≥ ${c.constraints.moonSeparationDeg}°`,
+    `- ${totalsLine(plan)}`,
+    '',
+    `> ${ADVISORY}`,
+    '',
+    '## Targets',
+    '',
+    markdownTable(TARGET_COLUMNS, targetRows(plan)),
+    '',
+    '## Nights',
+    '',
+  ];
+  for (const [date, visits] of visitsByNight(plan)) {
+    out.push(`### ${nightHeading(plan, date)}`, '');
+    out.push(visits.length ? markdownTable(VISIT_COLUMNS, visits.map((v) => visitRow(v, zone))) : '(no visit)', '');
+  }
+  if (plan.backups.length) {
+    out.push('## Backup nights', '', ...plan.backups.map((b) => `${b.rank}. ${b.localDate} (utility gain ${b.utilityGain.toFixed(3)})`), '');
+  }
+  const warnings = [...plan.warnings, ...plan.targets.flatMap((t) => t.warnings.map((w) => `${t.targetId}: ${w}`))];
+  if (warnings.length) out.push('## Warnings', '', ...warnings.map((w) => `- ${w}`), '');
+  return out.join('\n');
+}

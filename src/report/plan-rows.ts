@@ -1,0 +1,94 @@
+import { DateTime } from 'luxon';
+import type { Plan, PlannedVisit } from '../model.js';
+import { fmt, type Column } from './table.js';
+
+/** Clock time of an instant in a zone, e.g. `23:41`. */
+export function clock(iso: string | Date | null, zone: string): string {
+  if (iso === null) return '-';
+  const dt = typeof iso === 'string' ? DateTime.fromISO(iso) : DateTime.fromJSDate(iso);
+  return dt.setZone(zone).toFormat('HH:mm');
+}
+
+export function phaseText(visit: PlannedVisit): string {
+  return visit.phase === undefined ? '-' : `${visit.phase.toFixed(3)} ± ${(visit.phaseErr ?? 0).toFixed(3)}`;
+}
+
+export const VISIT_COLUMNS: Column[] = [
+  { header: 'local' },
+  { header: 'UTC' },
+  { header: 'target' },
+  { header: 'exp (s)', align: 'right' },
+  { header: 'airmass', align: 'right' },
+  { header: 'phase', align: 'right' },
+  { header: 'sigma (m/s)', align: 'right' },
+];
+
+export function visitRow(visit: PlannedVisit, zone: string): string[] {
+  return [
+    clock(visit.startUtc, zone),
+    clock(visit.startUtc, 'UTC'),
+    visit.targetId,
+    fmt(visit.exposureSec, 0),
+    fmt(visit.airmass, 2),
+    phaseText(visit),
+    fmt(visit.sigmaEffMps, 2),
+  ];
+}
+
+/** One heading line per planned night: date, dark span in local time, Moon. */
+export function nightHeading(plan: Plan, localDate: string): string {
+  const zone = plan.campaign.site.timeZone;
+  const night = plan.nights.find((n) => n.localDate === localDate);
+  const weekday = DateTime.fromISO(localDate).toFormat('ccc');
+  if (!night) return `${localDate} ${weekday}`;
+  const moon = `Moon ${Math.round(night.moon.illumination * 100)}%${night.moon.upDuringDark ? ' (up)' : ' (down)'}`;
+  return `${localDate} ${weekday}  dark ${clock(night.darkStart, zone)}-${clock(night.darkEnd, zone)} local (${fmt(night.darkHours, 1)} h), ${moon}`;
+}
+
+export const TARGET_COLUMNS: Column[] = [
+  { header: 'target' },
+  { header: 'kind' },
+  { header: 'K (m/s)', align: 'right' },
+  { header: 'visits', align: 'right' },
+  { header: 'sigma_K (m/s)', align: 'right' },
+  { header: 'K/sigma_K', align: 'right' },
+  { header: 'goal', align: 'right' },
+  { header: 'P(goal)', align: 'right' },
+  { header: 'efficiency', align: 'right' },
+  { header: 'hours', align: 'right' },
+];
+
+export function targetRows(plan: Plan): string[][] {
+  return plan.targets.map((t) => [
+    t.targetId,
+    t.kind,
+    fmt(t.kMps, 2),
+    String(t.visits),
+    fmt(t.sigmaKMps, 2),
+    fmt(t.kOverSigmaK, 1),
+    fmt(t.goal, 1),
+    t.goalProbability === undefined ? '-' : `${Math.round(t.goalProbability * 100)}%`,
+    fmt(t.informationEfficiency, 2),
+    fmt(t.hours, 1),
+  ]);
+}
+
+/** Visits grouped by night, nights in date order, visits in time order. */
+export function visitsByNight(plan: Plan): [string, PlannedVisit[]][] {
+  const groups = new Map<string, PlannedVisit[]>();
+  for (const date of [...plan.plannedDates].sort()) groups.set(date, []);
+  for (const visit of plan.visits) {
+    if (!groups.has(visit.localDate)) groups.set(visit.localDate, []);
+    groups.get(visit.localDate)!.push(visit);
+  }
+  for (const visits of groups.values()) visits.sort((a, b) => a.startUtc.localeCompare(b.startUtc));
+  return [...groups.entries()].sort((a, b) => a[0].localeCompare(b[0]));
+}
+
+export function totalsLine(plan: Plan): string {
+  const t = plan.totals;
+  return `${t.visits} visits on ${t.nights} nights: ${fmt(t.exposureHours, 1)} h exposure + ${fmt(t.overheadHours, 1)} h overheads = ${fmt(t.totalHours, 1)} h`;
+}
+
+export const ADVISORY =
+  'This plan is advisory. The observatory\'s own safety rules (Sun avoidance, wind, humidity, dome and telescope limits) always take precedence.';

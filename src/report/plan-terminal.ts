@@ -1,0 +1,35 @@
+import type { Plan } from '../model.js';
+import { renderTable } from './table.js';
+import { ADVISORY, nightHeading, TARGET_COLUMNS, targetRows, totalsLine, VISIT_COLUMNS, visitRow, visitsByNight } from './plan-rows.js';
+
+/** The plain-text summary printed by `crest plan`. */
+export function renderPlanText(plan: Plan): string {
+  const c = plan.campaign;
+  const zone = c.site.timeZone;
+  const out: string[] = [
+    `${c.name}: ${c.site.name}, ${c.instrument.name}`,
+    `Window ${c.window.start} to ${c.window.end}; times in ${zone} and UTC.`,
+    '',
+  ];
+  for (const [date, visits] of visitsByNight(plan)) {
+    out.push(nightHeading(plan, date));
+    out.push(visits.length ? indent(renderTable(VISIT_COLUMNS, visits.map((v) => visitRow(v, zone)))) : '  (no visit)');
+    out.push('');
+  }
+  if (plan.backups.length) {
+    out.push(`Backup nights, best first: ${plan.backups.map((b) => b.localDate).join(', ')}`, '');
+  }
+  out.push('Targets', renderTable(TARGET_COLUMNS, targetRows(plan)), '');
+  out.push(totalsLine(plan));
+  const warnings = [...plan.warnings, ...plan.targets.flatMap((t) => t.warnings.map((w) => `${t.targetId}: ${w}`))];
+  if (warnings.length) out.push('', 'Warnings', ...warnings.map((w) => `- ${w}`));
+  out.push('', ADVISORY);
+  return out.join('\n');
+}
+
+function indent(text: string): string {
+  return text
+    .split('\n')
+    .map((line) => `  ${line}`)
+    .join('\n');
+}
