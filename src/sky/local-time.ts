@@ -32,5 +32,5 @@ export function clockTime(date: Date | null, timeZone: string, utc = false): str
 /** ISO 8601 with the zone's offset (or Z in UTC), to the second; null stays null. */
 export function isoTime(date: Date | null, timeZone: string, utc = false): string | null {
   if (!date) return null;
-  return DateTime.fromJSDate(date, { zone: utc ? 'UTC' : timeZone }).toISO({ suppressMilliseconds: true });
+  return DateTime.fromMillis(Math.round(date.getTime() / 1000) * 1000, { zone: utc ? 'UTC' : timeZone }).toISO({ suppressMilliseconds: true });
 }
