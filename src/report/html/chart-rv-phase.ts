@@ -1,0 +1,76 @@
+import type { TopLevelSpec } from 'vega-lite';
+import type { Plan, TargetSummary } from '../../model.js';
+import { fmt } from '../table.js';
+import type { ChartFigure } from './figure.js';
+import { OKABE_ITO, INK } from './palette.js';
+import { visitsOf } from './target-visits.js';
+
+const CURVE_POINTS = 200;
+
+/**
+ * The star's expected RV for a circular orbit with mid-transit at phase 0: v − γ = −K sin 2πφ
+ * (REFERENCES.md "Keplerian RV"; common practice: the RV falls after transit, quadratures at 0.25 and 0.75).
+ */
+export function modelRvMps(kMps: number, phase: number): number {
+  return -kMps * Math.sin(2 * Math.PI * phase);
+}
+
+/**
+ * The RV curve folded on phase for one target with an ephemeris: the model curve, each planned
+ * visit at its predicted phase on the curve, with ±σ_eff (vertical) and ±σ_φ (horizontal) bars.
+ */
+export function rvPhaseFigure(plan: Plan, summary: TargetSummary & { kMps: number }): ChartFigure {
+  const k = summary.kMps;
+  const curve = Array.from({ length: CURVE_POINTS + 1 }, (_, i) => ({ phase: i / CURVE_POINTS, rv: modelRvMps(k, i / CURVE_POINTS) }));
+  const visits = visitsOf(plan, summary.targetId).map((v, i) => {
+    const phase = v.phase ?? 0;
+    const phaseErr = v.phaseErr ?? 0;
+    const rv = modelRvMps(k, phase);
+    return {
+      n: i + 1, date: v.localDate, phase, rv,
+      rvLo: rv - v.sigmaEffMps, rvHi: rv + v.sigmaEffMps,
+      phaseLo: phase - phaseErr, phaseHi: phase + phaseErr,
+    };
+  });
+  const yMax = Math.max(k, ...visits.map((v) => Math.abs(v.rvHi)), ...visits.map((v) => Math.abs(v.rvLo))) * 1.1;
+  const x = { field: 'phase', type: 'quantitative' as const, title: 'Orbital phase (0 = mid-transit)', scale: { domain: [0, 1], nice: false } };
+  const y = { field: 'rv', type: 'quantitative' as const, title: 'RV − γ (m/s)', scale: { domain: [-yMax, yMax] } };
+  const spec = {
+    width: 380,
+    height: 220,
+    layer: [
+      { data: { values: curve }, name: 'model_curve', mark: { type: 'line', color: INK, strokeWidth: 1.5 }, encoding: { x, y } },
+      {
+        data: { values: visits },
+        layer: [
+          {
+            name: 'rv_error_bars', mark: { type: 'rule', color: OKABE_ITO.vermillion, strokeWidth: 1.5, clip: true },
+            encoding: { x, y: { ...y, field: 'rvLo' }, y2: { field: 'rvHi' } },
+          },
+          {
+            name: 'phase_error_bars', mark: { type: 'rule', color: OKABE_ITO.vermillion, strokeWidth: 1.5, clip: true },
+            encoding: { x: { ...x, field: 'phaseLo' }, x2: { field: 'phaseHi' }, y },
+          },
+          {
+            name: 'visit_points', mark: { type: 'point', shape: 'circle', filled: true, size: 55, color: OKABE_ITO.vermillion, opacity: 1 },
+            encoding: { x, y },
+          },
+        ],
+      },
+    ],
+  } as unknown as TopLevelSpec;
+  return {
+    id: `rv-${summary.targetId}`,
+    kind: 'rv-phase',
+    title: `${summary.targetId}: expected RV curve and planned phases`,
+    caption:
+      `Model curve for K = ${fmt(k, 2)} m/s on a circular orbit (line). Each of the ${visits.length} dots is a planned visit at its ` +
+      'predicted phase; vertical bars are the per-visit RV uncertainty (±σ with jitter), horizontal bars the 1σ phase uncertainty of the ephemeris.',
+    spec,
+    columns: [
+      { header: 'visit', align: 'right' }, { header: 'night' }, { header: 'phase', align: 'right' },
+      { header: 'phase error', align: 'right' }, { header: 'model RV (m/s)', align: 'right' }, { header: 'sigma (m/s)', align: 'right' },
+    ],
+    rows: visits.map((v) => [String(v.n), v.date, fmt(v.phase, 3), fmt(v.phaseHi - v.phase, 3), fmt(v.rv, 2), fmt(v.rvHi - v.rv, 2)]),
+  };
+}

@@ -1,0 +1,41 @@
+import type { TopLevelSpec } from 'vega-lite';
+import type { Column } from '../table.js';
+import { anchorId, escapeHtml, htmlTable } from './html.js';
+import { renderSvg } from './vega-svg.js';
+
+/** One chart of the report: its spec, the words around it, and the same data as a table. */
+export interface ChartFigure {
+  /** Unique within the page; becomes the figure's id. */
+  id: string;
+  /** Chart kind, a CSS class and a test hook: `calendar`, `night`, `rv-phase`, `k-growth`, `mass-limit`. */
+  kind: string;
+  title: string;
+  caption: string;
+  spec: TopLevelSpec;
+  columns: Column[];
+  rows: string[][];
+}
+
+/**
+ * Prefixes the SVG's own ids (vega's clip paths) and the `url(#id)` references to them, so that
+ * many SVGs inlined in one page can never share an id.
+ */
+export function scopeSvgIds(svg: string, prefix: string): string {
+  return svg.replace(/\bid="([^"]+)"/g, `id="${prefix}-$1"`).replace(/url\(#([^)]+)\)/g, `url(#${prefix}-$1)`);
+}
+
+/**
+ * A `<figure>`: the inlined SVG, a caption, and the chart's data as a table inside `<details>`
+ * for screen readers and for readers who want the numbers.
+ */
+export async function renderFigure(figure: ChartFigure): Promise<string> {
+  const id = anchorId(figure.id);
+  const svg = await renderSvg({ ...figure.spec, title: figure.title, description: `${figure.title}. ${figure.caption}` } as TopLevelSpec);
+  return [
+    `<figure class="chart chart-${figure.kind}" id="${id}" aria-labelledby="${id}-caption">`,
+    `<div class="svg-box">${scopeSvgIds(svg, id)}</div>`,
+    `<figcaption id="${id}-caption"><strong>${escapeHtml(figure.title)}.</strong> ${escapeHtml(figure.caption)}</figcaption>`,
+    `<details><summary>Data table</summary>${htmlTable(figure.columns, figure.rows, figure.title)}</details>`,
+    '</figure>',
+  ].join('\n');
+}

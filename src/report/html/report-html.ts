@@ -1,0 +1,105 @@
+import type { Plan, SearchSpec, Target, TargetSummary } from '../../model.js';
+import { ADVISORY, TARGET_COLUMNS, targetRows, totalsLine, visitsByNight } from '../plan-rows.js';
+import { calendarFigure } from './chart-calendar.js';
+import { kGrowthFigure } from './chart-k-growth.js';
+import { massLimitFigure } from './chart-mass-limit.js';
+import { nightFigure } from './chart-night.js';
+import { rvPhaseFigure } from './chart-rv-phase.js';
+import { renderFigure } from './figure.js';
+import { escapeHtml, htmlTable } from './html.js';
+import { PAGE_CSS } from './page-style.js';
+import { PROPOSAL_COLUMNS, proposalParagraph, proposalRows } from './proposal-summary.js';
+import { targetOf } from './target-visits.js';
+
+const hasK = (s: TargetSummary): s is TargetSummary & { kMps: number } => s.kMps !== undefined && s.kMps > 0;
+
+function head(plan: Plan): string {
+  const c = plan.campaign;
+  const facts: [string, string][] = [
+    ['Site', `${c.site.name} (${c.site.latitudeDeg.toFixed(4)}°, ${c.site.longitudeDeg.toFixed(4)}°, ${c.site.elevationM} m; ${c.site.timeZone})`],
+    ['Instrument', c.instrument.name],
+    ['Window', `${c.window.start} to ${c.window.end}`],
+    ['Constraints', `${c.constraints.twilight} twilight, airmass ≤ ${c.constraints.maxAirmass}, Moon ≥ ${c.constraints.moonSeparationDeg}°`],
+    ['Plan', totalsLine(plan)],
+  ];
+  return [
+    '<header class="report-head">',
+    `<h1>${escapeHtml(c.name)}</h1>`,
+    `<dl class="facts">${facts.map(([k, v]) => `<dt>${escapeHtml(k)}</dt><dd>${escapeHtml(v)}</dd>`).join('')}</dl>`,
+    '</header>',
+    `<p class="caution" role="note"><strong>Caution.</strong> ${escapeHtml(ADVISORY)}</p>`,
+  ].join('\n');
+}
+
+async function targetSections(plan: Plan): Promise<string[]> {
+  const out: string[] = [];
+  const ephemeris = plan.targets.filter((s) => s.kind === 'ephemeris' && s.visits > 0 && hasK(s)) as (TargetSummary & { kMps: number })[];
+  if (ephemeris.length) {
+    out.push('<h2 id="orbits">Orbital phase coverage</h2>');
+    for (const s of ephemeris) {
+      out.push(`<h3>${escapeHtml(s.targetId)}</h3>`, '<div class="pair">', await renderFigure(rvPhaseFigure(plan, s)), await renderFigure(kGrowthFigure(plan, s)), '</div>');
+    }
+  }
+  const search = plan.targets.flatMap((s) => {
+    const target = targetOf(plan, s.targetId);
+    return s.kind === 'search' && target?.search ? [{ s, target: target as Target & { search: SearchSpec } }] : [];
+  });
+  const figures = search.flatMap(({ s, target }) => {
+    const figure = massLimitFigure(plan, s, target);
+    return figure ? [figure] : [];
+  });
+  if (figures.length) {
+    out.push('<h2 id="search">Blind-search sensitivity</h2>');
+    for (const figure of figures) out.push(await renderFigure(figure));
+  }
+  return out;
+}
+
+function warnings(plan: Plan): string {
+  const all = [...plan.warnings, ...plan.targets.flatMap((t) => t.warnings.map((w) => `${t.targetId}: ${w}`))];
+  if (!all.length) return '';
+  return `<h2 id="warnings">Warnings</h2>\n<ul class="warnings">${[...new Set(all)].map((w) => `<li>${escapeHtml(w)}</li>`).join('')}</ul>`;
+}
+
+/**
+ * report.html: the whole plan as one self-contained page (inline CSS and SVG charts, no scripts,
+ * no external references), readable on screen and printable on A4 or US Letter.
+ */
+export async function renderReportHtml(plan: Plan): Promise<string> {
+  const body: string[] = [
+    head(plan),
+    '<h2 id="proposal">Proposal summary</h2>',
+    `<div class="table-wrap">${htmlTable(PROPOSAL_COLUMNS, proposalRows(plan), 'Time request by target')}</div>`,
+    `<p class="proposal-text">${escapeHtml(proposalParagraph(plan))}</p>`,
+    `<p class="caution" role="note">${escapeHtml(ADVISORY)}</p>`,
+    '<h2 id="calendar-section">Campaign calendar</h2>',
+    await renderFigure(calendarFigure(plan)),
+    '<h2 id="nights">Planned nights</h2>',
+  ];
+  for (const [date, visits] of visitsByNight(plan)) {
+    if (visits.length) body.push(await renderFigure(nightFigure(plan, date, visits)));
+  }
+  body.push(...(await targetSections(plan)));
+  body.push(
+    '<h2 id="detectability">Detectability of every target</h2>',
+    `<div class="table-wrap">${htmlTable(TARGET_COLUMNS, targetRows(plan), 'Expected result per target')}</div>`,
+    warnings(plan),
+    `<footer>Written by ${escapeHtml(plan.generator)} from plan schema version ${plan.schemaVersion}. ` +
+      'Chart colours: the Okabe–Ito palette (Okabe & Ito 2008, Color Universal Design), safe for common colour-vision deficiencies.</footer>',
+  );
+  return [
+    '<!DOCTYPE html>',
+    '<html lang="en">',
+    '<head>',
+    '<meta charset="utf-8">',
+    '<meta name="viewport" content="width=device-width, initial-scale=1">',
+    `<title>${escapeHtml(plan.campaign.name)}: observing plan</title>`,
+    `<style>${PAGE_CSS}</style>`,
+    '</head>',
+    '<body><main>',
+    ...body.filter((part) => part !== ''),
+    '</main></body>',
+    '</html>',
+    '',
+  ].join('\n');
+}

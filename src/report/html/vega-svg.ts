@@ -1,0 +1,17 @@
+import { parse, View } from 'vega';
+import { compile, type TopLevelSpec } from 'vega-lite';
+import { CHART_CONFIG } from './theme.js';
+
+/**
+ * Renders a vega-lite spec to an SVG string in Node: compile to vega, run a headless View
+ * (renderer 'none'), then `toSVG()`. No canvas, no network: data must be inline values.
+ */
+export async function renderSvg(spec: TopLevelSpec): Promise<string> {
+  const vegaSpec = compile(spec, { config: CHART_CONFIG }).spec;
+  const view = new View(parse(vegaSpec), { renderer: 'none' });
+  try {
+    return await view.toSVG();
+  } finally {
+    view.finalize();
+  }
+}
