@@ -27,6 +27,16 @@ export function ofDateFrame(date: Date): OfDateFrame {
   return { date, epochYear: 2000 + julianYearsSinceJ2000(date), rotation: Rotation_EQJ_EQD(MakeTime(date)) };
 }
 
+/** A J2000 vector turned to the true equator of date: the product astronomy-engine's RotateVector forms, without its allocations. */
+export function rotateToDate(frame: OfDateFrame, [x, y, z]: Vec3): Vec3 {
+  const r = frame.rotation.rot;
+  return [
+    r[0]![0]! * x + r[1]![0]! * y + r[2]![0]! * z,
+    r[0]![1]! * x + r[1]![1]! * y + r[2]![1]! * z,
+    r[0]![2]! * x + r[1]![2]! * y + r[2]![2]! * z,
+  ];
+}
+
 /**
  * J2000 coordinates with proper motion carried linearly from the star's epoch to the frame's
  * epoch (Meeus 1998, ch. 21: alpha += mu_alpha t, delta += mu_delta t; mu_alpha = pmRA / cos delta).
@@ -43,14 +53,7 @@ export function properMotionJ2000(star: StarCoordinates, epochYear: number): { r
 /** Unit vector of the star on the true equator and equinox of the frame's date (no aberration). */
 export function starVectorOfDate(star: StarCoordinates, frame: OfDateFrame): Vec3 {
   const j2000 = properMotionJ2000(star, frame.epochYear);
-  const [x, y, z] = unitVectorFromRaDec(j2000.raDeg, j2000.decDeg);
-  // The product astronomy-engine's RotateVector forms (its matrices act on the left index).
-  const r = frame.rotation.rot;
-  return [
-    r[0]![0]! * x + r[1]![0]! * y + r[2]![0]! * z,
-    r[0]![1]! * x + r[1]![1]! * y + r[2]![1]! * z,
-    r[0]![2]! * x + r[1]![2]! * y + r[2]![2]! * z,
-  ];
+  return rotateToDate(frame, unitVectorFromRaDec(j2000.raDeg, j2000.decDeg));
 }
 
 /** Right ascension and declination (deg) on the true equator and equinox of date. */

@@ -1,6 +1,7 @@
 // The Moon across one dark span, computed once per night and shared by every target.
 import { GeoMoon, MakeTime } from 'astronomy-engine';
 import { AU_M } from '../astro/constants.js';
+import { rotateToDate } from '../astro/position.js';
 import { angleBetweenDeg, type Vec3 } from '../astro/vectors.js';
 import type { Night } from '../model.js';
 import { spansWhereNonNegative, type Span } from './intervals.js';
@@ -80,15 +81,9 @@ export function moonTrack(night: Night, clock: SiteClock): MoonTrack {
   const endMs = night.darkEnd!.getTime();
   const count = Math.max(3, Math.ceil((endMs - startMs) / MAX_NODE_STEP_MS) + 1);
   const stepMs = (endMs - startMs) / (count - 1);
-  const r = clock.frame.rotation.rot;
   const nodes = Array.from({ length: count }, (_, k): Vec3 => {
     const m = GeoMoon(MakeTime(new Date(startMs + k * stepMs)));
-    // The product astronomy-engine's RotateVector forms (its matrices act on the left index).
-    return [
-      r[0]![0]! * m.x + r[1]![0]! * m.y + r[2]![0]! * m.z,
-      r[0]![1]! * m.x + r[1]![1]! * m.y + r[2]![1]! * m.z,
-      r[0]![2]! * m.x + r[1]![2]! * m.y + r[2]![2]! * m.z,
-    ];
+    return rotateToDate(clock.frame, [m.x, m.y, m.z]);
   });
   const track: MoonTrack = { clock, startMs, stepMs, nodes, upSpans: [], illumination: night.moon.illumination };
   track.upSpans = spansWhereNonNegative((t) => moonAltitudeDeg(track, t) - MOON_UP_ALTITUDE_DEG, [startMs, endMs], UP_STEP_MS, 1000);
