@@ -5,6 +5,7 @@ import { registerNights } from './nights.js';
 import { registerPeriodogram } from './periodogram.js';
 import { registerPlan } from './plan.js';
 import { registerPrecision } from './precision.js';
+import { registerReport } from './report.js';
 import { registerSites } from './sites.js';
 import { registerVisibility } from './visibility.js';
 
@@ -22,6 +23,7 @@ export function buildProgram(): Command {
     registerPeriodogram,
     registerPlan,
     registerPrecision,
+    registerReport,
     registerSites,
     registerVisibility,
   ];
