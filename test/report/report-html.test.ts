@@ -163,6 +163,6 @@ describe('proposal summary', () => {
     expect(text).toContain(`${plan.totals.visits} radial-velocity visits`);
     expect(text).toContain(`${plan.totals.totalHours.toFixed(1)} h in total`);
     expect(text).toContain(`${plan.backups.length} backup nights`);
-    expect(text).toMatch(/Alba \(3 visits\): m sin i ≥ \d+\.\d M⊕ at 2 d/);
+    expect(text).toMatch(/m sin i of \d+\.\d M⊕ at 2 d and \d+\.\d M⊕ at 40 d around Alba \(3 visits\)/);
   });
 });

@@ -25,6 +25,7 @@ caption { text-align: left; font-weight: 600; padding: 4px 0; }
 th, td { padding: 3px 10px 3px 0; border-bottom: 1px solid ${RULE}; text-align: left; vertical-align: top; }
 th { border-bottom: 2px solid ${MUTED}; font-weight: 600; }
 .num { text-align: right; padding-left: 10px; }
+td:first-child { white-space: nowrap; }
 .table-wrap { overflow-x: auto; }
 figure.chart { margin: 14px 0 22px; break-inside: avoid; page-break-inside: avoid; }
 .svg-box svg { max-width: 100%; height: auto; display: block; }

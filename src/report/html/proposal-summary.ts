@@ -7,11 +7,11 @@ export const PROPOSAL_COLUMNS: Column[] = [
   { header: 'target' },
   { header: 'V', align: 'right' },
   { header: 'K (m/s)', align: 'right' },
-  { header: 'sigma per visit (m/s)', align: 'right' },
+  { header: 'σ per visit (m/s)', align: 'right' },
   { header: 'exposure (s)', align: 'right' },
   { header: 'visits', align: 'right' },
   { header: 'hours', align: 'right' },
-  { header: 'expected K/sigma_K', align: 'right' },
+  { header: 'expected K/σ_K', align: 'right' },
   { header: 'P(goal) with weather', align: 'right' },
 ];
 
@@ -72,14 +72,14 @@ function searchSentence(plan: Plan, summaries: TargetSummary[]): string {
     if (!limit) return [];
     const [short, long] = limit.rows;
     return [
-      `${s.targetId} (${limit.visits} visits): m sin i ≥ ${fmt(short!.massMinRandomEarth, 1)} M⊕ at ${fmt(periodMinDays, 0)} d ` +
-        `and ≥ ${fmt(long!.massMinRandomEarth, 1)} M⊕ at ${fmt(periodMaxDays, 0)} d`,
+      `${fmt(short!.massMinRandomEarth, 1)} M⊕ at ${fmt(periodMinDays, 0)} d and ${fmt(long!.massMinRandomEarth, 1)} M⊕ at ` +
+        `${fmt(periodMaxDays, 0)} d around ${s.targetId} (${limit.visits} visits)`,
     ];
   });
   if (!parts.length) return '';
   return (
-    ` In the blind search, the plan is sensitive at K/σ_K = ${fmt(plan.campaign.goals.significance, 0)} (random orbital phases, circular orbits) to ` +
-    `${list(parts)}.`
+    ` In the blind search, planets are detectable at K/σ_K = ${fmt(plan.campaign.goals.significance, 0)} (random orbital phases, ` +
+    `circular orbits) down to a minimum mass m sin i of ${list(parts)}.`
   );
 }
 

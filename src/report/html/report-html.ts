@@ -71,7 +71,6 @@ export async function renderReportHtml(plan: Plan): Promise<string> {
     '<h2 id="proposal">Proposal summary</h2>',
     `<div class="table-wrap">${htmlTable(PROPOSAL_COLUMNS, proposalRows(plan), 'Time request by target')}</div>`,
     `<p class="proposal-text">${escapeHtml(proposalParagraph(plan))}</p>`,
-    `<p class="caution" role="note">${escapeHtml(ADVISORY)}</p>`,
     '<h2 id="calendar-section">Campaign calendar</h2>',
     await renderFigure(calendarFigure(plan)),
     '<h2 id="nights">Planned nights</h2>',
