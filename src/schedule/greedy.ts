@@ -1,0 +1,143 @@
+// Greedy by marginal utility per hour: repeatedly add the feasible slot with the largest
+// (ranking) gain per hour of telescope time, until none adds anything. Gains change only for the
+// target that just received a visit, so its slots are re-priced at once and the other entries of
+// the heap stay valid (an entry records its target's version; older entries are skipped).
+import type { PlanState } from './state.js';
+
+/** Max-heap of (key, slot, version) in parallel growable arrays. */
+class SlotHeap {
+  private keys: number[] = [];
+  private slots: number[] = [];
+  private versions: number[] = [];
+
+  get size(): number {
+    return this.keys.length;
+  }
+
+  push(key: number, slot: number, version: number): void {
+    const { keys, slots, versions } = this;
+    let i = keys.length;
+    keys.push(key);
+    slots.push(slot);
+    versions.push(version);
+    while (i > 0) {
+      const parent = (i - 1) >> 1;
+      // Ties go to the earlier slot, so the order is fully determined.
+      if (keys[parent]! > key || (keys[parent] === key && slots[parent]! < slot)) break;
+      keys[i] = keys[parent]!;
+      slots[i] = slots[parent]!;
+      versions[i] = versions[parent]!;
+      i = parent;
+    }
+    keys[i] = key;
+    slots[i] = slot;
+    versions[i] = version;
+  }
+
+  /** Removes the top entry and returns [slot, version]. */
+  pop(): [number, number] {
+    const { keys, slots, versions } = this;
+    const top: [number, number] = [slots[0]!, versions[0]!];
+    const key = keys.pop()!;
+    const slot = slots.pop()!;
+    const version = versions.pop()!;
+    const n = keys.length;
+    if (n === 0) return top;
+    let i = 0;
+    for (;;) {
+      let child = 2 * i + 1;
+      if (child >= n) break;
+      const right = child + 1;
+      if (right < n && (keys[right]! > keys[child]! || (keys[right] === keys[child] && slots[right]! < slots[child]!))) child = right;
+      if (keys[child]! < key || (keys[child] === key && slots[child]! > slot)) break;
+      keys[i] = keys[child]!;
+      slots[i] = slots[child]!;
+      versions[i] = versions[child]!;
+      i = child;
+    }
+    keys[i] = key;
+    slots[i] = slot;
+    versions[i] = version;
+    return top;
+  }
+}
+
+/** Smallest gain worth a visit. */
+const MIN_GAIN = 1e-12;
+
+/**
+ * Adds slots from `candidates` greedily (see the file comment); returns the slots added, in order,
+ * and the sum of their ranking gains (state.rankingGain: a first ephemeris visit counts half a pair).
+ * With `exact`, slots are ranked by their exact gain instead (a lone first visit then counts nothing).
+ */
+export function greedyFill(state: PlanState, candidates: ArrayLike<number>, exact = false): { added: number[]; rankingValue: number } {
+  const c = state.c;
+  const heap = new SlotHeap();
+  const byTarget = new Map<number, number[]>();
+  const price = (j: number) => {
+    if (!state.canAdd(j)) return;
+    const g = exact ? state.gain(j) : state.rankingGain(j);
+    const t = c.slotTarget[j]!;
+    if (g > MIN_GAIN) heap.push(g / c.hours[j]!, j, state.targetVersion[t]!);
+  };
+  for (let i = 0; i < candidates.length; i++) {
+    const j = candidates[i]!;
+    const t = c.slotTarget[j]!;
+    let list = byTarget.get(t);
+    if (!list) byTarget.set(t, (list = []));
+    list.push(j);
+    price(j);
+  }
+  const added: number[] = [];
+  let rankingValue = 0;
+  while (heap.size > 0) {
+    const [j, version] = heap.pop();
+    const t = c.slotTarget[j]!;
+    if (version !== state.targetVersion[t] || !state.canAdd(j)) continue;
+    rankingValue += state.rankingGain(j);
+    state.add(j);
+    added.push(j);
+    for (const k of byTarget.get(t)!) if (k !== j) price(k);
+  }
+  return { added, rankingValue };
+}
+
+/** Slot positions of night n (a contiguous range of the sorted slots). */
+export function nightSlots(state: PlanState, n: number): Int32Array {
+  const from = state.c.nightFrom[n]!;
+  const out = new Int32Array(state.c.nightTo[n]! - from);
+  for (let i = 0; i < out.length; i++) out[i] = from + i;
+  return out;
+}
+
+/**
+ * Opens night n and fills it with the better (by exact utility) of the two greedy schedules,
+ * ranked by ranking gains or by exact gains: the first can start a target, the second does not
+ * spend time on a first visit that nothing else in the plan pairs with.
+ */
+export function fillNight(state: PlanState, n: number): { added: number[]; rankingValue: number } {
+  const before = state.utility;
+  state.openNight(n);
+  const slots = nightSlots(state, n);
+  const ranked = greedyFill(state, slots);
+  const rankedUtility = state.utility;
+  for (const j of ranked.added) state.remove(j);
+  const exact = greedyFill(state, slots, true);
+  if (state.utility - before >= rankedUtility - before) return { added: exact.added, rankingValue: ranked.rankingValue };
+  for (const j of exact.added) state.remove(j);
+  for (const j of ranked.added) state.add(j);
+  return ranked;
+}
+
+/**
+ * What filling closed night n (fillNight) would add to the plan, which is left unchanged:
+ * `utility`, the exact gain, and `ranking`, the sum of ranking gains (used to order nights).
+ */
+export function nightValue(state: PlanState, n: number): { utility: number; ranking: number } {
+  const before = state.utility;
+  const { added, rankingValue } = fillNight(state, n);
+  const utility = state.utility - before;
+  for (const j of added) state.remove(j);
+  state.closeNight(n);
+  return { utility, ranking: rankingValue };
+}

@@ -1,0 +1,160 @@
+// Slow reference implementations for tests and the bench: the utility of a set of slots computed
+// from scratch (pairwise sums, 3x3 determinants by elimination), a feasibility check written
+// straight from the constraints, and exhaustive search for the best schedule of a small problem.
+import { compileProblem } from './compile.js';
+import type { SearchGrid } from './objective-search.js';
+import { signalMoments } from './objective-ephemeris.js';
+import type { CandidateSlot, ScheduleProblem } from './types.js';
+import { goalValue } from './utility.js';
+
+export interface ReferenceSettings {
+  searchGridSize: number;
+  overshootWeight: number;
+}
+
+/** Determinant by Gaussian elimination with partial pivoting (common practice). */
+function determinant(matrix: number[][]): number {
+  const a = matrix.map((row) => [...row]);
+  let det = 1;
+  for (let col = 0; col < a.length; col++) {
+    let pivot = col;
+    for (let r = col + 1; r < a.length; r++) if (Math.abs(a[r]![col]!) > Math.abs(a[pivot]![col]!)) pivot = r;
+    if (a[pivot]![col] === 0) return 0;
+    if (pivot !== col) {
+      [a[pivot], a[col]] = [a[col]!, a[pivot]!];
+      det = -det;
+    }
+    det *= a[col]![col]!;
+    for (let r = col + 1; r < a.length; r++) {
+      const f = a[r]![col]! / a[col]![col]!;
+      for (let k = col; k < a.length; k++) a[r]![k]! -= f * a[col]![k]!;
+    }
+  }
+  return det;
+}
+
+/** K/sigma_K of each target for the given visits, from scratch (search targets on the optimiser's period grid). */
+export function referenceKOverSigmaK(problem: ScheduleProblem, visits: CandidateSlot[], settings: ReferenceSettings): number[] {
+  return kOverSigmaKOnGrids(problem, visits, compileProblem(problem, settings.searchGridSize).grids);
+}
+
+function kOverSigmaKOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], grids: (SearchGrid | null)[]): number[] {
+  return problem.targets.map((target, t) => {
+    const mine = visits.filter((v) => v.targetId === target.id);
+    const w = mine.map((v) => 1 / v.sigmaEffMps ** 2);
+    const grid = grids[t];
+    if (!grid) {
+      // E[I] = sum_i w_i E[s_i^2] - (1/W) sum_i sum_j w_i w_j E[s_i s_j], E[s_i s_j] = m_i m_j (i != j), q_i (i = j).
+      const moments = mine.map((v) => signalMoments(v.phase!, v.phaseErr ?? 0));
+      const W = w.reduce((a, b) => a + b, 0);
+      if (W === 0) return 0;
+      let info = 0;
+      for (let i = 0; i < mine.length; i++) {
+        info += w[i]! * moments[i]!.q;
+        for (let k = 0; k < mine.length; k++) info -= (w[i]! * w[k]! * (i === k ? moments[i]!.q : moments[i]!.m * moments[k]!.m)) / W;
+      }
+      return target.kMps * Math.sqrt(Math.max(0, info));
+    }
+    let total = 0;
+    for (let p = 0; p < grid.angularFreq.length; p++) {
+      const m = [0, 1, 2].map((r) => [0, 1, 2].map((k) => (r === k ? grid.eps : 0)));
+      mine.forEach((v, i) => {
+        const x = [1, Math.sin(grid.angularFreq[p]! * v.midDays!), Math.cos(grid.angularFreq[p]! * v.midDays!)];
+        for (let r = 0; r < 3; r++) for (let k = 0; k < 3; k++) m[r]![k]! += w[i]! * x[r]! * x[k]!;
+      });
+      total += grid.logK[p]! + 0.25 * Math.log(determinant(m) / m[0]![0]!);
+    }
+    return Math.exp(total / grid.angularFreq.length);
+  });
+}
+
+/** Total utility of the given visits, from scratch. */
+export function referenceUtility(problem: ScheduleProblem, visits: CandidateSlot[], settings: ReferenceSettings): number {
+  return utilityOnGrids(problem, visits, compileProblem(problem, settings.searchGridSize).grids, settings.overshootWeight);
+}
+
+function utilityOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], grids: (SearchGrid | null)[], overshootWeight: number): number {
+  const ratios = kOverSigmaKOnGrids(problem, visits, grids);
+  return problem.targets.reduce((sum, t, i) => sum + t.priority * goalValue(ratios[i]! / t.goal, overshootWeight), 0);
+}
+
+/** Every constraint of the problem, checked pairwise: an empty list means feasible. */
+export function scheduleViolations(problem: ScheduleProblem, visits: CandidateSlot[]): string[] {
+  const problems: string[] = [];
+  const known = new Set(problem.slots);
+  const nights = new Map(problem.nights.map((n) => [n.index, n]));
+  const ids = new Set<string>();
+  for (const v of visits) {
+    if (!known.has(v)) problems.push(`${v.slotId} is not a candidate slot`);
+    if (ids.has(v.slotId)) problems.push(`${v.slotId} chosen twice`);
+    ids.add(v.slotId);
+  }
+  const spacingMs = problem.constraints.minSpacingHours * 3_600_000;
+  for (let i = 0; i < visits.length; i++) {
+    for (let k = i + 1; k < visits.length; k++) {
+      const a = visits[i]!;
+      const b = visits[k]!;
+      const sameNight = a.nightIndex === b.nightIndex;
+      if (sameNight && a.startMs < b.startMs + b.durationSec * 1000 && b.startMs < a.startMs + a.durationSec * 1000) problems.push(`${a.slotId} overlaps ${b.slotId}`);
+      if (a.targetId === b.targetId && Math.abs(a.startMs - b.startMs) < spacingMs) problems.push(`${a.slotId} and ${b.slotId} closer than the spacing`);
+      if (a.targetId === b.targetId && sameNight && problem.constraints.onePerNight) problems.push(`${a.slotId} and ${b.slotId}: two visits in one night`);
+    }
+  }
+  const hoursByNight = new Map<number, number>();
+  for (const v of visits) hoursByNight.set(v.nightIndex, (hoursByNight.get(v.nightIndex) ?? 0) + v.durationSec / 3600);
+  for (const [n, hours] of hoursByNight) if (hours > nights.get(n)!.hoursAvailable + 1e-9) problems.push(`night ${n} holds ${hours} h`);
+  const time = problem.time;
+  if (time.mode === 'choose-nights' && hoursByNight.size > time.nights) problems.push(`${hoursByNight.size} nights used, ${time.nights} allowed`);
+  const total = visits.reduce((sum, v) => sum + v.durationSec / 3600, 0);
+  if (time.mode === 'hours' && total > time.hours + 1e-9) problems.push(`${total} h used, ${time.hours} allowed`);
+  return problems;
+}
+
+/** All subsets of `items` (as index lists) with at most `limit` elements. */
+function subsets<T>(items: T[], limit: number): T[][] {
+  const out: T[][] = [[]];
+  for (const item of items) {
+    const n = out.length;
+    for (let i = 0; i < n; i++) if (out[i]!.length < limit) out.push([...out[i]!, item]);
+  }
+  return out;
+}
+
+/** All k-element subsets of 0..n-1. */
+function combinations(n: number, k: number): number[][] {
+  if (k === 0) return [[]];
+  if (n < k) return [];
+  return [...combinations(n - 1, k), ...combinations(n - 1, k - 1).map((c) => [...c, n - 1])];
+}
+
+/**
+ * The best utility over every feasible schedule, by enumeration: per night every feasible set of
+ * its slots, combined over the nights (in choose-nights mode over every set of exactly N nights,
+ * which suffices because the utility never falls when visits are added). Tiny problems only.
+ */
+export function exhaustiveOptimum(problem: ScheduleProblem, settings: ReferenceSettings): { utility: number; visits: CandidateSlot[] } {
+  const grids = compileProblem(problem, settings.searchGridSize).grids;
+  const oneNight: ScheduleProblem = { ...problem, time: { mode: 'given-nights' } };
+  const perNight = problem.nights.map((night) => {
+    const mine = problem.slots.filter((s) => s.nightIndex === night.index);
+    return subsets(mine, mine.length).filter((set) => scheduleViolations(oneNight, set).length === 0);
+  });
+  const time = problem.time;
+  const nightSets = time.mode === 'choose-nights' ? combinations(perNight.length, Math.min(time.nights, perNight.length)) : [perNight.map((_, i) => i)];
+  const hoursLimit = time.mode === 'hours' ? time.hours + 1e-9 : Infinity;
+  let best = { utility: -Infinity, visits: [] as CandidateSlot[] };
+  const descend = (nights: number[], at: number, chosen: CandidateSlot[], hours: number): void => {
+    if (at === nights.length) {
+      if (scheduleViolations(problem, chosen).length > 0) return;
+      const utility = utilityOnGrids(problem, chosen, grids, settings.overshootWeight);
+      if (utility > best.utility) best = { utility, visits: chosen };
+      return;
+    }
+    for (const set of perNight[nights[at]!]!) {
+      const more = set.reduce((sum, s) => sum + s.durationSec / 3600, 0);
+      if (hours + more <= hoursLimit) descend(nights, at + 1, set.length ? [...chosen, ...set] : chosen, hours + more);
+    }
+  };
+  for (const nights of nightSets) descend(nights, 0, [], 0);
+  return best;
+}

@@ -1,0 +1,88 @@
+// Invented scheduling problems for tests and the bench: nights one day apart, each target visible
+// for a few hours a night in a window that drifts earlier by about 4 minutes a night (a sidereal
+// day is shorter than a solar one, common practice), evenly spaced candidate slots in that window,
+// ephemerides whose phase error grows as sqrt(sigma_T0^2 + n^2 sigma_P^2) after n orbits
+// (REFERENCES.md "Ephemeris propagation"). All values are made up.
+import { createRng, type Rng } from '../rv/random.js';
+import type { CandidateSlot, ScheduleNight, ScheduleProblem, ScheduleTarget, ScheduleTimeModel } from './types.js';
+
+export interface SyntheticSpec {
+  targets: number;
+  nights: number;
+  /** Candidate slots per target in each night it is visible. */
+  slotsPerNight: number;
+  /** Fraction of blind-search targets. */
+  searchFraction: number;
+  /** Fraction of nights on which a target is visible at all. */
+  visibleFraction: number;
+  time: ScheduleTimeModel;
+  minSpacingHours: number;
+  onePerNight: boolean;
+  /** Hours of dark time per night. */
+  nightHours: number;
+  seed: number;
+  /** Ephemeris phase errors (false: every phase exact). */
+  phaseErrors: boolean;
+}
+
+const DAY_MS = 86_400_000;
+const HOUR_MS = 3_600_000;
+/** 2027-01-01T00:00Z, the invented campaign's first evening. */
+const FIRST_NIGHT_MS = Date.UTC(2027, 0, 1, 20);
+
+function between(rng: Rng, lo: number, hi: number): number {
+  return lo + (hi - lo) * rng.uniform();
+}
+
+function syntheticTarget(rng: Rng, i: number, search: boolean): ScheduleTarget {
+  const base = { id: `${search ? 'SRCH' : 'EPH'}-${String(i + 1).padStart(4, '0')}`, priority: Math.ceil(between(rng, 0, 3)), goal: 5 };
+  if (search) {
+    const periodMinDays = Math.exp(between(rng, Math.log(2), Math.log(20)));
+    return { ...base, kind: 'search', kMps: between(rng, 2, 8), periodMinDays, periodMaxDays: periodMinDays * between(rng, 2, 8) };
+  }
+  return { ...base, kind: 'ephemeris', kMps: between(rng, 2, 12) };
+}
+
+export function syntheticProblem(spec: SyntheticSpec): ScheduleProblem {
+  const rng = createRng(spec.seed);
+  const nights: ScheduleNight[] = Array.from({ length: spec.nights }, (_, i) => ({
+    index: i,
+    localDate: new Date(FIRST_NIGHT_MS + i * DAY_MS).toISOString().slice(0, 10),
+    clearProbability: between(rng, 0.5, 0.9),
+    hoursAvailable: spec.nightHours,
+  }));
+  const searchCount = Math.round(spec.targets * spec.searchFraction);
+  const targets = Array.from({ length: spec.targets }, (_, i) => syntheticTarget(rng, i, i >= spec.targets - searchCount));
+  const slots: CandidateSlot[] = [];
+  for (const target of targets) {
+    const periodDays = Math.exp(between(rng, Math.log(1), Math.log(15)));
+    const tcMs = FIRST_NIGHT_MS + between(rng, 0, periodDays) * DAY_MS;
+    const tcErrDays = spec.phaseErrors ? between(rng, 0.0005, 0.03) : 0;
+    const periodErrDays = spec.phaseErrors ? between(rng, 0, 0.002) : 0;
+    const durationSec = Math.round(between(rng, 600, 2400));
+    const sigmaMps = between(rng, 1, 4);
+    const windowHours = between(rng, 2, spec.nightHours);
+    // Hours after dusk at which the window opens on the first night; drifts 4 min earlier per night.
+    const openHours0 = between(rng, -spec.nightHours, spec.nightHours);
+    for (const night of nights) {
+      if (rng.uniform() > spec.visibleFraction) continue;
+      const opens = Math.max(0, openHours0 - (4 / 60) * night.index);
+      const closes = Math.min(spec.nightHours, openHours0 - (4 / 60) * night.index + windowHours);
+      const usable = closes - opens - durationSec / 3600;
+      if (usable < 0) continue;
+      for (let k = 0; k < spec.slotsPerNight; k++) {
+        const startMs = FIRST_NIGHT_MS + night.index * DAY_MS + (opens + (spec.slotsPerNight === 1 ? usable / 2 : (usable * k) / (spec.slotsPerNight - 1))) * HOUR_MS;
+        const midDays = (startMs + (durationSec * 1000) / 2 - FIRST_NIGHT_MS) / DAY_MS;
+        const slot: CandidateSlot = { slotId: `${target.id}/${night.index}/${k}`, targetId: target.id, nightIndex: night.index, startMs, durationSec, sigmaEffMps: sigmaMps * between(rng, 1, 1.3) };
+        if (target.kind === 'search') slot.midDays = midDays;
+        else {
+          const orbits = (startMs - tcMs) / DAY_MS / periodDays;
+          slot.phase = orbits - Math.floor(orbits);
+          slot.phaseErr = Math.sqrt(tcErrDays ** 2 + (orbits * periodErrDays) ** 2) / periodDays;
+        }
+        slots.push(slot);
+      }
+    }
+  }
+  return { nights, targets, slots, time: spec.time, constraints: { minSpacingHours: spec.minSpacingHours, onePerNight: spec.onePerNight } };
+}
