@@ -41,6 +41,10 @@ describe('report.html is one self-contained file', () => {
     expect(page).toContain(ADVISORY.replace(/'/g, '&#39;'));
   });
 
+  it('is the same bytes when rendered again in the same process', async () => {
+    expect(await renderReportHtml(plan)).toBe(page);
+  });
+
   it('gives every chart a title, a caption and a data table', () => {
     const all = figures(page, '[a-z-]+');
     expect(all.length).toBeGreaterThan(0);

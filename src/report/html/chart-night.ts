@@ -8,7 +8,7 @@ import { nightHeading, VISIT_COLUMNS, visitRow } from '../plan-rows.js';
 import type { ChartFigure } from './figure.js';
 import { INK, SKY_SHADES } from './palette.js';
 import { SKY_STATES, skyBands } from './night-bands.js';
-import { targetColours } from './target-colours.js';
+import { targetStyles } from './target-colours.js';
 
 const HOUR_MS = 3_600_000;
 const SAMPLE_MS = 5 * 60_000;
@@ -48,7 +48,7 @@ export function nightFigure(plan: Plan, localDate: string, visits: PlannedVisit[
   const noonMs = localNoon(localDate, zone).getTime();
   const hours = (ms: number) => 12 + (ms - noonMs) / HOUR_MS;
   const ids = [...new Set(visits.map((v) => v.targetId))];
-  const colours = targetColours(plan, ids);
+  const styles = targetStyles(plan, ids);
   const siteNightClock = siteClock(site, new Date((fromMs + toMs) / 2));
   const curves = ids.flatMap((id) => {
     const target = plan.campaign.targets.find((t) => t.id === id);
@@ -73,7 +73,8 @@ export function nightFigure(plan: Plan, localDate: string, visits: PlannedVisit[
     axis: { values: hourTicks(hours(fromMs), hours(toMs)), labelExpr: "format(datum.value % 24, '02d') + ':00'" },
   };
   const y = { type: 'quantitative' as const, scale: { domain: [0, 90], nice: false } };
-  const targetScale = { domain: ids, range: ids.map((id) => colours.get(id)!) };
+  const targetScale = { domain: ids, range: ids.map((id) => styles.get(id)!.colour) };
+  const dashScale = { domain: ids, range: ids.map((id) => styles.get(id)!.dash) };
   const spec = {
     width: 560,
     height: 240,
@@ -107,6 +108,7 @@ export function nightFigure(plan: Plan, localDate: string, visits: PlannedVisit[
           x,
           y: { ...y, field: 'altitudeDeg', title: 'Altitude (deg)' },
           color: { field: 'target', type: 'nominal', title: 'Target', scale: targetScale },
+          strokeDash: { field: 'target', type: 'nominal', title: 'Target', scale: dashScale },
         },
       },
       {

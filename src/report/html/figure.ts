@@ -17,11 +17,16 @@ export interface ChartFigure {
 }
 
 /**
- * Prefixes the SVG's own ids (vega's clip paths) and the `url(#id)` references to them, so that
- * many SVGs inlined in one page can never share an id.
+ * Renames the SVG's own ids (vega's clip paths) and the `url(#id)` references to them to
+ * `<prefix>-clip<n>` in order of appearance: many SVGs inlined in one page never share an id, and
+ * the names do not depend on how many charts vega drew before in this process (same bytes every run).
  */
 export function scopeSvgIds(svg: string, prefix: string): string {
-  return svg.replace(/\bid="([^"]+)"/g, `id="${prefix}-$1"`).replace(/url\(#([^)]+)\)/g, `url(#${prefix}-$1)`);
+  const names = new Map<string, string>();
+  for (const m of svg.matchAll(/\bid="([^"]+)"/g)) if (!names.has(m[1]!)) names.set(m[1]!, `${prefix}-clip${names.size + 1}`);
+  return svg
+    .replace(/\bid="([^"]+)"/g, (_, id: string) => `id="${names.get(id)}"`)
+    .replace(/url\(#([^)]+)\)/g, (whole, id: string) => (names.has(id) ? `url(#${names.get(id)})` : whole));
 }
 
 /**
