@@ -1,0 +1,121 @@
+// The pipeline of `crest plan`: nights → windows → candidate visits → optimiser → weather → Plan.
+// Pure: the campaign comes in already read and validated; nothing here reads or writes files.
+import { DateTime } from 'luxon';
+import { bjdTdb } from '../astro/bjd.js';
+import type { Campaign, Plan, PlannedVisit, TargetSummary } from '../model.js';
+import { phaseErrCycles } from '../orbit/ephemeris.js';
+import { optimiseSchedule } from '../schedule/optimise.js';
+import type { ScheduleProblem, ScheduleResult, ScheduleTarget } from '../schedule/types.js';
+import { simulateWeather } from '../schedule/weather.js';
+import { computeNights } from '../sky/nights.js';
+import { computeWindows } from '../sky/visibility.js';
+import { candidateSlots, scheduleNights, setupTargets, type SlotDetail, type TargetSetup } from './candidates.js';
+import { planWarnings } from './warnings.js';
+
+export const GENERATOR = 'crest 0.1.0';
+/** Weather trials per plan (issue: 1,000). */
+export const WEATHER_TRIALS = 1000;
+
+export interface PlanOptions {
+  /** Overrides the campaign's seed. */
+  seed?: number;
+  weatherTrials?: number;
+}
+
+/** Builds the observing plan for a campaign. Deterministic for a seed. */
+export function buildPlan(campaign: Campaign, options: PlanOptions = {}): Plan {
+  const seed = options.seed ?? campaign.seed;
+  const { site, constraints, window, time } = campaign;
+  const nights = computeNights(site, window.start, window.end, constraints.twilight);
+  const { windows } = computeWindows(site, campaign.targets, nights, constraints);
+  const setups = setupTargets(campaign);
+  const given = time.mode === 'given-nights' ? new Set(time.dates) : undefined;
+  const details = candidateSlots(campaign, nights, windows, setups).filter((d) => !given || given.has(d.localDate));
+  const allNights = scheduleNights(campaign, nights);
+  const problem: ScheduleProblem = {
+    nights: given ? allNights.filter((n) => given.has(n.localDate)) : allNights,
+    targets: setups.flatMap((s) => (s.scheduleTarget ? [s.scheduleTarget] : [])),
+    slots: details.map((d) => d.slot),
+    time: time.mode === 'choose-nights' ? time : time.mode === 'hours' ? time : { mode: 'given-nights' },
+    constraints: { minSpacingHours: constraints.minSpacingHours, onePerNight: constraints.minSpacingHours >= 12 },
+  };
+  const result = optimiseSchedule(problem, { seed });
+  const weather = simulateWeather(problem, result, options.weatherTrials ?? WEATHER_TRIALS, seed);
+  const bySlot = new Map(details.map((d) => [d.slot.slotId, d]));
+  const visits = result.slotIds.map((id) => plannedVisit(bySlot.get(id)!, campaign));
+  const windowEndBjd = (t: TargetSetup) =>
+    bjdTdb(DateTime.fromISO(window.end, { zone: site.timeZone }).plus({ days: 1 }).toJSDate(), t.target.raDeg, t.target.decDeg);
+  const targets = setups.map((setup) => targetSummary(setup, result, weather.targets, windowEndBjd(setup)));
+  const plannedDates =
+    time.mode === 'given-nights' ? [...time.dates].sort() : result.nightIndices.map((i) => nights[i]!.localDate);
+  const exposureHours = visits.reduce((sum, v) => sum + v.exposureSec, 0) / 3600;
+  const totalHours = visits.reduce((sum, v) => sum + v.durationSec, 0) / 3600;
+  const plan: Plan = {
+    schemaVersion: 1,
+    generator: GENERATOR,
+    campaign: { ...campaign, seed },
+    nights,
+    plannedDates,
+    backups: result.backups.map((b) => ({ localDate: b.localDate, rank: b.rank, utilityGain: b.utilityGain })),
+    visits,
+    targets,
+    totals: { nights: plannedDates.length, visits: visits.length, exposureHours, overheadHours: totalHours - exposureHours, totalHours, utility: result.utility },
+    warnings: [],
+  };
+  plan.warnings = planWarnings(plan, setups, windows);
+  return plan;
+}
+
+function plannedVisit(d: SlotDetail, campaign: Campaign): PlannedVisit {
+  const start = DateTime.fromMillis(d.slot.startMs, { zone: 'utc' });
+  const visit: PlannedVisit = {
+    targetId: d.slot.targetId,
+    localDate: d.localDate,
+    startUtc: start.toISO({ suppressMilliseconds: true })!,
+    startLocal: start.setZone(campaign.site.timeZone).toISO({ suppressMilliseconds: true })!,
+    midBjdTdb: d.midBjdTdb,
+    exposureSec: d.exposureSec,
+    durationSec: d.slot.durationSec,
+    airmass: d.airmass,
+    moonSeparationDeg: d.moonSeparationDeg,
+    sigmaMps: d.sigmaMps,
+    sigmaEffMps: d.slot.sigmaEffMps,
+  };
+  if (d.slot.phase !== undefined) {
+    visit.phase = d.slot.phase;
+    visit.phaseErr = d.slot.phaseErr;
+  }
+  return visit;
+}
+
+function targetSummary(
+  setup: TargetSetup,
+  result: ScheduleResult,
+  weather: { targetId: string; goalProbability: number }[],
+  windowEndBjd: number,
+): TargetSummary {
+  const { target } = setup;
+  const scheduled: ScheduleTarget | undefined = setup.scheduleTarget;
+  const summary: TargetSummary = {
+    targetId: target.id,
+    kind: scheduled?.kind ?? 'monitor',
+    priority: target.priority,
+    visits: 0,
+    hours: 0,
+    warnings: [],
+  };
+  if (target.ephemeris) summary.phaseErrAtEnd = phaseErrCycles(target.ephemeris, windowEndBjd);
+  const outcome = result.targets.find((t) => t.targetId === target.id);
+  if (!scheduled || !outcome) return summary;
+  return {
+    ...summary,
+    kMps: scheduled.kMps,
+    visits: outcome.visits,
+    hours: outcome.hours,
+    sigmaKMps: outcome.sigmaKMps,
+    kOverSigmaK: outcome.kOverSigmaK,
+    goal: outcome.goal,
+    goalProbability: weather.find((w) => w.targetId === target.id)?.goalProbability,
+    informationEfficiency: outcome.informationEfficiency,
+  };
+}

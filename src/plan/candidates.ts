@@ -1,0 +1,132 @@
+// Candidate visits: from the visibility windows and the per-visit cost, the visit blocks the
+// scheduler may choose among, each with its airmass, precision and predicted orbital phase.
+import { DateTime } from 'luxon';
+import { bjdTdb } from '../astro/bjd.js';
+import type { Campaign, Night, Target, Window } from '../model.js';
+import { phaseAt, phaseErrCycles } from '../orbit/ephemeris.js';
+import { semiAmplitudeMps } from '../orbit/semi-amplitude.js';
+import { targetKMps } from '../orbit/target-k.js';
+import { chooseExposureSec, visitCostSec, type ExposureChoice } from '../rv/exposure.js';
+import { visitPrecision } from '../rv/precision.js';
+import { TYPICAL_AIRMASS } from '../rv/target-detect.js';
+import { moonSeparationDeg, moonTrack } from '../sky/moon-track.js';
+import { airmassAt, preparePosition, siteClock } from '../sky/target-position.js';
+import type { CandidateSlot, ScheduleNight, ScheduleTarget } from '../schedule/types.js';
+
+/** Spacing of candidate start times inside a window (Crest's choice: fine enough for phase, coarse enough to stay fast). */
+export const SLOT_STEP_MIN = 10;
+
+/** What a candidate slot means for the plan, beyond what the scheduler needs. */
+export interface SlotDetail {
+  slot: CandidateSlot;
+  localDate: string;
+  exposureSec: number;
+  airmass: number;
+  moonSeparationDeg: number;
+  midBjdTdb: number;
+  sigmaMps: number;
+}
+
+export interface TargetSetup {
+  target: Target;
+  exposure: ExposureChoice;
+  durationSec: number;
+  /** The scheduler's view of the target, or undefined when it has no goal to schedule for. */
+  scheduleTarget?: ScheduleTarget;
+  /** Why a target is not scheduled. */
+  skipped?: string;
+}
+
+/** Exposure (at a typical airmass) and the scheduler's goal for each target. */
+export function setupTargets(campaign: Campaign): TargetSetup[] {
+  const { instrument, goals } = campaign;
+  return campaign.targets.map((target) => {
+    const exposure = chooseExposureSec(instrument, target, TYPICAL_AIRMASS);
+    const setup: TargetSetup = { target, exposure, durationSec: visitCostSec(instrument, exposure.exposureSec) };
+    const kMps = targetKMps(target);
+    if (target.ephemeris && kMps !== undefined) {
+      setup.scheduleTarget = { kind: 'ephemeris', id: target.id, priority: target.priority, kMps, goal: goals.significance };
+    } else if (target.search) {
+      const { periodMinDays, periodMaxDays, massEarth } = target.search;
+      const kAtMin = semiAmplitudeMps({ starMassSun: target.massSun, planetMassEarth: massEarth, periodDays: periodMinDays });
+      setup.scheduleTarget = { kind: 'search', id: target.id, priority: target.priority, kMps: kAtMin, goal: goals.significance, periodMinDays, periodMaxDays };
+    } else {
+      setup.skipped = target.ephemeris ? 'has an ephemeris but no planet mass or K: nothing to schedule for' : 'has neither an ephemeris with a planet nor a search range: nothing to schedule for';
+    }
+    return setup;
+  });
+}
+
+/** Clear-night probability of a night: the site's fraction, per month when given (common practice). */
+export function clearProbability(clearFraction: number | number[], localDate: string): number {
+  return typeof clearFraction === 'number' ? clearFraction : clearFraction[DateTime.fromISO(localDate).month - 1]!;
+}
+
+export function scheduleNights(campaign: Campaign, nights: Night[]): ScheduleNight[] {
+  return nights.map((night, index) => ({
+    index,
+    localDate: night.localDate,
+    clearProbability: clearProbability(campaign.site.clearFraction, night.localDate),
+    hoursAvailable: night.darkHours,
+  }));
+}
+
+/**
+ * Visit blocks every SLOT_STEP_MIN inside each window: acquisition, exposure, readout, the whole
+ * block inside the window. Airmass, Moon distance, precision and phase at mid-exposure.
+ */
+export function candidateSlots(campaign: Campaign, nights: Night[], windows: Window[], setups: TargetSetup[]): SlotDetail[] {
+  const { site, instrument } = campaign;
+  const byTarget = new Map(setups.filter((s) => s.scheduleTarget).map((s) => [s.target.id, s]));
+  const nightIndex = new Map(nights.map((n, i) => [n.localDate, i]));
+  const perNight = new Map<string, Window[]>();
+  for (const w of windows) {
+    if (!byTarget.has(w.targetId)) continue;
+    perNight.set(w.localDate, [...(perNight.get(w.localDate) ?? []), w]);
+  }
+  const details: SlotDetail[] = [];
+  for (const [localDate, nightWindows] of perNight) {
+    const n = nightIndex.get(localDate)!;
+    const night = nights[n]!;
+    const clock = siteClock(site, new Date((night.darkStart!.getTime() + night.darkEnd!.getTime()) / 2));
+    const moon = moonTrack(night, clock);
+    for (const w of nightWindows) {
+      const setup = byTarget.get(w.targetId)!;
+      const { target } = setup;
+      const position = preparePosition(target, clock);
+      const durationMs = setup.durationSec * 1000;
+      const leadMs = instrument.acquisitionSec * 1000;
+      const exposureMs = setup.exposure.exposureSec * 1000;
+      const stepMs = SLOT_STEP_MIN * 60_000;
+      for (let startMs = w.start.getTime(); startMs + durationMs <= w.end.getTime(); startMs += stepMs) {
+        const midMs = startMs + leadMs + exposureMs / 2;
+        const airmass = airmassAt(position, midMs);
+        const budget = visitPrecision(instrument, target, setup.exposure.exposureSec, airmass);
+        const midBjdTdb = bjdTdb(new Date(midMs), target.raDeg, target.decDeg);
+        const slot: CandidateSlot = {
+          slotId: `${target.id}|${localDate}|${startMs}`,
+          targetId: target.id,
+          nightIndex: n,
+          startMs,
+          durationSec: setup.durationSec,
+          sigmaEffMps: budget.effMps,
+          midDays: midBjdTdb,
+        };
+        if (target.ephemeris && setup.scheduleTarget?.kind === 'ephemeris') {
+          slot.phase = phaseAt(target.ephemeris, midBjdTdb);
+          slot.phaseErr = phaseErrCycles(target.ephemeris, midBjdTdb);
+        }
+        details.push({
+          slot,
+          localDate,
+          exposureSec: setup.exposure.exposureSec,
+          airmass,
+          moonSeparationDeg: moonSeparationDeg(moon, position.vector, midMs),
+          midBjdTdb,
+          sigmaMps: budget.visitMps,
+        });
+      }
+    }
+  }
+  return details;
+}

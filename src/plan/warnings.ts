@@ -1,0 +1,28 @@
+// Warnings an observer must see: targets never observable, goals out of reach, ephemerides that
+// will be too poor to place visits at quadrature, exposures the instrument cannot make.
+import type { Plan, Window } from '../model.js';
+import type { TargetSetup } from './candidates.js';
+
+/** Phase error (cycles) above which quadrature timing is lost: ±0.1 cycle blurs sin(2πφ) by 18% (exp(−2π²σ²)). */
+export const POOR_PHASE_ERR_CYCLES = 0.1;
+
+/** Fills each target's warnings in place and returns the plan-wide ones. */
+export function planWarnings(plan: Plan, setups: TargetSetup[], windows: Window[]): string[] {
+  const observable = new Set(windows.map((w) => w.targetId));
+  for (const summary of plan.targets) {
+    const setup = setups.find((s) => s.target.id === summary.targetId)!;
+    const w = summary.warnings;
+    if (setup.skipped) w.push(setup.skipped);
+    if (!observable.has(summary.targetId)) w.push('never observable in the window under the constraints (altitude, airmass, Moon, dark time)');
+    if (setup.exposure.warning) w.push(setup.exposure.warning);
+    if (summary.goal !== undefined && summary.kOverSigmaK !== undefined && summary.kOverSigmaK < summary.goal) {
+      w.push(`goal K/sigma_K = ${summary.goal} not reached: ${summary.kOverSigmaK.toFixed(1)} with ${summary.visits} visits`);
+    }
+    if (summary.phaseErrAtEnd !== undefined && summary.phaseErrAtEnd > POOR_PHASE_ERR_CYCLES) {
+      w.push(`ephemeris too poor by the window's end: phase error ±${summary.phaseErrAtEnd.toFixed(2)} cycles; refine P and Tc first`);
+    }
+  }
+  const warnings: string[] = [];
+  if (plan.visits.length === 0) warnings.push('no visit could be planned: check the window, the constraints and the targets');
+  return warnings;
+}
