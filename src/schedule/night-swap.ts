@@ -8,8 +8,9 @@ import { fillNight, nightValue } from './greedy.js';
 import { improves, openNightList, shuffled } from './moves.js';
 import type { PlanState } from './state.js';
 
-/** Chosen nights considered for double swaps (the least useful ones). */
-const DOUBLE_OUT = 6;
+/** Double swaps pair the DOUBLE_OUT least useful chosen nights with the DOUBLE_IN best candidates. */
+const DOUBLE_OUT = 4;
+const DOUBLE_IN = 6;
 
 function fill(state: PlanState, n: number): number[] {
   return fillNight(state, n).added;
@@ -80,7 +81,7 @@ export function nightSwapPass(state: PlanState, candidateCount: number, rng: Rng
   let best: [number[], number[]] | null = null;
   let bestUtility = before;
   for (const out of pairs(weakest)) {
-    for (const into of pairs(candidates)) {
+    for (const into of pairs(candidates.slice(0, DOUBLE_IN))) {
       const u = swapValue(state, out, into);
       if (improves(bestUtility, u)) [best, bestUtility] = [[out, into], u];
     }

@@ -24,8 +24,9 @@
 export interface SearchGrid {
   /** 2 pi / P for each grid period, rad/day. */
   angularFreq: Float64Array;
-  /** log K(P) for each grid period. */
+  /** log K(P) for each grid period, and their mean. */
   logK: Float64Array;
+  meanLogK: number;
   /** Ridge added to the diagonal of M. */
   eps: number;
 }
@@ -46,7 +47,7 @@ export function searchGrid(periodMinDays: number, periodMaxDays: number, kMpsAtM
     angularFreq[p] = (2 * Math.PI) / Math.exp(logP);
     logK[p] = Math.log(kMpsAtMin) - (logP - Math.log(periodMinDays)) / 3;
   }
-  return { angularFreq, logK, eps };
+  return { angularFreq, logK, meanLogK: logK.reduce((sum, v) => sum + v, 0) / n, eps };
 }
 
 /** Adds (sign 1) or removes (sign -1) a visit of weight w at time tDays. */
@@ -73,7 +74,11 @@ export function searchLogScore(stats: Float64Array, offset: number, grid: Search
   const a = stats[offset]! + sw + eps;
   const logA = Math.log(a);
   const freq = grid.angularFreq;
-  let total = 0;
+  // Sum of log det as the log of products of four determinants: a quarter of the logarithms, and
+  // four determinants (each between eps^3 and (sum w)^3) stay far inside the range of a double.
+  let logDetSum = 0;
+  let product = 1;
+  const floor = eps * eps * eps;
   for (let p = 0, o = offset + 1; p < freq.length; p++, o += 5) {
     let b = stats[o]!, c = stats[o + 1]!, d = stats[o + 2]! + eps, e = stats[o + 3]!, f = stats[o + 4]! + eps;
     if (sw !== 0) {
@@ -86,11 +91,15 @@ export function searchLogScore(stats: Float64Array, offset: number, grid: Search
       e += sw * sn * cs;
       f += sw * cs * cs;
     }
-    // det of the symmetric [[a, b, c], [b, d, e], [c, e, f]] by cofactors along the first row.
+    // det of the symmetric [[a, b, c], [b, d, e], [c, e, f]] by cofactors along the first row;
+    // rounding after removals can leave it a hair below the ridge's own determinant: floor it there.
     const det = a * (d * f - e * e) - b * (b * f - c * e) + c * (b * e - d * c);
-    // Rounding can leave det a hair below eps^3-scale after removals: floor it at the ridge's own determinant.
-    const floor = eps * eps * eps;
-    total += grid.logK[p]! + 0.25 * (Math.log(det > floor ? det : floor) - logA);
+    product *= det > floor ? det : floor;
+    if ((p & 3) === 3) {
+      logDetSum += Math.log(product);
+      product = 1;
+    }
   }
-  return total / freq.length;
+  logDetSum += Math.log(product);
+  return grid.meanLogK + 0.25 * (logDetSum / freq.length - logA);
 }

@@ -134,8 +134,8 @@ export function optimiseCompiled(c: CompiledProblem, options: ScheduleOptions): 
     ...(options.onProgress ? { onProgress: options.onProgress } : {}),
   };
   localSearch(state, settings);
-  // Restarts cost a full local search each: many on small problems, none on very large ones.
-  const restarts = options.restarts ?? Math.min(30, Math.floor(200_000 / Math.max(1, c.slotCount)));
+  // Restarts cost a full local search each: many on small problems, none above 20,000 slots.
+  const restarts = options.restarts ?? Math.min(30, Math.floor(20_000 / Math.max(1, c.slotCount)));
   let best = snapshot(state);
   let bestUtility = state.utility;
   for (let r = 0; r < restarts; r++) {

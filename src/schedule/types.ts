@@ -87,7 +87,7 @@ export interface ScheduleOptions {
   searchGridSize?: number;
   /** Height of the soft cap above the goal (see utility.ts). Default 0.1. */
   overshootWeight?: number;
-  /** Perturb-and-repair restarts after the first local optimum. Default: 10, fewer above 20,000 slots, none above 200,000. */
+  /** Perturb-and-repair restarts after the first local optimum. Default: 30 up to 666 slots, then fewer (20,000 / slots), none above 20,000. */
   restarts?: number;
   /** Upper bound on local-search passes. Default 30. */
   maxPasses?: number;

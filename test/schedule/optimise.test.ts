@@ -1,0 +1,128 @@
+import { describe, expect, it } from 'vitest';
+import { optimiseSchedule } from '../../src/schedule/optimise.js';
+import { referenceKOverSigmaK, referenceUtility, scheduleViolations } from '../../src/schedule/reference.js';
+import { syntheticProblem, type SyntheticSpec } from '../../src/schedule/synthetic.js';
+import type { CandidateSlot, ScheduleProblem, ScheduleResult, ScheduleTimeModel } from '../../src/schedule/types.js';
+
+const settings = { searchGridSize: 16, overshootWeight: 0.1 };
+
+function visitsOf(problem: ScheduleProblem, result: ScheduleResult): CandidateSlot[] {
+  const byId = new Map(problem.slots.map((s) => [s.slotId, s]));
+  return result.slotIds.map((id) => byId.get(id)!);
+}
+
+const times: ScheduleTimeModel[] = [{ mode: 'choose-nights', nights: 5 }, { mode: 'given-nights' }, { mode: 'hours', hours: 12 }];
+
+function randomCase(seed: number): ScheduleProblem {
+  const spec: SyntheticSpec = {
+    targets: 3 + (seed % 5),
+    nights: 20 + (seed % 7),
+    slotsPerNight: 1 + (seed % 4),
+    searchFraction: (seed % 3) / 4,
+    visibleFraction: 0.7,
+    time: times[seed % 3]!,
+    minSpacingHours: seed % 2 ? 0 : 2,
+    onePerNight: seed % 4 !== 0,
+    nightHours: 6,
+    seed,
+    phaseErrors: seed % 2 === 0,
+  };
+  return syntheticProblem(spec);
+}
+
+describe('optimiseSchedule on random problems', () => {
+  for (let seed = 1; seed <= 18; seed++) {
+    it(`case ${seed}: feasible, honest, non-decreasing, repeatable`, () => {
+      const problem = randomCase(seed);
+      const trace: number[] = [];
+      const result = optimiseSchedule(problem, { seed, searchGridSize: 16, onProgress: (u) => trace.push(u) });
+      const visits = visitsOf(problem, result);
+      // Only candidate slots, no overlaps, spacing, one per night, night hours and budgets (checked pairwise).
+      expect(scheduleViolations(problem, visits)).toEqual([]);
+      // The claimed utility and K/sigma_K equal a recomputation from the chosen slots.
+      expect(result.utility).toBeCloseTo(referenceUtility(problem, visits, settings), 8);
+      const ratios = referenceKOverSigmaK(problem, visits, settings);
+      result.targets.forEach((t, i) => expect(t.kOverSigmaK).toBeCloseTo(ratios[i]!, 8));
+      expect(result.hours).toBeCloseTo(visits.reduce((sum, v) => sum + v.durationSec / 3600, 0), 9);
+      // Utility never decreases from the greedy pass through every kept move.
+      for (let i = 1; i < trace.length; i++) expect(trace[i]!).toBeGreaterThanOrEqual(trace[i - 1]! - 1e-9);
+      expect(result.utility).toBeGreaterThanOrEqual(trace[0]! - 1e-9);
+      // The same seed gives the same plan.
+      expect(optimiseSchedule(problem, { seed, searchGridSize: 16 }).slotIds).toEqual(result.slotIds);
+      if (problem.time.mode === 'choose-nights') {
+        expect(result.nightIndices.length).toBeLessThanOrEqual(problem.time.nights);
+        for (const b of result.backups) expect(result.nightIndices).not.toContain(b.nightIndex);
+        for (let i = 1; i < result.backups.length; i++) expect(result.backups[i]!.utilityGain).toBeLessThanOrEqual(result.backups[i - 1]!.utilityGain);
+      } else {
+        expect(result.backups).toEqual([]);
+      }
+    });
+  }
+});
+
+/** One ephemeris target, slots every 20 minutes for `hoursPerNight` each night, equal sigma, exact phases. */
+function singleTarget(periodDays: number, nights: number, hoursPerNight: number): ScheduleProblem {
+  const slots: CandidateSlot[] = [];
+  const t0 = Date.UTC(2027, 3, 1, 20);
+  for (let n = 0; n < nights; n++) {
+    for (let k = 0; k < hoursPerNight * 3; k++) {
+      const startMs = t0 + n * 86_400_000 + k * 1_200_000;
+      const phase = (startMs - t0) / 86_400_000 / periodDays;
+      slots.push({ slotId: `n${n}k${k}`, targetId: 'LONE-1', nightIndex: n, startMs, durationSec: 1200, sigmaEffMps: 2, phase: phase - Math.floor(phase), phaseErr: 0 });
+    }
+  }
+  return {
+    nights: Array.from({ length: nights }, (_, n) => ({ index: n, localDate: `2027-04-${String(n + 1).padStart(2, '0')}`, clearProbability: 0.8, hoursAvailable: hoursPerNight })),
+    targets: [{ id: 'LONE-1', kind: 'ephemeris', priority: 1, kMps: 3, goal: 100 }],
+    slots,
+    time: { mode: 'given-nights' },
+    constraints: { minSpacingHours: 0, onePerNight: true },
+  };
+}
+
+describe('information efficiency', () => {
+  for (const periodDays of [2.7, 4.13, 9.6]) {
+    it(`reaches above 0.95 for one target with perfect visibility (P = ${periodDays} d)`, () => {
+      // Visible around the clock for 12 days; a budget of 24 visits of 20 minutes.
+      const problem: ScheduleProblem = { ...singleTarget(periodDays, 12, 24), time: { mode: 'hours', hours: 8 }, constraints: { minSpacingHours: 0, onePerNight: false } };
+      const result = optimiseSchedule(problem, { seed: 1 });
+      const target = result.targets[0]!;
+      expect(target.visits).toBe(24);
+      // (sigma^2/N) / Var(K^) with Var(K^) = 1/I (REFERENCES.md "Information efficiency").
+      const efficiency = (2 ** 2 / target.visits) * target.informationPerMps2;
+      expect(efficiency).toBeCloseTo(target.informationEfficiency!, 12);
+      expect(efficiency).toBeGreaterThan(0.95);
+    });
+  }
+});
+
+describe('what the utility asks of a plan', () => {
+  it('moves time to other targets once one reaches its goal', () => {
+    const problem = randomCase(4);
+    const easy = problem.targets[0]!;
+    const relaxed = optimiseSchedule(problem, { seed: 1 });
+    // Make the first target's goal tiny: it should keep few visits and give the rest away.
+    const lowered = { ...problem, targets: problem.targets.map((t, i) => (i === 0 ? { ...t, goal: 0.5 } : t)) };
+    const capped = optimiseSchedule(lowered, { seed: 1 });
+    const before = relaxed.targets.find((t) => t.targetId === easy.id)!;
+    const after = capped.targets.find((t) => t.targetId === easy.id)!;
+    expect(after.visits).toBeLessThan(before.visits);
+    const othersBefore = relaxed.targets.filter((t) => t.targetId !== easy.id).reduce((s, t) => s + t.visits, 0);
+    const othersAfter = capped.targets.filter((t) => t.targetId !== easy.id).reduce((s, t) => s + t.visits, 0);
+    expect(othersAfter).toBeGreaterThan(othersBefore);
+  });
+
+  it('observes early when the ephemeris degrades over the window', () => {
+    const problem = singleTarget(3.3, 40, 9);
+    // Phase error growing from 0 to 0.4 cycles over the window: late visits are worth little.
+    const slots = problem.slots.map((s) => ({ ...s, phaseErr: (0.4 * s.nightIndex) / 39 }));
+    const result = optimiseSchedule({ ...problem, slots, time: { mode: 'choose-nights', nights: 8 } }, { seed: 2 });
+    expect(Math.max(...result.nightIndices)).toBeLessThan(20);
+  });
+
+  it('rejects slots that name an unknown target', () => {
+    const problem = singleTarget(3, 2, 9);
+    const bad = { ...problem, slots: [{ ...problem.slots[0]!, targetId: 'NOBODY' }] };
+    expect(() => optimiseSchedule(bad, { seed: 1 })).toThrow(/unknown target NOBODY/);
+  });
+});

@@ -1,0 +1,63 @@
+import { describe, expect, it } from 'vitest';
+import { optimiseSchedule } from '../../src/schedule/optimise.js';
+import { referenceKOverSigmaK } from '../../src/schedule/reference.js';
+import { syntheticProblem } from '../../src/schedule/synthetic.js';
+import type { ScheduleProblem } from '../../src/schedule/types.js';
+import { simulateWeather } from '../../src/schedule/weather.js';
+
+const settings = { searchGridSize: 16, overshootWeight: 0.1 };
+
+function problemWith(clearProbability: number, seed: number): ScheduleProblem {
+  const base = syntheticProblem({ targets: 3, nights: 14, slotsPerNight: 2, searchFraction: 0.34, visibleFraction: 0.8, time: { mode: 'choose-nights', nights: 6 }, minSpacingHours: 0, onePerNight: true, nightHours: 6, seed, phaseErrors: true });
+  return { ...base, nights: base.nights.map((n) => ({ ...n, clearProbability })) };
+}
+
+describe('simulateWeather', () => {
+  it('always clear: each target reaches its goal exactly when the plan does', () => {
+    const problem = problemWith(1, 3);
+    const result = optimiseSchedule(problem, { seed: 1, ...settings });
+    const outcome = simulateWeather(problem, result, 50, 9, settings);
+    outcome.targets.forEach((t, i) => {
+      const planned = result.targets[i]!;
+      expect(t.goalProbability).toBe(planned.kOverSigmaK >= planned.goal * (1 - 1e-9) ? 1 : 0);
+      expect(t.meanKOverSigmaK).toBeCloseTo(planned.kOverSigmaK, 8);
+    });
+    expect(outcome.meanUtility).toBeCloseTo(result.utility, 8);
+  });
+
+  it('always cloudy: nothing is reached', () => {
+    const problem = problemWith(0, 4);
+    const result = optimiseSchedule(problem, { seed: 1, ...settings });
+    const outcome = simulateWeather(problem, result, 50, 9, settings);
+    expect(outcome.meanClearNights).toBe(0);
+    for (const t of outcome.targets) expect(t.goalProbability).toBe(0);
+  });
+
+  it('agrees with an exact sum over every weather outcome, within Monte Carlo error', () => {
+    const problem = problemWith(0.6, 5);
+    // Low goals so that reaching them is a matter of luck with the weather.
+    const lowered = { ...problem, targets: problem.targets.map((t) => ({ ...t, goal: 1 })) };
+    const result = optimiseSchedule(lowered, { seed: 1, ...settings });
+    const byId = new Map(lowered.slots.map((s) => [s.slotId, s]));
+    const visits = result.slotIds.map((id) => byId.get(id)!);
+    const nights = [...new Set(visits.map((v) => v.nightIndex))];
+    // Slow reference: enumerate all 2^n clear/cloudy patterns of the used nights with their probabilities.
+    const exact = lowered.targets.map(() => 0);
+    for (let mask = 0; mask < 1 << nights.length; mask++) {
+      const clear = new Set(nights.filter((_, i) => mask & (1 << i)));
+      const weight = nights.reduce((p, n) => p * (clear.has(n) ? 0.6 : 0.4), 1);
+      const ratios = referenceKOverSigmaK(lowered, visits.filter((v) => clear.has(v.nightIndex)), settings);
+      ratios.forEach((r, t) => (exact[t] += r >= lowered.targets[t]!.goal * (1 - 1e-9) ? weight : 0));
+    }
+    const trials = 1000;
+    const outcome = simulateWeather(lowered, result, trials, 21, settings);
+    outcome.targets.forEach((t, i) => {
+      // Four binomial standard errors (common practice for a seeded Monte Carlo check).
+      const tolerance = 4 * Math.sqrt((exact[i]! * (1 - exact[i]!)) / trials) + 1e-9;
+      expect(Math.abs(t.goalProbability - exact[i]!)).toBeLessThanOrEqual(tolerance);
+    });
+    // The same seed repeats; the mean number of clear nights is near 0.6 per used night.
+    expect(simulateWeather(lowered, result, trials, 21, settings)).toEqual(outcome);
+    expect(Math.abs(outcome.meanClearNights - 0.6 * nights.length)).toBeLessThan(4 * Math.sqrt((0.24 * nights.length) / trials));
+  });
+});
