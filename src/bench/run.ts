@@ -2,8 +2,9 @@
 // To add a bench, write src/bench/<name>.ts exporting a BenchModule and list it below.
 import type { BenchModule } from './types.js';
 import { visibilityBench } from './visibility.js';
+import { scheduleBenches } from './schedule.js';
 
-const BENCHES: BenchModule[] = [visibilityBench];
+const BENCHES: BenchModule[] = [visibilityBench, ...scheduleBenches];
 
 /** Runs the benches named on the command line (all when none), one JSON line each on stdout. */
 async function main(names: string[]): Promise<void> {
