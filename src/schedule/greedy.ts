@@ -4,7 +4,7 @@
 // the heap stay valid (an entry records its target's version; older entries are skipped).
 import type { PlanState } from './state.js';
 
-/** Max-heap of (key, slot, version) in parallel growable arrays. */
+/** Max-heap of (key, slot, version) in parallel growable arrays; equal keys go to the earlier slot. */
 class SlotHeap {
   private keys: number[] = [];
   private slots: number[] = [];
@@ -14,50 +14,50 @@ class SlotHeap {
     return this.keys.length;
   }
 
+  /** Whether entry i ranks above (key, slot). Ties go to the earlier slot, so the order is fully determined. */
+  private above(i: number, key: number, slot: number): boolean {
+    return this.keys[i]! > key || (this.keys[i] === key && this.slots[i]! < slot);
+  }
+
+  private put(i: number, key: number, slot: number, version: number): void {
+    this.keys[i] = key;
+    this.slots[i] = slot;
+    this.versions[i] = version;
+  }
+
+  private copy(to: number, from: number): void {
+    this.put(to, this.keys[from]!, this.slots[from]!, this.versions[from]!);
+  }
+
   push(key: number, slot: number, version: number): void {
-    const { keys, slots, versions } = this;
-    let i = keys.length;
-    keys.push(key);
-    slots.push(slot);
-    versions.push(version);
+    let i = this.keys.length;
     while (i > 0) {
       const parent = (i - 1) >> 1;
-      // Ties go to the earlier slot, so the order is fully determined.
-      if (keys[parent]! > key || (keys[parent] === key && slots[parent]! < slot)) break;
-      keys[i] = keys[parent]!;
-      slots[i] = slots[parent]!;
-      versions[i] = versions[parent]!;
+      if (this.above(parent, key, slot)) break;
+      this.copy(i, parent);
       i = parent;
     }
-    keys[i] = key;
-    slots[i] = slot;
-    versions[i] = version;
+    this.put(i, key, slot, version);
   }
 
   /** Removes the top entry and returns [slot, version]. */
   pop(): [number, number] {
-    const { keys, slots, versions } = this;
-    const top: [number, number] = [slots[0]!, versions[0]!];
-    const key = keys.pop()!;
-    const slot = slots.pop()!;
-    const version = versions.pop()!;
-    const n = keys.length;
+    const top: [number, number] = [this.slots[0]!, this.versions[0]!];
+    const key = this.keys.pop()!;
+    const slot = this.slots.pop()!;
+    const version = this.versions.pop()!;
+    const n = this.keys.length;
     if (n === 0) return top;
     let i = 0;
     for (;;) {
       let child = 2 * i + 1;
       if (child >= n) break;
-      const right = child + 1;
-      if (right < n && (keys[right]! > keys[child]! || (keys[right] === keys[child] && slots[right]! < slots[child]!))) child = right;
-      if (keys[child]! < key || (keys[child] === key && slots[child]! > slot)) break;
-      keys[i] = keys[child]!;
-      slots[i] = slots[child]!;
-      versions[i] = versions[child]!;
+      if (child + 1 < n && this.above(child + 1, this.keys[child]!, this.slots[child]!)) child++;
+      if (!this.above(child, key, slot)) break;
+      this.copy(i, child);
       i = child;
     }
-    keys[i] = key;
-    slots[i] = slot;
-    versions[i] = version;
+    this.put(i, key, slot, version);
     return top;
   }
 }
