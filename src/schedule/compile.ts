@@ -132,6 +132,7 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
     c.startMs[j] = s.startMs;
     c.endMs[j] = s.startMs + s.durationSec * 1000;
     c.hours[j] = s.durationSec / 3600;
+    // Weighted least squares: a visit weighs 1/sigma^2 (common practice).
     const w = 1 / (s.sigmaEffMps * s.sigmaEffMps);
     c.weight[j] = w;
     c.maxWeight[t] = Math.max(c.maxWeight[t]!, w);
