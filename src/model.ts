@@ -21,6 +21,8 @@ export interface Site {
   hourAngleLimitsHours?: { east: number; west: number };
   /** Fraction of clear nights: one number, or twelve monthly values (January first). */
   clearFraction: number | number[];
+  /** Semester boundaries as month-day (`MM-DD`) pairs; B may end in the next year. */
+  semesters?: { A: { start: string; end: string }; B: { start: string; end: string } };
   sourceNote: string;
   /** Path of the file it was read from. */
   file: string;
@@ -88,6 +90,8 @@ export interface Target {
   vsiniKms: number;
   jitterMps: number;
   priority: number;
+  /** K / sigma_K to reach for this target; overrides the campaign's goals.significance. */
+  goalSignificance?: number;
   ephemeris?: Ephemeris;
   planet?: PlanetSpec;
   search?: SearchSpec;

@@ -8,6 +8,7 @@ import { INSTRUMENTS_DIR, SITES_DIR } from './paths.js';
 import { readStructured } from './read-text.js';
 import { resolveRef } from './resolve.js';
 import { readSite } from './site.js';
+import { semesterWindow } from './semester.js';
 import { readTargets } from './targets.js';
 import { issueToError } from './zod-issue.js';
 
@@ -41,10 +42,16 @@ export const campaignSchema = z.strictObject({
   site: z.string({ error: 'a site id or a path to a site file' }).min(1, 'a site id or a path to a site file'),
   instrument: z.string({ error: 'an instrument id or a path to an instrument profile' }).min(1, 'an instrument id or a path'),
   targets: z.string({ error: 'a path to a target list (CSV)' }).min(1, 'a path to a target list (CSV)'),
-  window: z
-    .strictObject({ start: isoDate, end: isoDate })
-    .refine((w) => w.start <= w.end, { path: ['end'], message: 'on or after window.start' })
-    .refine((w) => DateTime.fromISO(w.end).diff(DateTime.fromISO(w.start), 'days').days <= 731, { path: ['end'], message: 'at most two years after window.start' }),
+  window: z.union(
+    [
+      z
+        .strictObject({ start: isoDate, end: isoDate })
+        .refine((w) => w.start <= w.end, { path: ['end'], message: 'on or after window.start' })
+        .refine((w) => DateTime.fromISO(w.end).diff(DateTime.fromISO(w.start), 'days').days <= 731, { path: ['end'], message: 'at most two years after window.start' }),
+      z.strictObject({ semester: z.string().regex(/^\d{4}[AB]$/, 'a semester such as 2027A or 2027B') }),
+    ],
+    { error: '{ start: YYYY-MM-DD, end: YYYY-MM-DD } or { semester: 2027A }' },
+  ),
   time: timeSchema,
   constraints: constraintsSchema.default(constraintsSchema.parse({})),
   goals: z.strictObject({ significance: z.number().positive('a positive K/sigma_K').max(100, 'at most 100').default(5) }).default({ significance: 5 }),
@@ -56,26 +63,28 @@ export function readCampaign(file: string): Campaign {
   const result = campaignSchema.safeParse(data);
   if (!result.success) throw issueToError(file, data, result.error);
   const c = result.data;
-  if (c.time.mode === 'given-nights') {
-    c.time.dates.forEach((date, i) => {
-      if (date < c.window.start || date > c.window.end) {
-        throw inputError({ file, field: `time.dates[${i}]`, value: date, allowed: `a date inside the window ${c.window.start} to ${c.window.end}` });
-      }
-    });
-  }
   const baseDir = path.dirname(path.resolve(file));
   const sitePath = resolveRef(c.site, SITES_DIR, 'site', { file, field: 'site', baseDir });
   const instrumentPath = resolveRef(c.instrument, INSTRUMENTS_DIR, 'instrument', { file, field: 'instrument', baseDir });
   const targetsFile = path.resolve(baseDir, c.targets);
   const shown = (p: string) => path.relative(process.cwd(), p) || p;
+  const site = readSite(shown(sitePath));
+  const window = 'semester' in c.window ? semesterWindow(c.window.semester, site.semesters) : c.window;
+  if (c.time.mode === 'given-nights') {
+    c.time.dates.forEach((date, i) => {
+      if (date < window.start || date > window.end) {
+        throw inputError({ file, field: `time.dates[${i}]`, value: date, allowed: `a date inside the window ${window.start} to ${window.end}` });
+      }
+    });
+  }
   return {
     name: c.name,
     file,
-    site: readSite(shown(sitePath)),
+    site,
     instrument: readInstrument(shown(instrumentPath)),
     targets: readTargets(shown(targetsFile)),
     targetsFile: shown(targetsFile),
-    window: c.window,
+    window,
     time: c.time,
     constraints: c.constraints,
     goals: c.goals,

@@ -7,6 +7,11 @@ import { issueToError } from './zod-issue.js';
 const isZone = (name: string) => DateTime.local().setZone(name).isValid;
 const fraction = z.number().min(0, 'a fraction from 0 to 1').max(1, 'a fraction from 0 to 1');
 
+const monthDay = z
+  .string({ error: 'a month and day as MM-DD' })
+  .refine((s) => /^\d{2}-\d{2}$/.test(s) && DateTime.fromISO(`2000-${s}`).isValid, 'a month and day as MM-DD');
+const semesterBounds = z.strictObject({ start: monthDay, end: monthDay });
+
 /** Site file schema (sites/*.json). */
 export const siteSchema = z.strictObject({
   id: z.string().regex(/^[a-z0-9][a-z0-9-]*$/, 'lower-case letters, digits and hyphens'),
@@ -34,6 +39,9 @@ export const siteSchema = z.strictObject({
   clearFraction: z.union([fraction, z.array(fraction).length(12, 'twelve monthly values')], {
     error: 'a fraction from 0 to 1, or twelve monthly fractions',
   }),
+  semesters: z
+    .strictObject({ A: semesterBounds, B: semesterBounds })
+    .optional(),
   sourceNote: z.string().min(1, 'where the coordinates come from, or "from memory"'),
 });
 

@@ -40,6 +40,7 @@ const rowSchema = z.strictObject({
   vsinikms: numberField('projected rotation in km/s, 0 to 300', 0, 300),
   jittermps: numberField('stellar jitter in m/s, 0 to 1000', 0, 1000),
   priority: numberField('a priority weight, more than 0 and at most 100', 0, 100, { exclusiveMin: true }),
+  goalsignificance: numberField('K/sigma_K to reach, more than 0 and at most 100', 0, 100, { exclusiveMin: true }),
   perioddays: numberField('orbital period in days, more than 0 and at most 100000', 0, 1e5, { exclusiveMin: true }),
   perioderrdays: numberField('period uncertainty in days, 0 or more (below the period)', 0, 1e5),
   tcbjdtdb: numberField('mid-transit time as a full BJD_TDB, 2400000 to 2600000', 2.4e6, 2.6e6),
@@ -60,7 +61,7 @@ type Row = z.infer<typeof rowSchema>;
 const COLUMNS = Object.keys(rowSchema.shape);
 const CANONICAL: Record<string, string> = {
   pmramasyr: 'pmRaMasYr', pmdecmasyr: 'pmDecMasYr', epochyear: 'epochYear', teffk: 'teffK', masssun: 'massSun',
-  vsinikms: 'vsiniKms', jittermps: 'jitterMps', perioddays: 'periodDays', perioderrdays: 'periodErrDays',
+  vsinikms: 'vsiniKms', jittermps: 'jitterMps', goalsignificance: 'goalSignificance', perioddays: 'periodDays', perioderrdays: 'periodErrDays',
   tcbjdtdb: 'tcBjdTdb', tcerrdays: 'tcErrDays', planetmassearth: 'planetMassEarth', planetkmps: 'planetKMps',
   omegadeg: 'omegaDeg', searchperiodmindays: 'searchPeriodMinDays', searchperiodmaxdays: 'searchPeriodMaxDays',
   searchmassearth: 'searchMassEarth',
@@ -127,6 +128,7 @@ function buildTarget(row: Row, place: Place): Target {
     vsiniKms: withDefault(row.vsinikms, 'vsiniKms', DEFAULT_VSINI_KMS),
     jitterMps: withDefault(row.jittermps, 'jitterMps', defaultJitterMps(teffK)),
     priority: row.priority ?? 1,
+    goalSignificance: row.goalsignificance,
     estimated,
     source: `${place.file} ${place.where}`,
   };

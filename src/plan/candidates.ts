@@ -44,12 +44,13 @@ export function setupTargets(campaign: Campaign): TargetSetup[] {
     const exposure = chooseExposureSec(instrument, target, TYPICAL_AIRMASS);
     const setup: TargetSetup = { target, exposure, durationSec: visitCostSec(instrument, exposure.exposureSec) };
     const kMps = targetKMps(target);
+    const goal = target.goalSignificance ?? goals.significance;
     if (target.ephemeris && kMps !== undefined) {
-      setup.scheduleTarget = { kind: 'ephemeris', id: target.id, priority: target.priority, kMps, goal: goals.significance };
+      setup.scheduleTarget = { kind: 'ephemeris', id: target.id, priority: target.priority, kMps, goal };
     } else if (target.search) {
       const { periodMinDays, periodMaxDays, massEarth } = target.search;
       const kAtMin = semiAmplitudeMps({ starMassSun: target.massSun, planetMassEarth: massEarth, periodDays: periodMinDays });
-      setup.scheduleTarget = { kind: 'search', id: target.id, priority: target.priority, kMps: kAtMin, goal: goals.significance, periodMinDays, periodMaxDays };
+      setup.scheduleTarget = { kind: 'search', id: target.id, priority: target.priority, kMps: kAtMin, goal, periodMinDays, periodMaxDays };
     } else {
       setup.skipped = target.ephemeris ? 'has an ephemeris but no planet mass or K: nothing to schedule for' : 'has neither an ephemeris with a planet nor a search range: nothing to schedule for';
     }

@@ -24,7 +24,20 @@ describe('campaign files', () => {
     expect(c.site.id).toBe('la-silla');
     expect(c.instrument.id).toBe('stable-4m');
     expect(c.targets.length).toBeGreaterThanOrEqual(8);
-    expect(c.time).toEqual({ mode: 'choose-nights', nights: 10 });
+    expect(c.time.mode).toBe('choose-nights');
+  });
+
+  it('takes a semester instead of dates: default A is 1 February to 31 July, B runs into the next year', () => {
+    const win = (label: string) => readCampaign(campaignFile(BASE.replace(/window: .*\n/, `window: { semester: ${label} }\n`) + 'time: { mode: hours, hours: 5 }\n')).window;
+    expect(win('2027A')).toEqual({ start: '2027-02-01', end: '2027-07-31' });
+    expect(win('2027B')).toEqual({ start: '2027-08-01', end: '2028-01-31' });
+    expect(() => win('2027C')).toThrow(/window\.semester = "2027C": a semester such as 2027A/);
+  });
+
+  it('uses a site file\'s own semester boundaries', () => {
+    const site = JSON.stringify({ id: 'cerro-example', name: 'Cerro Example', latitudeDeg: -30, longitudeDeg: -70, elevationM: 2000, timeZone: 'America/Santiago', clearFraction: 0.7, sourceNote: 'invented', semesters: { A: { start: '04-01', end: '09-30' }, B: { start: '10-01', end: '03-31' } } });
+    const text = BASE.replace('site: la-silla', 'site: ./s.json').replace(/window: .*\n/, 'window: { semester: 2028B }\n') + 'time: { mode: hours, hours: 5 }\n';
+    expect(readCampaign(campaignFile(text, 'campaign.yaml', { 's.json': site })).window).toEqual({ start: '2028-10-01', end: '2029-03-31' });
   });
 
   it('fills documented defaults for constraints, goals and seed', () => {

@@ -37,3 +37,11 @@ describe('target list', () => {
     expect(parseDecDeg('-10:00:61')).toBeNaN();
   });
 });
+
+describe('per-target goal', () => {
+  it('reads goalSignificance and rejects a non-positive one', () => {
+    const [t] = parseTargets('id,ra,dec,vmag,teffK,goalSignificance\nA,10:00:00,-10:00:00,9,5000,3\n', 't.csv');
+    expect(t!.goalSignificance).toBe(3);
+    expect(() => parseTargets('id,ra,dec,vmag,teffK,goalSignificance\nA,10:00:00,-10:00:00,9,5000,0\n', 't.csv')).toThrow(/goalSignificance = "0"/);
+  });
+});
