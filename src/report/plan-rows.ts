@@ -42,7 +42,9 @@ export function nightHeading(plan: Plan, localDate: string): string {
   const weekday = DateTime.fromISO(localDate).toFormat('ccc');
   if (!night) return `${localDate} ${weekday}`;
   const moon = `Moon ${Math.round(night.moon.illumination * 100)}%${night.moon.upDuringDark ? ' (up)' : ' (down)'}`;
-  return `${localDate} ${weekday}  dark ${clock(night.darkStart, zone)}-${clock(night.darkEnd, zone)} local (${fmt(night.darkHours, 1)} h), ${moon}`;
+  const plannedHours = plan.visits.filter((v) => v.localDate === localDate).reduce((sum, v) => sum + v.durationSec, 0) / 3600;
+  const dark = `dark ${clock(night.darkStart, zone)}-${clock(night.darkEnd, zone)} local (${fmt(night.darkHours, 1)} h, ${fmt(plannedHours, 1)} h planned)`;
+  return `${localDate} ${weekday}  ${dark}, ${moon}`;
 }
 
 export const TARGET_COLUMNS: Column[] = [
