@@ -1,12 +1,13 @@
-import { parse, View } from 'vega';
-import { compile, type TopLevelSpec } from 'vega-lite';
+import type { TopLevelSpec } from 'vega-lite';
 import { CHART_CONFIG } from './theme.js';
 
 /**
  * Renders a vega-lite spec to an SVG string in Node: compile to vega, run a headless View
  * (renderer 'none'), then `toSVG()`. No canvas, no network: data must be inline values.
+ * vega and vega-lite are loaded on first use, so commands that draw no chart start faster.
  */
 export async function renderSvg(spec: TopLevelSpec): Promise<string> {
+  const [{ parse, View }, { compile }] = await Promise.all([import('vega'), import('vega-lite')]);
   const vegaSpec = compile(spec, { config: CHART_CONFIG }).spec;
   const view = new View(parse(vegaSpec), { renderer: 'none' });
   try {
