@@ -99,7 +99,9 @@ export function candidateSlots(campaign: Campaign, nights: Night[], windows: Win
       const leadMs = instrument.acquisitionSec * 1000;
       const exposureMs = setup.exposure.exposureSec * 1000;
       const stepMs = SLOT_STEP_MIN * 60_000;
-      for (let startMs = w.start.getTime(); startMs + durationMs <= w.end.getTime(); startMs += stepMs) {
+      // Blocks start on whole minutes, so the plan reads 21:06, not 21:05:43.9.
+      const firstMs = Math.ceil(w.start.getTime() / 60_000) * 60_000;
+      for (let startMs = firstMs; startMs + durationMs <= w.end.getTime(); startMs += stepMs) {
         const midMs = startMs + leadMs + exposureMs / 2;
         const airmass = airmassAt(position, midMs);
         const budget = visitPrecision(instrument, target, setup.exposure.exposureSec, airmass);

@@ -13,7 +13,9 @@ export function renderPlanIcs(plan: Plan): string {
   const calendar = ical({
     name: c.name,
     prodId: { company: 'crest', product: 'crest-plan', language: 'EN' },
-    timezone: { name: zone, generator: getVtimezoneComponent },
+    // No calendar-wide zone: with one, the library writes DTSTAMP in local time, and RFC 5545
+    // (3.8.7.2) asks for UTC. Each event carries the site's TZID; the generator adds its VTIMEZONE.
+    timezone: { name: null, generator: getVtimezoneComponent },
   });
   const stamp = DateTime.fromISO(c.window.start, { zone: 'utc' });
   for (const visit of plan.visits) {
