@@ -1,4 +1,5 @@
 import type { Command } from 'commander';
+import { DEFAULT_CONSTRAINTS } from '../io/campaign.js';
 import { siteFromFlag } from '../io/site-list.js';
 import { readTargets } from '../io/targets.js';
 import type { Constraints, TwilightLevel } from '../model.js';
@@ -32,10 +33,10 @@ export function registerVisibility(program: Command): Command {
     .requiredOption('--targets <file>', 'target list (CSV)')
     .requiredOption('--from <date>', 'first evening, YYYY-MM-DD (local date at the site)', dateFlag('--from'))
     .requiredOption('--to <date>', 'last evening, YYYY-MM-DD', dateFlag('--to'))
-    .option('--max-airmass <x>', 'largest airmass (Kasten & Young), 1 to 10', numberFlag('--max-airmass', 'an airmass from 1 to 10', 1, 10), 2)
-    .option('--twilight <level>', 'twilight that bounds the dark span: civil, nautical or astronomical', twilightFlag, 'nautical')
-    .option('--moon-sep <deg>', 'separation from the Moon at full Moon (half of it at new Moon; no limit while the Moon is down), 0 to 180', numberFlag('--moon-sep', 'degrees from 0 to 180', 0, 180), 30)
-    .option('--min-window <min>', 'drop windows shorter than this, minutes, 0 to 1440', numberFlag('--min-window', 'minutes from 0 to 1440', 0, 1440), 30)
+    .option('--max-airmass <x>', 'largest airmass (Kasten & Young), 1 to 10', numberFlag('--max-airmass', 'an airmass from 1 to 10', 1, 10), DEFAULT_CONSTRAINTS.maxAirmass)
+    .option('--twilight <level>', 'twilight that bounds the dark span: civil, nautical or astronomical', twilightFlag, DEFAULT_CONSTRAINTS.twilight)
+    .option('--moon-sep <deg>', 'separation from the Moon at full Moon (half of it at new Moon; no limit while the Moon is down), 0 to 180', numberFlag('--moon-sep', 'degrees from 0 to 180', 0, 180), DEFAULT_CONSTRAINTS.moonSeparationDeg)
+    .option('--min-window <min>', 'drop windows shorter than this, minutes, 0 to 1440', numberFlag('--min-window', 'minutes from 0 to 1440', 0, 1440), DEFAULT_CONSTRAINTS.minWindowMinutes)
     .option('--utc', 'show times in UTC instead of the site time zone')
     .option('--json', 'print one JSON document')
     .option('--csv', 'print CSV (RFC 4180)')

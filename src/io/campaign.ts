@@ -2,7 +2,7 @@ import path from 'node:path';
 import { z } from 'zod';
 import { DateTime } from 'luxon';
 import { inputError } from '../errors.js';
-import type { Campaign } from '../model.js';
+import type { Campaign, Constraints } from '../model.js';
 import { readInstrument } from './instrument.js';
 import { INSTRUMENTS_DIR, SITES_DIR } from './paths.js';
 import { readStructured } from './read-text.js';
@@ -25,6 +25,9 @@ const constraintsSchema = z.strictObject({
   minSpacingHours: z.number({ error: 'hours, 0 or more' }).min(0, 'hours, 0 or more').max(24 * 365, 'hours, at most a year').default(20),
   minWindowMinutes: z.number({ error: 'minutes, 0 or more' }).min(0, 'minutes, 0 or more').max(600, 'minutes, at most 600').default(20),
 });
+
+/** The constraints a campaign gets when it gives none; commands that take them as flags share these. */
+export const DEFAULT_CONSTRAINTS: Constraints = constraintsSchema.parse({});
 
 const timeSchema = z.discriminatedUnion(
   'mode',
@@ -53,7 +56,7 @@ export const campaignSchema = z.strictObject({
     { error: '{ start: YYYY-MM-DD, end: YYYY-MM-DD } or { semester: 2027A }' },
   ),
   time: timeSchema,
-  constraints: constraintsSchema.default(constraintsSchema.parse({})),
+  constraints: constraintsSchema.default(DEFAULT_CONSTRAINTS),
   goals: z.strictObject({ significance: z.number().positive('a positive K/sigma_K').max(100, 'at most 100').default(5) }).default({ significance: 5 }),
   seed: z.number().int('a whole number').min(0, 'a whole number, 0 or more').default(1),
 });
