@@ -1,21 +1,25 @@
 import ical from 'ical-generator';
-import { getVtimezoneComponent } from '@touch4it/ical-timezones';
 import { DateTime } from 'luxon';
 import type { Plan } from '../model.js';
+import { vtimezone } from './plan-ics-zone.js';
 
 /**
  * plan.ics (RFC 5545): one event per visit in the site's time zone, with its VTIMEZONE.
  * DTSTAMP is the window's first day (not the clock) so that the same inputs give the same bytes.
+ * The VTIMEZONE lists the zone's actual offset changes from the day before the window to two days
+ * after it (plan-ics-zone.ts), so every visit's start and end resolve to the right instant.
  */
 export function renderPlanIcs(plan: Plan): string {
   const c = plan.campaign;
   const zone = c.site.timeZone;
+  const fromMs = DateTime.fromISO(c.window.start, { zone }).minus({ days: 1 }).toMillis();
+  const toMs = DateTime.fromISO(c.window.end, { zone }).plus({ days: 2 }).toMillis();
   const calendar = ical({
     name: c.name,
     prodId: { company: 'crest', product: 'crest-plan', language: 'EN' },
     // No calendar-wide zone: with one, the library writes DTSTAMP in local time, and RFC 5545
     // (3.8.7.2) asks for UTC. Each event carries the site's TZID; the generator adds its VTIMEZONE.
-    timezone: { name: null, generator: getVtimezoneComponent },
+    timezone: { name: null, generator: (tz) => vtimezone(tz, fromMs, toMs) },
   });
   const stamp = DateTime.fromISO(c.window.start, { zone: 'utc' });
   for (const visit of plan.visits) {

@@ -1,0 +1,69 @@
+// The plan properties checked on every campaign (demo-plan.test.ts, random-plans.test.ts): visits
+// inside the slow reference sampler's windows and the dark span, no overlaps, spacing and budgets;
+// K/sigma_K recomputed from plan.csv; plan.ics read back with ical.js.
+import { describe, expect, it } from 'vitest';
+import type { Plan } from '../../src/model.js';
+import { phaseAt } from '../../src/orbit/ephemeris.js';
+import { PLAN_CSV_HEADER, renderPlanCsv } from '../../src/report/plan-csv.js';
+import { renderPlanIcs } from '../../src/report/plan-ics.js';
+import { checkVisits, REFERENCE_TOLERANCE_MIN } from './check-visits.js';
+import { icsMismatches } from './check-ics.js';
+import { ephemerisVisits, kOverSigmaKFromCsv, parsePlanCsv } from './recompute-k.js';
+
+/** Few weather trials: the weather is not what these tests check. */
+export const WEATHER_TRIALS = 20;
+
+/** Registers the property tests for the named plans; planOf is called inside the tests (after beforeAll). */
+export function describePlanProperties(names: string[], planOf: (name: string) => Plan, minVisits: number): void {
+  describe('visits against the one-minute reference sampler', () => {
+    const stats = { visits: 0, maxOutsideMin: 0, maxEdgeMin: 0 };
+    it.each(names)('%s: inside reference windows and the dark span, no overlap, spacing, budget', (name) => {
+      const check = checkVisits(planOf(name));
+      expect(check.violations).toEqual([]);
+      stats.visits += check.visits;
+      stats.maxOutsideMin = Math.max(stats.maxOutsideMin, check.maxOutsideReferenceMin);
+      stats.maxEdgeMin = Math.max(stats.maxEdgeMin, check.maxWindowEdgeErrorMin);
+    });
+    it('no visit reaches outside a reference window by more than the tolerance', () => {
+      // Reported for the record: visits checked, worst reach outside a reference window, worst window edge.
+      console.info(`plan vs reference: ${stats.visits} visits, ${stats.maxOutsideMin.toFixed(2)} min outside at most, window edges within ${stats.maxEdgeMin.toFixed(2)} min`);
+      expect(stats.visits).toBeGreaterThanOrEqual(minVisits);
+      expect(stats.maxOutsideMin).toBeLessThanOrEqual(REFERENCE_TOLERANCE_MIN);
+    });
+  });
+
+  describe('K/sigma_K recomputed from plan.csv', () => {
+    it.each(names)('%s', (name) => {
+      const plan = planOf(name);
+      const { header, rows } = parsePlanCsv(renderPlanCsv(plan));
+      expect(header).toEqual(PLAN_CSV_HEADER);
+      expect(rows.map((r) => `${r.targetId} ${r.startUtc}`).sort()).toEqual(plan.visits.map((v) => `${v.targetId} ${v.startUtc}`).sort());
+      const visits = ephemerisVisits(rows);
+      for (const summary of plan.targets.filter((t) => t.kind === 'ephemeris')) {
+        const target = plan.campaign.targets.find((t) => t.id === summary.targetId)!;
+        const mine = visits.filter((v) => v.targetId === summary.targetId);
+        expect(mine.length).toBe(summary.visits);
+        // The phase columns follow from the written mid-exposure BJD: phi = (t - Tc)/P mod 1 and
+        // sigma_phi = sqrt(sigma_Tc^2 + x^2 sigma_P^2)/P (linear error propagation, common practice),
+        // within the CSV's rounding (BJD to 1e-6 d).
+        for (const v of mine) {
+          const phaseGap = Math.abs(v.phase - phaseAt(target.ephemeris!, v.midBjdTdb));
+          expect(Math.min(phaseGap, 1 - phaseGap)).toBeLessThan(1e-5 + 1e-6 / target.ephemeris!.periodDays);
+          const x = (v.midBjdTdb - target.ephemeris!.tcBjdTdb) / target.ephemeris!.periodDays;
+          expect(v.phaseErr).toBeCloseTo(Math.hypot(target.ephemeris!.tcErrDays, x * target.ephemeris!.periodErrDays) / target.ephemeris!.periodDays, 4);
+        }
+        const { value, roundingBound } = kOverSigmaKFromCsv(summary.kMps!, mine);
+        const tolerance = 1.5 * roundingBound + 1e-9 * value;
+        expect(Math.abs(summary.kOverSigmaK! - value)).toBeLessThanOrEqual(tolerance);
+        if (value > 0) expect(Math.abs(summary.sigmaKMps! - summary.kMps! / value)).toBeLessThanOrEqual((summary.kMps! / value ** 2) * tolerance * 1.01);
+      }
+    });
+  });
+
+  describe('plan.ics read back with ical.js', () => {
+    it.each(names)('%s: one VEVENT per visit, DTSTART in the site zone at the visit start', (name) => {
+      const plan = planOf(name);
+      expect(icsMismatches(plan, renderPlanIcs(plan))).toEqual([]);
+    });
+  });
+}
