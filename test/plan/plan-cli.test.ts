@@ -1,0 +1,116 @@
+// `crest plan` as a subprocess (dist/cli.js; `npm test` builds it first): the five files and the
+// summary, the same bytes from two runs with the same seed, --json, K/sigma_K recomputed from the
+// written plan.csv, bad input, and an output folder that holds the inputs.
+import { copyFileSync, existsSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import path from 'node:path';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { runCliAsync, tempFiles, type CliResult } from '../cli/run-cli.js';
+import { fixture } from './fixtures.js';
+import { ephemerisVisits, kOverSigmaKFromCsv, parsePlanCsv } from './recompute-k.js';
+
+const OUTPUTS = ['plan.csv', 'plan.ics', 'plan.json', 'plan.md', 'report.html'];
+const read = (dir: string, name: string) => readFileSync(path.join(dir, name), 'utf8');
+const oneLine = (r: CliResult) => r.stderr.trim().split('\n').length === 1 && r.stderr.trim().length > 0;
+
+describe('crest plan on the demo', () => {
+  const summaryDir = tempFiles({});
+  const jsonDir = tempFiles({});
+  let summary: CliResult;
+  let json: CliResult;
+  beforeAll(async () => {
+    // Two runs side by side, the second with --json: the files of both must be the same bytes.
+    [summary, json] = await Promise.all([runCliAsync(['plan', '--out', summaryDir]), runCliAsync(['plan', '--out', jsonDir, '--json'])]);
+  });
+
+  it('exits 0, writes the five files and prints the summary', () => {
+    expect(summary.status).toBe(0);
+    expect(summary.stderr).toBe('');
+    expect(readdirSync(summaryDir).sort()).toEqual(OUTPUTS);
+    for (const id of ['SELVA-12', 'SELVA-85', 'Vira', 'Castell']) expect(summary.stdout).toContain(id);
+    expect(summary.stdout).toMatch(/\d+ visits on \d+ nights/);
+    expect(summary.stdout).toContain(`Wrote ${path.join(summaryDir, 'plan.md')}`);
+  });
+
+  it('the same seed writes byte-identical files', () => {
+    expect(json.status).toBe(0);
+    for (const name of OUTPUTS) expect(read(jsonDir, name) === read(summaryDir, name), name).toBe(true);
+  });
+
+  it('--json prints plan.json: one JSON document with schemaVersion 1', () => {
+    expect(json.stdout).toBe(read(jsonDir, 'plan.json'));
+    const plan = JSON.parse(json.stdout) as { schemaVersion: number; visits: unknown[]; campaign: { name: string } };
+    expect(plan.schemaVersion).toBe(1);
+    expect(plan.campaign.name).toBe('SELVA follow-up 2027A');
+    expect(plan.visits.length).toBeGreaterThan(0);
+  });
+
+  it('K/sigma_K in the written plan.json equals a recomputation from the written plan.csv', () => {
+    const plan = JSON.parse(read(summaryDir, 'plan.json')) as { targets: { targetId: string; kind: string; kMps?: number; kOverSigmaK?: number }[] };
+    const visits = ephemerisVisits(parsePlanCsv(read(summaryDir, 'plan.csv')).rows);
+    const ephemerisTargets = plan.targets.filter((t) => t.kind === 'ephemeris');
+    expect(ephemerisTargets.length).toBe(8);
+    for (const t of ephemerisTargets) {
+      const { value, roundingBound } = kOverSigmaKFromCsv(t.kMps!, visits.filter((v) => v.targetId === t.targetId));
+      expect(Math.abs(t.kOverSigmaK! - value), t.targetId).toBeLessThanOrEqual(1.5 * roundingBound + 1e-9 * value);
+    }
+  });
+});
+
+describe('crest plan on bad input', () => {
+  it('a campaign asking for 0 nights: exit 2, one line naming the field', async () => {
+    const dir = tempFiles({
+      'campaign.yaml': 'name: bad\nsite: la-silla\ninstrument: stable-4m\ntargets: targets.csv\nwindow: { start: 2027-04-01, end: 2027-04-05 }\ntime: { mode: choose-nights, nights: 0 }\n',
+      'targets.csv': read(path.dirname(fixture('small')), 'targets.csv'),
+    });
+    const r = await runCliAsync(['plan', path.join(dir, 'campaign.yaml'), '--out', path.join(dir, 'out')]);
+    expect(r.status).toBe(2);
+    expect(oneLine(r)).toBe(true);
+    expect(r.stderr).toContain('time.nights');
+    expect(existsSync(path.join(dir, 'out'))).toBe(false);
+  });
+
+  it('a campaign file that does not exist: exit 2, one line', async () => {
+    const r = await runCliAsync(['plan', path.join(tempFiles({}), 'missing.yaml')]);
+    expect(r.status).toBe(2);
+    expect(oneLine(r)).toBe(true);
+  });
+});
+
+describe('--out pointing at the folder that holds the inputs', () => {
+  const small = path.dirname(fixture('small'));
+  const campaignText = readFileSync(fixture('small'), 'utf8');
+
+  it('a target list named plan.csv: exit 2, one line, nothing written, the list unchanged', async () => {
+    const dir = tempFiles({ 'campaign.yaml': campaignText.replace('targets: targets.csv', 'targets: plan.csv') });
+    copyFileSync(path.join(small, 'targets.csv'), path.join(dir, 'plan.csv'));
+    const before = read(dir, 'plan.csv');
+    const r = await runCliAsync(['plan', 'campaign.yaml', '--out', '.'], dir);
+    expect(r.status).toBe(2);
+    expect(oneLine(r)).toBe(true);
+    expect(r.stderr).toContain('--out');
+    expect(read(dir, 'plan.csv')).toBe(before);
+    expect(readdirSync(dir).sort()).toEqual(['campaign.yaml', 'plan.csv']);
+  });
+
+  it('a campaign file named plan.json: exit 2 and the file unchanged', async () => {
+    const dir = tempFiles({});
+    copyFileSync(path.join(small, 'targets.csv'), path.join(dir, 'targets.csv'));
+    const campaign = JSON.stringify({ name: 'as json', site: 'la-silla', instrument: 'stable-4m', targets: 'targets.csv', window: { start: '2027-04-01', end: '2027-04-04' }, time: { mode: 'choose-nights', nights: 1 } });
+    writeFileSync(path.join(dir, 'plan.json'), campaign);
+    const r = await runCliAsync(['plan', path.join(dir, 'plan.json'), '--out', dir]);
+    expect(r.status).toBe(2);
+    expect(oneLine(r)).toBe(true);
+    expect(read(dir, 'plan.json')).toBe(campaign);
+  });
+
+  it('no name in common: exit 0, the five files beside the inputs, the inputs unchanged', async () => {
+    const dir = tempFiles({ 'campaign.yaml': campaignText });
+    copyFileSync(path.join(small, 'targets.csv'), path.join(dir, 'targets.csv'));
+    const before = read(dir, 'targets.csv');
+    const r = await runCliAsync(['plan', 'campaign.yaml', '--out', '.'], dir);
+    expect(r.status).toBe(0);
+    expect(readdirSync(dir).sort()).toEqual(['campaign.yaml', ...OUTPUTS, 'targets.csv'].sort());
+    expect(read(dir, 'targets.csv')).toBe(before);
+    expect(read(dir, 'campaign.yaml')).toBe(campaignText);
+  });
+});

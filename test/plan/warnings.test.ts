@@ -1,0 +1,59 @@
+// Plan warnings on an invented campaign at a southern site (test/fixtures/campaigns/warnings): a
+// star at +80 deg never rises there, and a period known only to 0.02 d loses the phase by the
+// window's end; a well-known ephemeris gets neither warning.
+import { DateTime } from 'luxon';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { readCampaign } from '../../src/io/campaign.js';
+import type { Campaign, Plan } from '../../src/model.js';
+import { buildPlan } from '../../src/plan/build-plan.js';
+import { referenceWindows } from '../../src/sky/reference-sampler.js';
+import { fixture } from './fixtures.js';
+
+let campaign: Campaign;
+let plan: Plan;
+beforeAll(() => {
+  campaign = readCampaign(fixture('warnings'));
+  plan = buildPlan(campaign, { weatherTrials: 10 });
+});
+
+const warningsOf = (id: string) => plan.targets.find((t) => t.targetId === id)!.warnings;
+
+describe('never observable', () => {
+  it('a star at +80 deg seen from 29 deg south: no reference window on any night, and the warning', () => {
+    const polar = campaign.targets.find((t) => t.id === 'Polar-7')!;
+    // Highest altitude of a star: 90 - |latitude - declination| (common practice), below the horizon here.
+    expect(90 - Math.abs(campaign.site.latitudeDeg - polar.decDeg)).toBeLessThan(0);
+    for (const night of plan.nights) expect(referenceWindows(campaign.site, [polar], night, campaign.constraints)).toEqual([]);
+    expect(warningsOf('Polar-7').some((w) => w.includes('never observable'))).toBe(true);
+    expect(plan.visits.some((v) => v.targetId === 'Polar-7')).toBe(false);
+  });
+
+  it('observable targets do not get it', () => {
+    for (const id of ['Vago-2', 'Tarsa-4']) expect(warningsOf(id).some((w) => w.includes('never observable'))).toBe(false);
+    expect(plan.visits.some((v) => v.targetId === 'Tarsa-4')).toBe(true);
+  });
+});
+
+describe('ephemeris too poor', () => {
+  // Phase error at the window's end (the next local midnight after its last night):
+  // sigma_phi = sqrt(sigma_Tc^2 + x^2 sigma_P^2) / P with x = (t - Tc)/P (linear error propagation,
+  // common practice), t as a Julian date (JD 2440587.5 = 1970-01-01 0 h UTC, common practice; the
+  // BJD correction, minutes at most, does not matter at this scale).
+  const phaseErrAtEnd = (id: string) => {
+    const eph = campaign.targets.find((t) => t.id === id)!.ephemeris!;
+    const endJd = 2440587.5 + DateTime.fromISO(campaign.window.end, { zone: campaign.site.timeZone }).plus({ days: 1 }).toMillis() / 86_400_000;
+    const x = (endJd - eph.tcBjdTdb) / eph.periodDays;
+    return Math.hypot(eph.tcErrDays, x * eph.periodErrDays) / eph.periodDays;
+  };
+
+  it('a period known to 0.02 d: phase error well above 0.1 cycle by the end, and the warning', () => {
+    expect(phaseErrAtEnd('Vago-2')).toBeGreaterThan(0.2);
+    expect(plan.targets.find((t) => t.targetId === 'Vago-2')!.phaseErrAtEnd).toBeCloseTo(phaseErrAtEnd('Vago-2'), 3);
+    expect(warningsOf('Vago-2').some((w) => w.includes('ephemeris too poor'))).toBe(true);
+  });
+
+  it('a well-known ephemeris: phase error far below 0.1 cycle, no warning', () => {
+    expect(phaseErrAtEnd('Tarsa-4')).toBeLessThan(0.01);
+    expect(warningsOf('Tarsa-4').some((w) => w.includes('ephemeris too poor'))).toBe(false);
+  });
+});
