@@ -29,6 +29,23 @@ export interface SearchGrid {
   meanLogK: number;
   /** Ridge added to the diagonal of M. */
   eps: number;
+  /** sin and cos of every grid frequency at each visit time seen so far (the hot loop's trig, once per slot). */
+  trig: Map<number, Float64Array>;
+}
+
+/** [sin, cos] of angularFreq[p] * tDays for every grid period p, computed once per visit time. */
+function trigAt(grid: SearchGrid, tDays: number): Float64Array {
+  let values = grid.trig.get(tDays);
+  if (!values) {
+    const freq = grid.angularFreq;
+    values = new Float64Array(2 * freq.length);
+    for (let p = 0; p < freq.length; p++) {
+      values[2 * p] = Math.sin(freq[p]! * tDays);
+      values[2 * p + 1] = Math.cos(freq[p]! * tDays);
+    }
+    grid.trig.set(tDays, values);
+  }
+  return values;
 }
 
 /** Running sums of one search target: W, then per period (sum w sin, w cos, w sin^2, w sin cos, w cos^2). */
@@ -47,18 +64,17 @@ export function searchGrid(periodMinDays: number, periodMaxDays: number, kMpsAtM
     angularFreq[p] = (2 * Math.PI) / Math.exp(logP);
     logK[p] = Math.log(kMpsAtMin) - (logP - Math.log(periodMinDays)) / 3;
   }
-  return { angularFreq, logK, meanLogK: logK.reduce((sum, v) => sum + v, 0) / n, eps };
+  return { angularFreq, logK, meanLogK: logK.reduce((sum, v) => sum + v, 0) / n, eps, trig: new Map() };
 }
 
 /** Adds (sign 1) or removes (sign -1) a visit of weight w at time tDays. */
 export function updateSearchStats(stats: Float64Array, offset: number, grid: SearchGrid, w: number, tDays: number, sign: number): void {
   const sw = sign * w;
   stats[offset] += sw;
-  const freq = grid.angularFreq;
-  for (let p = 0, o = offset + 1; p < freq.length; p++, o += 5) {
-    const angle = freq[p]! * tDays;
-    const sn = Math.sin(angle);
-    const cs = Math.cos(angle);
+  const trig = trigAt(grid, tDays);
+  for (let p = 0, o = offset + 1; p < grid.angularFreq.length; p++, o += 5) {
+    const sn = trig[2 * p]!;
+    const cs = trig[2 * p + 1]!;
     stats[o] += sw * sn;
     stats[o + 1] += sw * cs;
     stats[o + 2] += sw * sn * sn;
@@ -74,6 +90,7 @@ export function searchLogScore(stats: Float64Array, offset: number, grid: Search
   const a = stats[offset]! + sw + eps;
   const logA = Math.log(a);
   const freq = grid.angularFreq;
+  const trig = sw !== 0 ? trigAt(grid, tDays) : undefined;
   // Sum of log det as the log of products of four determinants: a quarter of the logarithms, and
   // four determinants (each between eps^3 and (sum w)^3) stay far inside the range of a double.
   let logDetSum = 0;
@@ -81,10 +98,9 @@ export function searchLogScore(stats: Float64Array, offset: number, grid: Search
   const floor = eps * eps * eps;
   for (let p = 0, o = offset + 1; p < freq.length; p++, o += 5) {
     let b = stats[o]!, c = stats[o + 1]!, d = stats[o + 2]! + eps, e = stats[o + 3]!, f = stats[o + 4]! + eps;
-    if (sw !== 0) {
-      const angle = freq[p]! * tDays;
-      const sn = Math.sin(angle);
-      const cs = Math.cos(angle);
+    if (trig) {
+      const sn = trig[2 * p]!;
+      const cs = trig[2 * p + 1]!;
       b += sw * sn;
       c += sw * cs;
       d += sw * sn * sn;
