@@ -2,7 +2,7 @@ import path from 'node:path';
 import type { Command } from 'commander';
 import { readCampaign } from '../io/campaign.js';
 import { DEMO_CAMPAIGN } from '../io/paths.js';
-import { slug, writeOutputs } from '../io/write-outputs.js';
+import { checkOutputs, slug, writeOutputs } from '../io/write-outputs.js';
 import { buildPlan } from '../plan/build-plan.js';
 import { renderReportHtml } from '../report/html/report-html.js';
 import { renderPlanCsv } from '../report/plan-csv.js';
@@ -11,6 +11,9 @@ import { renderPlanJson } from '../report/plan-json.js';
 import { renderPlanMarkdown } from '../report/plan-markdown.js';
 import { renderPlanText } from '../report/plan-terminal.js';
 import { numberFlag } from './options.js';
+
+/** The files `crest plan` writes. */
+const PLAN_FILES = ['plan.md', 'plan.csv', 'plan.json', 'plan.ics', 'report.html'];
 
 interface PlanFlags {
   out?: string;
@@ -29,13 +32,15 @@ export function registerPlan(program: Command): Command {
     .action(async (file: string | undefined, opts: PlanFlags) => {
       const campaignFile = file ?? path.relative(process.cwd(), DEMO_CAMPAIGN);
       const campaign = readCampaign(campaignFile);
+      const outDir = opts.out ?? path.join('crest-out', slug(campaign.name));
+      const inputs = [campaignFile, campaign.targetsFile, campaign.site.file, campaign.instrument.file];
+      checkOutputs(outDir, PLAN_FILES, inputs);
       const plan = buildPlan(campaign, { seed: opts.seed });
       const json = renderPlanJson(plan);
-      const outDir = opts.out ?? path.join('crest-out', slug(campaign.name));
       const written = writeOutputs(
         outDir,
         { 'plan.md': renderPlanMarkdown(plan), 'plan.csv': renderPlanCsv(plan), 'plan.json': json, 'plan.ics': renderPlanIcs(plan), 'report.html': await renderReportHtml(plan) },
-        [campaignFile, campaign.targetsFile, campaign.site.file, campaign.instrument.file],
+        inputs,
       );
       if (opts.json) return void process.stdout.write(json);
       console.log(renderPlanText(plan));

@@ -10,18 +10,22 @@ export function slug(name: string): string {
 
 const real = (p: string) => (existsSync(p) ? realpathSync(p) : path.resolve(p));
 
-/**
- * Writes each named output under `outDir`, atomically. Refuses (input error, nothing written)
- * when an output would replace one of the input files.
- */
-export function writeOutputs(outDir: string, files: Record<string, string>, inputs: string[]): string[] {
+/** Refuses (input error) when any named output under `outDir` would replace one of the input files. */
+export function checkOutputs(outDir: string, names: string[], inputs: string[]): void {
   const protectedPaths = new Set(inputs.map(real));
-  const targets = Object.keys(files).map((name) => path.join(outDir, name));
-  for (const file of targets) {
+  for (const file of names.map((name) => path.join(outDir, name))) {
     if (protectedPaths.has(real(file))) {
       throw inputError({ file: 'command line', field: '--out', value: outDir, allowed: `a folder where no input file would be overwritten (${file} is an input)` });
     }
   }
-  for (const [name, content] of Object.entries(files)) writeAtomic(path.join(outDir, name), content);
-  return targets;
+}
+
+/** Writes each named output under `outDir`, atomically, after checkOutputs; returns the paths. */
+export function writeOutputs(outDir: string, files: Record<string, string>, inputs: string[]): string[] {
+  checkOutputs(outDir, Object.keys(files), inputs);
+  return Object.entries(files).map(([name, content]) => {
+    const file = path.join(outDir, name);
+    writeAtomic(file, content);
+    return file;
+  });
 }

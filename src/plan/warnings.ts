@@ -13,9 +13,10 @@ export function planWarnings(plan: Plan, setups: TargetSetup[], windows: Window[
     const setup = setups.find((s) => s.target.id === summary.targetId)!;
     const w = summary.warnings;
     if (setup.skipped) w.push(setup.skipped);
-    if (!observable.has(summary.targetId)) w.push('never observable in the window under the constraints (altitude, airmass, Moon, dark time)');
+    const neverObservable = !observable.has(summary.targetId);
+    if (neverObservable) w.push('never observable in the window under the constraints (altitude, airmass, Moon, dark time)');
     if (setup.exposure.warning) w.push(setup.exposure.warning);
-    if (summary.goal !== undefined && summary.kOverSigmaK !== undefined && summary.kOverSigmaK < summary.goal) {
+    if (!neverObservable && summary.goal !== undefined && summary.kOverSigmaK !== undefined && summary.kOverSigmaK < summary.goal) {
       w.push(`goal K/sigma_K = ${summary.goal} not reached: ${summary.kOverSigmaK.toFixed(1)} with ${summary.visits} visits`);
     }
     if (summary.phaseErrAtEnd !== undefined && summary.phaseErrAtEnd > POOR_PHASE_ERR_CYCLES) {
