@@ -88,12 +88,22 @@ export class PlanState {
    * Gain used to rank slots in greedy passes. It equals gain(j) except for the first visit of an
    * ephemeris target, which alone carries no information (the offset absorbs it): that visit is
    * credited half the utility of a pair made with an ideal partner (the target's largest weight
-   * at the opposite extreme of its signal), so that greedy starts new targets.
+   * at the opposite extreme of its signal), so that greedy starts new targets. Likewise a search
+   * target's first three visits (offset, sine and cosine need three before the ridge stops
+   * dominating): each is credited at least a third of the utility of three visits of its weight
+   * spread evenly in phase, where the sine/cosine information is 3w/2 on both axes at every
+   * period, so K/sigma_K = K_geo sqrt(3w/2) with K_geo the grid's geometric-mean K.
    */
   rankingGain(j: number): number {
     const c = this.c;
     const t = c.slotTarget[j]!;
-    if (c.grids[t] || this.targetVisits[t]!.length > 0) return this.gain(j);
+    const grid = c.grids[t];
+    if (grid) {
+      if (this.targetVisits[t]!.length >= 3) return this.gain(j);
+      const x = (Math.exp(grid.meanLogK) * Math.sqrt(1.5 * c.weight[j]!)) / c.goal[t]!;
+      return Math.max(this.gain(j), (c.priority[t]! * goalValue(x, this.overshootWeight)) / 3);
+    }
+    if (this.targetVisits[t]!.length > 0) return this.gain(j);
     const w = c.weight[j]!;
     const wp = c.maxWeight[t]!;
     const m = c.valueA[j]!;
