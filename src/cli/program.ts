@@ -1,6 +1,7 @@
 import { Command } from 'commander';
 import { registerAmplitude } from './amplitude.js';
 import { registerDetect } from './detect.js';
+import { registerMap } from './map.js';
 import { registerNights } from './nights.js';
 import { registerPeriodogram } from './periodogram.js';
 import { registerPlan } from './plan.js';
@@ -19,6 +20,7 @@ export function buildProgram(): Command {
   const commands: ((program: Command) => Command)[] = [
     registerAmplitude,
     registerDetect,
+    registerMap,
     registerNights,
     registerPeriodogram,
     registerPlan,

@@ -1,6 +1,7 @@
 import type { Plan, SearchSpec, Target, TargetSummary } from '../../model.js';
 import { ADVISORY, TARGET_COLUMNS, targetRows, totalsLine, visitsByNight } from '../plan-rows.js';
 import { calendarFigure } from './chart-calendar.js';
+import { detectionMapFigure, type DetectionMapData } from './chart-detection-map.js';
 import { kGrowthFigure } from './chart-k-growth.js';
 import { massLimitFigure } from './chart-mass-limit.js';
 import { nightFigure } from './chart-night.js';
@@ -31,7 +32,7 @@ function head(plan: Plan): string {
   ].join('\n');
 }
 
-async function targetSections(plan: Plan): Promise<string[]> {
+async function targetSections(plan: Plan, maps: ReadonlyMap<string, DetectionMapData>): Promise<string[]> {
   const out: string[] = [];
   const ephemeris = plan.targets.filter((s) => s.kind === 'ephemeris' && s.visits > 0 && hasK(s)) as (TargetSummary & { kMps: number })[];
   if (ephemeris.length) {
@@ -46,7 +47,8 @@ async function targetSections(plan: Plan): Promise<string[]> {
   });
   const figures = search.flatMap(({ s, target }) => {
     const figure = massLimitFigure(plan, s, target);
-    return figure ? [figure] : [];
+    const map = maps.get(s.targetId);
+    return [...(figure ? [figure] : []), ...(map ? [detectionMapFigure(map)] : [])];
   });
   if (figures.length) {
     out.push('<h2 id="search">Blind-search sensitivity</h2>');
@@ -63,9 +65,10 @@ function warnings(plan: Plan): string {
 
 /**
  * report.html: the whole plan as one self-contained page (inline CSS and SVG charts, no scripts,
- * no external references), readable on screen and printable on A4 or US Letter.
+ * no external references), readable on screen and printable on A4 or US Letter. `maps` (by target
+ * id, from `crest map`) adds a detection-probability map to a blind-search target's section.
  */
-export async function renderReportHtml(plan: Plan): Promise<string> {
+export async function renderReportHtml(plan: Plan, maps: ReadonlyMap<string, DetectionMapData> = new Map()): Promise<string> {
   const body: string[] = [
     head(plan),
     '<h2 id="proposal">Proposal summary</h2>',
@@ -78,7 +81,7 @@ export async function renderReportHtml(plan: Plan): Promise<string> {
   for (const [date, visits] of visitsByNight(plan)) {
     if (visits.length) body.push(await renderFigure(nightFigure(plan, date, visits)));
   }
-  body.push(...(await targetSections(plan)));
+  body.push(...(await targetSections(plan, maps)));
   body.push(
     '<h2 id="detectability">Detectability of every target</h2>',
     `<div class="table-wrap">${htmlTable(TARGET_COLUMNS, targetRows(plan), 'Expected result per target')}</div>`,

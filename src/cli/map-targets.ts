@@ -1,0 +1,103 @@
+// Which targets of a plan `crest map` maps, and the inputs of each map: the planned visits'
+// mid-exposure BJD_TDB and σ_eff (jitter included), the star's mass, and log-spaced axes.
+import { inputError } from '../errors.js';
+import type { Ephemeris, Plan, PlannedVisit, Target } from '../model.js';
+import { planetMassFromKEarth } from '../orbit/minimum-mass.js';
+import { visitsOf } from '../report/html/target-visits.js';
+import type { InjectionInput } from '../rv/injection.js';
+import { logSpaced } from '../rv/injection-map.js';
+import type { KnownPhaseInput } from '../rv/known-phase-map.js';
+
+/** Fewest visits a map is made from: the floating-offset periodogram and its FAP need N > 3. */
+export const MIN_MAP_VISITS = 4;
+
+/** Default mass range of a known-phase map: this factor below and above the planet's mass. */
+const MASS_FACTOR = 4;
+/** Default mass range of a blind search: half the search mass to this many times it. */
+const SEARCH_MASS_FACTOR = 8;
+/** Default period range of a known-phase map: this factor either side of the ephemeris period. */
+const PERIOD_FACTOR = 2;
+
+export interface MapSettings {
+  periods?: [number, number];
+  masses?: [number, number];
+  grid: { periods: number; masses: number };
+  trialsPerCell: number;
+  fapThreshold: number;
+  seed: number;
+}
+
+interface JobBase {
+  targetId: string;
+  visits: number;
+  baselineDays: number;
+  starMassSun: number;
+}
+
+export type MapJob =
+  | (JobBase & { kind: 'search'; searchMassEarth: number; input: InjectionInput })
+  | (JobBase & { kind: 'ephemeris'; ephemeris: Ephemeris; planetMassEarth?: number; input: KnownPhaseInput });
+
+function axes(settings: MapSettings, periods: [number, number], masses: [number, number]) {
+  const [pMin, pMax] = settings.periods ?? periods;
+  const [mMin, mMax] = settings.masses ?? masses;
+  return { periodsDays: logSpaced(pMin, pMax, settings.grid.periods), massesEarth: logSpaced(mMin, mMax, settings.grid.masses) };
+}
+
+function base(target: Target, visits: PlannedVisit[]): JobBase {
+  const times = visits.map((v) => v.midBjdTdb);
+  return { targetId: target.id, visits: visits.length, baselineDays: Math.max(...times) - Math.min(...times), starMassSun: target.massSun };
+}
+
+/** The planet's m sin i: given, or from its K at the ephemeris period (exact inverse of K). */
+function planetMassEarth(plan: Plan, target: Target, eph: Ephemeris): number | undefined {
+  if (target.planet?.massEarth !== undefined) return target.planet.massEarth;
+  const kMps = plan.targets.find((s) => s.targetId === target.id)?.kMps;
+  return kMps && kMps > 0 ? planetMassFromKEarth({ starMassSun: target.massSun, kMps, periodDays: eph.periodDays }) : undefined;
+}
+
+function jobOf(plan: Plan, target: Target, settings: MapSettings): MapJob | undefined {
+  const visits = visitsOf(plan, target.id);
+  const timesBjd = visits.map((v) => v.midBjdTdb);
+  const sigmaMps = visits.map((v) => v.sigmaEffMps);
+  if (target.search) {
+    const { periodMinDays, periodMaxDays, massEarth } = target.search;
+    const { periodsDays, massesEarth } = axes(settings, [periodMinDays, periodMaxDays], [massEarth / 2, massEarth * SEARCH_MASS_FACTOR]);
+    const input: InjectionInput = {
+      timesBjd, sigmaMps, periodsDays, massesEarth, starMassSun: target.massSun,
+      trialsPerCell: settings.trialsPerCell, seed: settings.seed, fapThreshold: settings.fapThreshold,
+    };
+    return { ...base(target, visits), kind: 'search', searchMassEarth: massEarth, input };
+  }
+  const eph = target.ephemeris;
+  if (!eph) return undefined;
+  const mass = planetMassEarth(plan, target, eph);
+  const centre = mass ?? 10;
+  const { periodsDays, massesEarth } = axes(settings, [eph.periodDays / PERIOD_FACTOR, eph.periodDays * PERIOD_FACTOR], [centre / MASS_FACTOR, centre * MASS_FACTOR]);
+  const significance = plan.targets.find((s) => s.targetId === target.id)?.goal ?? plan.campaign.goals.significance;
+  const input: KnownPhaseInput = { timesBjd, sigmaMps, ephemeris: eph, periodsDays, massesEarth, starMassSun: target.massSun, significance };
+  return { ...base(target, visits), kind: 'ephemeris', ephemeris: eph, planetMassEarth: mass, input };
+}
+
+/**
+ * The maps to make: the one target asked for, or every blind-search and ephemeris target with
+ * at least MIN_MAP_VISITS planned visits (`skipped` names the others). Input errors: an unknown
+ * target, or one with no search spec or ephemeris, or too few visits.
+ */
+export function mapJobs(plan: Plan, settings: MapSettings, targetId?: string): { jobs: MapJob[]; skipped: string[] } {
+  const mappable = plan.campaign.targets.filter((t) => t.search || t.ephemeris);
+  if (targetId !== undefined) {
+    const target = mappable.find((t) => t.id === targetId);
+    if (!target) throw inputError({ file: 'command line', field: '--target', value: targetId, allowed: `a blind-search or ephemeris target of the plan: ${mappable.map((t) => t.id).join(', ')}` });
+    const visits = visitsOf(plan, targetId).length;
+    if (visits < MIN_MAP_VISITS) throw inputError({ file: 'command line', field: '--target', value: targetId, allowed: `a target with at least ${MIN_MAP_VISITS} planned visits (it has ${visits})` });
+    return { jobs: [jobOf(plan, target, settings)!], skipped: [] };
+  }
+  const jobs: MapJob[] = [];
+  const skipped: string[] = [];
+  for (const target of mappable) {
+    if (visitsOf(plan, target.id).length < MIN_MAP_VISITS) skipped.push(target.id);
+    else jobs.push(jobOf(plan, target, settings)!);
+  }
+  return { jobs, skipped };
+}

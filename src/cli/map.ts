@@ -1,0 +1,234 @@
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import type { Command } from 'commander';
+import { inputError } from '../errors.js';
+import { readStructured } from '../io/read-text.js';
+import { slug, writeOutputs } from '../io/write-outputs.js';
+import { detectionMapFigure, type DetectionMapData } from '../report/html/chart-detection-map.js';
+import { planFromJson } from '../report/html/plan-from-json.js';
+import { renderReportHtml } from '../report/html/report-html.js';
+import { renderSvg } from '../report/html/vega-svg.js';
+import { toCsv } from '../report/csv.js';
+import { fmt } from '../report/table.js';
+import { DEFAULT_FAP_THRESHOLD } from '../rv/injection.js';
+import { levelRows, type LevelRow } from '../rv/injection-map.js';
+import { injectionRecoveryParallel } from '../rv/injection-worker-pool.js';
+import { knownPhaseMapAnalytic, knownPhaseMapSimulated } from '../rv/known-phase-map.js';
+import { mapJobs, type MapJob, type MapSettings } from './map-targets.js';
+import { levelTableText, mapTableText } from './map-text.js';
+import { stderrProgress, type Progress } from './map-progress.js';
+import { numberFlag, printJson } from './options.js';
+
+interface MapFlags {
+  plan: string;
+  target?: string;
+  periods?: [number, number];
+  masses?: [number, number];
+  grid: { periods: number; masses: number };
+  trials: number;
+  fap: number;
+  threads?: number;
+  seed?: number;
+  out?: string;
+  json?: boolean;
+  csv?: boolean;
+}
+
+/** `A:B` with 0 < A < B ≤ max, as a flag parser. */
+function rangeFlag(flag: string, unit: string, max: number) {
+  const allowed = `two ${unit} A:B with 0 < A < B <= ${max}`;
+  const one = numberFlag(flag, allowed, 0, max, { exclusiveMin: true });
+  return (text: string): [number, number] => {
+    const parts = text.split(':');
+    if (parts.length !== 2) throw inputError({ file: 'command line', field: flag, value: text, allowed });
+    const [a, b] = [one(parts[0]!), one(parts[1]!)];
+    if (!(a < b)) throw inputError({ file: 'command line', field: flag, value: text, allowed });
+    return [a, b];
+  };
+}
+
+const MAX_AXIS = 200;
+function gridFlag(text: string): { periods: number; masses: number } {
+  const allowed = `NxM: N periods by M masses, each a whole number from 2 to ${MAX_AXIS}`;
+  const m = /^(\d+)x(\d+)$/i.exec(text.trim());
+  const [n, k] = m ? [Number(m[1]), Number(m[2])] : [0, 0];
+  if (!(n >= 2 && n <= MAX_AXIS && k >= 2 && k <= MAX_AXIS)) throw inputError({ file: 'command line', field: '--grid', value: text, allowed });
+  return { periods: n, masses: k };
+}
+
+/** One computed map: the data of its chart, and the level rows of its first panel. */
+interface MapResult {
+  job: MapJob;
+  chart: DetectionMapData;
+  levels: LevelRow[];
+  /** Ephemeris targets: the two maps at the ephemeris period itself, and the largest cell difference. */
+  atEphemeris?: { periodDays: number; analytic: LevelRow; simulated: LevelRow; planet?: { analytic: number; simulated: number } };
+  maxDifference?: number;
+  svg: string;
+}
+
+const pct = (p: number) => `${Math.round(p * 100)}%`;
+
+async function runJob(job: MapJob, settings: MapSettings, threads: number | undefined, progress: Progress): Promise<Omit<MapResult, 'svg'>> {
+  const { periodsDays, massesEarth } = job.input;
+  if (job.kind === 'search') {
+    const map = await injectionRecoveryParallel(job.input, { threads, onProgress: (done, total) => progress.update(job.targetId, done, total) });
+    progress.end();
+    const method =
+      `Injection–recovery: ${settings.trialsPerCell} trials a cell at the ${job.visits} planned visits (σ_eff with jitter), random phase, circular orbits; ` +
+      `detected when the highest GLS peak lies within 1/T of the injected frequency with Baluev FAP < ${settings.fapThreshold}.`;
+    const chart: DetectionMapData = { targetId: job.targetId, method, periodsDays, massesEarth, panels: [{ label: 'simulated', detection: map.detection }], markMassEarth: job.searchMassEarth };
+    return { job, chart, levels: levelRows(periodsDays, massesEarth, map.detection) };
+  }
+  const simulatedInput = { ...job.input, trialsPerCell: settings.trialsPerCell, seed: settings.seed };
+  const analytic = knownPhaseMapAnalytic(job.input);
+  const simulated = knownPhaseMapSimulated(simulatedInput);
+  const at = { periodsDays: [job.ephemeris.periodDays] };
+  const atAnalytic = knownPhaseMapAnalytic({ ...job.input, ...at });
+  const atSimulated = knownPhaseMapSimulated({ ...simulatedInput, ...at });
+  const planetMass = job.planetMassEarth === undefined ? undefined : { ...at, massesEarth: [job.planetMassEarth] };
+  const planet = planetMass && {
+    analytic: knownPhaseMapAnalytic({ ...job.input, ...planetMass }).detection[0]![0]!,
+    simulated: knownPhaseMapSimulated({ ...simulatedInput, ...planetMass }).detection[0]![0]!,
+  };
+  const maxDifference = Math.max(...analytic.detection.flatMap((row, i) => row.map((p, j) => Math.abs(p - simulated.detection[i]![j]!))));
+  const method =
+    `Known phase from the ephemeris (Tc fixed; rows other than P = ${fmt(job.ephemeris.periodDays, 4)} d ask "had the period been P"), ` +
+    `${job.visits} planned visits, circular orbits; detected when K̂/σ_K > ${job.input.significance}. ` +
+    `Left: Φ(K/σ_K − n) with the scheduler's expected information; right: ${settings.trialsPerCell} simulated least-squares fits a cell.`;
+  const chart: DetectionMapData = {
+    targetId: job.targetId, method, periodsDays, massesEarth,
+    panels: [{ label: 'analytic', detection: analytic.detection }, { label: 'simulated', detection: simulated.detection }],
+    markMassEarth: job.planetMassEarth,
+  };
+  return {
+    job, chart, maxDifference,
+    levels: levelRows(periodsDays, massesEarth, analytic.detection),
+    atEphemeris: {
+      periodDays: job.ephemeris.periodDays,
+      analytic: levelRows(at.periodsDays, massesEarth, atAnalytic.detection)[0]!,
+      simulated: levelRows(at.periodsDays, massesEarth, atSimulated.detection)[0]!,
+      planet,
+    },
+  };
+}
+
+function printText(results: MapResult[], skipped: string[], written: string[], full: boolean): void {
+  for (const r of results) {
+    const { job, chart } = r;
+    const head = `${job.targetId}: ${job.visits} visits over ${fmt(job.baselineDays, 1)} d, star ${fmt(job.starMassSun, 2)} M☉`;
+    if (job.kind === 'search') {
+      console.log(`${head}; blind search, detection probability (%)`);
+      console.log(mapTableText(chart.periodsDays, chart.massesEarth, chart.panels[0]!.detection));
+      console.log(`\nm sin i detected in 50% and 90% of trials (interpolated in log mass)`);
+      console.log(levelTableText(chart.periodsDays, chart.massesEarth, chart.panels));
+    } else if (full) {
+      console.log(`${head}; known phase, P = ${fmt(job.ephemeris.periodDays, 4)} d, detection probability (%)`);
+      for (const panel of chart.panels) console.log(`\n${panel.label}\n${mapTableText(chart.periodsDays, chart.massesEarth, panel.detection)}`);
+      console.log(`\nm sin i detected in 50% and 90% of cases; largest analytic - simulated difference ${pct(r.maxDifference!)}`);
+      console.log(levelTableText(chart.periodsDays, chart.massesEarth, chart.panels));
+    }
+    if (job.kind === 'search' || full) console.log('');
+  }
+  const known = results.filter((r) => r.job.kind === 'ephemeris');
+  if (known.length && !full) {
+    console.log('Known-phase targets at their ephemeris period: m sin i detected in 50% / 90% of cases (analytic | simulated)');
+    for (const r of known) {
+      const a = r.atEphemeris!;
+      const pair = (row: LevelRow) => row.levels.map((l) => (l.mass.where === 'inside' ? fmt(l.mass.massEarth, 1) : l.mass.where)).join(' / ');
+      const planet = r.job.kind === 'ephemeris' && a.planet ? `; planet ${fmt(r.job.planetMassEarth, 1)} M⊕ detected ${pct(a.planet.analytic)} | ${pct(a.planet.simulated)}` : '';
+      console.log(`  ${r.job.targetId.padEnd(9)} P = ${fmt(a.periodDays, 3).padStart(6)} d: ${pair(a.analytic)} | ${pair(a.simulated)} M⊕${planet}; map cells differ by ${pct(r.maxDifference!)} at most`);
+    }
+    console.log('');
+  }
+  if (skipped.length) console.log(`Skipped (fewer than 4 planned visits): ${skipped.join(', ')}`);
+  console.log(`Wrote ${written.join(', ')}`);
+}
+
+function csvText(results: MapResult[]): string {
+  const rows = results.flatMap(({ job, chart }) =>
+    chart.panels.flatMap((panel) =>
+      chart.periodsDays.flatMap((p, i) => chart.massesEarth.map((m, j) => [job.targetId, job.kind, panel.label, p, m, panel.detection[i]![j]!])),
+    ),
+  );
+  return toCsv(['target', 'kind', 'method', 'periodDays', 'massEarth', 'detectionProbability'], rows);
+}
+
+const jsonLevels = (levels: LevelRow[]) =>
+  levels.map((r) => ({ periodDays: r.periodDays, ...Object.fromEntries(r.levels.map((l) => [`mass${Math.round(l.level * 100)}`, l.mass])) }));
+
+async function runMap(opts: MapFlags): Promise<void> {
+  const plan = planFromJson(readStructured(opts.plan, 'plan file'), opts.plan);
+  const settings: MapSettings = {
+    periods: opts.periods, masses: opts.masses, grid: opts.grid,
+    trialsPerCell: opts.trials, fapThreshold: opts.fap, seed: opts.seed ?? plan.campaign.seed,
+  };
+  const { jobs, skipped } = mapJobs(plan, settings, opts.target);
+  const progress = stderrProgress();
+  const results: MapResult[] = [];
+  for (const job of jobs) {
+    const result = await runJob(job, settings, opts.threads, progress);
+    results.push({ ...result, svg: `map-${slug(job.targetId)}.svg` });
+  }
+  const outDir = opts.out ?? path.dirname(opts.plan);
+  const files: Record<string, string> = {};
+  for (const r of results) {
+    const figure = detectionMapFigure(r.chart);
+    files[r.svg] = await renderSvg({ ...figure.spec, title: figure.title } as typeof figure.spec);
+  }
+  if (existsSync(path.join(outDir, 'report.html'))) {
+    const maps = new Map(results.filter((r) => r.job.kind === 'search').map((r) => [r.job.targetId, r.chart]));
+    files['report.html'] = await renderReportHtml(plan, maps);
+  }
+  const written = writeOutputs(outDir, files, [opts.plan]);
+  if (opts.csv) return void process.stdout.write(csvText(results));
+  if (!opts.json) return printText(results, skipped, written, opts.target !== undefined);
+  printJson({
+    plan: opts.plan,
+    seed: settings.seed,
+    trialsPerCell: settings.trialsPerCell,
+    fapThreshold: settings.fapThreshold,
+    skipped,
+    written,
+    targets: results.map((r) => ({
+      targetId: r.job.targetId,
+      kind: r.job.kind,
+      visits: r.job.visits,
+      baselineDays: r.job.baselineDays,
+      starMassSun: r.job.starMassSun,
+      periodsDays: r.chart.periodsDays,
+      massesEarth: r.chart.massesEarth,
+      ...Object.fromEntries(r.chart.panels.map((p) => [p.label, p.detection])),
+      levels: jsonLevels(r.levels),
+      ...(r.job.kind === 'ephemeris'
+        ? {
+            ephemerisPeriodDays: r.job.ephemeris.periodDays,
+            significance: r.job.input.significance,
+            planetMassEarth: r.job.planetMassEarth,
+            maxDifference: r.maxDifference,
+            atEphemerisPeriod: { analytic: jsonLevels([r.atEphemeris!.analytic])[0], simulated: jsonLevels([r.atEphemeris!.simulated])[0], planetDetection: r.atEphemeris!.planet },
+          }
+        : { searchMassEarth: r.job.searchMassEarth }),
+      svg: path.join(outDir, r.svg),
+    })),
+  });
+}
+
+export function registerMap(program: Command): Command {
+  return program
+    .command('map')
+    .description('detection probability per (period, m sin i) cell for the targets of a plan: injection-recovery for blind searches, known phase for ephemeris targets; tables and SVG heatmaps')
+    .requiredOption('--plan <file>', 'plan.json written by crest plan')
+    .option('--target <id>', 'one target (default: every blind-search and ephemeris target with at least 4 visits)')
+    .option('--periods <A:B>', "period range in days (default: the search's range; ephemeris targets P/2:2P)", rangeFlag('--periods', 'periods in days', 1e5))
+    .option('--masses <A:B>', 'm sin i range in Earth masses (default: a quarter to four times the search or planet mass)', rangeFlag('--masses', 'masses in Earth masses', 1e5))
+    .option('--grid <NxM>', 'N periods by M masses, log-spaced', gridFlag, { periods: 12, masses: 10 })
+    .option('--trials <n>', 'simulated trials per cell', numberFlag('--trials', 'a whole number from 10 to 100000', 10, 100000, { integer: true }), 200)
+    .option('--fap <p>', 'false-alarm probability a blind detection must beat', numberFlag('--fap', 'a probability above 0 and at most 0.5', 0, 0.5, { exclusiveMin: true }), DEFAULT_FAP_THRESHOLD)
+    .option('--threads <n>', 'worker threads (default: available cores, at most one per cell)', numberFlag('--threads', 'a whole number from 1 to 256', 1, 256, { integer: true }))
+    .option('--seed <n>', "random seed (default: the campaign's seed)", numberFlag('--seed', 'a whole number, 0 or more', 0, Number.MAX_SAFE_INTEGER, { integer: true }))
+    .option('--out <dir>', "folder for the SVG maps (default: the plan's folder); a report.html there is re-rendered with the maps")
+    .option('--json', 'print one JSON document')
+    .option('--csv', 'print CSV, one row per cell and method')
+    .action(runMap);
+}

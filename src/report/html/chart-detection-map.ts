@@ -1,0 +1,87 @@
+import type { TopLevelSpec } from 'vega-lite';
+import { levelRows, type LevelMass } from '../../rv/injection-map.js';
+import { fmt } from '../table.js';
+import type { ChartFigure } from './figure.js';
+import { INK, MUTED } from './palette.js';
+
+/** One detection-probability map of a target (what `crest map` computes), ready to draw. */
+export interface DetectionMapData {
+  targetId: string;
+  /** Words under the title: how the map was made (visits, trials, threshold). */
+  method: string;
+  periodsDays: number[];
+  massesEarth: number[];
+  /** One or two panels sharing the axes, e.g. the analytic and the simulated known-phase map. */
+  panels: { label: string; detection: number[][] }[];
+  /** The mass the search aims at, or the planet's, drawn as a dashed rule. */
+  markMassEarth?: number;
+}
+
+/** Cell edges of a log axis: geometric midpoints between grid values, the ends mirrored. */
+function logEdges(values: number[]): number[] {
+  if (values.length === 1) return [values[0]! / 1.1, values[0]! * 1.1];
+  const mids = values.slice(1).map((v, i) => Math.sqrt(v * values[i]!));
+  return [values[0]! ** 2 / mids[0]!, ...mids, values.at(-1)! ** 2 / mids.at(-1)!];
+}
+
+const massText = (m: LevelMass) => (m.where === 'inside' ? fmt(m.massEarth, 1) : m.where);
+
+function panelSpec(data: DetectionMapData, panel: DetectionMapData['panels'][number], width: number) {
+  const pEdges = logEdges(data.periodsDays);
+  const mEdges = logEdges(data.massesEarth);
+  const cells = data.periodsDays.flatMap((_, i) =>
+    data.massesEarth.map((_, j) => ({ p0: pEdges[i]!, p1: pEdges[i + 1]!, m0: mEdges[j]!, m1: mEdges[j + 1]!, probability: panel.detection[i]![j]! })),
+  );
+  const contour = levelRows(data.periodsDays, data.massesEarth, panel.detection).flatMap((row) =>
+    row.levels.map(({ level, mass }) => ({ periodDays: row.periodDays, level: `${Math.round(level * 100)}%`, massEarth: mass.where === 'inside' ? mass.massEarth : null })),
+  );
+  const x = { type: 'quantitative' as const, title: 'Orbital period (days)', scale: { type: 'log', domain: [pEdges[0], pEdges.at(-1)], nice: false } };
+  const y = { type: 'quantitative' as const, title: 'm sin i (M⊕)', scale: { type: 'log', domain: [mEdges[0], mEdges.at(-1)], nice: false } };
+  const layers: unknown[] = [
+    {
+      data: { values: cells },
+      name: 'map_cells',
+      mark: { type: 'rect' },
+      encoding: {
+        x: { ...x, field: 'p0' }, x2: { field: 'p1' }, y: { ...y, field: 'm0' }, y2: { field: 'm1' },
+        color: { field: 'probability', type: 'quantitative', title: 'P(detect)', scale: { scheme: 'blues', domain: [0, 1] }, legend: { format: '.0%' } },
+      },
+    },
+    {
+      data: { values: contour },
+      name: 'map_contours',
+      mark: { type: 'line', color: INK, strokeWidth: 2, invalid: 'break-paths-filter-domains' },
+      encoding: {
+        x: { ...x, field: 'periodDays' }, y: { ...y, field: 'massEarth' },
+        strokeDash: { field: 'level', type: 'nominal', title: 'detected', scale: { domain: ['50%', '90%'], range: [[1, 0], [6, 3]] } },
+      },
+    },
+  ];
+  if (data.markMassEarth !== undefined) {
+    layers.push({ data: { values: [{ massEarth: data.markMassEarth }] }, name: 'map_mark', mark: { type: 'rule', color: MUTED, strokeDash: [2, 2] }, encoding: { y: { ...y, field: 'massEarth' } } });
+  }
+  return { title: { text: panel.label, fontSize: 12, fontWeight: 500 }, width, height: 240, layer: layers };
+}
+
+/**
+ * A heatmap of detection probability against period and m sin i (both log), with the 50% (solid)
+ * and 90% (dashed) detection contours: per period, the mass where the probability first reaches the
+ * level, interpolated in log mass (src/rv/injection-map.ts). Contours break where a level lies off
+ * the grid.
+ */
+export function detectionMapFigure(data: DetectionMapData): ChartFigure {
+  const width = data.panels.length > 1 ? 300 : 420;
+  const panels = data.panels.map((panel) => panelSpec(data, panel, width));
+  const spec = (panels.length === 1 ? panels[0] : { hconcat: panels, resolve: { scale: { color: 'shared', strokeDash: 'shared' } } }) as unknown as TopLevelSpec;
+  const first = data.panels[0]!;
+  const rows = levelRows(data.periodsDays, data.massesEarth, first.detection);
+  return {
+    id: `detection-map-${data.targetId}`,
+    kind: 'detection-map',
+    title: `${data.targetId}: detection probability against period and m sin i`,
+    caption: `${data.method} Solid line: 50% detected; dashed: 90%.${data.markMassEarth !== undefined ? ` Dotted rule: ${fmt(data.markMassEarth, 1)} M⊕.` : ''}`,
+    spec,
+    columns: [{ header: 'period (d)', align: 'right' }, { header: `50% mass (M⊕, ${first.label})`, align: 'right' }, { header: '90% mass (M⊕)', align: 'right' }],
+    rows: rows.map((r) => [fmt(r.periodDays, 2), massText(r.levels[0]!.mass), massText(r.levels[1]!.mass)]),
+  };
+}

@@ -1,0 +1,72 @@
+// Injection–recovery over worker_threads. Every worker rebuilds the same setup from the input and
+// pulls cells one at a time (a worker that finishes early takes the next cell), so the load
+// balances itself; since each cell has its own seeded stream, the map is identical for any number
+// of threads and equal to `injectionRecovery(input)` computed in one thread.
+import { availableParallelism } from 'node:os';
+import { Worker } from 'node:worker_threads';
+import { semiAmplitudeMps } from '../orbit/semi-amplitude.js';
+import { prepareInjection, type InjectionInput, type InjectionMap } from './injection.js';
+import type { CellResult } from './injection-worker.js';
+
+/** The worker script beside this module (dist/rv/injection-worker.js once built). */
+const WORKER_URL = new URL('./injection-worker.js', import.meta.url);
+
+export interface ParallelOptions {
+  /** Worker threads; default `defaultThreadCount(cells)`. */
+  threads?: number;
+  /** Called after every finished cell with (cells done, cells in all). */
+  onProgress?: (done: number, total: number) => void;
+}
+
+/** os.availableParallelism(), never more than the number of cells, at least 1. */
+export function defaultThreadCount(cells: number): number {
+  return Math.max(1, Math.min(availableParallelism(), cells));
+}
+
+/** The injection–recovery map of `input`, computed by worker threads (see the file comment). */
+export async function injectionRecoveryParallel(input: InjectionInput, options: ParallelOptions = {}): Promise<InjectionMap> {
+  // Validates the input and gives the grid and threshold before any thread starts.
+  const setup = prepareInjection(input);
+  const { periodsDays, massesEarth, starMassSun } = input;
+  const total = periodsDays.length * massesEarth.length;
+  const threads = Math.max(1, Math.min(options.threads ?? defaultThreadCount(total), total));
+  const flat = new Array<number>(total);
+  let next = 0;
+  let done = 0;
+  const workers: Worker[] = [];
+  try {
+    await new Promise<void>((resolve, reject) => {
+      const feed = (worker: Worker) => {
+        if (next < total) worker.postMessage(next++);
+      };
+      for (let k = 0; k < threads; k++) {
+        // execArgv [] : a compute thread needs none of the parent's flags or module hooks.
+        const worker = new Worker(WORKER_URL, { workerData: input, execArgv: [] });
+        workers.push(worker);
+        worker.on('message', ({ cell, probability }: CellResult) => {
+          flat[cell] = probability;
+          done += 1; // not inside the optional call below: `?.` would skip it without a callback
+          options.onProgress?.(done, total);
+          if (done === total) resolve();
+          else feed(worker);
+        });
+        worker.on('error', reject);
+        worker.on('exit', (code) => {
+          if (done < total) reject(new Error(`injection worker stopped with code ${code} before the map was done`));
+        });
+        feed(worker); // queued until the worker's listener is attached
+      }
+    });
+  } finally {
+    await Promise.all(workers.map((w) => w.terminate()));
+  }
+  return {
+    periodsDays,
+    massesEarth,
+    trialsPerCell: input.trialsPerCell,
+    fapThreshold: setup.fapThreshold,
+    detection: periodsDays.map((_, i) => flat.slice(i * massesEarth.length, (i + 1) * massesEarth.length)),
+    kCircularMps: periodsDays.map((periodDays) => massesEarth.map((planetMassEarth) => semiAmplitudeMps({ starMassSun, planetMassEarth, periodDays }))),
+    grid: setup.grid,
+  };
+}

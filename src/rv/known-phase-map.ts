@@ -1,0 +1,115 @@
+// Known-phase detection maps for a planet with a transit ephemeris: the probability that a
+// weighted least-squares fit of K (phase fixed by the ephemeris, free offset) gives K̂/σ_K > n,
+// per (period, m sin i) cell. Circular orbits, the scheduler's signal model
+// v = γ − K sin(2π φ), φ = (t − Tc)/P (src/schedule/objective-ephemeris.ts).
+//
+// Rows other than the ephemeris period answer "had the period been P, with the same transit
+// time": the phases and their errors are recomputed from Tc at each P.
+
+import type { Ephemeris } from '../model.js';
+import { phaseAt, phaseErrCycles } from '../orbit/ephemeris.js';
+import { semiAmplitudeMps } from '../orbit/semi-amplitude.js';
+import { ephemerisInformation, EPHEMERIS_STATS, signalMoments, updateEphemerisStats } from '../schedule/objective-ephemeris.js';
+import { detectionProbabilityKnownPhase } from './detect.js';
+import { createRng, deriveSeed } from './random.js';
+
+export interface KnownPhaseInput {
+  /** Visit times (BJD_TDB days) and each visit's σ_eff with jitter (m/s). */
+  timesBjd: number[];
+  sigmaMps: number[];
+  ephemeris: Ephemeris;
+  periodsDays: number[];
+  massesEarth: number[];
+  starMassSun: number;
+  /** The detection threshold n on K̂/σ_K. */
+  significance: number;
+}
+
+export interface KnownPhaseMap {
+  periodsDays: number[];
+  massesEarth: number[];
+  significance: number;
+  /** detection[i][j] at periodsDays[i], massesEarth[j]. */
+  detection: number[][];
+  /** Expected σ_K of each period's row, m/s (infinite when the visits carry no information on K). */
+  sigmaKMps: number[];
+}
+
+/** The ephemeris with a trial period in place of its own (the same Tc and errors). */
+const atPeriod = (eph: Ephemeris, periodDays: number): Ephemeris => ({ ...eph, periodDays });
+
+/**
+ * Expected σ_K (m/s) of the visits at period P: the scheduler's expected information on K with a
+ * free offset, phases and phase errors from the ephemeris (objective-ephemeris.ts, which derives
+ * E[I] = Σwq − ((Σwm)² + Σw²(q − m²))/Σw), and σ_K = 1/√E[I].
+ */
+export function expectedSigmaKMps(timesBjd: number[], sigmaMps: number[], eph: Ephemeris): number {
+  const stats = new Float64Array(EPHEMERIS_STATS);
+  timesBjd.forEach((t, n) => {
+    const { m, q } = signalMoments(phaseAt(eph, t), phaseErrCycles(eph, t));
+    updateEphemerisStats(stats, 0, 1 / sigmaMps[n]! ** 2, m, q, 1);
+  });
+  const info = ephemerisInformation(stats, 0);
+  return info > 0 ? 1 / Math.sqrt(info) : Infinity;
+}
+
+function checkInput(input: KnownPhaseInput): void {
+  if (input.timesBjd.length !== input.sigmaMps.length) throw new RangeError('times and sigma differ in length');
+  if (!input.periodsDays.length || !input.massesEarth.length) throw new RangeError('need at least one period and one mass');
+}
+
+/** K of a circular orbit, m/s. */
+const kOf = (input: KnownPhaseInput, periodDays: number, planetMassEarth: number) =>
+  semiAmplitudeMps({ starMassSun: input.starMassSun, planetMassEarth, periodDays });
+
+/** The analytic map: P = Φ(K/σ_K − n) per cell (REFERENCES.md "Detection probability", src/rv/detect.ts). */
+export function knownPhaseMapAnalytic(input: KnownPhaseInput): KnownPhaseMap {
+  checkInput(input);
+  const sigmaKMps = input.periodsDays.map((p) => expectedSigmaKMps(input.timesBjd, input.sigmaMps, atPeriod(input.ephemeris, p)));
+  const detection = input.periodsDays.map((p, i) =>
+    input.massesEarth.map((m) => (Number.isFinite(sigmaKMps[i]!) ? detectionProbabilityKnownPhase(kOf(input, p, m), sigmaKMps[i]!, input.significance) : 0)),
+  );
+  return { periodsDays: input.periodsDays, massesEarth: input.massesEarth, significance: input.significance, detection, sigmaKMps };
+}
+
+/**
+ * The simulated map. Each trial draws the true transit time and period from the ephemeris errors
+ * (Tc + δT, P + δP, δ normal), makes v_i = K s_true,i + σ_i ε_i at the visit times, fits K by weighted
+ * least squares with a free offset on the predicted signal s_i = −sin(2π φ_i):
+ *   K̂ = Σ w (s − s̄)(v − v̄) / Σ w (s − s̄)²,  σ_K = 1 / √(Σ w (s − s̄)²)   (weighted means s̄, v̄;
+ * REFERENCES.md "Visits needed", weighted form), and counts a detection when K̂/σ_K > n.
+ * One seeded stream per cell (deriveSeed), as in the injection map.
+ */
+export function knownPhaseMapSimulated(input: KnownPhaseInput & { trialsPerCell: number; seed: number }): KnownPhaseMap {
+  checkInput(input);
+  const { timesBjd, sigmaMps, ephemeris: eph, massesEarth, trialsPerCell } = input;
+  const count = timesBjd.length;
+  const w = sigmaMps.map((s) => 1 / (s * s));
+  const sumW = w.reduce((a, b) => a + b, 0);
+  const truth = new Float64Array(count);
+  const sigmaKMps: number[] = [];
+  const detection = input.periodsDays.map((periodDays, i) => {
+    const predicted = timesBjd.map((t) => -Math.sin(2 * Math.PI * phaseAt(atPeriod(eph, periodDays), t)));
+    const meanS = predicted.reduce((a, s, n) => a + w[n]! * s, 0) / sumW;
+    const centred = predicted.map((s) => s - meanS);
+    const info = centred.reduce((a, c, n) => a + w[n]! * c * c, 0);
+    const sigmaK = info > 0 ? 1 / Math.sqrt(info) : Infinity;
+    sigmaKMps.push(sigmaK);
+    return massesEarth.map((m, j) => {
+      if (!Number.isFinite(sigmaK)) return 0;
+      const kMps = kOf(input, periodDays, m);
+      const rng = createRng(deriveSeed(input.seed, i * massesEarth.length + j));
+      let detected = 0;
+      for (let trial = 0; trial < trialsPerCell; trial++) {
+        const trueEph = { ...eph, periodDays: periodDays + eph.periodErrDays * rng.normal(), tcBjdTdb: eph.tcBjdTdb + eph.tcErrDays * rng.normal() };
+        for (let n = 0; n < count; n++) truth[n] = -kMps * Math.sin(2 * Math.PI * phaseAt(trueEph, timesBjd[n]!)) + sigmaMps[n]! * rng.normal();
+        // Σ w (s − s̄)(v − v̄) = Σ w (s − s̄) v, since Σ w (s − s̄) = 0.
+        let cross = 0;
+        for (let n = 0; n < count; n++) cross += w[n]! * centred[n]! * truth[n]!;
+        if (cross / info / sigmaK > input.significance) detected++;
+      }
+      return detected / trialsPerCell;
+    });
+  });
+  return { periodsDays: input.periodsDays, massesEarth, significance: input.significance, detection, sigmaKMps };
+}
