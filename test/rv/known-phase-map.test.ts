@@ -1,0 +1,75 @@
+// Known-phase detection maps: the analytic Φ(K/σ_K − n) against simulated least-squares fits, and
+// the expected σ_K against a direct least-squares computation.
+import { describe, expect, it } from 'vitest';
+import type { Ephemeris } from '../../src/model.js';
+import { semiAmplitudeMps } from '../../src/orbit/semi-amplitude.js';
+import { logSpaced } from '../../src/rv/injection-map.js';
+import { expectedSigmaKMps, knownPhaseMapAnalytic, knownPhaseMapSimulated, type KnownPhaseInput } from '../../src/rv/known-phase-map.js';
+import { createRng } from '../../src/rv/random.js';
+
+// An invented transiting planet and 12 visits on random nights of a 70-day window, 120 days after
+// its reference transit; σ_eff 2 to 3.5 m/s.
+const EPH: Ephemeris = { periodDays: 4.7731, periodErrDays: 0.0004, tcBjdTdb: 2_461_180.3342, tcErrDays: 0.0015 };
+
+function visits(): Pick<KnownPhaseInput, 'timesBjd' | 'sigmaMps'> {
+  const rng = createRng(8);
+  const nights = new Set<number>();
+  while (nights.size < 12) nights.add(Math.floor(70 * rng.uniform()));
+  const timesBjd = [...nights].sort((a, b) => a - b).map((n) => 2_461_300.55 + n + 0.25 * rng.uniform());
+  return { timesBjd, sigmaMps: timesBjd.map(() => 2 + 1.5 * rng.uniform()) };
+}
+
+const input: KnownPhaseInput = {
+  ...visits(),
+  ephemeris: EPH,
+  periodsDays: logSpaced(EPH.periodDays / 1.6, EPH.periodDays * 1.6, 6),
+  massesEarth: logSpaced(4, 40, 7),
+  starMassSun: 0.82,
+  significance: 4,
+};
+
+describe('known-phase detection map', () => {
+  it('analytic Φ(K/σ_K − n) agrees with simulated fits within 3 percentage points in every cell', () => {
+    // 5,000 trials a cell: the binomial standard error is at most 0.7 points, so 3 points is > 4 σ.
+    const analytic = knownPhaseMapAnalytic(input);
+    const simulated = knownPhaseMapSimulated({ ...input, trialsPerCell: 5000, seed: 17 });
+    const cells = analytic.detection.flatMap((row, i) => row.map((p, j) => [p, simulated.detection[i]![j]!] as const));
+    for (const [a, s] of cells) expect(Math.abs(a - s)).toBeLessThanOrEqual(0.03);
+    // The grid spans the transition, so the comparison is not between zeros and ones only.
+    expect(cells.filter(([a]) => a > 0.1 && a < 0.9).length).toBeGreaterThanOrEqual(8);
+  });
+
+  it('rises with mass at fixed period (analytic exactly, simulated within sampling error)', () => {
+    const analytic = knownPhaseMapAnalytic(input);
+    const simulated = knownPhaseMapSimulated({ ...input, trialsPerCell: 400, seed: 3 });
+    for (const row of analytic.detection) for (let j = 1; j < row.length; j++) expect(row[j]!).toBeGreaterThanOrEqual(row[j - 1]!);
+    // Two binomial standard errors of a difference at p = 0.5 with 400 trials: 2 · √2 · 0.025 ≈ 0.071.
+    for (const row of simulated.detection) for (let j = 1; j < row.length; j++) expect(row[j]!).toBeGreaterThanOrEqual(row[j - 1]! - 0.071);
+  });
+
+  it('expected σ_K equals the direct least-squares σ_K without phase errors, and the random-phase limit with huge ones', () => {
+    const exact = { ...EPH, periodErrDays: 0, tcErrDays: 0 };
+    // Direct reference: σ_K = 1/√(Σ w (s − s̄)²), s = −sin 2π(t − Tc)/P, weighted mean s̄ (REFERENCES.md "Visits needed").
+    const { timesBjd, sigmaMps } = input;
+    const w = sigmaMps.map((s) => 1 / (s * s));
+    const s = timesBjd.map((t) => -Math.sin((2 * Math.PI * (t - EPH.tcBjdTdb)) / EPH.periodDays));
+    const mean = s.reduce((a, v, n) => a + w[n]! * v, 0) / w.reduce((a, b) => a + b, 0);
+    const reference = 1 / Math.sqrt(s.reduce((a, v, n) => a + w[n]! * (v - mean) ** 2, 0));
+    expect(expectedSigmaKMps(timesBjd, sigmaMps, exact)).toBeCloseTo(reference, 9);
+    // Phase unknown (σ_T0 of ten orbits): E[s] → 0, E[s²] → 1/2, so E[I] → Σw/2 − Σw²/(2 Σw)
+    // (objective-ephemeris.ts, the σ → ∞ limit; σ_K ≈ σ √(2/N) for equal weights, REFERENCES.md).
+    const sumW = w.reduce((a, b) => a + b, 0);
+    const randomPhase = 1 / Math.sqrt(sumW / 2 - w.reduce((a, b) => a + b * b, 0) / (2 * sumW));
+    expect(expectedSigmaKMps(timesBjd, sigmaMps, { ...EPH, tcErrDays: 10 * EPH.periodDays })).toBeCloseTo(randomPhase, 6);
+  });
+
+  it('at 50% detection K/σ_K equals n (Φ(0) = 1/2)', () => {
+    // One cell at the ephemeris period, the mass whose K is exactly n σ_K.
+    const sigmaK = expectedSigmaKMps(input.timesBjd, input.sigmaMps, EPH);
+    const kOf = (m: number) => semiAmplitudeMps({ starMassSun: input.starMassSun, planetMassEarth: m, periodDays: EPH.periodDays });
+    let lo = 0.1, hi = 1000;
+    for (let k = 0; k < 100; k++) { const mid = Math.sqrt(lo * hi); if (kOf(mid) < input.significance * sigmaK) lo = mid; else hi = mid; }
+    const map = knownPhaseMapAnalytic({ ...input, periodsDays: [EPH.periodDays], massesEarth: [lo] });
+    expect(map.detection[0]![0]).toBeCloseTo(0.5, 6);
+  });
+});
