@@ -3,8 +3,9 @@
 import type { BenchModule } from './types.js';
 import { visibilityBench } from './visibility.js';
 import { scheduleBenches } from './schedule.js';
+import { injectionBench } from './injection.js';
 
-const BENCHES: BenchModule[] = [visibilityBench, ...scheduleBenches];
+const BENCHES: BenchModule[] = [visibilityBench, ...scheduleBenches, injectionBench];
 
 /** Runs the benches named on the command line (all when none), one JSON line each on stdout. */
 async function main(names: string[]): Promise<void> {
