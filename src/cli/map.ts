@@ -1,4 +1,3 @@
-import { existsSync } from 'node:fs';
 import path from 'node:path';
 import type { Command } from 'commander';
 import { inputError } from '../errors.js';
@@ -6,7 +5,6 @@ import { readStructured } from '../io/read-text.js';
 import { slug, writeOutputs } from '../io/write-outputs.js';
 import { detectionMapFigure, type DetectionMapData } from '../report/html/chart-detection-map.js';
 import { planFromJson } from '../report/html/plan-from-json.js';
-import { renderReportHtml } from '../report/html/report-html.js';
 import { renderSvg } from '../report/html/vega-svg.js';
 import { toCsv } from '../report/csv.js';
 import { fmt } from '../report/table.js';
@@ -14,6 +12,7 @@ import { DEFAULT_FAP_THRESHOLD } from '../rv/injection.js';
 import { levelRows, type LevelRow } from '../rv/injection-map.js';
 import { injectionRecoveryParallel } from '../rv/injection-worker-pool.js';
 import { knownPhaseMapAnalytic, knownPhaseMapSimulated } from '../rv/known-phase-map.js';
+import { mapDataFile, reportWithMaps } from './map-report.js';
 import { mapJobs, type MapJob, type MapSettings } from './map-targets.js';
 import { levelTableText, mapTableText } from './map-text.js';
 import { stderrProgress, type Progress } from './map-progress.js';
@@ -176,10 +175,10 @@ async function runMap(opts: MapFlags): Promise<void> {
     const figure = detectionMapFigure(r.chart);
     files[r.svg] = await renderSvg({ ...figure.spec, title: figure.title } as typeof figure.spec);
   }
-  if (existsSync(path.join(outDir, 'report.html'))) {
-    const maps = new Map(results.filter((r) => r.job.kind === 'search').map((r) => [r.job.targetId, r.chart]));
-    files['report.html'] = await renderReportHtml(plan, maps);
-  }
+  const searchMaps = results.filter((r) => r.job.kind === 'search').map((r) => r.chart);
+  for (const map of searchMaps) files[mapDataFile(map.targetId)] = `${JSON.stringify(map)}\n`;
+  const report = await reportWithMaps(plan, outDir, searchMaps);
+  if (report !== undefined) files['report.html'] = report;
   const written = writeOutputs(outDir, files, [opts.plan]);
   if (opts.csv) return void process.stdout.write(csvText(results));
   if (!opts.json) return printText(results, skipped, written, opts.target !== undefined);
@@ -227,7 +226,7 @@ export function registerMap(program: Command): Command {
     .option('--fap <p>', 'false-alarm probability a blind detection must beat', numberFlag('--fap', 'a probability above 0 and at most 0.5', 0, 0.5, { exclusiveMin: true }), DEFAULT_FAP_THRESHOLD)
     .option('--threads <n>', 'worker threads (default: available cores, at most one per cell)', numberFlag('--threads', 'a whole number from 1 to 256', 1, 256, { integer: true }))
     .option('--seed <n>', "random seed (default: the campaign's seed)", numberFlag('--seed', 'a whole number, 0 or more', 0, Number.MAX_SAFE_INTEGER, { integer: true }))
-    .option('--out <dir>', "folder for the SVG maps (default: the plan's folder); a report.html there is re-rendered with the maps")
+    .option('--out <dir>', "folder for the SVG maps and map-<target>.json (default: the plan's folder); a report.html there is re-rendered with the blind-search maps")
     .option('--json', 'print one JSON document')
     .option('--csv', 'print CSV, one row per cell and method')
     .action(runMap);

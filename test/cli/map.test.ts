@@ -51,7 +51,7 @@ describe('crest map', () => {
     expect(existsSync(path.join(dir, 'one', 'map-alba.svg'))).toBe(true);
   });
 
-  it('prints tables for every mappable target, writes SVG maps and re-renders a report.html beside them', async () => {
+  it('prints tables for every mappable target, writes SVG maps and map data, re-renders a report.html beside them', async () => {
     const seeded = tempFiles({ 'report.html': 'old' });
     const r = await runCliAsync(['map', '--plan', planFile, ...small, '--out', seeded]);
     expect(r.stderr).toBe('');
@@ -63,8 +63,12 @@ describe('crest map', () => {
     expect(svg.startsWith('<svg')).toBe(true);
     // Two panels (analytic, simulated) of 4 x 5 cells each.
     expect(svg.match(/role-mark map_cells_marks/g)).toHaveLength(2);
-    const report = readFileSync(path.join(seeded, 'report.html'), 'utf8');
-    expect(report).toContain('chart-detection-map');
+    expect(readFileSync(path.join(seeded, 'report.html'), 'utf8')).toContain('chart-detection-map');
+    expect(JSON.parse(readFileSync(path.join(seeded, 'map-alba.json'), 'utf8')).targetId).toBe('Alba');
+    // Mapping another target later keeps Alba's saved map in the report.
+    const again = await runCliAsync(['map', '--plan', planFile, ...small, '--target', 'Teyu-3', '--out', seeded]);
+    expect(again.status).toBe(0);
+    expect(readFileSync(path.join(seeded, 'report.html'), 'utf8').match(/<figure class="chart chart-detection-map"/g)).toHaveLength(1);
   });
 
   it('writes CSV with one row per cell and method', async () => {
