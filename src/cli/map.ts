@@ -23,7 +23,7 @@ interface MapFlags {
   target?: string;
   periods?: [number, number];
   masses?: [number, number];
-  grid: { periods: number; masses: number };
+  grid?: { periods: number; masses: number };
   trials: number;
   fap: number;
   threads?: number;
@@ -47,6 +47,7 @@ function rangeFlag(flag: string, unit: string, max: number) {
 }
 
 const MAX_AXIS = 200;
+const DEFAULT_GRID = { periods: 12, masses: 10 };
 function gridFlag(text: string): { periods: number; masses: number } {
   const allowed = `NxM: N periods by M masses, each a whole number from 2 to ${MAX_AXIS}`;
   const m = /^(\d+)x(\d+)$/i.exec(text.trim());
@@ -159,7 +160,7 @@ const jsonLevels = (levels: LevelRow[]) =>
 async function runMap(opts: MapFlags): Promise<void> {
   const plan = planFromJson(readStructured(opts.plan, 'plan file'), opts.plan);
   const settings: MapSettings = {
-    periods: opts.periods, masses: opts.masses, grid: opts.grid,
+    periods: opts.periods, masses: opts.masses, grid: opts.grid ?? DEFAULT_GRID,
     trialsPerCell: opts.trials, fapThreshold: opts.fap, seed: opts.seed ?? plan.campaign.seed,
   };
   const { jobs, skipped } = mapJobs(plan, settings, opts.target);
@@ -220,8 +221,8 @@ export function registerMap(program: Command): Command {
     .requiredOption('--plan <file>', 'plan.json written by crest plan')
     .option('--target <id>', 'one target (default: every blind-search and ephemeris target with at least 4 visits)')
     .option('--periods <A:B>', "period range in days (default: the search's range; ephemeris targets P/2:2P)", rangeFlag('--periods', 'periods in days', 1e5))
-    .option('--masses <A:B>', 'm sin i range in Earth masses (default: a quarter to four times the search or planet mass)', rangeFlag('--masses', 'masses in Earth masses', 1e5))
-    .option('--grid <NxM>', 'N periods by M masses, log-spaced', gridFlag, { periods: 12, masses: 10 })
+    .option('--masses <A:B>', "m sin i range in Earth masses (default: half to eight times the search mass; a quarter to four times an ephemeris planet's)", rangeFlag('--masses', 'masses in Earth masses', 1e5))
+    .option('--grid <NxM>', `N periods by M masses, log-spaced (default: ${DEFAULT_GRID.periods}x${DEFAULT_GRID.masses})`, gridFlag)
     .option('--trials <n>', 'simulated trials per cell', numberFlag('--trials', 'a whole number from 10 to 100000', 10, 100000, { integer: true }), 200)
     .option('--fap <p>', 'false-alarm probability a blind detection must beat', numberFlag('--fap', 'a probability above 0 and at most 0.5', 0, 0.5, { exclusiveMin: true }), DEFAULT_FAP_THRESHOLD)
     .option('--threads <n>', 'worker threads (default: available cores, at most one per cell)', numberFlag('--threads', 'a whole number from 1 to 256', 1, 256, { integer: true }))
