@@ -29,10 +29,16 @@ function savedMap(outDir: string, targetId: string): DetectionMapData | undefine
  */
 export async function reportWithMaps(plan: Plan, outDir: string, fresh: DetectionMapData[]): Promise<string | undefined> {
   if (!existsSync(path.join(outDir, 'report.html'))) return undefined;
+  return renderReportHtml(plan, savedMaps(plan, outDir, fresh));
+}
+
+/** The maps of the plan's blind-search targets: the fresh ones, else those saved in `dir`. */
+export function savedMaps(plan: Plan, dir: string, fresh: DetectionMapData[] = []): Map<string, DetectionMapData> {
   const maps = new Map<string, DetectionMapData>();
   for (const target of plan.campaign.targets.filter((t) => t.search)) {
-    const map = fresh.find((m) => m.targetId === target.id) ?? savedMap(outDir, target.id);
+    const map = fresh.find((m) => m.targetId === target.id) ?? savedMap(dir, target.id);
     if (map) maps.set(target.id, map);
   }
-  return renderReportHtml(plan, maps);
+  return maps;
 }
+

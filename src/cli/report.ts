@@ -5,6 +5,7 @@ import { readText } from '../io/read-text.js';
 import { writeOutputs } from '../io/write-outputs.js';
 import { planFromJson } from '../report/html/plan-from-json.js';
 import { renderReportHtml } from '../report/html/report-html.js';
+import { savedMaps } from './map-report.js';
 import { printJson } from './options.js';
 
 /** Parses plan.json text; a syntax error is one input-error line. */
@@ -26,7 +27,8 @@ export function registerReport(program: Command): Command {
     .option('--json', 'print one JSON document')
     .action(async (file: string, opts: { out?: string; json?: boolean }) => {
       const plan = planFromJson(parsePlanText(file), file);
-      const html = await renderReportHtml(plan);
+      // Detection maps saved by `crest map` beside the plan are kept in the page.
+      const html = await renderReportHtml(plan, savedMaps(plan, path.dirname(file)));
       const [written] = writeOutputs(opts.out ?? path.dirname(file), { 'report.html': html }, [file]);
       if (opts.json) return printJson({ plan: file, written: [written], charts: (html.match(/<figure class="chart /g) ?? []).length });
       console.log(`Wrote ${written}`);
