@@ -1,12 +1,11 @@
 import { DateTime } from 'luxon';
 import type { Plan, PlannedVisit } from '../model.js';
+import { clockTime } from '../sky/local-time.js';
 import { fmt, type Column } from './table.js';
 
-/** Clock time of an instant in a zone, e.g. `23:41`. */
-export function clock(iso: string | Date | null, zone: string): string {
-  if (iso === null) return '-';
-  const dt = typeof iso === 'string' ? DateTime.fromISO(iso) : DateTime.fromJSDate(iso);
-  return dt.setZone(zone).toFormat('HH:mm');
+/** Clock time of an instant (ISO text or Date) in a zone, e.g. `23:41`; a dash for null. */
+export function clock(instant: string | Date | null, zone: string): string {
+  return clockTime(typeof instant === 'string' ? new Date(instant) : instant, zone);
 }
 
 export function phaseText(visit: PlannedVisit): string {
