@@ -5,6 +5,7 @@ import { bjdTdb } from '../astro/bjd.js';
 import type { Campaign, Night, Target, Window } from '../model.js';
 import { phaseAt, phaseErrCycles } from '../orbit/ephemeris.js';
 import { semiAmplitudeMps } from '../orbit/semi-amplitude.js';
+import { signalShape, type SignalShape } from '../orbit/signal-shape.js';
 import { targetKMps } from '../orbit/target-k.js';
 import { chooseExposureSec, visitCostSec, type ExposureChoice } from '../rv/exposure.js';
 import { visitPrecision } from '../rv/precision.js';
@@ -35,6 +36,8 @@ export interface TargetSetup {
   scheduleTarget?: ScheduleTarget;
   /** Why a target is not scheduled. */
   skipped?: string;
+  /** The signal's shape against phase, for a planet on an eccentric orbit. */
+  shape?: SignalShape;
 }
 
 /** Exposure (at a typical airmass) and the scheduler's goal for each target. */
@@ -47,6 +50,7 @@ export function setupTargets(campaign: Campaign): TargetSetup[] {
     const goal = target.goalSignificance ?? goals.significance;
     if (target.ephemeris && kMps !== undefined) {
       setup.scheduleTarget = { kind: 'ephemeris', id: target.id, priority: target.priority, kMps, goal };
+      if (target.planet && target.planet.ecc > 0) setup.shape = signalShape(target.planet.ecc, target.planet.omegaDeg);
     } else if (target.search) {
       const { periodMinDays, periodMaxDays, massEarth } = target.search;
       const kAtMin = semiAmplitudeMps({ starMassSun: target.massSun, planetMassEarth: massEarth, periodDays: periodMinDays });
@@ -118,6 +122,7 @@ export function candidateSlots(campaign: Campaign, nights: Night[], windows: Win
         if (target.ephemeris && setup.scheduleTarget?.kind === 'ephemeris') {
           slot.phase = phaseAt(target.ephemeris, midBjdTdb);
           slot.phaseErr = phaseErrCycles(target.ephemeris, midBjdTdb);
+          if (setup.shape) slot.signalMoments = setup.shape.moments(slot.phase, slot.phaseErr);
         }
         details.push({
           slot,

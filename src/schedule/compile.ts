@@ -137,7 +137,7 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
     c.weight[j] = w;
     c.maxWeight[t] = Math.max(c.maxWeight[t]!, w);
     if (problem.targets[t]!.kind === 'ephemeris') {
-      const { m, q } = signalMoments(s.phase!, s.phaseErr ?? 0);
+      const { m, q } = s.signalMoments ?? signalMoments(s.phase!, s.phaseErr ?? 0);
       c.valueA[j] = m;
       c.valueB[j] = q;
       c.maxAbsSignal[t] = Math.max(c.maxAbsSignal[t]!, Math.abs(m));

@@ -45,7 +45,7 @@ function kOverSigmaKOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], g
     const grid = grids[t];
     if (!grid) {
       // E[I] = sum_i w_i E[s_i^2] - (1/W) sum_i sum_j w_i w_j E[s_i s_j], E[s_i s_j] = m_i m_j (i != j), q_i (i = j).
-      const moments = mine.map((v) => signalMoments(v.phase!, v.phaseErr ?? 0));
+      const moments = mine.map((v) => v.signalMoments ?? signalMoments(v.phase!, v.phaseErr ?? 0));
       const W = w.reduce((a, b) => a + b, 0);
       if (W === 0) return 0;
       let info = 0;

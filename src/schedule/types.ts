@@ -27,6 +27,11 @@ export interface CandidateSlot {
   /** Ephemeris targets: predicted orbital phase in cycles (0 = mid-transit) and its 1-sigma error. */
   phase?: number;
   phaseErr?: number;
+  /**
+   * Ephemeris targets of an eccentric orbit: the expected signal E[s] and E[s²] at this visit,
+   * computed by the caller from the orbit's shape. Omitted: the circular closed form from phase.
+   */
+  signalMoments?: { m: number; q: number };
   /** Search targets: mid-exposure time in days (any fixed zero point, e.g. BJD_TDB). */
   midDays?: number;
 }

@@ -8,7 +8,7 @@ import { PLAN_CSV_HEADER, renderPlanCsv } from '../../src/report/plan-csv.js';
 import { renderPlanIcs } from '../../src/report/plan-ics.js';
 import { checkVisits, REFERENCE_TOLERANCE_MIN } from './check-visits.js';
 import { icsMismatches } from './check-ics.js';
-import { ephemerisVisits, kOverSigmaKFromCsv, parsePlanCsv } from './recompute-k.js';
+import { ephemerisVisits, kOverSigmaKFromCsv, orbitSignal, parsePlanCsv } from './recompute-k.js';
 
 /** Few weather trials: the weather is not what these tests check. */
 export const WEATHER_TRIALS = 20;
@@ -52,7 +52,7 @@ export function describePlanProperties(names: string[], planOf: (name: string) =
           const x = (v.midBjdTdb - target.ephemeris!.tcBjdTdb) / target.ephemeris!.periodDays;
           expect(v.phaseErr).toBeCloseTo(Math.hypot(target.ephemeris!.tcErrDays, x * target.ephemeris!.periodErrDays) / target.ephemeris!.periodDays, 4);
         }
-        const { value, roundingBound } = kOverSigmaKFromCsv(summary.kMps!, mine);
+        const { value, roundingBound } = kOverSigmaKFromCsv(summary.kMps!, mine, orbitSignal(target.planet));
         const tolerance = 1.5 * roundingBound + 1e-9 * value;
         expect(Math.abs(summary.kOverSigmaK! - value)).toBeLessThanOrEqual(tolerance);
         if (value > 0) expect(Math.abs(summary.sigmaKMps! - summary.kMps! / value)).toBeLessThanOrEqual((summary.kMps! / value ** 2) * tolerance * 1.01);

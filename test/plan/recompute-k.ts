@@ -11,7 +11,35 @@
 // (E[cos(a eps)] = exp(-a^2 sigma^2 / 2) for eps ~ N(0, sigma^2), the normal characteristic
 // function; the form in the comment of src/schedule/objective-ephemeris.ts). Here the cross term is
 // summed pair by pair. sigma_K = 1/sqrt(E[I]).
+//
+// For an eccentric planet s is the Keplerian RV curve with K = 1 (src/orbit/rv-curve.ts, periastron
+// placed by the transit time), and m, q are its mean and mean square over the Gaussian phase error
+// by the trapezoid rule over +-7 sigma: a slow, direct average, not the scheduler's series.
 import { parse } from 'csv-parse/sync';
+import { periastronFromConjunctionBjd } from '../../src/orbit/periastron-time.js';
+import { radialVelocityMps } from '../../src/orbit/rv-curve.js';
+
+/** s(phi) of an eccentric planet, phase from mid-transit; undefined for a circular orbit. */
+export function orbitSignal(planet: { ecc: number; omegaDeg: number } | undefined): ((phase: number) => number) | undefined {
+  if (!planet || planet.ecc === 0) return undefined;
+  const orbit = { kMps: 1, periodDays: 1, ecc: planet.ecc, omegaDeg: planet.omegaDeg, periastronBjd: periastronFromConjunctionBjd({ tcBjd: 0, periodDays: 1, ...planet }) };
+  return (phase) => radialVelocityMps(orbit, phase);
+}
+
+/** Mean of f(phi + eps), eps ~ N(0, sigma^2), by the trapezoid rule over +-7 sigma. */
+function gaussianMean(f: (phase: number) => number, phase: number, sigma: number): number {
+  if (sigma === 0) return f(phase);
+  const steps = 800;
+  let total = 0;
+  let norm = 0;
+  for (let i = 0; i <= steps; i++) {
+    const x = -7 + (14 * i) / steps;
+    const w = Math.exp(-0.5 * x * x) * (i === 0 || i === steps ? 0.5 : 1);
+    total += w * f(phase + sigma * x);
+    norm += w;
+  }
+  return total / norm;
+}
 
 export interface CsvVisit {
   targetId: string;
@@ -46,10 +74,14 @@ export function ephemerisVisits(rows: Record<string, string>[]): CsvVisit[] {
 }
 
 /** E[I] of a target's visits (1/(m/s)^2), by the pairwise form above. */
-export function expectedInformation(visits: Pick<CsvVisit, 'phase' | 'phaseErr' | 'sigmaEffMps'>[]): number {
+export function expectedInformation(visits: Pick<CsvVisit, 'phase' | 'phaseErr' | 'sigmaEffMps'>[], signal?: (phase: number) => number): number {
   const w = visits.map((v) => 1 / (v.sigmaEffMps * v.sigmaEffMps));
-  const m = visits.map((v) => -Math.sin(2 * Math.PI * v.phase) * Math.exp(-2 * Math.PI ** 2 * v.phaseErr ** 2));
-  const q = visits.map((v) => 0.5 - 0.5 * Math.cos(4 * Math.PI * v.phase) * Math.exp(-8 * Math.PI ** 2 * v.phaseErr ** 2));
+  const m = visits.map((v) =>
+    signal ? gaussianMean(signal, v.phase, v.phaseErr) : -Math.sin(2 * Math.PI * v.phase) * Math.exp(-2 * Math.PI ** 2 * v.phaseErr ** 2),
+  );
+  const q = visits.map((v) =>
+    signal ? gaussianMean((p) => signal(p) ** 2, v.phase, v.phaseErr) : 0.5 - 0.5 * Math.cos(4 * Math.PI * v.phase) * Math.exp(-8 * Math.PI ** 2 * v.phaseErr ** 2),
+  );
   const total = w.reduce((a, b) => a + b, 0);
   if (total === 0) return 0;
   let squareOfSum = 0;
@@ -69,8 +101,8 @@ export function expectedInformation(visits: Pick<CsvVisit, 'phase' | 'phaseErr' 
  * rounding can move it: sum over every value of |d(K/sigma_K)/dx| times half its last unit
  * (derivatives by central differences of that step).
  */
-export function kOverSigmaKFromCsv(kMps: number, visits: CsvVisit[]): { value: number; roundingBound: number } {
-  const ratio = (vs: CsvVisit[]) => kMps * Math.sqrt(expectedInformation(vs));
+export function kOverSigmaKFromCsv(kMps: number, visits: CsvVisit[], signal?: (phase: number) => number): { value: number; roundingBound: number } {
+  const ratio = (vs: CsvVisit[]) => kMps * Math.sqrt(expectedInformation(vs, signal));
   const value = ratio(visits);
   let roundingBound = 0;
   visits.forEach((_, i) => {

@@ -1,6 +1,7 @@
 import type { TopLevelSpec } from 'vega-lite';
 import type { PlannedVisit, Plan, TargetSummary } from '../../model.js';
-import { EPHEMERIS_STATS, ephemerisInformation, signalMoments, updateEphemerisStats } from '../../schedule/objective-ephemeris.js';
+import { planetSignalShape, type SignalShape } from '../../orbit/signal-shape.js';
+import { EPHEMERIS_STATS, ephemerisInformation, updateEphemerisStats } from '../../schedule/objective-ephemeris.js';
 import { fmt } from '../table.js';
 import type { ChartFigure } from './figure.js';
 import { MUTED, OKABE_ITO } from './palette.js';
@@ -15,12 +16,13 @@ export interface KGrowthPoint {
 /**
  * K/σ_K after each visit in time order, recomputed from the visits: K √E[I] with E[I] the expected
  * least-squares information on K with a free offset, over each visit's Gaussian phase error
- * (the scheduler's objective, src/schedule/objective-ephemeris.ts, which cites its sources).
+ * (the scheduler's objective, src/schedule/objective-ephemeris.ts, which cites its sources), with
+ * the signal shape of the planet's orbit (src/orbit/signal-shape.ts; eccentric orbits too).
  */
-export function kGrowthSeries(kMps: number, visits: PlannedVisit[]): KGrowthPoint[] {
+export function kGrowthSeries(kMps: number, visits: PlannedVisit[], shape: SignalShape): KGrowthPoint[] {
   const stats = new Float64Array(EPHEMERIS_STATS);
   return visits.map((v, i) => {
-    const { m, q } = signalMoments(v.phase ?? 0, v.phaseErr ?? 0);
+    const { m, q } = shape.moments(v.phase ?? 0, v.phaseErr ?? 0);
     updateEphemerisStats(stats, 0, 1 / (v.sigmaEffMps * v.sigmaEffMps), m, q, 1);
     return { visit: i + 1, date: v.localDate, kOverSigmaK: kMps * Math.sqrt(ephemerisInformation(stats, 0)) };
   });
@@ -29,7 +31,8 @@ export function kGrowthSeries(kMps: number, visits: PlannedVisit[]): KGrowthPoin
 /** K/σ_K growing with each planned visit of one ephemeris target, against its goal. */
 export function kGrowthFigure(plan: Plan, summary: TargetSummary & { kMps: number }): ChartFigure {
   const goal = summary.goal ?? plan.campaign.goals.significance;
-  const series = kGrowthSeries(summary.kMps, visitsOf(plan, summary.targetId));
+  const target = plan.campaign.targets.find((t) => t.id === summary.targetId);
+  const series = kGrowthSeries(summary.kMps, visitsOf(plan, summary.targetId), planetSignalShape(target?.planet));
   const yMax = Math.max(goal, ...series.map((p) => p.kOverSigmaK)) * 1.15;
   const x = { field: 'visit', type: 'quantitative' as const, title: 'Visits so far', scale: { domain: [0, Math.max(series.length, 1) + 0.5], nice: false }, axis: { tickMinStep: 1, format: 'd' } };
   const spec = {

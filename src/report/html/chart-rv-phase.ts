@@ -1,5 +1,6 @@
 import type { TopLevelSpec } from 'vega-lite';
 import type { Plan, TargetSummary } from '../../model.js';
+import { planetSignalShape } from '../../orbit/signal-shape.js';
 import { fmt } from '../table.js';
 import type { ChartFigure } from './figure.js';
 import { OKABE_ITO, INK } from './palette.js';
@@ -8,24 +9,20 @@ import { visitsOf } from './target-visits.js';
 const CURVE_POINTS = 200;
 
 /**
- * The star's expected RV for a circular orbit with mid-transit at phase 0: v − γ = −K sin 2πφ
- * (REFERENCES.md "Keplerian RV"; common practice: the RV falls after transit, quadratures at 0.25 and 0.75).
- */
-export function modelRvMps(kMps: number, phase: number): number {
-  return -kMps * Math.sin(2 * Math.PI * phase);
-}
-
-/**
  * The RV curve folded on phase for one target with an ephemeris: the model curve, each planned
  * visit at its predicted phase on the curve, with ±σ_eff (vertical) and ±σ_φ (horizontal) bars.
  */
 export function rvPhaseFigure(plan: Plan, summary: TargetSummary & { kMps: number }): ChartFigure {
   const k = summary.kMps;
-  const curve = Array.from({ length: CURVE_POINTS + 1 }, (_, i) => ({ phase: i / CURVE_POINTS, rv: modelRvMps(k, i / CURVE_POINTS) }));
+  // v − γ = K s(φ): −K sin 2πφ for a circular orbit, the Keplerian curve for an eccentric one
+  // (REFERENCES.md "Keplerian RV"; src/orbit/signal-shape.ts).
+  const shape = planetSignalShape(plan.campaign.targets.find((t) => t.id === summary.targetId)?.planet);
+  const rvAt = (phase: number) => k * shape.at(phase);
+  const curve = Array.from({ length: CURVE_POINTS + 1 }, (_, i) => ({ phase: i / CURVE_POINTS, rv: rvAt(i / CURVE_POINTS) }));
   const visits = visitsOf(plan, summary.targetId).map((v, i) => {
     const phase = v.phase ?? 0;
     const phaseErr = v.phaseErr ?? 0;
-    const rv = modelRvMps(k, phase);
+    const rv = rvAt(phase);
     return {
       n: i + 1, date: v.localDate, phase, rv,
       rvLo: rv - v.sigmaEffMps, rvHi: rv + v.sigmaEffMps,
@@ -64,7 +61,7 @@ export function rvPhaseFigure(plan: Plan, summary: TargetSummary & { kMps: numbe
     kind: 'rv-phase',
     title: `${summary.targetId}: expected RV curve and planned phases`,
     caption:
-      `Model curve for K = ${fmt(k, 2)} m/s on a circular orbit (line). Each of the ${visits.length} dots is a planned visit at its ` +
+      `Model curve for K = ${fmt(k, 2)} m/s on ${shape.ecc > 0 ? `an orbit with e = ${fmt(shape.ecc, 2)}, ω = ${fmt(shape.omegaDeg, 0)}°` : 'a circular orbit'} (line). Each of the ${visits.length} dots is a planned visit at its ` +
       'predicted phase; vertical bars are the per-visit RV uncertainty (±σ with jitter), horizontal bars the 1σ phase uncertainty of the ephemeris.',
     spec,
     columns: [
