@@ -62,6 +62,8 @@ export interface Ephemeris {
   /** Mid-transit (or conjunction) time, BJD_TDB. */
   tcBjdTdb: number;
   tcErrDays: number;
+  /** Transit duration (hours); when given, visits avoid the transit (Rossiter–McLaughlin effect). */
+  transitDurationHours?: number;
 }
 
 export interface PlanetSpec {

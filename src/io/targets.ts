@@ -45,6 +45,7 @@ const rowSchema = z.strictObject({
   perioderrdays: numberField('period uncertainty in days, 0 or more (below the period)', 0, 1e5),
   tcbjdtdb: numberField('mid-transit time as a full BJD_TDB, 2400000 to 2600000', 2.4e6, 2.6e6),
   tcerrdays: numberField('uncertainty of Tc in days, 0 to 100', 0, 100),
+  transitdurationhours: numberField('transit duration in hours, more than 0 and at most 48', 0, 48, { exclusiveMin: true }),
   planetmassearth: numberField('planet mass in Earth masses, more than 0 and at most 30000', 0, 3e4, { exclusiveMin: true }),
   planetkmps: numberField('semi-amplitude K in m/s, more than 0 and at most 10000', 0, 1e4, { exclusiveMin: true }),
   ecc: z.preprocess(
@@ -62,7 +63,7 @@ const COLUMNS = Object.keys(rowSchema.shape);
 const CANONICAL: Record<string, string> = {
   pmramasyr: 'pmRaMasYr', pmdecmasyr: 'pmDecMasYr', epochyear: 'epochYear', teffk: 'teffK', masssun: 'massSun',
   vsinikms: 'vsiniKms', jittermps: 'jitterMps', goalsignificance: 'goalSignificance', perioddays: 'periodDays', perioderrdays: 'periodErrDays',
-  tcbjdtdb: 'tcBjdTdb', tcerrdays: 'tcErrDays', planetmassearth: 'planetMassEarth', planetkmps: 'planetKMps',
+  tcbjdtdb: 'tcBjdTdb', tcerrdays: 'tcErrDays', transitdurationhours: 'transitDurationHours', planetmassearth: 'planetMassEarth', planetkmps: 'planetKMps',
   omegadeg: 'omegaDeg', searchperiodmindays: 'searchPeriodMinDays', searchperiodmaxdays: 'searchPeriodMaxDays',
   searchmassearth: 'searchMassEarth',
 };
@@ -95,7 +96,7 @@ function buildTarget(row: Row, place: Place): Target {
   };
 
   const hasPeriod = row.perioddays !== undefined;
-  for (const c of ['tcbjdtdb', 'planetmassearth', 'planetkmps', 'perioderrdays', 'tcerrdays'] as const) {
+  for (const c of ['tcbjdtdb', 'planetmassearth', 'planetkmps', 'perioderrdays', 'tcerrdays', 'transitdurationhours'] as const) {
     if (!hasPeriod && row[c] !== undefined) fail(place, c, 'needs periodDays in the same row');
   }
   if (hasPeriod && row.tcbjdtdb === undefined) fail(place, 'tcbjdtdb', 'required with periodDays: mid-transit time as a full BJD_TDB');
@@ -139,6 +140,7 @@ function buildTarget(row: Row, place: Place): Target {
       tcBjdTdb: row.tcbjdtdb!,
       tcErrDays: withDefault(row.tcerrdays, 'tcErrDays', 0),
     };
+    if (row.transitdurationhours !== undefined) target.ephemeris.transitDurationHours = row.transitdurationhours;
     if (row.planetmassearth !== undefined || row.planetkmps !== undefined) {
       target.planet = {
         massEarth: row.planetmassearth,

@@ -38,3 +38,20 @@ export function phaseAt(eph: Ephemeris, tBjd: number): number {
 export function phaseErrCycles(eph: Ephemeris, tBjd: number): number {
   return Math.hypot(eph.tcErrDays, cyclesSinceTc(eph, tBjd) * eph.periodErrDays) / eph.periodDays;
 }
+
+/**
+ * Whether [startBjd, endBjd] overlaps a predicted transit, widened on each side by the 1-sigma
+ * error of that transit's time. RVs taken in transit are distorted by the Rossiter–McLaughlin
+ * effect (Rossiter 1924; McLaughlin 1924), so RV programmes avoid them (common practice).
+ * False when the ephemeris has no transit duration.
+ */
+export function overlapsTransit(eph: Ephemeris, startBjd: number, endBjd: number): boolean {
+  if (eph.transitDurationHours === undefined) return false;
+  const halfDays = eph.transitDurationHours / 48;
+  for (const epoch of new Set([nearestEpoch(eph, startBjd), nearestEpoch(eph, endBjd)])) {
+    const tc = tcAtEpochBjd(eph, epoch);
+    const margin = halfDays + tcErrAtEpochDays(eph, epoch);
+    if (startBjd < tc + margin && endBjd > tc - margin) return true;
+  }
+  return false;
+}

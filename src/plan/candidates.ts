@@ -3,7 +3,7 @@
 import { DateTime } from 'luxon';
 import { bjdTdb } from '../astro/bjd.js';
 import type { Campaign, Night, Target, Window } from '../model.js';
-import { phaseAt, phaseErrCycles } from '../orbit/ephemeris.js';
+import { overlapsTransit, phaseAt, phaseErrCycles } from '../orbit/ephemeris.js';
 import { semiAmplitudeMps } from '../orbit/semi-amplitude.js';
 import { signalShape, type SignalShape } from '../orbit/signal-shape.js';
 import { targetKMps } from '../orbit/target-k.js';
@@ -77,7 +77,8 @@ export function scheduleNights(campaign: Campaign, nights: Night[]): ScheduleNig
 }
 
 /**
- * Visit blocks every SLOT_STEP_MIN inside each window: acquisition, exposure, readout, the whole
+ * Visit blocks every SLOT_STEP_MIN inside each window (none whose exposure overlaps a predicted
+ * transit when the target gives its duration): acquisition, exposure, readout, the whole
  * block inside the window. Airmass, Moon distance, precision and phase at mid-exposure.
  */
 export function candidateSlots(campaign: Campaign, nights: Night[], windows: Window[], setups: TargetSetup[]): SlotDetail[] {
@@ -107,9 +108,11 @@ export function candidateSlots(campaign: Campaign, nights: Night[], windows: Win
       const firstMs = Math.ceil(w.start.getTime() / 60_000) * 60_000;
       for (let startMs = firstMs; startMs + durationMs <= w.end.getTime(); startMs += stepMs) {
         const midMs = startMs + leadMs + exposureMs / 2;
+        const midBjdTdb = bjdTdb(new Date(midMs), target.raDeg, target.decDeg);
+        const halfExposureDays = setup.exposure.exposureSec / 2 / 86_400;
+        if (target.ephemeris && overlapsTransit(target.ephemeris, midBjdTdb - halfExposureDays, midBjdTdb + halfExposureDays)) continue;
         const airmass = airmassAt(position, midMs);
         const budget = visitPrecision(instrument, target, setup.exposure.exposureSec, airmass);
-        const midBjdTdb = bjdTdb(new Date(midMs), target.raDeg, target.decDeg);
         const slot: CandidateSlot = {
           slotId: `${target.id}|${localDate}|${startMs}`,
           targetId: target.id,

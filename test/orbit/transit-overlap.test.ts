@@ -1,0 +1,43 @@
+import { describe, expect, it } from 'vitest';
+import { overlapsTransit } from '../../src/orbit/ephemeris.js';
+import type { Ephemeris } from '../../src/model.js';
+import { createRng } from '../../src/rv/random.js';
+
+/** Slow reference: every epoch from well before to well after the interval, each widened by its own 1-sigma error. */
+function overlapsByScan(eph: Ephemeris, startBjd: number, endBjd: number): boolean {
+  const first = Math.floor((startBjd - eph.tcBjdTdb) / eph.periodDays) - 3;
+  const last = Math.ceil((endBjd - eph.tcBjdTdb) / eph.periodDays) + 3;
+  for (let n = first; n <= last; n++) {
+    const tc = eph.tcBjdTdb + n * eph.periodDays;
+    const margin = eph.transitDurationHours! / 48 + Math.sqrt(eph.tcErrDays ** 2 + (n * eph.periodErrDays) ** 2);
+    if (startBjd < tc + margin && endBjd > tc - margin) return true;
+  }
+  return false;
+}
+
+describe('visits kept out of transits', () => {
+  it('agrees with a scan over every epoch on 3,000 random intervals (property)', () => {
+    const rng = createRng(11);
+    for (let i = 0; i < 3000; i++) {
+      const eph: Ephemeris = {
+        periodDays: 0.6 + 20 * rng.uniform(),
+        periodErrDays: 0.002 * rng.uniform(),
+        tcBjdTdb: 2461300 + 10 * rng.uniform(),
+        tcErrDays: 0.01 * rng.uniform(),
+        transitDurationHours: 0.5 + 5 * rng.uniform(),
+      };
+      const start = 2461400 + 100 * rng.uniform();
+      const end = start + (2 * rng.uniform()) / 24;
+      expect(overlapsTransit(eph, start, end)).toBe(overlapsByScan(eph, start, end));
+    }
+  });
+
+  it('is false without a transit duration, and true for an exposure across mid-transit', () => {
+    const eph: Ephemeris = { periodDays: 3, periodErrDays: 0, tcBjdTdb: 2461400, tcErrDays: 0 };
+    expect(overlapsTransit(eph, 2461403 - 0.01, 2461403 + 0.01)).toBe(false);
+    const withDuration = { ...eph, transitDurationHours: 2 };
+    expect(overlapsTransit(withDuration, 2461403 - 0.01, 2461403 + 0.01)).toBe(true);
+    // One hour after mid-transit is the end of a 2-hour transit: an exposure starting 1.2 h after is clear.
+    expect(overlapsTransit(withDuration, 2461403 + 1.2 / 24, 2461403 + 1.5 / 24)).toBe(false);
+  });
+});
