@@ -45,3 +45,12 @@ describe('per-target goal', () => {
     expect(() => parseTargets('id,ra,dec,vmag,teffK,goalSignificance\nA,10:00:00,-10:00:00,9,5000,0\n', 't.csv')).toThrow(/goalSignificance = "0"/);
   });
 });
+
+describe('transit duration', () => {
+  it('goes with an ephemeris', () => {
+    const head = 'id,ra,dec,vmag,teffK,periodDays,tcBjdTdb,transitDurationHours';
+    const [t] = parseTargets(`${head}\nA,10:00:00,-10:00:00,9,5000,3.2,2461400.5,2.5\n`, 't.csv');
+    expect(t!.ephemeris!.transitDurationHours).toBe(2.5);
+    expect(() => parseTargets(`${head}\nA,10:00:00,-10:00:00,9,5000,,,2.5\n`, 't.csv')).toThrow(/transitDurationHours = "2.5": needs periodDays/);
+  });
+});
