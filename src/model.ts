@@ -157,6 +157,7 @@ export interface Night {
   moon: {
     /** Illuminated fraction at the middle of the night, 0..1. */
     illumination: number;
+    /** Moonrise and moonset between sunset and sunrise; null when the Moon does not rise or set then. */
     rise: Date | null;
     set: Date | null;
     upDuringDark: boolean;

@@ -42,17 +42,34 @@ function level(observer: Observer, altitudeDeg: number, fromMs: number, toMs: nu
   return { dusk, dawn, span, why };
 }
 
-function firstCrossing(spans: BelowSpan[], kind: 'rise' | 'set'): Date | null {
-  const times = spans.flatMap((s) => (kind === 'rise' ? (s.endIsCrossing ? [s.endMs] : []) : s.startIsCrossing ? [s.startMs] : []));
+/** The first rise or set of a body inside [fromMs, toMs], from its spans below the horizon. */
+function firstCrossing(spans: BelowSpan[], kind: 'rise' | 'set', fromMs: number, toMs: number): Date | null {
+  const times = spans
+    .flatMap((s) => (kind === 'rise' ? (s.endIsCrossing ? [s.endMs] : []) : s.startIsCrossing ? [s.startMs] : []))
+    .filter((t) => t >= fromMs && t <= toMs);
   return times.length ? new Date(Math.min(...times)) : null;
 }
 
-/** The Moon's rise, set and illumination for one night, and whether it is up in [darkStart, darkEnd]. */
-function moonOfNight(observer: Observer, fromMs: number, toMs: number, dark: { startMs: number; endMs: number } | null): Night['moon'] {
-  const spans = belowSpans(Body.Moon, observer, MOON_UP_ALTITUDE_DEG, fromMs, toMs);
-  const midMs = dark ? (dark.startMs + dark.endMs) / 2 : (fromMs + toMs) / 2;
+/**
+ * The Moon's illumination for one night, whether it is up in [darkStart, darkEnd], and its rise
+ * and set between sunset and sunrise (the events an observer plans around; null when the Moon
+ * does not rise or set then). Without a sunset or sunrise the local noons bound the search.
+ */
+function moonOfNight(
+  observer: Observer,
+  range: { fromMs: number; toMs: number },
+  night: { startMs: number; endMs: number },
+  dark: { startMs: number; endMs: number } | null,
+): Night['moon'] {
+  const spans = belowSpans(Body.Moon, observer, MOON_UP_ALTITUDE_DEG, range.fromMs, range.toMs);
+  const midMs = dark ? (dark.startMs + dark.endMs) / 2 : (range.fromMs + range.toMs) / 2;
   const upDuringDark = dark !== null && !spans.some((s) => s.startMs <= dark.startMs && s.endMs >= dark.endMs);
-  return { illumination: moonIlluminatedFraction(new Date(midMs)), rise: firstCrossing(spans, 'rise'), set: firstCrossing(spans, 'set'), upDuringDark };
+  return {
+    illumination: moonIlluminatedFraction(new Date(midMs)),
+    rise: firstCrossing(spans, 'rise', night.startMs, night.endMs),
+    set: firstCrossing(spans, 'set', night.startMs, night.endMs),
+    upDuringDark,
+  };
 }
 
 /** One Night for one local date (the evening's date at the site). */
@@ -76,7 +93,7 @@ export function computeNight(site: Site, localDate: string, twilight: TwilightLe
     darkStart: dark ? new Date(dark.startMs) : null,
     darkEnd: dark ? new Date(dark.endMs) : null,
     darkHours: dark ? (dark.endMs - dark.startMs) / 3_600_000 : 0,
-    moon: moonOfNight(observer, fromMs, toMs, dark),
+    moon: moonOfNight(observer, { fromMs, toMs }, { startMs: sun.dusk?.getTime() ?? fromMs, endMs: sun.dawn?.getTime() ?? toMs }, dark),
   };
   if (notes.length) night.note = notes.join('; ');
   return night;
