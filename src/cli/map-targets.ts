@@ -25,6 +25,8 @@ export interface MapSettings {
   trialsPerCell: number;
   fapThreshold: number;
   seed: number;
+  /** Blind-search injections: e uniform in [0, eccMax] (and ω uniform); 0 or omitted: circular. */
+  eccMax?: number;
 }
 
 interface JobBase {
@@ -67,6 +69,7 @@ function jobOf(plan: Plan, target: Target, settings: MapSettings): MapJob | unde
       timesBjd, sigmaMps, periodsDays, massesEarth, starMassSun: target.massSun,
       trialsPerCell: settings.trialsPerCell, seed: settings.seed, fapThreshold: settings.fapThreshold,
     };
+    if (settings.eccMax) input.eccentricity = { distribution: 'uniform', max: settings.eccMax };
     return { ...base(target, visits), kind: 'search', searchMassEarth: massEarth, input };
   }
   const eph = target.ephemeris;

@@ -26,6 +26,7 @@ interface MapFlags {
   grid?: { periods: number; masses: number };
   trials: number;
   fap: number;
+  eccMax?: number;
   threads?: number;
   seed?: number;
   out?: string;
@@ -75,7 +76,7 @@ async function runJob(job: MapJob, settings: MapSettings, threads: number | unde
     const map = await injectionRecoveryParallel(job.input, { threads, onProgress: (done, total) => progress.update(job.targetId, done, total) });
     progress.end();
     const method =
-      `Injection–recovery: ${settings.trialsPerCell} trials a cell at the ${job.visits} planned visits (σ_eff with jitter), random phase, circular orbits; ` +
+      `Injection–recovery: ${settings.trialsPerCell} trials a cell at the ${job.visits} planned visits (σ_eff with jitter), random phase, ${settings.eccMax ? `e uniform in [0, ${settings.eccMax}]` : 'circular orbits'}; ` +
       `detected when the highest GLS peak lies within 1/T of the injected frequency with Baluev FAP < ${settings.fapThreshold}.`;
     const chart: DetectionMapData = { targetId: job.targetId, method, periodsDays, massesEarth, panels: [{ label: 'simulated', detection: map.detection }], markMassEarth: job.searchMassEarth };
     return { job, chart, levels: levelRows(periodsDays, massesEarth, map.detection) };
@@ -161,7 +162,7 @@ async function runMap(opts: MapFlags): Promise<void> {
   const plan = planFromJson(readStructured(opts.plan, 'plan file'), opts.plan);
   const settings: MapSettings = {
     periods: opts.periods, masses: opts.masses, grid: opts.grid ?? DEFAULT_GRID,
-    trialsPerCell: opts.trials, fapThreshold: opts.fap, seed: opts.seed ?? plan.campaign.seed,
+    trialsPerCell: opts.trials, fapThreshold: opts.fap, seed: opts.seed ?? plan.campaign.seed, eccMax: opts.eccMax,
   };
   const { jobs, skipped } = mapJobs(plan, settings, opts.target);
   const progress = stderrProgress();
@@ -188,6 +189,7 @@ async function runMap(opts: MapFlags): Promise<void> {
     seed: settings.seed,
     trialsPerCell: settings.trialsPerCell,
     fapThreshold: settings.fapThreshold,
+    eccMax: settings.eccMax ?? 0,
     skipped,
     written,
     targets: results.map((r) => ({
@@ -225,6 +227,7 @@ export function registerMap(program: Command): Command {
     .option('--grid <NxM>', `N periods by M masses, log-spaced (default: ${DEFAULT_GRID.periods}x${DEFAULT_GRID.masses})`, gridFlag)
     .option('--trials <n>', 'simulated trials per cell', numberFlag('--trials', 'a whole number from 10 to 100000', 10, 100000, { integer: true }), 200)
     .option('--fap <p>', 'false-alarm probability a blind detection must beat', numberFlag('--fap', 'a probability above 0 and at most 0.5', 0, 0.5, { exclusiveMin: true }), DEFAULT_FAP_THRESHOLD)
+    .option('--ecc-max <e>', 'blind searches: inject eccentric orbits, e uniform in [0, e] with random ω (default: circular)', numberFlag('--ecc-max', 'an eccentricity from 0 to 0.9', 0, 0.9))
     .option('--threads <n>', 'worker threads (default: available cores, at most one per cell)', numberFlag('--threads', 'a whole number from 1 to 256', 1, 256, { integer: true }))
     .option('--seed <n>', "random seed (default: the campaign's seed)", numberFlag('--seed', 'a whole number, 0 or more', 0, Number.MAX_SAFE_INTEGER, { integer: true }))
     .option('--out <dir>', "folder for the SVG maps and map-<target>.json (default: the plan's folder); a report.html there is re-rendered with the blind-search maps")

@@ -80,6 +80,15 @@ describe('crest map', () => {
     expect(lines[1]).toMatch(/^Teyu-3,ephemeris,analytic,/);
   });
 
+  it('injects eccentric orbits with --ecc-max (0 is the circular map, a wider range changes it)', async () => {
+    const run = (extra: string[], out: string) => runCliAsync(['map', '--plan', planFile, '--target', 'Alba', ...small, '--json', '--out', path.join(dir, out), ...extra]);
+    const [circular, zero, eccentric] = await Promise.all([run([], 'c'), run(['--ecc-max', '0'], 'z'), run(['--ecc-max', '0.6'], 'e')]);
+    const [c, z, e] = [circular, zero, eccentric].map((r) => JSON.parse(r.stdout));
+    expect(z.targets[0].simulated).toEqual(c.targets[0].simulated);
+    expect(e.eccMax).toBe(0.6);
+    expect(e.targets[0].simulated).not.toEqual(c.targets[0].simulated);
+  });
+
   it('answers bad flags with one line and exit 2', async () => {
     const cases = [
       ['--grid', '4'],
@@ -89,6 +98,7 @@ describe('crest map', () => {
       ['--fap', '1'],
       ['--threads', '0'],
       ['--target', 'Nowhere'],
+      ['--ecc-max', '0.95'],
     ];
     const results = await Promise.all(cases.map((flags) => runCliAsync(['map', '--plan', planFile, ...flags])));
     for (const r of results) {
