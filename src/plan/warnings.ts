@@ -1,10 +1,22 @@
 // Warnings an observer must see: targets never observable, goals out of reach, ephemerides that
 // will be too poor to place visits at quadrature, exposures the instrument cannot make.
-import type { Plan, Window } from '../model.js';
+import type { Plan, TargetSummary, Window } from '../model.js';
+import { visitsNeeded } from '../rv/detect.js';
 import type { TargetSetup } from './candidates.js';
 
 /** Phase error (cycles) above which quadrature timing is lost: ±0.1 cycle blurs sin(2πφ) by 18% (exp(−2π²σ²)). */
 export const POOR_PHASE_ERR_CYCLES = 0.1;
+
+/**
+ * For a planet with an ephemeris: how many visits at ideal quadratures, at the target's typical
+ * σ_eff (airmass 1.2), would reach the goal: N = (n σ / K)² (REFERENCES.md, "Visits needed").
+ * More nights, or several visits a night (a shorter minSpacingHours), are the usual ways there.
+ */
+function visitsHint(summary: TargetSummary, setup: TargetSetup): string {
+  if (summary.kind !== 'ephemeris' || summary.kMps === undefined || summary.goal === undefined) return '';
+  const n = visitsNeeded(summary.kMps, setup.exposure.budget.effMps, summary.goal, 'quadrature');
+  return `; about ${n} visits at quadratures would reach it`;
+}
 
 /** Fills each target's warnings in place and returns the plan-wide ones. */
 export function planWarnings(plan: Plan, setups: TargetSetup[], windows: Window[]): string[] {
@@ -17,7 +29,7 @@ export function planWarnings(plan: Plan, setups: TargetSetup[], windows: Window[
     if (neverObservable) w.push('never observable in the window under the constraints (altitude, airmass, Moon, dark time)');
     if (setup.exposure.warning) w.push(setup.exposure.warning);
     if (!neverObservable && summary.goal !== undefined && summary.kOverSigmaK !== undefined && summary.kOverSigmaK < summary.goal) {
-      w.push(`goal K/sigma_K = ${summary.goal} not reached: ${summary.kOverSigmaK.toFixed(1)} with ${summary.visits} visits`);
+      w.push(`goal K/sigma_K = ${summary.goal} not reached: ${summary.kOverSigmaK.toFixed(1)} with ${summary.visits} visits${visitsHint(summary, setup)}`);
     }
     if (summary.phaseErrAtEnd !== undefined && summary.phaseErrAtEnd > POOR_PHASE_ERR_CYCLES) {
       w.push(`ephemeris too poor by the window's end: phase error ±${summary.phaseErrAtEnd.toFixed(2)} cycles; refine P and Tc first`);
