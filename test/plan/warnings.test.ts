@@ -4,6 +4,8 @@
 import { DateTime } from 'luxon';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { readCampaign } from '../../src/io/campaign.js';
+import { DEMO_CAMPAIGN } from '../../src/io/paths.js';
+import { visitPrecision } from '../../src/rv/precision.js';
 import type { Campaign, Plan } from '../../src/model.js';
 import { buildPlan } from '../../src/plan/build-plan.js';
 import { referenceWindows } from '../../src/sky/reference-sampler.js';
@@ -55,5 +57,21 @@ describe('ephemeris too poor', () => {
   it('a well-known ephemeris: phase error far below 0.1 cycle, no warning', () => {
     expect(phaseErrAtEnd('Tarsa-4')).toBeLessThan(0.01);
     expect(warningsOf('Tarsa-4').some((w) => w.includes('ephemeris too poor'))).toBe(false);
+  });
+});
+
+describe('goal not reached on the demo', () => {
+  it('names the visits at quadratures that would reach it: N = ceil((n sigma / K)^2) (REFERENCES.md, "Visits needed")', () => {
+    const demo = readCampaign(DEMO_CAMPAIGN);
+    const demoPlan = buildPlan(demo, { weatherTrials: 10 });
+    const short = demoPlan.targets.filter((t) => t.kind === 'ephemeris' && t.kOverSigmaK! < t.goal!);
+    expect(short.length).toBeGreaterThan(0);
+    for (const t of short) {
+      const target = demo.targets.find((x) => x.id === t.targetId)!;
+      const exposureSec = demoPlan.visits.find((v) => v.targetId === t.targetId)!.exposureSec;
+      const sigma = visitPrecision(demo.instrument, target, exposureSec, 1.2).effMps;
+      const n = Math.ceil((t.goal! * sigma / t.kMps!) ** 2);
+      expect(t.warnings.join(' ')).toContain(`about ${n} visits at quadratures`);
+    }
   });
 });
