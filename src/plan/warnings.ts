@@ -36,6 +36,9 @@ export function planWarnings(plan: Plan, setups: TargetSetup[], windows: Window[
     }
   }
   const warnings: string[] = [];
+  if (plan.nights.every((n) => !n.darkStart)) {
+    warnings.push(`no night of the window has a dark span at ${plan.campaign.constraints.twilight} twilight (the Sun never gets low enough)`);
+  }
   if (plan.visits.length === 0) warnings.push('no visit could be planned: check the window, the constraints and the targets');
   return warnings;
 }

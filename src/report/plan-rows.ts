@@ -40,6 +40,7 @@ export function nightHeading(plan: Plan, localDate: string): string {
   const night = plan.nights.find((n) => n.localDate === localDate);
   const weekday = DateTime.fromISO(localDate).toFormat('ccc');
   if (!night) return `${localDate} ${weekday}`;
+  if (!night.darkStart || !night.darkEnd) return `${localDate} ${weekday}  no dark span${night.note ? ` (${night.note})` : ''}`;
   const moon = `Moon ${Math.round(night.moon.illumination * 100)}%${night.moon.upDuringDark ? ' (up)' : ' (down)'}`;
   const plannedHours = plan.visits.filter((v) => v.localDate === localDate).reduce((sum, v) => sum + v.durationSec, 0) / 3600;
   const dark = `dark ${clock(night.darkStart, zone)}-${clock(night.darkEnd, zone)} local (${fmt(night.darkHours, 1)} h, ${fmt(plannedHours, 1)} h planned)`;

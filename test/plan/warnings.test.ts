@@ -1,6 +1,9 @@
 // Plan warnings on an invented campaign at a southern site (test/fixtures/campaigns/warnings): a
 // star at +80 deg never rises there, and a period known only to 0.02 d loses the phase by the
 // window's end; a well-known ephemeris gets neither warning.
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
 import { DateTime } from 'luxon';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { readCampaign } from '../../src/io/campaign.js';
@@ -73,5 +76,20 @@ describe('goal not reached on the demo', () => {
       const n = Math.ceil((t.goal! * sigma / t.kMps!) ** 2);
       expect(t.warnings.join(' ')).toContain(`about ${n} visits at quadratures`);
     }
+  });
+});
+
+describe('a window without darkness', () => {
+  it('78 deg N in June: no dark span on any night, no visit, and both plan-wide warnings', () => {
+    const dir = mkdtempSync(path.join(tmpdir(), 'crest-arctic-'));
+    writeFileSync(path.join(dir, 'targets.csv'), 'id,ra,dec,vmag,teffK,periodDays,tcBjdTdb,planetMassEarth\nNorda-1,18:00:00,+60:00:00,9,5200,4.2,2461500.3,20\n');
+    writeFileSync(
+      path.join(dir, 'campaign.yaml'),
+      `name: Arctic\nsite: ${path.resolve('test/fixtures/sites/high-arctic.json')}\ninstrument: stable-2m\ntargets: targets.csv\nwindow: { start: 2027-06-15, end: 2027-06-18 }\ntime: { mode: choose-nights, nights: 2 }\n`,
+    );
+    const arctic = buildPlan(readCampaign(path.join(dir, 'campaign.yaml')), { weatherTrials: 10 });
+    expect(arctic.visits).toEqual([]);
+    expect(arctic.warnings.some((w) => w.startsWith('no night of the window has a dark span'))).toBe(true);
+    expect(arctic.warnings.some((w) => w.startsWith('no visit could be planned'))).toBe(true);
   });
 });
