@@ -1,0 +1,58 @@
+// Crest as a library: the public API. Everything here is a pure function of its arguments except
+// the readers (io) and the writers, which touch files only where their names say so.
+
+export type * from './model.js';
+export { InputError } from './errors.js';
+
+// Input files
+export { readCampaign } from './io/campaign.js';
+export { readSite, parseSite } from './io/site.js';
+export { readInstrument, parseInstrument } from './io/instrument.js';
+export { readTargets, parseTargets } from './io/targets.js';
+export { readRvSeries, parseRvSeries } from './io/rv-series.js';
+export { readBundledSites } from './io/site-list.js';
+
+// Orbits
+export { semiAmplitudeMps } from './orbit/semi-amplitude.js';
+export { planetMassFromKEarth, planetMassFromKApproxEarth } from './orbit/minimum-mass.js';
+export { semiMajorAxisAu, periodDaysFromAu } from './orbit/kepler-third-law.js';
+export { summarizeOrbit } from './orbit/summary.js';
+export { eccentricAnomalyRad } from './orbit/kepler-equation.js';
+export { radialVelocityMps } from './orbit/rv-curve.js';
+export { periastronFromConjunctionBjd } from './orbit/periastron-time.js';
+export { phaseAt, phaseErrCycles, overlapsTransit } from './orbit/ephemeris.js';
+export { signalShape } from './orbit/signal-shape.js';
+
+// Sky
+export { computeNights } from './sky/nights.js';
+export { computeWindows } from './sky/visibility.js';
+export { siteClock, preparePosition, altitudeDeg, airmassAt } from './sky/target-position.js';
+export { kastenYoungAirmass } from './astro/airmass.js';
+export { bjdTdb } from './astro/bjd.js';
+
+// Precision and detectability
+export { visitPrecision } from './rv/precision.js';
+export { chooseExposureSec, visitCostSec } from './rv/exposure.js';
+export { sigmaKMps, visitsNeeded, detectionProbabilityKnownPhase, massLimitTable } from './rv/detect.js';
+export { targetDetectability } from './rv/target-detect.js';
+
+// Blind search
+export { glsPeriodogram } from './rv/periodogram.js';
+export { searchPeriodogram } from './rv/periodogram-search.js';
+export { frequencyGrid } from './rv/frequency-grid.js';
+export { fapContext, falseAlarmProbability } from './rv/fap.js';
+export { injectionRecovery } from './rv/injection.js';
+export { createRng } from './rv/random.js';
+
+// Scheduling and plans
+export { optimiseSchedule } from './schedule/optimise.js';
+export { simulateWeather } from './schedule/weather.js';
+export { buildPlan } from './plan/build-plan.js';
+
+// Output
+export { renderPlanText } from './report/plan-terminal.js';
+export { renderPlanMarkdown } from './report/plan-markdown.js';
+export { renderPlanCsv } from './report/plan-csv.js';
+export { renderPlanJson } from './report/plan-json.js';
+export { renderPlanIcs } from './report/plan-ics.js';
+export { renderReportHtml } from './report/html/report-html.js';
