@@ -1,5 +1,7 @@
 import path from 'node:path';
 import type { Command } from 'commander';
+import { inputError } from '../errors.js';
+import type { Campaign } from '../model.js';
 import { readCampaign } from '../io/campaign.js';
 import { DEMO_CAMPAIGN } from '../io/paths.js';
 import { checkOutputs, slug, writeOutputs } from '../io/write-outputs.js';
@@ -17,8 +19,18 @@ const PLAN_FILES = ['plan.md', 'plan.csv', 'plan.json', 'plan.ics', 'report.html
 
 interface PlanFlags {
   out?: string;
+  nights?: number;
   json?: boolean;
   seed?: number;
+}
+
+/** The campaign with its number of nights to choose replaced; only choose-nights campaigns choose nights. */
+function withNights(campaign: Campaign, nights: number | undefined): Campaign {
+  if (nights === undefined) return campaign;
+  if (campaign.time.mode !== 'choose-nights') {
+    throw inputError({ file: 'command line', field: '--nights', value: String(nights), allowed: `only for campaigns with time.mode choose-nights (${campaign.file} has ${campaign.time.mode})` });
+  }
+  return { ...campaign, time: { mode: 'choose-nights', nights } };
 }
 
 export function registerPlan(program: Command): Command {
@@ -28,10 +40,11 @@ export function registerPlan(program: Command): Command {
     .argument('[campaign]', 'campaign file (YAML or JSON)')
     .option('--out <dir>', 'output folder (default: ./crest-out/<campaign name>/)')
     .option('--seed <n>', "override the campaign's seed", numberFlag('--seed', 'a whole number, 0 or more', 0, Number.MAX_SAFE_INTEGER, { integer: true }))
+    .option('--nights <n>', 'choose this many nights instead of the campaign\'s number (choose-nights campaigns: how many nights to ask for?)', numberFlag('--nights', 'a whole number of nights from 1 to 366', 1, 366, { integer: true }))
     .option('--json', 'print plan.json on stdout instead of the summary')
     .action(async (file: string | undefined, opts: PlanFlags) => {
       const campaignFile = file ?? path.relative(process.cwd(), DEMO_CAMPAIGN);
-      const campaign = readCampaign(campaignFile);
+      const campaign = withNights(readCampaign(campaignFile), opts.nights);
       const outDir = opts.out ?? path.join('crest-out', slug(campaign.name));
       const inputs = [campaignFile, campaign.targetsFile, campaign.site.file, campaign.instrument.file];
       checkOutputs(outDir, PLAN_FILES, inputs);

@@ -60,6 +60,21 @@ describe('crest plan on the demo', () => {
   });
 });
 
+describe('crest plan --nights', () => {
+  it('chooses that many nights instead of the campaign\'s number', async () => {
+    const dir = tempFiles({
+      'campaign.yaml': 'name: few\nsite: la-silla\ninstrument: stable-4m\ntargets: targets.csv\nwindow: { start: 2027-04-01, end: 2027-04-10 }\ntime: { mode: choose-nights, nights: 5 }\n',
+      'targets.csv': read(path.dirname(fixture('small')), 'targets.csv'),
+    });
+    const r = await runCliAsync(['plan', path.join(dir, 'campaign.yaml'), '--nights', '2', '--json', '--out', path.join(dir, 'out')]);
+    expect(r.status).toBe(0);
+    const plan = JSON.parse(r.stdout) as { plannedDates: string[]; visits: { localDate: string }[]; campaign: { time: unknown } };
+    expect(plan.campaign.time).toEqual({ mode: 'choose-nights', nights: 2 });
+    expect(plan.plannedDates.length).toBeLessThanOrEqual(2);
+    expect(new Set(plan.visits.map((v) => v.localDate)).size).toBeLessThanOrEqual(2);
+  });
+});
+
 describe('crest plan on bad input', () => {
   it('a campaign asking for 0 nights: exit 2, one line naming the field', async () => {
     const dir = tempFiles({
@@ -71,6 +86,13 @@ describe('crest plan on bad input', () => {
     expect(oneLine(r)).toBe(true);
     expect(r.stderr).toContain('time.nights');
     expect(existsSync(path.join(dir, 'out'))).toBe(false);
+  });
+
+  it('--nights on a campaign that does not choose nights: exit 2, one line naming the flag', async () => {
+    const r = await runCliAsync(['plan', fixture('small'), '--nights', '3', '--out', path.join(tempFiles({}), 'out')]);
+    expect(r.status).toBe(2);
+    expect(oneLine(r)).toBe(true);
+    expect(r.stderr).toContain('--nights');
   });
 
   it('a campaign file that does not exist: exit 2, one line', async () => {
