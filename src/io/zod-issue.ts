@@ -36,5 +36,6 @@ export function issueToError(file: string, data: unknown, error: z.ZodError): In
     });
   }
   if (issue.code === 'invalid_type' && valueAt(data, keyPath) === undefined) allowed = `required: ${issue.message}`;
+  if (keyPath.length === 0) allowed = 'a mapping of keys to values (a YAML mapping or a JSON object)';
   return inputError({ file, field, value: valueAt(data, keyPath), allowed });
 }
