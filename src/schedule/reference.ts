@@ -158,3 +158,29 @@ export function exhaustiveOptimum(problem: ScheduleProblem, settings: ReferenceS
   for (const nights of nightSets) descend(nights, 0, [], 0);
   return best;
 }
+
+/**
+ * Greedy by gain per hour with every gain recomputed from scratch: for each step, every candidate
+ * slot is tried by recomputing the whole utility and checking every constraint pairwise. The slow
+ * twin of the optimiser's incremental greedy, for the bench's speed ratio (given nights or an
+ * hours budget; a step adds the best feasible slot while any adds utility).
+ */
+export function referenceGreedy(problem: ScheduleProblem, settings: ReferenceSettings): { utility: number; visits: CandidateSlot[] } {
+  const grids = compileProblem(problem, settings.searchGridSize).grids;
+  let chosen: CandidateSlot[] = [];
+  let utility = utilityOnGrids(problem, chosen, grids, settings.overshootWeight);
+  for (;;) {
+    let best: { slot: CandidateSlot; perHour: number; utility: number } | undefined;
+    for (const slot of problem.slots) {
+      if (chosen.includes(slot)) continue;
+      const trial = [...chosen, slot];
+      if (scheduleViolations(problem, trial).length > 0) continue;
+      const value = utilityOnGrids(problem, trial, grids, settings.overshootWeight);
+      const perHour = (value - utility) / (slot.durationSec / 3600);
+      if (perHour > 1e-12 && (!best || perHour > best.perHour)) best = { slot, perHour, utility: value };
+    }
+    if (!best) return { utility, visits: chosen };
+    chosen = [...chosen, best.slot];
+    utility = best.utility;
+  }
+}
