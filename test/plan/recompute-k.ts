@@ -18,6 +18,7 @@
 import { parse } from 'csv-parse/sync';
 import { periastronFromConjunctionBjd } from '../../src/orbit/periastron-time.js';
 import { radialVelocityMps } from '../../src/orbit/rv-curve.js';
+import { gaussianMean } from '../support/gaussian-mean.js';
 
 /** s(phi) of an eccentric planet, phase from mid-transit; undefined for a circular orbit. */
 export function orbitSignal(planet: { ecc: number; omegaDeg: number } | undefined): ((phase: number) => number) | undefined {
@@ -26,20 +27,6 @@ export function orbitSignal(planet: { ecc: number; omegaDeg: number } | undefine
   return (phase) => radialVelocityMps(orbit, phase);
 }
 
-/** Mean of f(phi + eps), eps ~ N(0, sigma^2), by the trapezoid rule over +-7 sigma. */
-function gaussianMean(f: (phase: number) => number, phase: number, sigma: number): number {
-  if (sigma === 0) return f(phase);
-  const steps = 800;
-  let total = 0;
-  let norm = 0;
-  for (let i = 0; i <= steps; i++) {
-    const x = -7 + (14 * i) / steps;
-    const w = Math.exp(-0.5 * x * x) * (i === 0 || i === steps ? 0.5 : 1);
-    total += w * f(phase + sigma * x);
-    norm += w;
-  }
-  return total / norm;
-}
 
 export interface CsvVisit {
   targetId: string;
