@@ -7,7 +7,7 @@ import { detectionMapFigure, type DetectionMapData } from '../report/html/chart-
 import { planFromJson } from '../report/html/plan-from-json.js';
 import { renderSvg } from '../report/html/vega-svg.js';
 import { toCsv } from '../report/csv.js';
-import { fmt } from '../report/table.js';
+import { fmt, percent } from '../report/table.js';
 import { DEFAULT_FAP_THRESHOLD } from '../rv/injection.js';
 import { levelRows, type LevelRow } from '../rv/injection-map.js';
 import { injectionRecoveryParallel } from '../rv/injection-worker-pool.js';
@@ -68,7 +68,6 @@ interface MapResult {
   svg: string;
 }
 
-const pct = (p: number) => `${Math.round(p * 100)}%`;
 
 async function runJob(job: MapJob, settings: MapSettings, threads: number | undefined, progress: Progress): Promise<Omit<MapResult, 'svg'>> {
   const { periodsDays, massesEarth } = job.input;
@@ -126,7 +125,7 @@ function printText(results: MapResult[], skipped: string[], written: string[], f
     } else if (full) {
       console.log(`${head}; known phase, P = ${fmt(job.ephemeris.periodDays, 4)} d, detection probability (%)`);
       for (const panel of chart.panels) console.log(`\n${panel.label}\n${mapTableText(chart.periodsDays, chart.massesEarth, panel.detection)}`);
-      console.log(`\nm sin i detected in 50% and 90% of cases; largest analytic - simulated difference ${pct(r.maxDifference!)}`);
+      console.log(`\nm sin i detected in 50% and 90% of cases; largest analytic - simulated difference ${percent(r.maxDifference!)}`);
       console.log(levelTableText(chart.periodsDays, chart.massesEarth, chart.panels));
     }
     if (job.kind === 'search' || full) console.log('');
@@ -137,8 +136,8 @@ function printText(results: MapResult[], skipped: string[], written: string[], f
     for (const r of known) {
       const a = r.atEphemeris!;
       const pair = (row: LevelRow) => row.levels.map((l) => (l.mass.where === 'inside' ? fmt(l.mass.massEarth, 1) : l.mass.where)).join(' / ');
-      const planet = r.job.kind === 'ephemeris' && a.planet ? `; planet ${fmt(r.job.planetMassEarth, 1)} M⊕ detected ${pct(a.planet.analytic)} | ${pct(a.planet.simulated)}` : '';
-      console.log(`  ${r.job.targetId.padEnd(9)} P = ${fmt(a.periodDays, 3).padStart(6)} d: ${pair(a.analytic)} | ${pair(a.simulated)} M⊕${planet}; map cells differ by ${pct(r.maxDifference!)} at most`);
+      const planet = r.job.kind === 'ephemeris' && a.planet ? `; planet ${fmt(r.job.planetMassEarth, 1)} M⊕ detected ${percent(a.planet.analytic)} | ${percent(a.planet.simulated)}` : '';
+      console.log(`  ${r.job.targetId.padEnd(9)} P = ${fmt(a.periodDays, 3).padStart(6)} d: ${pair(a.analytic)} | ${pair(a.simulated)} M⊕${planet}; map cells differ by ${percent(r.maxDifference!)} at most`);
     }
     console.log('');
   }

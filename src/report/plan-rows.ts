@@ -1,7 +1,7 @@
 import { DateTime } from 'luxon';
 import type { Plan, PlannedVisit } from '../model.js';
 import { clockTime } from '../sky/local-time.js';
-import { fmt, type Column } from './table.js';
+import { fmt, percent, type Column } from './table.js';
 
 /** Clock time of an instant (ISO text or Date) in a zone, e.g. `23:41`; a dash for null. */
 export function clock(instant: string | Date | null, zone: string): string {
@@ -41,7 +41,7 @@ export function nightHeading(plan: Plan, localDate: string): string {
   const weekday = DateTime.fromISO(localDate).toFormat('ccc');
   if (!night) return `${localDate} ${weekday}`;
   if (!night.darkStart || !night.darkEnd) return `${localDate} ${weekday}  no dark span${night.note ? ` (${night.note})` : ''}`;
-  const moon = `Moon ${Math.round(night.moon.illumination * 100)}%${night.moon.upDuringDark ? ' (up)' : ' (down)'}`;
+  const moon = `Moon ${percent(night.moon.illumination)}${night.moon.upDuringDark ? ' (up)' : ' (down)'}`;
   const plannedHours = plan.visits.filter((v) => v.localDate === localDate).reduce((sum, v) => sum + v.durationSec, 0) / 3600;
   const dark = `dark ${clock(night.darkStart, zone)}-${clock(night.darkEnd, zone)} local (${fmt(night.darkHours, 1)} h, ${fmt(plannedHours, 1)} h planned)`;
   return `${localDate} ${weekday}  ${dark}, ${moon}`;
@@ -69,7 +69,7 @@ export function targetRows(plan: Plan): string[][] {
     fmt(t.sigmaKMps, 2),
     fmt(t.kOverSigmaK, 1),
     fmt(t.goal, 1),
-    t.goalProbability === undefined ? '-' : `${Math.round(t.goalProbability * 100)}%`,
+    percent(t.goalProbability),
     fmt(t.informationEfficiency, 2),
     fmt(t.hours, 1),
   ]);

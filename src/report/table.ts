@@ -19,3 +19,8 @@ export function renderTable(columns: Column[], rows: string[][]): string {
 export function fmt(value: number | undefined | null, decimals: number): string {
   return value === undefined || value === null || !Number.isFinite(value) ? '-' : value.toFixed(decimals);
 }
+
+/** A probability or fraction as a whole percentage (`42%`), or a dash for a missing value. */
+export function percent(value: number | undefined): string {
+  return value === undefined || !Number.isFinite(value) ? '-' : `${Math.round(value * 100)}%`;
+}

@@ -1,5 +1,5 @@
 import type { Plan, TargetSummary } from '../../model.js';
-import { fmt, type Column } from '../table.js';
+import { fmt, percent, type Column } from '../table.js';
 import { searchMassLimit } from './chart-mass-limit.js';
 import { equivalentSigmaMps, targetOf, visitsOf } from './target-visits.js';
 
@@ -22,8 +22,6 @@ function spread(values: number[], decimals: number, dash = '–'): string {
   const hi = Math.max(...values);
   return lo.toFixed(decimals) === hi.toFixed(decimals) ? lo.toFixed(decimals) : `${lo.toFixed(decimals)}${dash}${hi.toFixed(decimals)}`;
 }
-
-const percent = (p: number | undefined) => (p === undefined ? '-' : `${Math.round(p * 100)}%`);
 
 /** One row per target: what a time request needs (σ per visit is the visits' equivalent σ with jitter). */
 export function proposalRows(plan: Plan): string[][] {
@@ -49,7 +47,7 @@ function list(items: string[]): string {
 }
 
 function clearText(clear: number | number[]): string {
-  return typeof clear === 'number' ? `${Math.round(clear * 100)}%` : `${spread(clear.map((c) => c * 100), 0)}% by month`;
+  return typeof clear === 'number' ? percent(clear) : `${spread(clear.map((c) => c * 100), 0)}% by month`;
 }
 
 function ephemerisSentence(plan: Plan, summaries: TargetSummary[]): string {
