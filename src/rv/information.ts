@@ -17,7 +17,7 @@
 // Var(K_k) = Σ_s w_s (F_s⁻¹)_kk over the model's sample ephemerides (information-model.ts).
 import { CorrelatedNights } from './correlated-nights.js';
 import { type StarModel, designRows, packedLength } from './information-model.js';
-import { addTrailingVariances } from './packed-cholesky.js';
+import { addRankTwoVariances, addTrailingVariances, choleskyInPlace, type RankTwoScratch } from './packed-cholesky.js';
 
 /** One visit as the information sees it. */
 export interface InformationVisit {
@@ -51,6 +51,12 @@ export class StarInformation {
   private readonly work: Float64Array;
   private readonly uNew: Float64Array;
   private readonly delta: Float64Array;
+  /** Per sample: the Cholesky factor of F and Var(K) as the visits stand, for rank-one trials; valid while !stale. */
+  private readonly factor: Float64Array;
+  private readonly factorOk: Uint8Array;
+  private readonly current: Float64Array;
+  private stale = true;
+  private readonly scratch: RankTwoScratch;
   visitCount = 0;
 
   constructor(readonly model: StarModel) {
@@ -65,6 +71,60 @@ export class StarInformation {
     this.work = new Float64Array(this.packed);
     this.uNew = new Float64Array(this.paramCount);
     this.delta = new Float64Array(this.sampleCount * this.packed);
+    this.factor = new Float64Array(this.sampleCount * this.packed);
+    this.factorOk = new Uint8Array(this.sampleCount);
+    this.current = new Float64Array(this.sampleCount * this.planetCount);
+    this.scratch = { y1: new Float64Array(this.paramCount), y2: new Float64Array(this.paramCount) };
+  }
+
+  /** Factors F of every sample (without activity) and keeps each sample's Var(K). */
+  private refactor(): void {
+    const { packed, paramCount: p, planetCount } = this;
+    const one = new Float64Array(planetCount);
+    for (let s = 0; s < this.sampleCount; s++) {
+      const l = this.factor.subarray(s * packed, (s + 1) * packed);
+      l.set(this.base.subarray(s * packed, (s + 1) * packed));
+      this.factorOk[s] = choleskyInPlace(l, p) ? 1 : 0;
+      if (!this.factorOk[s]) continue;
+      this.work.set(this.base.subarray(s * packed, (s + 1) * packed));
+      one.fill(0);
+      addTrailingVariances(this.work, p, planetCount, 1, one);
+      this.current.set(one, s * planetCount);
+    }
+    this.stale = false;
+  }
+
+  /**
+   * The fast path of `variances` without activity: adding visit v (weight w, row j) to a night
+   * holding W and u changes F by w j jᵀ − c(W') u' u'ᵀ + c(W) u uᵀ with u' = u ± w j, which is
+   * B M Bᵀ with B = [j u] and M = [[±w − c' w², ∓c' w], [∓c' w, c − c']] (c = c(W), c' = c(W')):
+   * a rank-two change, priced from the factor of F (packed-cholesky.ts). False when the star has
+   * activity or F is singular (then the general path refactors).
+   */
+  private lowRankVariances(out: Float64Array, v: InformationVisit, sign: 1 | -1): boolean {
+    if (this.correlated) return false;
+    if (this.stale) this.refactor();
+    for (let s = 0; s < this.sampleCount; s++) if (!this.factorOk[s]) return false;
+    const night = this.nights.get(v.night);
+    const w = v.weight;
+    const before = night?.weight ?? 0;
+    const after = before + sign * w;
+    const coupling = (weight: number) => (weight <= 1e-9 * w ? 0 : this.tau2 / (1 + this.tau2 * weight));
+    const c0 = night ? coupling(before) : 0;
+    const c1 = coupling(after);
+    const m11 = sign * w - c1 * w * w;
+    const m12 = night ? -sign * c1 * w : 0;
+    const m22 = night ? c0 - c1 : 0;
+    const { packed, paramCount: p, planetCount } = this;
+    const u = night?.u ?? v.rows;
+    for (let s = 0; s < this.sampleCount; s++) {
+      const ok = addRankTwoVariances(this.factor, s * packed, p, planetCount, this.current, s * planetCount, v.rows, v.offset + s * p, u, night ? s * p : 0, m11, m12, m22, this.scratch, this.model.samples[s]!.weight, out);
+      if (!ok) {
+        out.fill(0);
+        return false;
+      }
+    }
+    return true;
   }
 
   private reset(): void {
@@ -75,6 +135,7 @@ export class StarInformation {
   variances(out: Float64Array, v?: InformationVisit, sign: 1 | -1 = 1): Float64Array {
     out.fill(0);
     if (this.visitCount + (v ? sign : 0) <= 0) return out.fill(Infinity);
+    if (v && this.lowRankVariances(out, v, sign)) return out;
     if (v) this.deltas(v, sign, true);
     const { packed, paramCount: p, planetCount } = this;
     for (let s = 0; s < this.sampleCount; s++) {
@@ -89,6 +150,7 @@ export class StarInformation {
   /** Adds (sign 1) or removes (-1) visit v. */
   apply(v: InformationVisit, sign: 1 | -1): void {
     this.deltas(v, sign, false);
+    this.stale = true;
     const { base, delta } = this;
     for (let i = 0; i < base.length; i++) base[i] += delta[i]!;
     const night = this.nights.get(v.night);
@@ -112,6 +174,7 @@ export class StarInformation {
   /** Forgets every visit. */
   clear(): void {
     this.visitCount = 0;
+    this.stale = true;
     this.reset();
     this.nights.clear();
     this.correlated?.clear();

@@ -65,3 +65,111 @@ export function addTrailingVariances(a: Float64Array, p: number, trailing: numbe
     out[c] += weight * norm;
   }
 }
+
+/**
+ * The Cholesky factor of packed `a`, in place; false (a left partly factored) when a pivot is at
+ * or below 1e-10 of its diagonal, i.e. the matrix is singular for our purposes.
+ */
+export function choleskyInPlace(a: Float64Array, p: number): boolean {
+  for (let i = 0; i < p; i++) {
+    const rowI = (i * (i + 1)) / 2;
+    for (let j = 0; j < i; j++) {
+      const rowJ = (j * (j + 1)) / 2;
+      let sum = a[rowI + j]!;
+      for (let k = 0; k < j; k++) sum -= a[rowI + k]! * a[rowJ + k]!;
+      a[rowI + j] = sum / a[rowJ + j]!;
+    }
+    const diagonal = a[rowI + i]!;
+    let d = diagonal;
+    for (let k = 0; k < i; k++) d -= a[rowI + k]! * a[rowI + k]!;
+    if (!(d > PIVOT_TOLERANCE * diagonal) || !(diagonal > 0)) return false;
+    a[rowI + i] = Math.sqrt(d);
+  }
+  return true;
+}
+
+/** L⁻¹ x into y (forward substitution with the packed factor at lAt). */
+function forward(l: Float64Array, lAt: number, p: number, x: Float64Array, xAt: number, y: Float64Array): void {
+  for (let i = 0; i < p; i++) {
+    const row = lAt + (i * (i + 1)) / 2;
+    let sum = x[xAt + i]!;
+    for (let k = 0; k < i; k++) sum -= l[row + k]! * y[k]!;
+    y[i] = sum / l[row + i]!;
+  }
+}
+
+/** The trailing entries of L⁻ᵀ y, in place in y (back substitution from the last row up). */
+function backTrailing(l: Float64Array, lAt: number, p: number, trailing: number, y: Float64Array): void {
+  for (let i = p - 1; i >= p - trailing; i--) {
+    let sum = y[i]!;
+    for (let m = i + 1; m < p; m++) sum -= l[lAt + (m * (m + 1)) / 2 + i]! * y[m]!;
+    y[i] = sum / l[lAt + (i * (i + 1)) / 2 + i]!;
+  }
+}
+
+const dot = (a: Float64Array, b: Float64Array, p: number) => {
+  let sum = 0;
+  for (let i = 0; i < p; i++) sum += a[i]! * b[i]!;
+  return sum;
+};
+
+/** Scratch vectors for addRankTwoVariances. */
+export interface RankTwoScratch {
+  y1: Float64Array;
+  y2: Float64Array;
+}
+
+/**
+ * Var(θ_k) of the trailing parameters after F → F + B M Bᵀ with B = [x1 x2] (p × 2) and M
+ * symmetric 2 × 2, from the factor L of F and the current variances: by the Woodbury identity
+ * (F + B M Bᵀ)⁻¹ = F⁻¹ − F⁻¹B (I + M G)⁻¹ M BᵀF⁻¹ with G = BᵀF⁻¹B ([Golub-VanLoan2013] §2.1.4),
+ * where G comes from y = L⁻¹x and the trailing rows of F⁻¹B = L⁻ᵀ y from the last rows of the
+ * back substitution. x2 = 0 (m12 = m22 = 0) is the rank-one case. Adds weight × each variance to
+ * out; returns false, adding nothing, when I + M G is too near singular to trust.
+ */
+export function addRankTwoVariances(
+  l: Float64Array,
+  lAt: number,
+  p: number,
+  trailing: number,
+  current: Float64Array,
+  currentAt: number,
+  x1: Float64Array,
+  x1At: number,
+  x2: Float64Array,
+  x2At: number,
+  m11: number,
+  m12: number,
+  m22: number,
+  scratch: RankTwoScratch,
+  weight: number,
+  out: Float64Array,
+): boolean {
+  const { y1, y2 } = scratch;
+  forward(l, lAt, p, x1, x1At, y1);
+  const rankTwo = m12 !== 0 || m22 !== 0;
+  if (rankTwo) forward(l, lAt, p, x2, x2At, y2);
+  else y2.fill(0);
+  const g11 = dot(y1, y1, p);
+  const g12 = rankTwo ? dot(y1, y2, p) : 0;
+  const g22 = rankTwo ? dot(y2, y2, p) : 0;
+  // A = I + M G, N = A⁻¹ M.
+  const a11 = 1 + m11 * g11 + m12 * g12;
+  const a12 = m11 * g12 + m12 * g22;
+  const a21 = m12 * g11 + m22 * g12;
+  const a22 = 1 + m12 * g12 + m22 * g22;
+  const det = a11 * a22 - a12 * a21;
+  if (!(Math.abs(det) > 1e-9 * Math.max(1, Math.abs(a11 * a22), Math.abs(a12 * a21)))) return false;
+  const n11 = (a22 * m11 - a12 * m12) / det;
+  const n12 = (a22 * m12 - a12 * m22) / det;
+  const n21 = (-a21 * m11 + a11 * m12) / det;
+  const n22 = (-a21 * m12 + a11 * m22) / det;
+  backTrailing(l, lAt, p, trailing, y1);
+  if (rankTwo) backTrailing(l, lAt, p, trailing, y2);
+  for (let k = 0; k < trailing; k++) {
+    const z1 = y1[p - trailing + k]!;
+    const z2 = y2[p - trailing + k]!;
+    out[k] += weight * (current[currentAt + k]! - (z1 * (n11 * z1 + n12 * z2) + z2 * (n21 * z1 + n22 * z2)));
+  }
+  return true;
+}

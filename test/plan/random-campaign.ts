@@ -91,9 +91,10 @@ export function randomCampaign(index: number): Campaign {
   for (let k = 0; k < count; k++) {
     const id = `Rv${index}-${String.fromCharCode(97 + k)}`;
     const target = k > 0 && rng.uniform() < searchFraction ? searchTarget(rng, id, site, window.start) : ephemerisTarget(rng, id, site, startJd, window.start);
-    // One in four later rows is a second planet of the star before it: the same star fields, its own orbit.
+    // One in four later rows is a second planet of the star before it (at most two per star): the same star fields, its own orbit.
     const previous = targets[k - 1];
-    if (previous && target.ephemeris && rng.uniform() < 0.25) targets.push({ ...previous, id, starId: previous.starId, ephemeris: target.ephemeris, planet: target.planet!, search: undefined, source: `random ${id}` } as Target);
+    const single = previous !== undefined && targets.filter((t) => t.starId === previous.starId).length === 1;
+    if (previous && single && previous.ephemeris && target.ephemeris && rng.uniform() < 0.25) targets.push({ ...previous, id, starId: previous.starId, ephemeris: target.ephemeris, planet: target.planet!, search: undefined, source: `random ${id}` } as Target);
     else targets.push(target);
   }
   return {

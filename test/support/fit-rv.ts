@@ -1,0 +1,328 @@
+// A Monte Carlo check of K uncertainties, done the way an RV analysis fits a star (common
+// practice): simulate velocities from a Keplerian truth plus noise, then fit the full nonlinear
+// Keplerian model by Levenberg–Marquardt generalised least squares — the residuals whitened by
+// the Cholesky factor of the noise covariance, the catalogue ephemeris (and eccentricity, when
+// fitted) entering as Gaussian penalty terms — starting from the catalogue values.
+//
+// K is kept positive (common practice: K is an amplitude). The curve of (−K, Tc + P/2) is that
+// of (K, Tc) for a circular orbit, so with K free the fit may settle on the mirror solution,
+// whose "transit" is the occultation: with a loose transit prior that mirror is nearer the
+// catalogue than the truth in a few per cent of data sets, and those fits report K ≈ −K_true.
+//
+// Noise: white per visit (σ_i), a shared offset per night (τ), and quasi-periodic activity
+// across nights drawn by Cholesky from src/rv/activity-kernel.ts (constant within a night).
+// Truth per data set: Tc and P of each planet drawn from their catalogue Gaussians, K and the
+// eccentricity vector at the catalogue values, γ = 0.
+import { periastronFromConjunctionBjd } from '../../src/orbit/periastron-time.js';
+import { radialVelocityMps } from '../../src/orbit/rv-curve.js';
+import { activityCovariance } from '../../src/rv/activity-kernel.js';
+import type { ActivityInput, PlanetInput } from '../../src/rv/information-model.js';
+import type { Rng } from '../../src/rv/random.js';
+
+export interface FitVisit {
+  bjd: number;
+  sigmaMps: number;
+  night: number;
+  nightBjd: number;
+}
+
+export interface FitSetup {
+  planets: PlanetInput[];
+  nightlyJitterMps: number;
+  activity?: ActivityInput;
+  visits: FitVisit[];
+}
+
+export interface MonteCarloResult {
+  /** Per planet: fitted K − true K of every converged data set. */
+  kErrors: number[][];
+  /** Data sets whose fit did not converge (left out of kErrors). */
+  failures: number;
+}
+
+/** Cholesky factor (lower, row-major n×n) of a symmetric positive-definite matrix. */
+function cholesky(a: Float64Array, n: number): Float64Array {
+  const l = new Float64Array(n * n);
+  for (let i = 0; i < n; i++) {
+    for (let j = 0; j <= i; j++) {
+      let s = a[i * n + j]!;
+      for (let k = 0; k < j; k++) s -= l[i * n + k]! * l[j * n + k]!;
+      if (i === j) {
+        if (!(s > 0)) throw new Error('fit-rv: matrix not positive definite');
+        l[i * n + i] = Math.sqrt(s);
+      } else l[i * n + j] = s / l[j * n + j]!;
+    }
+  }
+  return l;
+}
+
+/** Solves L x = b in place (L lower, n×n). */
+function forward(l: Float64Array, n: number, b: Float64Array, stride = 1, offset = 0): void {
+  for (let i = 0; i < n; i++) {
+    let s = b[offset + i * stride]!;
+    for (let k = 0; k < i; k++) s -= l[i * n + k]! * b[offset + k * stride]!;
+    b[offset + i * stride] = s / l[i * n + i]!;
+  }
+}
+
+/** Solves the symmetric positive-definite system A x = b (p×p) by Cholesky; null if not positive definite. */
+function spdSolve(a: Float64Array, b: Float64Array, p: number): Float64Array | null {
+  let l: Float64Array;
+  try {
+    l = cholesky(a, p);
+  } catch {
+    return null;
+  }
+  const x = Float64Array.from(b);
+  forward(l, p, x);
+  for (let i = p - 1; i >= 0; i--) {
+    let s = x[i]!;
+    for (let k = i + 1; k < p; k++) s -= l[k * p + i]! * x[k]!;
+    x[i] = s / l[i * p + i]!;
+  }
+  return x;
+}
+
+interface ParamLayout {
+  /** Per planet: index of K, Tc, P and (when fitted) e cos ω (e sin ω next). */
+  k: number[];
+  tc: number[];
+  period: number[];
+  ecc: number[];
+  count: number;
+  /** Prior centre and 1/σ for each parameter (0 when no prior). */
+  centre: Float64Array;
+  invSigma: Float64Array;
+}
+
+function layout(planets: PlanetInput[], origin: number): ParamLayout {
+  const lay: ParamLayout = { k: [], tc: [], period: [], ecc: [], count: 1, centre: new Float64Array(0), invSigma: new Float64Array(0) };
+  for (const pl of planets) {
+    lay.k.push(lay.count++);
+    lay.tc.push(lay.count++);
+    lay.period.push(lay.count++);
+    if ((pl.eccPriorSigma ?? 0) > 0) {
+      lay.ecc.push(lay.count);
+      lay.count += 2;
+    } else lay.ecc.push(-1);
+  }
+  lay.centre = new Float64Array(lay.count);
+  lay.invSigma = new Float64Array(lay.count);
+  planets.forEach((pl, i) => {
+    lay.centre[lay.k[i]!] = pl.kMps;
+    lay.centre[lay.tc[i]!] = pl.tcBjd - origin;
+    lay.invSigma[lay.tc[i]!] = 1 / pl.tcErrDays;
+    lay.centre[lay.period[i]!] = pl.periodDays;
+    lay.invSigma[lay.period[i]!] = 1 / pl.periodErrDays;
+    const e = lay.ecc[i]!;
+    if (e >= 0) {
+      const om = (pl.omegaDeg * Math.PI) / 180;
+      lay.centre[e] = pl.ecc * Math.cos(om);
+      lay.centre[e + 1] = pl.ecc * Math.sin(om);
+      lay.invSigma[e] = 1 / pl.eccPriorSigma!;
+      lay.invSigma[e + 1] = 1 / pl.eccPriorSigma!;
+    }
+  });
+  return lay;
+}
+
+/** The Keplerian model at time tRel (days from the origin) for parameters theta. */
+function modelVelocity(planets: PlanetInput[], lay: ParamLayout, theta: Float64Array, tRel: number): number {
+  let v = theta[0]!;
+  planets.forEach((pl, i) => {
+    let ecc = pl.ecc;
+    let omegaDeg = pl.omegaDeg;
+    const e = lay.ecc[i]!;
+    if (e >= 0) {
+      ecc = Math.min(Math.hypot(theta[e]!, theta[e + 1]!), 0.95);
+      omegaDeg = ecc > 0 ? (Math.atan2(theta[e + 1]!, theta[e]!) * 180) / Math.PI : 90;
+    }
+    const periodDays = theta[lay.period[i]!]!;
+    const periastronBjd = periastronFromConjunctionBjd({ tcBjd: theta[lay.tc[i]!]!, periodDays, ecc, omegaDeg });
+    v += radialVelocityMps({ kMps: theta[lay.k[i]!]!, periodDays, ecc, omegaDeg, periastronBjd }, tRel);
+  });
+  return v;
+}
+
+/**
+ * Simulates `count` data sets on the visits of `setup` and fits each; returns the K errors.
+ * The data sets are drawn one after the other from `rng`.
+ */
+export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, options: { diagnose?: boolean } = {}): MonteCarloResult {
+  const diagnostics = { betterFromTruth: 0 };
+  const { planets, visits } = setup;
+  const n = visits.length;
+  const origin = Math.floor(visits[0]!.bjd);
+  const tRel = visits.map((v) => v.bjd - origin);
+  const lay = layout(planets, origin);
+  const p = lay.count;
+
+  // Noise: the full covariance (for the fit) and the pieces (for the simulation).
+  const tau2 = setup.nightlyJitterMps ** 2;
+  const cov = new Float64Array(n * n);
+  for (let i = 0; i < n; i++)
+    for (let j = 0; j < n; j++) {
+      let c = i === j ? visits[i]!.sigmaMps ** 2 : 0;
+      if (visits[i]!.night === visits[j]!.night) c += tau2;
+      if (setup.activity) c += activityCovariance(setup.activity, visits[i]!.nightBjd - visits[j]!.nightBjd);
+      cov[i * n + j] = c;
+    }
+  const whiten = cholesky(cov, n);
+  const nightKeys = [...new Set(visits.map((v) => v.night))];
+  const nightOf = visits.map((v) => nightKeys.indexOf(v.night));
+  const nightTimes = nightKeys.map((key) => visits.find((v) => v.night === key)!.nightBjd);
+  const m = nightKeys.length;
+  let activityFactor: Float64Array | null = null;
+  if (setup.activity) {
+    const k = new Float64Array(m * m);
+    for (let a = 0; a < m; a++) for (let b = 0; b < m; b++) k[a * m + b] = activityCovariance(setup.activity, nightTimes[a]! - nightTimes[b]!) + (a === b ? 1e-9 * setup.activity.amplitudeMps ** 2 : 0);
+    activityFactor = cholesky(k, m);
+  }
+
+  // Finite-difference steps (central differences) for the nonlinear parameters.
+  const step = new Float64Array(p);
+  planets.forEach((pl, i) => {
+    const orbits = Math.max(1, ...tRel.map((t) => Math.abs(t - (pl.tcBjd - origin)) / pl.periodDays));
+    step[lay.tc[i]!] = 1e-5 * pl.periodDays;
+    step[lay.period[i]!] = (1e-5 * pl.periodDays) / orbits;
+    if (lay.ecc[i]! >= 0) {
+      step[lay.ecc[i]!] = 1e-6;
+      step[lay.ecc[i]! + 1] = 1e-6;
+    }
+  });
+
+  const kErrors: number[][] = planets.map(() => []);
+  let failures = 0;
+  const y = new Float64Array(n);
+  const truth = Float64Array.from(lay.centre);
+  const jac = new Float64Array(n * p);
+  const resid = new Float64Array(n);
+  const a = new Float64Array(p * p);
+  const g = new Float64Array(p);
+  const nightNoise = new Float64Array(m);
+  const actNoise = new Float64Array(m);
+
+  /** Whitened residual vector at theta into resid; returns the penalised χ². */
+  const chi2 = (theta: Float64Array, out: Float64Array): number => {
+    for (let i = 0; i < n; i++) out[i] = y[i]! - modelVelocity(planets, lay, theta, tRel[i]!);
+    forward(whiten, n, out);
+    let c = 0;
+    for (let i = 0; i < n; i++) c += out[i]! * out[i]!;
+    for (let j = 0; j < p; j++) c += ((theta[j]! - lay.centre[j]!) * lay.invSigma[j]!) ** 2;
+    return c;
+  };
+
+  for (let set = 0; set < count; set++) {
+    // Truth.
+    truth.set(lay.centre);
+    truth[0] = 0;
+    planets.forEach((pl, i) => {
+      truth[lay.tc[i]!] = lay.centre[lay.tc[i]!]! + pl.tcErrDays * rng.normal();
+      truth[lay.period[i]!] = pl.periodDays + pl.periodErrDays * rng.normal();
+    });
+    // Data.
+    for (let q = 0; q < m; q++) nightNoise[q] = setup.nightlyJitterMps * rng.normal();
+    actNoise.fill(0);
+    if (activityFactor) {
+      const z = Array.from({ length: m }, () => rng.normal());
+      for (let q = 0; q < m; q++) for (let r = 0; r <= q; r++) actNoise[q] += activityFactor[q * m + r]! * z[r]!;
+    }
+    for (let i = 0; i < n; i++) y[i] = modelVelocity(planets, lay, truth, tRel[i]!) + visits[i]!.sigmaMps * rng.normal() + nightNoise[nightOf[i]!]! + actNoise[nightOf[i]!]!;
+
+    const fromCatalogue = Float64Array.from(lay.centre);
+    fromCatalogue[0] = y.reduce((s, v) => s + v, 0) / n;
+    const fit = fitFrom(fromCatalogue);
+    if (options.diagnose) {
+      const fromTruth = fitFrom(Float64Array.from(truth));
+      if (fromTruth.converged && fit.converged && fromTruth.chi2 < fit.chi2 - 1e-6) diagnostics.betterFromTruth++;
+    }
+    if (!fit.converged) {
+      failures++;
+      continue;
+    }
+    planets.forEach((pl, i) => kErrors[i]!.push(fit.theta[lay.k[i]!]! - pl.kMps));
+  }
+  if (options.diagnose) console.log(`fit-rv diagnostics: ${diagnostics.betterFromTruth} of ${count} fits from the catalogue ended above the fit started at the truth`);
+  return { kErrors, failures };
+
+  function fitFrom(start: Float64Array): { theta: Float64Array; chi2: number; converged: boolean } {
+    const theta = Float64Array.from(start);
+    let lambda = 1e-3;
+    let current = chi2(theta, resid);
+    let converged = false;
+    for (let iter = 0; iter < 60 && !converged; iter++) {
+      // Whitened Jacobian: the γ column exact, the others central differences (exact to rounding
+      // for K, which enters linearly).
+      for (let j = 0; j < p; j++) {
+        for (let i = 0; i < n; i++) {
+          let d: number;
+          if (j === 0) d = 1;
+          else {
+            const h = step[j]! || 1e-4 * Math.max(1, Math.abs(theta[j]!));
+            const saved = theta[j]!;
+            theta[j] = saved + h;
+            const up = modelVelocity(planets, lay, theta, tRel[i]!);
+            theta[j] = saved - h;
+            const down = modelVelocity(planets, lay, theta, tRel[i]!);
+            theta[j] = saved;
+            d = (up - down) / (2 * h);
+          }
+          jac[i * p + j] = d;
+        }
+        forward(whiten, n, jac, p, j);
+      }
+      // Normal equations of the penalised problem: (J̃ᵀJ̃ + Λ) δ = J̃ᵀ r̃ − Λ (θ − θ_cat).
+      for (let r = 0; r < p; r++) {
+        let s = 0;
+        for (let i = 0; i < n; i++) s += jac[i * p + r]! * resid[i]!;
+        g[r] = s - (theta[r]! - lay.centre[r]!) * lay.invSigma[r]! ** 2;
+        for (let c = 0; c < p; c++) {
+          let t = 0;
+          for (let i = 0; i < n; i++) t += jac[i * p + r]! * jac[i * p + c]!;
+          a[r * p + c] = t + (r === c ? lay.invSigma[r]! ** 2 : 0);
+        }
+      }
+      for (let tries = 0; tries < 20; tries++) {
+        const damped = Float64Array.from(a);
+        for (let r = 0; r < p; r++) damped[r * p + r] *= 1 + lambda;
+        const delta = spdSolve(damped, g, p);
+        if (!delta) {
+          lambda *= 10;
+          continue;
+        }
+        const trial = Float64Array.from(theta);
+        for (let r = 0; r < p; r++) trial[r] += delta[r]!;
+        // K is an amplitude: a step to K <= 0 is refused like one that raises χ².
+        if (lay.k.some((k) => !(trial[k]! > 0))) {
+          lambda *= 10;
+          continue;
+        }
+        const trialResid = new Float64Array(n);
+        const next = chi2(trial, trialResid);
+        // Converged when the step is tiny against each parameter's scale (1e-5 m/s for γ and K,
+        // 1e-5 of the prior width otherwise).
+        let small = true;
+        for (let r = 0; r < p; r++) {
+          const scale = lay.invSigma[r]! > 0 ? 1e-5 / lay.invSigma[r]! : 1e-5;
+          if (Math.abs(delta[r]!) > scale) small = false;
+        }
+        if (next <= current || (small && next <= current * (1 + 1e-10))) {
+          theta.set(trial);
+          resid.set(trialResid);
+          current = next;
+          lambda = Math.max(lambda / 10, 1e-9);
+          converged = small;
+          break;
+        }
+        lambda *= 10;
+      }
+      if (lambda > 1e12) break;
+    }
+    return { theta, chi2: current, converged };
+  }
+}
+
+/** √(mean of squares). */
+export function rms(values: number[]): number {
+  return Math.sqrt(values.reduce((s, v) => s + v * v, 0) / values.length);
+}
