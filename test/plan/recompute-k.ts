@@ -1,44 +1,30 @@
-// K/sigma_K recomputed from plan.csv alone, written here from the formula (not with the scheduler's
-// functions), with a tolerance that follows from the CSV's rounding.
-//
-// Least squares for v_i = gamma + K s_i with weights w_i = 1/sigma_eff,i^2 and gamma free gives
-// Var(K^) = 1/I, I = sum w_i (s_i - sbar_w)^2 (weighted linear regression, common practice;
-// REFERENCES.md "Visits needed"). With s_i = -sin(2 pi phi_i) and a Gaussian phase error sigma_i
-// (cycles), independent between visits, the expectation of I over the phase errors is
-//   E[I] = sum w E[s^2] - E[(sum w s)^2] / W,  W = sum w,
-//   E[(sum w s)^2] = sum_{i != j} w_i w_j m_i m_j + sum_i w_i^2 q_i,
-// with m = E[s] = -sin(2 pi phi) exp(-2 pi^2 sigma^2) and q = E[s^2] = (1 - cos(4 pi phi) exp(-8 pi^2 sigma^2)) / 2
-// (E[cos(a eps)] = exp(-a^2 sigma^2 / 2) for eps ~ N(0, sigma^2), the normal characteristic
-// function; the form in the comment of src/schedule/objective-ephemeris.ts). Here the cross term is
-// summed pair by pair. sigma_K = 1/sqrt(E[I]).
-//
-// For an eccentric planet s is the Keplerian RV curve with K = 1 (src/orbit/rv-curve.ts, periastron
-// placed by the transit time), and m, q are its mean and mean square over the Gaussian phase error
-// by the trapezoid rule over +-7 sigma: a slow, direct average, not the scheduler's series.
+// K/sigma_K recomputed from plan.csv: each planet's Var(K) by the tests' dense Cramér–Rao
+// reference (test/support/dense-information.ts: numerical derivatives of the RV curve, the dense
+// noise covariance, Gaussian elimination), from the CSV's mid-exposure times, white σ and nights
+// alone. Only the star's linearisation point (reference epoch and sample ephemerides) comes from
+// the plan's own model builder, src/plan/star-model.ts.
 import { parse } from 'csv-parse/sync';
-import { periastronFromConjunctionBjd } from '../../src/orbit/periastron-time.js';
-import { radialVelocityMps } from '../../src/orbit/rv-curve.js';
-import { gaussianMean } from '../support/gaussian-mean.js';
-
-/** s(phi) of an eccentric planet, phase from mid-transit; undefined for a circular orbit. */
-export function orbitSignal(planet: { ecc: number; omegaDeg: number } | undefined): ((phase: number) => number) | undefined {
-  if (!planet || planet.ecc === 0) return undefined;
-  const orbit = { kMps: 1, periodDays: 1, ecc: planet.ecc, omegaDeg: planet.omegaDeg, periastronBjd: periastronFromConjunctionBjd({ tcBjd: 0, periodDays: 1, ...planet }) };
-  return (phase) => radialVelocityMps(orbit, phase);
-}
-
+import type { Plan, TargetSummary } from '../../src/model.js';
+import { starModel, starsOf } from '../../src/plan/star-model.js';
+import { nightMiddleJd } from '../../src/plan/visit-information.js';
+import { denseKVariances } from '../support/dense-information.js';
 
 export interface CsvVisit {
-  targetId: string;
+  starId: string;
+  localDate: string;
   startUtc: string;
   midBjdTdb: number;
-  phase: number;
-  phaseErr: number;
-  sigmaEffMps: number;
+  /** Per planet: phase and its error, from the `phases` column. */
+  phases: Map<string, { phase: number; phaseErr: number }>;
+  sigmaWhiteMps: number;
 }
 
-/** Half a unit in the last place written by src/report/plan-csv.ts for each column used. */
-export const CSV_HALF_UNIT = { phase: 0.5e-5, phaseErr: 0.5e-5, sigmaEffMps: 0.5e-4 } as const;
+/**
+ * Relative effect of the CSV's rounding on K/sigma_K: σ written to 1e-4 m/s (at least 1 m/s
+ * here, so 5e-5 relative per visit, at most that on the total) and BJD to 1e-6 d (a phase
+ * change of 1e-6/P cycles); 2e-4 bounds both with room.
+ */
+export const CSV_ROUNDING = 2e-4;
 
 export function parsePlanCsv(text: string): { header: string[]; rows: Record<string, string>[] } {
   const records = parse(text, { skip_empty_lines: true }) as string[][];
@@ -46,58 +32,37 @@ export function parsePlanCsv(text: string): { header: string[]; rows: Record<str
   return { header: header!, rows: body.map((cells) => Object.fromEntries(header!.map((h, i) => [h, cells[i] ?? '']))) };
 }
 
-/** The ephemeris visits of plan.csv (rows with a phase). */
-export function ephemerisVisits(rows: Record<string, string>[]): CsvVisit[] {
-  return rows
-    .filter((r) => r.phase !== '')
-    .map((r) => ({
-      targetId: r.targetId!,
-      startUtc: r.startUtc!,
-      midBjdTdb: Number(r.midBjdTdb),
-      phase: Number(r.phase),
-      phaseErr: Number(r.phaseErr),
-      sigmaEffMps: Number(r.sigmaEffMps),
-    }));
-}
-
-/** E[I] of a target's visits (1/(m/s)^2), by the pairwise form above. */
-export function expectedInformation(visits: Pick<CsvVisit, 'phase' | 'phaseErr' | 'sigmaEffMps'>[], signal?: (phase: number) => number): number {
-  const w = visits.map((v) => 1 / (v.sigmaEffMps * v.sigmaEffMps));
-  const m = visits.map((v) =>
-    signal ? gaussianMean(signal, v.phase, v.phaseErr) : -Math.sin(2 * Math.PI * v.phase) * Math.exp(-2 * Math.PI ** 2 * v.phaseErr ** 2),
-  );
-  const q = visits.map((v) =>
-    signal ? gaussianMean((p) => signal(p) ** 2, v.phase, v.phaseErr) : 0.5 - 0.5 * Math.cos(4 * Math.PI * v.phase) * Math.exp(-8 * Math.PI ** 2 * v.phaseErr ** 2),
-  );
-  const total = w.reduce((a, b) => a + b, 0);
-  if (total === 0) return 0;
-  let squareOfSum = 0;
-  for (let i = 0; i < visits.length; i++) {
-    squareOfSum += w[i]! * w[i]! * q[i]!;
-    for (let j = 0; j < visits.length; j++) if (j !== i) squareOfSum += w[i]! * w[j]! * m[i]! * m[j]!;
+/** `b=0.25012±0.00120; c=0.71000±0.02000` → a map by planet id. */
+function parsePhases(text: string): Map<string, { phase: number; phaseErr: number }> {
+  const out = new Map<string, { phase: number; phaseErr: number }>();
+  for (const part of text.split('; ').filter((p) => p !== '')) {
+    const [id, value] = part.split('=') as [string, string];
+    const [phase, phaseErr] = value.split('±').map(Number) as [number, number];
+    out.set(id, { phase, phaseErr });
   }
-  const meanSquare = w.reduce((sum, wi, i) => sum + wi * q[i]!, 0);
-  const information = meanSquare - squareOfSum / total;
-  // One visit (or visits at one phase) carry no information on K; the subtraction leaves a residue
-  // of the order of the rounding of its terms (1e-16 relative), clamped to zero.
-  return information > 1e-12 * meanSquare ? information : 0;
+  return out;
 }
 
-/**
- * K/sigma_K = K sqrt(E[I]) from the CSV rows, and the first-order bound on how far the CSV's
- * rounding can move it: sum over every value of |d(K/sigma_K)/dx| times half its last unit
- * (derivatives by central differences of that step).
- */
-export function kOverSigmaKFromCsv(kMps: number, visits: CsvVisit[], signal?: (phase: number) => number): { value: number; roundingBound: number } {
-  const ratio = (vs: CsvVisit[]) => kMps * Math.sqrt(expectedInformation(vs, signal));
-  const value = ratio(visits);
-  let roundingBound = 0;
-  visits.forEach((_, i) => {
-    for (const field of ['phase', 'phaseErr', 'sigmaEffMps'] as const) {
-      const h = CSV_HALF_UNIT[field];
-      const shifted = (d: number) => ratio(visits.map((v, k) => (k === i ? { ...v, [field]: Math.max(0, v[field] + d) } : v)));
-      roundingBound += Math.abs(shifted(h) - shifted(-h)) / 2;
-    }
-  });
-  return { value, roundingBound };
+export function csvVisits(rows: Record<string, string>[]): CsvVisit[] {
+  return rows.map((r) => ({
+    starId: r.starId!,
+    localDate: r.localDate!,
+    startUtc: r.startUtc!,
+    midBjdTdb: Number(r.midBjdTdb),
+    phases: parsePhases(r.phases!),
+    sigmaWhiteMps: Number(r.sigmaWhiteMps),
+  }));
+}
+
+/** K/sigma_K of a planet summary from its star's CSV visits (0 when they carry no information). */
+export function kOverSigmaKFromCsv(plan: Plan, summary: TargetSummary, visits: CsvVisit[]): number {
+  const rows = starsOf(plan.campaign.targets).get(summary.starId)!;
+  const model = starModel(rows, plan.campaign)!;
+  const nightPos = new Map(plan.nights.map((n, i) => [n.localDate, i]));
+  const mine = visits.filter((v) => v.starId === summary.starId);
+  const variance = denseKVariances(
+    model,
+    mine.map((v) => ({ bjd: v.midBjdTdb, sigmaMps: v.sigmaWhiteMps, night: nightPos.get(v.localDate)!, nightBjd: nightMiddleJd(plan.nights[nightPos.get(v.localDate)!]) })),
+  )[model.planets.findIndex((p) => p.input.id === summary.targetId)]!;
+  return variance === Infinity ? 0 : summary.kMps! / Math.sqrt(variance);
 }
