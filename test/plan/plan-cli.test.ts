@@ -1,10 +1,12 @@
 // `crest plan` as a subprocess (dist/cli.js; `npm test` builds it first): the five files and the
 // summary, the same bytes from two runs with the same seed, --json, K/sigma_K recomputed from the
-// written plan.csv, bad input, and an output folder that holds the inputs.
+// written plan.csv, bad input, and an output folder that holds the inputs. The two demo runs are
+// the shared ones of the global setup (test/support/demo-plan.ts).
 import { copyFileSync, existsSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { runCliAsync, tempFiles, type CliResult } from '../cli/run-cli.js';
+import { demoRuns } from '../support/demo-plan.js';
 import { fixture } from './fixtures.js';
 import { ephemerisVisits, kOverSigmaKFromCsv, orbitSignal, parsePlanCsv } from './recompute-k.js';
 
@@ -13,14 +15,10 @@ const read = (dir: string, name: string) => readFileSync(path.join(dir, name), '
 const oneLine = (r: CliResult) => r.stderr.trim().split('\n').length === 1 && r.stderr.trim().length > 0;
 
 describe('crest plan on the demo', () => {
-  const summaryDir = tempFiles({});
-  const jsonDir = tempFiles({});
-  let summary: CliResult;
-  let json: CliResult;
-  beforeAll(async () => {
-    // Two runs side by side, the second with --json: the files of both must be the same bytes.
-    [summary, json] = await Promise.all([runCliAsync(['plan', '--out', summaryDir]), runCliAsync(['plan', '--out', jsonDir, '--json'])]);
-  });
+  // Two runs side by side, the second with --json: the files of both must be the same bytes.
+  const { summary: summaryRun, json: jsonRun } = demoRuns();
+  const [summaryDir, jsonDir] = [summaryRun.dir, jsonRun.dir];
+  const [summary, json] = [summaryRun.result, jsonRun.result];
 
   it('exits 0, writes the five files and prints the summary', () => {
     expect(summary.status).toBe(0);
@@ -37,6 +35,8 @@ describe('crest plan on the demo', () => {
   });
 
   it('--json prints plan.json: one JSON document with schemaVersion 1', () => {
+    expect(json.stderr).toBe('');
+    expect(() => JSON.parse(json.stdout)).not.toThrow();
     expect(json.stdout).toBe(read(jsonDir, 'plan.json'));
     const plan = JSON.parse(json.stdout) as { schemaVersion: number; visits: unknown[]; campaign: { name: string } };
     expect(plan.schemaVersion).toBe(1);
