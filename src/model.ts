@@ -179,9 +179,9 @@ export interface Window {
 export interface PlannedVisit {
   targetId: string;
   localDate: string;
-  /** Start of the exposure, ISO 8601 UTC. */
+  /** Start of the visit block, acquisition included (the exposure starts acquisitionSec later), ISO 8601 UTC. */
   startUtc: string;
-  /** Start of the exposure in the site's zone, ISO 8601 with offset. */
+  /** The same instant (start of the block, acquisition included) in the site's zone, ISO 8601 with offset. */
   startLocal: string;
   /** Mid-exposure time as BJD_TDB. */
   midBjdTdb: number;
