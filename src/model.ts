@@ -1,4 +1,4 @@
-// The shared data model (DESIGN.md, "Data model"). Units are in the names.
+// The shared data model (docs/design.md, "Data model"). Units are in the names.
 
 export interface HorizonPoint {
   azimuthDeg: number;
@@ -139,7 +139,7 @@ export interface Campaign {
   seed: number;
 }
 
-/** One night of the site (DESIGN.md "Data model"). Instants are UTC; null where the Sun never gets that low/high. */
+/** One night of the site (docs/design.md, "Data model"). Instants are UTC; null where the Sun never gets that low/high. */
 export interface Night {
   /** The local date of the evening (site time zone), YYYY-MM-DD. */
   localDate: string;

@@ -26,7 +26,7 @@ function angleField(parse: (text: string) => number, allowed: string, min: numbe
   );
 }
 
-/** Columns of a target list (DESIGN.md "Input files"); header names are case-insensitive. */
+/** Columns of a target list (docs/design.md, "Input files"); header names are case-insensitive. */
 const rowSchema = z.strictObject({
   id: z.string({ error: 'required: a star name' }).trim().min(1, 'required: a star name'),
   ra: angleField(parseRaDeg, 'right ascension as degrees 0 to 360 or hh:mm:ss.s (0h to 24h)', 0, 360),

@@ -36,8 +36,8 @@ const GH_W = [
 ];
 
 /**
- * The signal of a Keplerian orbit: v = γ + K [cos(ν + ω) + e cos ω] (REFERENCES.md, "Keplerian
- * RV"), with the mean anomaly M = 2π(φ − φ_p) counted from the periastron phase φ_p that puts the
+ * The signal of a Keplerian orbit: v = γ + K [cos(ν + ω) + e cos ω] (docs/references.md
+ * [Kepler-RV]), with the mean anomaly M = 2π(φ − φ_p) counted from the periastron phase φ_p that puts the
  * transit at φ = 0 (periastronFromConjunctionBjd). For e = 0 and ω = 90° this is s = −sin 2πφ.
  */
 export function signalShape(ecc: number, omegaDeg: number): SignalShape {

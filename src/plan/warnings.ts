@@ -9,7 +9,7 @@ export const POOR_PHASE_ERR_CYCLES = 0.1;
 
 /**
  * For a planet with an ephemeris: how many visits at ideal quadratures, at the target's typical
- * σ_eff (airmass 1.2), would reach the goal: N = (n σ / K)² (REFERENCES.md, "Visits needed").
+ * σ_eff (airmass 1.2), would reach the goal: N = (n σ / K)² (docs/references.md [Visits-needed]).
  * More nights, or several visits a night (a shorter minSpacingHours), are the usual ways there.
  */
 function visitsHint(summary: TargetSummary, setup: TargetSetup): string {

@@ -1,10 +1,10 @@
 // Information on K for a planet with an ephemeris (circular orbit), with a free offset gamma.
 //
 // Model: v_i = gamma + K s_i + noise, s_i = -sin(2 pi phi_i) with phi = 0 at mid-transit
-// (REFERENCES.md "Keplerian RV"; the star falls after transit). Least squares with weights
+// (docs/references.md [Kepler-RV]; the star falls after transit). Least squares with weights
 // w_i = 1/sigma_eff,i^2 and gamma free gives Var(K^) = 1/I with
 //   I = sum w_i (s_i - sbar_w)^2 = sum w s^2 - (sum w s)^2 / sum w
-// (REFERENCES.md "Visits needed": Var(K^) = sigma^2 / sum (s_i - sbar)^2, weighted form).
+// (docs/references.md [Visits-needed]: Var(K^) = sigma^2 / sum (s_i - sbar)^2, weighted form).
 //
 // Phase uncertainty: each visit's phase is phi_i + eps_i with eps_i ~ N(0, sigma_i^2), taken as
 // independent between visits. For a Gaussian eps, E[cos(a eps)] = exp(-a^2 sigma^2 / 2)
@@ -15,7 +15,7 @@
 //   E[(sum w s)^2] = (sum w m)^2 + sum w^2 (q - m^2)
 //   E[I] = sum w q - ((sum w m)^2 + sum w^2 (q - m^2)) / sum w.
 // With sigma = 0 this is I itself; with sigma -> infinity it tends to (1 - w_i/W) sum w / 2, the
-// random-phase information (sigma_K ~ sigma sqrt(2/N), REFERENCES.md). Four running sums
+// random-phase information (sigma_K ~ sigma sqrt(2/N), docs/references.md [Visits-needed]). Four running sums
 // (W, A = sum w m, B = sum w q, C = sum w^2 (q - m^2)) make adding or removing a visit O(1).
 
 /** Expected signal moments of one visit: mean m and mean square q of s = -sin(2 pi phase). */

@@ -60,7 +60,7 @@ function outcomes(state: PlanState): TargetOutcome[] {
       goal: target.goal,
       utility: state.targetUtility[t]!,
     };
-    // Efficiency (sigma^2/N)/Var(K^) generalised to unequal weights: I / sum w (REFERENCES.md).
+    // Efficiency (sigma^2/N)/Var(K^) generalised to unequal weights: I / sum w (docs/references.md [Information-efficiency]).
     if (target.kind === 'ephemeris' && visits.length > 0) outcome.informationEfficiency = info / visits.reduce((sum, j) => sum + c.weight[j]!, 0);
     return outcome;
   });

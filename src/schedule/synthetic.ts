@@ -2,7 +2,7 @@
 // for a few hours a night in a window that drifts earlier by about 4 minutes a night (a sidereal
 // day is shorter than a solar one, common practice), evenly spaced candidate slots in that window,
 // ephemerides whose phase error grows as sqrt(sigma_T0^2 + n^2 sigma_P^2) after n orbits
-// (REFERENCES.md "Ephemeris propagation"). All values are made up.
+// (docs/references.md [Ephemeris-propagation]). All values are made up.
 import { createRng, type Rng } from '../rv/random.js';
 import type { CandidateSlot, ScheduleNight, ScheduleProblem, ScheduleTarget, ScheduleTimeModel } from './types.js';
 

@@ -27,7 +27,7 @@ describe('time scales', () => {
 describe('bjdTdb (Eastman, Siverd & Gaudi 2010)', () => {
   const days = Array.from({ length: 365 }, (_, d) => new Date(Date.UTC(2027, 0, 1 + d)));
 
-  it('the light-time term for a star in the ecliptic reaches about 499 s (1 au / c; REFERENCES.md)', () => {
+  it('the light-time term for a star in the ecliptic reaches about 499 s (1 au / c; docs/references.md [BJD-TDB])', () => {
     // A star at ecliptic longitude 90 deg, latitude 0: RA 90 deg, Dec +23.44 deg (J2000).
     const delays = days.map((d) => (bjdTdb(d, 90, 23.4393) - jdTdb(d)) * DAY_SEC);
     // Half the yearly range: 1 au / c = 499.0 s, give or take the orbit's eccentricity and the barycentre.

@@ -14,7 +14,7 @@ describe('crest amplitude', () => {
     const r = runCli(['amplitude', '--star-mass', '1', '--planet-mass', '1', '--mass-unit', 'jupiter', '--period', '365.25']);
     expect(r.status).toBe(0);
     expect(r.stderr).toBe('');
-    // 28.4 m/s: Lovis & Fischer 2010 (REFERENCES.md handy form, from memory)
+    // 28.4 m/s: Lovis & Fischer 2010 (docs/references.md [K-handy-form], from memory)
     expect(r.stdout).toMatch(/semi-amplitude K\s+28\.4\d* +m\/s/);
     for (const label of ['semi-major axis a', "star's orbit a*", "planet's orbital speed", "star's orbital speed"]) expect(r.stdout).toContain(label);
   });

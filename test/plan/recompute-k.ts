@@ -3,7 +3,7 @@
 //
 // Least squares for v_i = gamma + K s_i with weights w_i = 1/sigma_eff,i^2 and gamma free gives
 // Var(K^) = 1/I, I = sum w_i (s_i - sbar_w)^2 (weighted linear regression, common practice;
-// REFERENCES.md "Visits needed"). With s_i = -sin(2 pi phi_i) and a Gaussian phase error sigma_i
+// docs/references.md [Visits-needed]). With s_i = -sin(2 pi phi_i) and a Gaussian phase error sigma_i
 // (cycles), independent between visits, the expectation of I over the phase errors is
 //   E[I] = sum w E[s^2] - E[(sum w s)^2] / W,  W = sum w,
 //   E[(sum w s)^2] = sum_{i != j} w_i w_j m_i m_j + sum_i w_i^2 q_i,

@@ -64,7 +64,7 @@ describe('ephemeris too poor', () => {
 });
 
 describe('goal not reached on the demo', () => {
-  it('names the visits at quadratures that would reach it: N = ceil((n sigma / K)^2) (REFERENCES.md, "Visits needed")', () => {
+  it('names the visits at quadratures that would reach it: N = ceil((n sigma / K)^2) (docs/references.md [Visits-needed])', () => {
     const demoPlan = sharedDemoPlan();
     const demo = demoPlan.campaign;
     const short = demoPlan.targets.filter((t) => t.kind === 'ephemeris' && t.kOverSigmaK! < t.goal!);

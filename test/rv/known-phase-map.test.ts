@@ -49,7 +49,7 @@ describe('known-phase detection map', () => {
 
   it('expected σ_K equals the direct least-squares σ_K without phase errors, and the random-phase limit with huge ones', () => {
     const exact = { ...EPH, periodErrDays: 0, tcErrDays: 0 };
-    // Direct reference: σ_K = 1/√(Σ w (s − s̄)²), s = −sin 2π(t − Tc)/P, weighted mean s̄ (REFERENCES.md "Visits needed").
+    // Direct reference: σ_K = 1/√(Σ w (s − s̄)²), s = −sin 2π(t − Tc)/P, weighted mean s̄ (docs/references.md [Visits-needed]).
     const { timesBjd, sigmaMps } = input;
     const w = sigmaMps.map((s) => 1 / (s * s));
     const s = timesBjd.map((t) => -Math.sin((2 * Math.PI * (t - EPH.tcBjdTdb)) / EPH.periodDays));
@@ -57,7 +57,7 @@ describe('known-phase detection map', () => {
     const reference = 1 / Math.sqrt(s.reduce((a, v, n) => a + w[n]! * (v - mean) ** 2, 0));
     expect(expectedSigmaKMps(timesBjd, sigmaMps, exact)).toBeCloseTo(reference, 9);
     // Phase unknown (σ_T0 of ten orbits): E[s] → 0, E[s²] → 1/2, so E[I] → Σw/2 − Σw²/(2 Σw)
-    // (objective-ephemeris.ts, the σ → ∞ limit; σ_K ≈ σ √(2/N) for equal weights, REFERENCES.md).
+    // (objective-ephemeris.ts, the σ → ∞ limit; σ_K ≈ σ √(2/N) for equal weights, docs/references.md [Visits-needed]).
     const sumW = w.reduce((a, b) => a + b, 0);
     const randomPhase = 1 / Math.sqrt(sumW / 2 - w.reduce((a, b) => a + b * b, 0) / (2 * sumW));
     expect(expectedSigmaKMps(timesBjd, sigmaMps, { ...EPH, tcErrDays: 10 * EPH.periodDays })).toBeCloseTo(randomPhase, 6);

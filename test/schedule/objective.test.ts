@@ -45,7 +45,7 @@ describe('information on K with a free offset', () => {
     return ephemerisInformation(stats, 0);
   };
 
-  it('reaches sigma^2/N for balanced quadratures (REFERENCES.md "Visits needed")', () => {
+  it('reaches sigma^2/N for balanced quadratures (docs/references.md [Visits-needed])', () => {
     const visits = Array.from({ length: 10 }, (_, i) => ({ w: 0.25, phase: i % 2 ? 0.25 : 0.75, err: 0 }));
     // sigma = 2 m/s: Var(K) = sigma^2 / N = 0.4, so I = 2.5.
     expect(info(visits)).toBeCloseTo(2.5, 12);
@@ -56,7 +56,7 @@ describe('information on K with a free offset', () => {
     expect(info([{ w: 1, phase: 0.3, err: 0 }, { w: 2, phase: 0.3, err: 0 }])).toBeCloseTo(0, 12);
   });
 
-  it('tends to the random-phase information sum w (1 - w/W) / 2 for a hopeless ephemeris (REFERENCES.md: sigma_K ~ sigma sqrt(2/N))', () => {
+  it('tends to the random-phase information sum w (1 - w/W) / 2 for a hopeless ephemeris (docs/references.md [Visits-needed]: sigma_K ~ sigma sqrt(2/N))', () => {
     const visits = Array.from({ length: 8 }, (_, i) => ({ w: 1, phase: i / 8, err: 5 }));
     expect(info(visits)).toBeCloseTo((8 * (1 - 1 / 8)) / 2, 9);
   });
