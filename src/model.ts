@@ -71,6 +71,8 @@ export interface PlanetSpec {
   kMps?: number;
   ecc: number;
   omegaDeg: number;
+  /** When given, e and ω are fitted: Gaussian prior of this width on e cos ω and e sin ω. */
+  eccPriorSigma?: number;
 }
 
 export interface SearchSpec {
@@ -79,8 +81,15 @@ export interface SearchSpec {
   massEarth: number;
 }
 
+/**
+ * One row of a target list: a planet or candidate (with an ephemeris), a blind search, or both.
+ * Rows of one star share its star fields (coordinates, magnitude, Teff, mass, rotation, jitter,
+ * activity); a visit observes the star and informs every planet of it.
+ */
 export interface Target {
   id: string;
+  /** The star this row belongs to (the row's id when the list has no star column). */
+  starId: string;
   raDeg: number;
   decDeg: number;
   pmRaMasYr: number;
@@ -91,6 +100,13 @@ export interface Target {
   massSun: number;
   vsiniKms: number;
   jitterMps: number;
+  /** Fraction of the jitter variance shared by all visits of one night; default: the campaign's. */
+  nightlyJitterFraction?: number;
+  /** Rotation period: the star's activity is then correlated across nights (quasi-periodic kernel). */
+  rotationDays?: number;
+  /** Activity amplitude (m/s) and coherence time (days) of that kernel. */
+  activityMps?: number;
+  activityCoherenceDays?: number;
   priority: number;
   /** K / sigma_K to reach for this target; overrides the campaign's goals.significance. */
   goalSignificance?: number;
@@ -120,6 +136,19 @@ export interface Constraints {
   minWindowMinutes: number;
 }
 
+/** How the star's jitter is split and how transits are kept out of visits. */
+export interface NoiseSettings {
+  /** Default fraction of the jitter variance shared by all visits of one night. */
+  nightlyJitterFraction: number;
+}
+
+export interface TransitAvoidance {
+  /** Keep visits out of the predicted transit with this probability (two-sided Gaussian). */
+  confidence: number;
+  /** Never remove more than this fraction of the orbit; beyond it, warn and keep the phases. */
+  maxOrbitFraction: number;
+}
+
 export interface Goals {
   /** K / sigma_K to reach for targets with an ephemeris. */
   significance: number;
@@ -136,6 +165,8 @@ export interface Campaign {
   time: TimeModel;
   constraints: Constraints;
   goals: Goals;
+  noise: NoiseSettings;
+  transits: TransitAvoidance;
   seed: number;
 }
 
@@ -175,9 +206,16 @@ export interface Window {
   moonSeparationDeg: number;
 }
 
-/** One planned observation. */
-export interface PlannedVisit {
+/** Predicted orbital phase of one planet at a visit (0 = mid-transit) and its 1-sigma error. */
+export interface VisitPhase {
   targetId: string;
+  phase: number;
+  phaseErr: number;
+}
+
+/** One planned observation: a visit observes a star (and so every planet of it). */
+export interface PlannedVisit {
+  starId: string;
   localDate: string;
   /** Start of the visit block, acquisition included (the exposure starts acquisitionSec later), ISO 8601 UTC. */
   startUtc: string;
@@ -190,16 +228,17 @@ export interface PlannedVisit {
   durationSec: number;
   airmass: number;
   moonSeparationDeg: number;
-  /** Predicted orbital phase (0 = mid-transit) and its 1-sigma error, for targets with an ephemeris. */
-  phase?: number;
-  phaseErr?: number;
-  /** Per-visit precision (photon + floor) and with jitter. */
+  /** Predicted phase of each planet of the star that has an ephemeris. */
+  phases: VisitPhase[];
+  /** Per-visit precision (photon + floor), with all the jitter, and its white part (without the nightly share). */
   sigmaMps: number;
   sigmaEffMps: number;
+  sigmaWhiteMps: number;
 }
 
 export interface TargetSummary {
   targetId: string;
+  starId: string;
   kind: 'ephemeris' | 'search' | 'monitor';
   priority: number;
   kMps?: number;

@@ -21,6 +21,7 @@ function randomTargets(count: number, seed: number): Target[] {
   const rng = createRng(seed);
   return Array.from({ length: count }, (_, i) => ({
     id: `bench-${i + 1}`,
+    starId: `bench-${i + 1}`,
     raDeg: 360 * rng.uniform(),
     decDeg: (Math.asin(2 * rng.uniform() - 1) * 180) / Math.PI,
     pmRaMasYr: 200 * rng.normal(),

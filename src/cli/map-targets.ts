@@ -59,7 +59,7 @@ function planetMassEarth(plan: Plan, target: Target, eph: Ephemeris): number | u
 }
 
 function jobOf(plan: Plan, target: Target, settings: MapSettings): MapJob | undefined {
-  const visits = visitsOf(plan, target.id);
+  const visits = visitsOf(plan, target.starId);
   const timesBjd = visits.map((v) => v.midBjdTdb);
   const sigmaMps = visits.map((v) => v.sigmaEffMps);
   if (target.search) {
@@ -92,14 +92,14 @@ export function mapJobs(plan: Plan, settings: MapSettings, targetId?: string): {
   if (targetId !== undefined) {
     const target = mappable.find((t) => t.id === targetId);
     if (!target) throw inputError({ file: 'command line', field: '--target', value: targetId, allowed: `a blind-search or ephemeris target of the plan: ${mappable.map((t) => t.id).join(', ')}` });
-    const visits = visitsOf(plan, targetId).length;
+    const visits = visitsOf(plan, target.starId).length;
     if (visits < MIN_MAP_VISITS) throw inputError({ file: 'command line', field: '--target', value: targetId, allowed: `a target with at least ${MIN_MAP_VISITS} planned visits (it has ${visits})` });
     return { jobs: [jobOf(plan, target, settings)!], skipped: [] };
   }
   const jobs: MapJob[] = [];
   const skipped: string[] = [];
   for (const target of mappable) {
-    if (visitsOf(plan, target.id).length < MIN_MAP_VISITS) skipped.push(target.id);
+    if (visitsOf(plan, target.starId).length < MIN_MAP_VISITS) skipped.push(target.id);
     else jobs.push(jobOf(plan, target, settings)!);
   }
   return { jobs, skipped };

@@ -11,6 +11,7 @@ import { readSite } from './site.js';
 import { semesterWindow } from './semester.js';
 import { readTargets } from './targets.js';
 import { issueToError } from './zod-issue.js';
+import { DEFAULT_NIGHTLY_JITTER_FRACTION } from '../rv/star-noise.js';
 
 /** A calendar date, ISO 8601 (YAML may hand us a Date for an unquoted date). */
 export const isoDate = z.preprocess(
@@ -58,6 +59,17 @@ export const campaignSchema = z.strictObject({
   time: timeSchema,
   constraints: constraintsSchema.default(DEFAULT_CONSTRAINTS),
   goals: z.strictObject({ significance: z.number().positive('a positive K/sigma_K').max(100, 'at most 100').default(5) }).default({ significance: 5 }),
+  noise: z
+    .strictObject({
+      nightlyJitterFraction: z.number({ error: 'a fraction from 0 to 1' }).min(0, 'a fraction from 0 to 1').max(1, 'a fraction from 0 to 1').default(DEFAULT_NIGHTLY_JITTER_FRACTION),
+    })
+    .default({ nightlyJitterFraction: DEFAULT_NIGHTLY_JITTER_FRACTION }),
+  transits: z
+    .strictObject({
+      confidence: z.number({ error: 'a probability from 0.5 to 0.9999' }).min(0.5, 'a probability from 0.5 to 0.9999').max(0.9999, 'a probability from 0.5 to 0.9999').default(0.95),
+      maxOrbitFraction: z.number({ error: 'a fraction of the orbit from 0 to 0.5' }).min(0, 'a fraction of the orbit from 0 to 0.5').max(0.5, 'a fraction of the orbit from 0 to 0.5').default(0.2),
+    })
+    .default({ confidence: 0.95, maxOrbitFraction: 0.2 }),
   seed: z.number().int('a whole number').min(0, 'a whole number, 0 or more').default(1),
 });
 
@@ -91,6 +103,8 @@ export function readCampaign(file: string): Campaign {
     time: c.time,
     constraints: c.constraints,
     goals: c.goals,
+    noise: c.noise,
+    transits: c.transits,
     seed: c.seed,
   };
 }

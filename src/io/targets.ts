@@ -22,13 +22,14 @@ function numberField(allowed: string, min: number, max: number, opts: { exclusiv
 function angleField(parse: (text: string) => number, allowed: string, min: number, max: number) {
   return z.preprocess(
     (cell: Cell) => (cell === undefined || cell.trim() === '' ? undefined : parse(cell)),
-    z.number({ error: allowed }).refine((v) => Number.isFinite(v) && v >= min && v <= max, allowed),
+    z.number({ error: allowed }).refine((v) => Number.isFinite(v) && v >= min && v <= max, allowed).optional(),
   );
 }
 
 /** Columns of a target list (docs/design.md, "Input files"); header names are case-insensitive. */
 const rowSchema = z.strictObject({
-  id: z.string({ error: 'required: a star name' }).trim().min(1, 'required: a star name'),
+  id: z.string({ error: 'required: a star or planet name' }).trim().min(1, 'required: a star or planet name'),
+  star: z.preprocess((cell: Cell) => (cell === undefined || cell.trim() === '' ? undefined : cell.trim()), z.string().optional()),
   ra: angleField(parseRaDeg, 'right ascension as degrees 0 to 360 or hh:mm:ss.s (0h to 24h)', 0, 360),
   dec: angleField(parseDecDeg, 'declination as degrees -90 to +90 or ±dd:mm:ss', -90, 90),
   pmramasyr: numberField('proper motion in RA*cos(dec), mas/yr, -20000 to 20000', -20000, 20000),
@@ -39,6 +40,10 @@ const rowSchema = z.strictObject({
   masssun: numberField('stellar mass in solar masses, more than 0.05 and at most 10', 0.05, 10, { exclusiveMin: true }),
   vsinikms: numberField('projected rotation in km/s, 0 to 300', 0, 300),
   jittermps: numberField('stellar jitter in m/s, 0 to 1000', 0, 1000),
+  nightlyjitterfraction: numberField('fraction of the jitter variance shared within a night, 0 to 1', 0, 1),
+  rotationdays: numberField('stellar rotation period in days, more than 0.1 and at most 1000', 0.1, 1000, { exclusiveMin: true }),
+  activitymps: numberField('activity amplitude in m/s, 0 to 1000', 0, 1000),
+  activitycoherencedays: numberField('activity coherence time in days, more than 0.1 and at most 10000', 0.1, 1e4, { exclusiveMin: true }),
   priority: numberField('a priority weight, more than 0 and at most 100', 0, 100, { exclusiveMin: true }),
   goalsignificance: numberField('K/sigma_K to reach, more than 0 and at most 100', 0, 100, { exclusiveMin: true }),
   perioddays: numberField('orbital period in days, more than 0 and at most 100000', 0, 1e5, { exclusiveMin: true }),
@@ -53,6 +58,7 @@ const rowSchema = z.strictObject({
     z.number({ error: 'eccentricity from 0 to 0.99' }).min(0, 'eccentricity from 0 to 0.99').max(0.99, 'eccentricity from 0 to 0.99 (e >= 1 is not a bound orbit)').optional(),
   ),
   omegadeg: numberField('argument of periastron in degrees, 0 to 360', 0, 360),
+  eccsigma: numberField('prior width on e cos(omega) and e sin(omega) when e is fitted, more than 0 and at most 1', 0, 1, { exclusiveMin: true }),
   searchperiodmindays: numberField('shortest search period in days, more than 0.1 and at most 100000', 0.1, 1e5, { exclusiveMin: true }),
   searchperiodmaxdays: numberField('longest search period in days, more than 0.1 and at most 100000', 0.1, 1e5, { exclusiveMin: true }),
   searchmassearth: numberField('search mass in Earth masses, more than 0', 0, 3e4, { exclusiveMin: true }),
@@ -65,10 +71,16 @@ const CANONICAL: Record<string, string> = {
   vsinikms: 'vsiniKms', jittermps: 'jitterMps', goalsignificance: 'goalSignificance', perioddays: 'periodDays', perioderrdays: 'periodErrDays',
   tcbjdtdb: 'tcBjdTdb', tcerrdays: 'tcErrDays', transitdurationhours: 'transitDurationHours', planetmassearth: 'planetMassEarth', planetkmps: 'planetKMps',
   omegadeg: 'omegaDeg', searchperiodmindays: 'searchPeriodMinDays', searchperiodmaxdays: 'searchPeriodMaxDays',
-  searchmassearth: 'searchMassEarth',
+  searchmassearth: 'searchMassEarth', nightlyjitterfraction: 'nightlyJitterFraction', rotationdays: 'rotationDays', activitymps: 'activityMps',
+  activitycoherencedays: 'activityCoherenceDays', eccsigma: 'eccSigma',
 };
 const display = (column: string) => CANONICAL[column] ?? column;
 const REQUIRED = ['id', 'ra', 'dec', 'vmag', 'teffk'];
+/** Star fields: given once per star (on any of its rows) or repeated identically. */
+const STAR_COLUMNS = [
+  'ra', 'dec', 'pmramasyr', 'pmdecmasyr', 'epochyear', 'vmag', 'teffk', 'masssun', 'vsinikms', 'jittermps',
+  'nightlyjitterfraction', 'rotationdays', 'activitymps', 'activitycoherencedays',
+] as const;
 
 interface Place {
   file: string;
@@ -86,8 +98,10 @@ function buildTarget(row: Row, place: Place): Target {
   const need = (column: keyof Row, allowed: string) => {
     if (row[column] === undefined) fail(place, column, allowed);
   };
-  need('vmag', 'required: V magnitude from -2 to 20');
-  need('teffk', 'required: effective temperature in kelvin');
+  need('ra', 'required on one row of the star: right ascension');
+  need('dec', 'required on one row of the star: declination');
+  need('vmag', 'required on one row of the star: V magnitude from -2 to 20');
+  need('teffk', 'required on one row of the star: effective temperature in kelvin');
   const teffK = row.teffk!;
   const withDefault = <T>(value: T | undefined, name: string, fallback: T): T => {
     if (value !== undefined) return value;
@@ -96,7 +110,7 @@ function buildTarget(row: Row, place: Place): Target {
   };
 
   const hasPeriod = row.perioddays !== undefined;
-  for (const c of ['tcbjdtdb', 'planetmassearth', 'planetkmps', 'perioderrdays', 'tcerrdays', 'transitdurationhours'] as const) {
+  for (const c of ['tcbjdtdb', 'planetmassearth', 'planetkmps', 'perioderrdays', 'tcerrdays', 'transitdurationhours', 'eccsigma'] as const) {
     if (!hasPeriod && row[c] !== undefined) fail(place, c, 'needs periodDays in the same row');
   }
   if (hasPeriod && row.tcbjdtdb === undefined) fail(place, 'tcbjdtdb', 'required with periodDays: mid-transit time as a full BJD_TDB');
@@ -118,8 +132,9 @@ function buildTarget(row: Row, place: Place): Target {
 
   const target: Target = {
     id: row.id,
-    raDeg: row.ra,
-    decDeg: row.dec,
+    starId: row.star ?? row.id,
+    raDeg: row.ra!,
+    decDeg: row.dec!,
     pmRaMasYr: row.pmramasyr ?? 0,
     pmDecMasYr: row.pmdecmasyr ?? 0,
     epochYear: row.epochyear ?? 2000,
@@ -133,6 +148,8 @@ function buildTarget(row: Row, place: Place): Target {
     estimated,
     source: `${place.file} ${place.where}`,
   };
+  const optional = { nightlyJitterFraction: row.nightlyjitterfraction, rotationDays: row.rotationdays, activityMps: row.activitymps, activityCoherenceDays: row.activitycoherencedays };
+  for (const [key, value] of Object.entries(optional)) if (value !== undefined) Object.assign(target, { [key]: value });
   if (hasPeriod) {
     target.ephemeris = {
       periodDays: row.perioddays!,
@@ -148,6 +165,7 @@ function buildTarget(row: Row, place: Place): Target {
         ecc: row.ecc ?? 0,
         omegaDeg: row.omegadeg ?? 90,
       };
+      if (row.eccsigma !== undefined) target.planet.eccPriorSigma = row.eccsigma;
     }
   }
   if (searchGiven === 3) {
@@ -186,8 +204,7 @@ export function parseTargets(text: string, file: string): Target[] {
   }
   if (rows.length === 0) throw inputError({ file, field: '(file)', value: '', allowed: 'no target rows after the header' });
 
-  const seen = new Set<string>();
-  return rows.map(({ record, info }, index) => {
+  const parsed = rows.map(({ record, info }, index) => {
     const raw = Object.fromEntries(columns.map((c, i) => [c, record[i] ?? '']));
     const place: Place = { file, where: `row ${index + 1} (line ${info.lines})`, raw };
     const result = rowSchema.safeParse(raw);
@@ -196,10 +213,46 @@ export function parseTargets(text: string, file: string): Target[] {
       const column = String(issue.path[0]);
       fail(place, column, issue.message.startsWith('Invalid input') ? 'a valid value' : issue.message);
     }
-    if (seen.has(result.data.id)) fail(place, 'id', 'each target id once');
-    seen.add(result.data.id);
-    return buildTarget(result.data, place);
+    return { row: result.data, place };
   });
+  const seen = new Map<string, Place>();
+  for (const { row, place } of parsed) {
+    if (seen.has(row.id)) fail(place, 'id', `each id once (also on ${seen.get(row.id)!.where})`);
+    seen.set(row.id, place);
+  }
+  return [...groupStars(parsed, seen).values()].flatMap((group) => group.map(({ row, place }) => buildTarget(row, place)));
+}
+
+/**
+ * Rows grouped by star (the star column, else the row's own id), in the order stars first
+ * appear; each star field is taken from the first row that gives it and copied to the others.
+ * A different value on another row of the star, a second search row, or a star named like a row
+ * of another star is one clear error.
+ */
+function groupStars(parsed: { row: Row; place: Place }[], ids: Map<string, Place>): Map<string, { row: Row; place: Place }[]> {
+  const stars = new Map<string, { row: Row; place: Place }[]>();
+  for (const entry of parsed) {
+    const starId = entry.row.star ?? entry.row.id;
+    const rowOfId = ids.get(starId);
+    if (rowOfId && (parsed.find((p) => p.place === rowOfId)!.row.star ?? starId) !== starId) fail(entry.place, 'star', `a star name that is not the id of a row of another star (${rowOfId.where})`);
+    stars.set(starId, [...(stars.get(starId) ?? []), entry]);
+  }
+  for (const [starId, group] of stars) {
+    const given: Partial<Record<(typeof STAR_COLUMNS)[number], { value: unknown; place: Place }>> = {};
+    for (const { row, place } of group) {
+      for (const column of STAR_COLUMNS) {
+        const value = row[column];
+        if (value === undefined) continue;
+        const first = given[column];
+        if (!first) given[column] = { value, place };
+        else if (first.value !== value) fail(place, column, `the same value as on ${first.place.where} of star ${starId} (${String(first.value)}), or blank`);
+      }
+    }
+    const searches = group.filter(({ row }) => row.searchperiodmindays !== undefined);
+    if (searches.length > 1) fail(searches[1]!.place, 'searchperiodmindays', `one search range per star (star ${starId} has one on ${searches[0]!.place.where})`);
+    for (const entry of group) for (const column of STAR_COLUMNS) if (given[column]) (entry.row as Record<string, unknown>)[column] = given[column]!.value;
+  }
+  return stars;
 }
 
 export function readTargets(file: string): Target[] {

@@ -39,19 +39,35 @@ export function phaseErrCycles(eph: Ephemeris, tBjd: number): number {
   return Math.hypot(eph.tcErrDays, cyclesSinceTc(eph, tBjd) * eph.periodErrDays) / eph.periodDays;
 }
 
+/** How visits are kept out of transits: the margin in standard deviations and the largest fraction of the orbit removed. */
+export interface TransitRule {
+  zScore: number;
+  maxOrbitFraction: number;
+}
+
 /**
- * Whether [startBjd, endBjd] overlaps a predicted transit, widened on each side by the 1-sigma
- * error of that transit's time. RVs taken in transit are distorted by the Rossiter–McLaughlin
- * effect (Rossiter 1924; McLaughlin 1924), so RV programmes avoid them (common practice).
- * False when the ephemeris has no transit duration.
+ * Half-width (days) of the span kept free around transit epoch n: half the duration plus z
+ * standard deviations of that transit's time; Infinity-free: when the whole span (twice this)
+ * would exceed maxOrbitFraction of the period, the transit time is too uncertain to avoid and 0 is
+ * returned (the phases are kept; the plan warns). 0 without a transit duration.
  */
-export function overlapsTransit(eph: Ephemeris, startBjd: number, endBjd: number): boolean {
-  if (eph.transitDurationHours === undefined) return false;
-  const halfDays = eph.transitDurationHours / 48;
+export function transitHalfWidthDays(eph: Ephemeris, epoch: number, rule: TransitRule): number {
+  if (eph.transitDurationHours === undefined) return 0;
+  const halfDays = eph.transitDurationHours / 48 + rule.zScore * tcErrAtEpochDays(eph, epoch);
+  return 2 * halfDays > rule.maxOrbitFraction * eph.periodDays ? 0 : halfDays;
+}
+
+/**
+ * Whether [startBjd, endBjd] overlaps a predicted transit widened as transitHalfWidthDays says.
+ * RVs taken in transit are distorted by the Rossiter–McLaughlin effect (Rossiter 1924;
+ * McLaughlin 1924), so RV programmes avoid them (common practice). False when the ephemeris has
+ * no transit duration, or when the transit is too uncertain to avoid.
+ */
+export function overlapsTransit(eph: Ephemeris, startBjd: number, endBjd: number, rule: TransitRule): boolean {
   for (const epoch of new Set([nearestEpoch(eph, startBjd), nearestEpoch(eph, endBjd)])) {
     const tc = tcAtEpochBjd(eph, epoch);
-    const margin = halfDays + tcErrAtEpochDays(eph, epoch);
-    if (startBjd < tc + margin && endBjd > tc - margin) return true;
+    const margin = transitHalfWidthDays(eph, epoch, rule);
+    if (margin > 0 && startBjd < tc + margin && endBjd > tc - margin) return true;
   }
   return false;
 }

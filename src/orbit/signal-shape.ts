@@ -1,6 +1,5 @@
-// The shape of a planet's RV signal against orbital phase, and its expected moments under a
-// Gaussian phase error: what the scheduler and the report need to weigh a visit of an
-// eccentric orbit.
+// The shape of a planet's RV signal against orbital phase and its slope: what the information
+// model (src/rv/information-model.ts) and the report need for an orbit of any eccentricity.
 import { eccentricAnomalyRad } from './kepler-equation.js';
 import { trueAnomalyRad } from './anomalies.js';
 import { periastronFromConjunctionBjd } from './periastron-time.js';
@@ -10,8 +9,8 @@ export interface SignalShape {
   omegaDeg: number;
   /** s(φ) with v = γ + K s, φ in cycles from mid-transit. */
   at(phase: number): number;
-  /** E[s] and E[s²] when the true phase is φ + ε, ε ~ N(0, σ²) in cycles. */
-  moments(phase: number, phaseErr: number): { m: number; q: number };
+  /** ds/dφ (per cycle). */
+  slope(phase: number): number;
 }
 
 /** The shape of a target's planet: its eccentric orbit if it has one, else the circular −sin 2πφ. */
@@ -19,92 +18,27 @@ export function planetSignalShape(planet: { ecc: number; omegaDeg: number } | un
   return signalShape(planet?.ecc ?? 0, planet?.omegaDeg ?? 90);
 }
 
-/** Samples per cycle for the Fourier series of s and s² (enough for e ≤ 0.9 at the 1e-3 level). */
-const SAMPLES = 512;
-/** Below this phase error the moments are taken by Gauss–Hermite quadrature of s itself. */
-const QUADRATURE_BELOW = 0.02;
-
-// 20-point Gauss–Hermite nodes and weights (Abramowitz & Stegun 1964, Table 25.10):
-// ∫ e^(−x²) f(x) dx ≈ Σ w_k f(x_k); with x = ε/(σ√2), E[f(φ+ε)] = Σ w_k f(φ + σ√2 x_k) / √π.
-const GH_X = [
-  0.2453407083009, 0.7374737285454, 1.2340762153953, 1.7385377121166, 2.2549740020893, 2.7888060584281, 3.347854567384, 3.9447640401156,
-  4.6036824495507, 5.3874808900112,
-];
-const GH_W = [
-  4.622436696006e-1, 2.866755053628e-1, 1.090172060200e-1, 2.481052088746e-2, 3.243773342238e-3, 2.283386360164e-4, 7.802556478532e-6,
-  1.086069370769e-7, 4.399340992273e-10, 2.229393645534e-13,
-];
-
 /**
  * The signal of a Keplerian orbit: v = γ + K [cos(ν + ω) + e cos ω] (docs/references.md
- * [Kepler-RV]), with the mean anomaly M = 2π(φ − φ_p) counted from the periastron phase φ_p that puts the
- * transit at φ = 0 (periastronFromConjunctionBjd). For e = 0 and ω = 90° this is s = −sin 2πφ.
+ * [Kepler-RV]), with the mean anomaly M = 2π(φ − φ_p) counted from the periastron phase φ_p that
+ * puts the transit at φ = 0 (periastronFromConjunctionBjd). For e = 0 and ω = 90° this is
+ * s = −sin 2πφ. The slope is ds/dφ = −sin(ν + ω) 2π dν/dM with dν/dM = (1 + e cos ν)² / (1 − e²)^(3/2)
+ * (angular momentum r² dν/dt = const; [Murray-Dermott1999] §2.4).
  */
 export function signalShape(ecc: number, omegaDeg: number): SignalShape {
   const omega = (omegaDeg * Math.PI) / 180;
+  if (ecc === 0 && omegaDeg === 90) {
+    return { ecc, omegaDeg, at: (phase) => -Math.sin(2 * Math.PI * phase), slope: (phase) => -2 * Math.PI * Math.cos(2 * Math.PI * phase) };
+  }
   const periastronPhase = periastronFromConjunctionBjd({ tcBjd: 0, periodDays: 1, ecc, omegaDeg });
-  const at = (phase: number): number => {
-    const nu = trueAnomalyRad(eccentricAnomalyRad(2 * Math.PI * (phase - periastronPhase), ecc), ecc);
-    return Math.cos(nu + omega) + ecc * Math.cos(omega);
+  const nuAt = (phase: number) => trueAnomalyRad(eccentricAnomalyRad(2 * Math.PI * (phase - periastronPhase), ecc), ecc);
+  return {
+    ecc,
+    omegaDeg,
+    at: (phase) => Math.cos(nuAt(phase) + omega) + ecc * Math.cos(omega),
+    slope: (phase) => {
+      const nu = nuAt(phase);
+      return -Math.sin(nu + omega) * 2 * Math.PI * ((1 + ecc * Math.cos(nu)) ** 2 / (1 - ecc * ecc) ** 1.5);
+    },
   };
-  const s = fourier((k) => at(k / SAMPLES));
-  const s2 = fourier((k) => at(k / SAMPLES) ** 2);
-  const moments = (phase: number, phaseErr: number) => {
-    if (phaseErr < QUADRATURE_BELOW) {
-      let m = 0;
-      let q = 0;
-      for (let k = 0; k < GH_X.length; k++) {
-        for (const sign of [1, -1]) {
-          const v = at(phase + sign * phaseErr * Math.SQRT2 * GH_X[k]!);
-          m += GH_W[k]! * v;
-          q += GH_W[k]! * v * v;
-        }
-      }
-      return { m: m / Math.sqrt(Math.PI), q: q / Math.sqrt(Math.PI) };
-    }
-    return { m: damped(s, phase, phaseErr), q: damped(s2, phase, phaseErr) };
-  };
-  return { ecc, omegaDeg, at, moments };
-}
-
-interface Series {
-  a0: number;
-  cos: Float64Array;
-  sin: Float64Array;
-}
-
-/** Fourier coefficients of a function sampled at SAMPLES phases (the discrete Fourier transform). */
-function fourier(sample: (k: number) => number): Series {
-  const values = Float64Array.from({ length: SAMPLES }, (_, k) => sample(k));
-  const half = SAMPLES / 2;
-  const cos = new Float64Array(half);
-  const sin = new Float64Array(half);
-  for (let n = 1; n < half; n++) {
-    let a = 0;
-    let b = 0;
-    for (let k = 0; k < SAMPLES; k++) {
-      const angle = (2 * Math.PI * n * k) / SAMPLES;
-      a += values[k]! * Math.cos(angle);
-      b += values[k]! * Math.sin(angle);
-    }
-    cos[n] = (2 * a) / SAMPLES;
-    sin[n] = (2 * b) / SAMPLES;
-  }
-  return { a0: values.reduce((sum, v) => sum + v, 0) / SAMPLES, cos, sin };
-}
-
-/**
- * E[f(φ + ε)] for ε ~ N(0, σ²): each harmonic n is damped by exp(−2π² n² σ²), the normal
- * characteristic function at 2πn (common practice). Harmonics are summed until the damping
- * falls below 1e-12.
- */
-function damped(series: Series, phase: number, phaseErr: number): number {
-  let total = series.a0;
-  for (let n = 1; n < series.cos.length; n++) {
-    const damping = Math.exp(-2 * Math.PI * Math.PI * n * n * phaseErr * phaseErr);
-    if (damping < 1e-12) break;
-    const angle = 2 * Math.PI * n * phase;
-    total += damping * (series.cos[n]! * Math.cos(angle) + series.sin[n]! * Math.sin(angle));
-  }
-  return total;
 }

@@ -5,11 +5,11 @@ import { bjdTdb } from '../astro/bjd.js';
 import type { Campaign, Plan, PlannedVisit, TargetSummary } from '../model.js';
 import { phaseErrCycles } from '../orbit/ephemeris.js';
 import { optimiseSchedule } from '../schedule/optimise.js';
-import type { ScheduleProblem, ScheduleResult, ScheduleTarget } from '../schedule/types.js';
+import type { ScheduleProblem, ScheduleResult } from '../schedule/types.js';
 import { simulateWeather } from '../schedule/weather.js';
 import { computeNights } from '../sky/nights.js';
 import { computeWindows } from '../sky/visibility.js';
-import { candidateSlots, scheduleNights, setupTargets, type SlotDetail, type TargetSetup } from './candidates.js';
+import { candidateSlots, scheduleNights, setupStars, setupTargets, starTargets, transitRule, type SlotDetail, type TargetSetup } from './candidates.js';
 import { planWarnings } from './warnings.js';
 
 export const GENERATOR = 'crest 0.1.0';
@@ -27,14 +27,15 @@ export function buildPlan(campaign: Campaign, options: PlanOptions = {}): Plan {
   const seed = options.seed ?? campaign.seed;
   const { site, constraints, window, time } = campaign;
   const nights = computeNights(site, window.start, window.end, constraints.twilight);
-  const { windows } = computeWindows(site, campaign.targets, nights, constraints);
   const setups = setupTargets(campaign);
+  const stars = setupStars(campaign, setups);
+  const { windows } = computeWindows(site, starTargets(stars), nights, constraints);
   const given = time.mode === 'given-nights' ? new Set(time.dates) : undefined;
-  const details = candidateSlots(campaign, nights, windows, setups).filter((d) => !given || given.has(d.localDate));
+  const details = candidateSlots(campaign, nights, windows, stars).filter((d) => !given || given.has(d.localDate));
   const allNights = scheduleNights(campaign, nights);
   const problem: ScheduleProblem = {
     nights: given ? allNights.filter((n) => given.has(n.localDate)) : allNights,
-    targets: setups.flatMap((s) => (s.scheduleTarget ? [s.scheduleTarget] : [])),
+    targets: stars.flatMap((s) => (s.scheduleTarget ? [s.scheduleTarget] : [])),
     slots: details.map((d) => d.slot),
     time: time.mode === 'choose-nights' ? time : time.mode === 'hours' ? time : { mode: 'given-nights' },
     constraints: { minSpacingHours: constraints.minSpacingHours, onePerNight: constraints.minSpacingHours >= 12 },
@@ -62,14 +63,14 @@ export function buildPlan(campaign: Campaign, options: PlanOptions = {}): Plan {
     totals: { nights: plannedDates.length, visits: visits.length, exposureHours, overheadHours: totalHours - exposureHours, totalHours, utility: result.utility },
     warnings: [],
   };
-  plan.warnings = planWarnings(plan, setups, windows);
+  plan.warnings = planWarnings(plan, setups, windows, transitRule(campaign));
   return plan;
 }
 
 function plannedVisit(d: SlotDetail, campaign: Campaign): PlannedVisit {
   const start = DateTime.fromMillis(d.slot.startMs, { zone: 'utc' });
-  const visit: PlannedVisit = {
-    targetId: d.slot.targetId,
+  return {
+    starId: d.slot.targetId,
     localDate: d.localDate,
     startUtc: start.toISO({ suppressMilliseconds: true })!,
     startLocal: start.setZone(campaign.site.timeZone).toISO({ suppressMilliseconds: true })!,
@@ -78,14 +79,11 @@ function plannedVisit(d: SlotDetail, campaign: Campaign): PlannedVisit {
     durationSec: d.slot.durationSec,
     airmass: d.airmass,
     moonSeparationDeg: d.moonSeparationDeg,
+    phases: d.phases,
     sigmaMps: d.sigmaMps,
-    sigmaEffMps: d.slot.sigmaEffMps,
+    sigmaEffMps: d.sigmaEffMps,
+    sigmaWhiteMps: d.slot.sigmaWhiteMps,
   };
-  if (d.slot.phase !== undefined) {
-    visit.phase = d.slot.phase;
-    visit.phaseErr = d.slot.phaseErr;
-  }
-  return visit;
 }
 
 function targetSummary(
@@ -95,10 +93,10 @@ function targetSummary(
   windowEndBjd: number,
 ): TargetSummary {
   const { target } = setup;
-  const scheduled: ScheduleTarget | undefined = setup.scheduleTarget;
   const summary: TargetSummary = {
     targetId: target.id,
-    kind: scheduled?.kind ?? 'monitor',
+    starId: target.starId,
+    kind: setup.role ?? 'monitor',
     priority: target.priority,
     visits: 0,
     hours: 0,
@@ -106,10 +104,10 @@ function targetSummary(
   };
   if (target.ephemeris) summary.phaseErrAtEnd = phaseErrCycles(target.ephemeris, windowEndBjd);
   const outcome = result.targets.find((t) => t.targetId === target.id);
-  if (!scheduled || !outcome) return summary;
+  if (!setup.role || !outcome) return summary;
   return {
     ...summary,
-    kMps: scheduled.kMps,
+    kMps: setup.kMps,
     visits: outcome.visits,
     hours: outcome.hours,
     sigmaKMps: outcome.sigmaKMps,

@@ -1,18 +1,21 @@
 // Candidate visits: from the visibility windows and the per-visit cost, the visit blocks the
-// scheduler may choose among, each with its airmass, precision and predicted orbital phase.
+// scheduler may choose among, one star at a time (a visit observes a star and so all its planets),
+// each with its airmass, precision and the predicted phase of each planet.
 import { DateTime } from 'luxon';
 import { bjdTdb } from '../astro/bjd.js';
-import type { Campaign, Night, Target, Window } from '../model.js';
-import { overlapsTransit, phaseAt, phaseErrCycles } from '../orbit/ephemeris.js';
+import type { Campaign, Night, Target, VisitPhase, Window } from '../model.js';
+import { overlapsTransit, phaseAt, phaseErrCycles, type TransitRule } from '../orbit/ephemeris.js';
 import { semiAmplitudeMps } from '../orbit/semi-amplitude.js';
-import { signalShape, type SignalShape } from '../orbit/signal-shape.js';
 import { targetKMps } from '../orbit/target-k.js';
 import { chooseExposureSec, visitCostSec, type ExposureChoice } from '../rv/exposure.js';
+import { normalQuantile } from '../rv/normal-cdf.js';
 import { visitPrecision } from '../rv/precision.js';
 import { TYPICAL_AIRMASS } from '../rv/target-detect.js';
 import { moonSeparationDeg, moonTrack } from '../sky/moon-track.js';
 import { airmassAt, preparePosition, siteClock } from '../sky/target-position.js';
 import type { CandidateSlot, ScheduleNight, ScheduleTarget } from '../schedule/types.js';
+import { starNoise, whiteSigmaMps, type StarNoise } from '../rv/star-noise.js';
+import { planetRows, starModel, starsOf } from './star-model.js';
 
 /** Spacing of candidate start times inside a window (Crest's choice: fine enough for phase, coarse enough to stay fast). */
 export const SLOT_STEP_MIN = 10;
@@ -25,36 +28,50 @@ export interface SlotDetail {
   airmass: number;
   moonSeparationDeg: number;
   midBjdTdb: number;
+  /** Photon + floor; with all the jitter. */
   sigmaMps: number;
+  sigmaEffMps: number;
+  phases: VisitPhase[];
 }
 
+/** One row of the target list: its role in the plan, or why it has none. */
 export interface TargetSetup {
   target: Target;
   exposure: ExposureChoice;
   durationSec: number;
-  /** The scheduler's view of the target, or undefined when it has no goal to schedule for. */
-  scheduleTarget?: ScheduleTarget;
-  /** Why a target is not scheduled. */
+  /** K of a planet row; K at the shortest search period of a search row. */
+  kMps?: number;
+  role?: 'ephemeris' | 'search';
+  /** Why a row is not scheduled. */
   skipped?: string;
-  /** The signal's shape against phase, for a planet on an eccentric orbit. */
-  shape?: SignalShape;
 }
 
-/** Exposure (at a typical airmass) and the scheduler's goal for each target. */
+/** One star: its rows, the exposure of its visits and the scheduler's view of it. */
+export interface StarSetup {
+  starId: string;
+  /** The star's first row, which carries its star fields (shared by every row). */
+  star: Target;
+  rows: TargetSetup[];
+  exposure: ExposureChoice;
+  durationSec: number;
+  noise: StarNoise;
+  scheduleTarget?: ScheduleTarget;
+}
+
+/** Exposure (at a typical airmass) and the role of each row. */
 export function setupTargets(campaign: Campaign): TargetSetup[] {
-  const { instrument, goals } = campaign;
+  const { instrument } = campaign;
   return campaign.targets.map((target) => {
     const exposure = chooseExposureSec(instrument, target, TYPICAL_AIRMASS);
     const setup: TargetSetup = { target, exposure, durationSec: visitCostSec(instrument, exposure.exposureSec) };
     const kMps = targetKMps(target);
-    const goal = target.goalSignificance ?? goals.significance;
     if (target.ephemeris && kMps !== undefined) {
-      setup.scheduleTarget = { kind: 'ephemeris', id: target.id, priority: target.priority, kMps, goal };
-      if (target.planet && target.planet.ecc > 0) setup.shape = signalShape(target.planet.ecc, target.planet.omegaDeg);
+      setup.role = 'ephemeris';
+      setup.kMps = kMps;
     } else if (target.search) {
-      const { periodMinDays, periodMaxDays, massEarth } = target.search;
-      const kAtMin = semiAmplitudeMps({ starMassSun: target.massSun, planetMassEarth: massEarth, periodDays: periodMinDays });
-      setup.scheduleTarget = { kind: 'search', id: target.id, priority: target.priority, kMps: kAtMin, goal, periodMinDays, periodMaxDays };
+      const { periodMinDays, massEarth } = target.search;
+      setup.role = 'search';
+      setup.kMps = semiAmplitudeMps({ starMassSun: target.massSun, planetMassEarth: massEarth, periodDays: periodMinDays });
     } else {
       setup.skipped = target.ephemeris ? 'has an ephemeris but no planet mass or K: nothing to schedule for' : 'has neither an ephemeris with a planet nor a search range: nothing to schedule for';
     }
@@ -62,32 +79,73 @@ export function setupTargets(campaign: Campaign): TargetSetup[] {
   });
 }
 
+/** Rows grouped by star, each star with its planets (in model order), its search and its information model. */
+export function setupStars(campaign: Campaign, setups: TargetSetup[]): StarSetup[] {
+  const byId = new Map(setups.map((s) => [s.target.id, s]));
+  return [...starsOf(campaign.targets)].map(([starId, rows]) => {
+    const rowSetups = rows.map((t) => byId.get(t.id)!);
+    const lead = rowSetups[0]!;
+    const star: StarSetup = { starId, star: lead.target, rows: rowSetups, exposure: lead.exposure, durationSec: lead.durationSec, noise: starNoise(lead.target, campaign.noise.nightlyJitterFraction) };
+    const goalOf = (t: Target) => t.goalSignificance ?? campaign.goals.significance;
+    const planets = planetRows(rows).map((t) => ({ id: t.id, priority: t.priority, kMps: byId.get(t.id)!.kMps!, goal: goalOf(t) }));
+    const searchRow = rowSetups.find((s) => s.role === 'search');
+    if (planets.length === 0 && !searchRow) return star;
+    const target: ScheduleTarget = { id: starId, planets };
+    const model = starModel(rows, campaign);
+    if (model) target.model = model;
+    if (searchRow) {
+      const { periodMinDays, periodMaxDays } = searchRow.target.search!;
+      target.search = { id: searchRow.target.id, priority: searchRow.target.priority, kMps: searchRow.kMps!, goal: goalOf(searchRow.target), periodMinDays, periodMaxDays };
+    }
+    star.scheduleTarget = target;
+    return star;
+  });
+}
+
+/** The target list's stars as targets for the sky engine: one row per star, named by the star. */
+export function starTargets(stars: StarSetup[]): Target[] {
+  return stars.map((s) => ({ ...s.star, id: s.starId }));
+}
+
 /** Clear-night probability of a night: the site's fraction, per month when given (common practice). */
 export function clearProbability(clearFraction: number | number[], localDate: string): number {
   return typeof clearFraction === 'number' ? clearFraction : clearFraction[DateTime.fromISO(localDate).month - 1]!;
 }
 
+/** JD of an instant (the night's middle for nightly activity: minutes matter nothing there). */
+const julianDate = (ms: number) => ms / 86_400_000 + 2_440_587.5;
+
 export function scheduleNights(campaign: Campaign, nights: Night[]): ScheduleNight[] {
-  return nights.map((night, index) => ({
-    index,
-    localDate: night.localDate,
-    clearProbability: clearProbability(campaign.site.clearFraction, night.localDate),
-    hoursAvailable: night.darkHours,
-  }));
+  return nights.map((night, index) => {
+    const out: ScheduleNight = {
+      index,
+      localDate: night.localDate,
+      clearProbability: clearProbability(campaign.site.clearFraction, night.localDate),
+      hoursAvailable: night.darkHours,
+    };
+    if (night.darkStart && night.darkEnd) out.midDays = julianDate((night.darkStart.getTime() + night.darkEnd.getTime()) / 2);
+    return out;
+  });
+}
+
+/** The transit rule of a campaign: z for its two-sided confidence. */
+export function transitRule(campaign: Campaign): TransitRule {
+  return { zScore: normalQuantile((1 + campaign.transits.confidence) / 2), maxOrbitFraction: campaign.transits.maxOrbitFraction };
 }
 
 /**
- * Visit blocks every SLOT_STEP_MIN inside each window (none whose exposure overlaps a predicted
- * transit when the target gives its duration): acquisition, exposure, readout, the whole
- * block inside the window. Airmass, Moon distance, precision and phase at mid-exposure.
+ * Visit blocks every SLOT_STEP_MIN inside each of a star's windows (none whose exposure overlaps a
+ * predicted transit of one of its planets, as transitRule says): acquisition, exposure, readout,
+ * the whole block inside the window. Airmass, Moon distance, precision and phases at mid-exposure.
  */
-export function candidateSlots(campaign: Campaign, nights: Night[], windows: Window[], setups: TargetSetup[]): SlotDetail[] {
+export function candidateSlots(campaign: Campaign, nights: Night[], windows: Window[], stars: StarSetup[]): SlotDetail[] {
   const { site, instrument } = campaign;
-  const byTarget = new Map(setups.filter((s) => s.scheduleTarget).map((s) => [s.target.id, s]));
+  const rule = transitRule(campaign);
+  const byStar = new Map(stars.filter((s) => s.scheduleTarget).map((s) => [s.starId, s]));
   const nightIndex = new Map(nights.map((n, i) => [n.localDate, i]));
   const perNight = new Map<string, Window[]>();
   for (const w of windows) {
-    if (!byTarget.has(w.targetId)) continue;
+    if (!byStar.has(w.targetId)) continue;
     perNight.set(w.localDate, [...(perNight.get(w.localDate) ?? []), w]);
   }
   const details: SlotDetail[] = [];
@@ -97,9 +155,11 @@ export function candidateSlots(campaign: Campaign, nights: Night[], windows: Win
     const clock = siteClock(site, new Date((night.darkStart!.getTime() + night.darkEnd!.getTime()) / 2));
     const moon = moonTrack(night, clock);
     for (const w of nightWindows) {
-      const setup = byTarget.get(w.targetId)!;
-      const { target } = setup;
-      const position = preparePosition(target, clock);
+      const setup = byStar.get(w.targetId)!;
+      const { star } = setup;
+      const ephemerides = setup.rows.filter((r) => r.role === 'ephemeris').map((r) => ({ id: r.target.id, eph: r.target.ephemeris! }));
+      const transiting = setup.rows.flatMap((r) => (r.target.ephemeris?.transitDurationHours !== undefined ? [r.target.ephemeris] : []));
+      const position = preparePosition(star, clock);
       const durationMs = setup.durationSec * 1000;
       const leadMs = instrument.acquisitionSec * 1000;
       const exposureMs = setup.exposure.exposureSec * 1000;
@@ -108,25 +168,20 @@ export function candidateSlots(campaign: Campaign, nights: Night[], windows: Win
       const firstMs = Math.ceil(w.start.getTime() / 60_000) * 60_000;
       for (let startMs = firstMs; startMs + durationMs <= w.end.getTime(); startMs += stepMs) {
         const midMs = startMs + leadMs + exposureMs / 2;
-        const midBjdTdb = bjdTdb(new Date(midMs), target.raDeg, target.decDeg);
+        const midBjdTdb = bjdTdb(new Date(midMs), star.raDeg, star.decDeg);
         const halfExposureDays = setup.exposure.exposureSec / 2 / 86_400;
-        if (target.ephemeris && overlapsTransit(target.ephemeris, midBjdTdb - halfExposureDays, midBjdTdb + halfExposureDays)) continue;
+        if (transiting.some((eph) => overlapsTransit(eph, midBjdTdb - halfExposureDays, midBjdTdb + halfExposureDays, rule))) continue;
         const airmass = airmassAt(position, midMs);
-        const budget = visitPrecision(instrument, target, setup.exposure.exposureSec, airmass);
+        const budget = visitPrecision(instrument, star, setup.exposure.exposureSec, airmass);
         const slot: CandidateSlot = {
-          slotId: `${target.id}|${localDate}|${startMs}`,
-          targetId: target.id,
+          slotId: `${setup.starId}|${localDate}|${startMs}`,
+          targetId: setup.starId,
           nightIndex: n,
           startMs,
           durationSec: setup.durationSec,
-          sigmaEffMps: budget.effMps,
+          sigmaWhiteMps: whiteSigmaMps(budget.visitMps, setup.noise),
           midDays: midBjdTdb,
         };
-        if (target.ephemeris && setup.scheduleTarget?.kind === 'ephemeris') {
-          slot.phase = phaseAt(target.ephemeris, midBjdTdb);
-          slot.phaseErr = phaseErrCycles(target.ephemeris, midBjdTdb);
-          if (setup.shape) slot.signalMoments = setup.shape.moments(slot.phase, slot.phaseErr);
-        }
         details.push({
           slot,
           localDate,
@@ -135,6 +190,8 @@ export function candidateSlots(campaign: Campaign, nights: Night[], windows: Win
           moonSeparationDeg: moonSeparationDeg(moon, position.vector, midMs),
           midBjdTdb,
           sigmaMps: budget.visitMps,
+          sigmaEffMps: budget.effMps,
+          phases: ephemerides.map(({ id, eph }) => ({ targetId: id, phase: phaseAt(eph, midBjdTdb), phaseErr: phaseErrCycles(eph, midBjdTdb) })),
         });
       }
     }

@@ -1,11 +1,19 @@
 // Warnings an observer must see: targets never observable, goals out of reach, ephemerides that
-// will be too poor to place visits at quadrature, exposures the instrument cannot make.
+// must be recovered before quadratures can be aimed at, transits too uncertain to avoid,
+// exposures the instrument cannot make.
 import type { Plan, TargetSummary, Window } from '../model.js';
+import { nearestEpoch, type TransitRule, transitHalfWidthDays } from '../orbit/ephemeris.js';
 import { visitsNeeded } from '../rv/detect.js';
 import type { TargetSetup } from './candidates.js';
 
-/** Phase error (cycles) above which quadrature timing is lost: ±0.1 cycle blurs sin(2πφ) by 18% (exp(−2π²σ²)). */
-export const POOR_PHASE_ERR_CYCLES = 0.1;
+/**
+ * Phase error (cycles) above which the linearised information model stops being trustworthy:
+ * ±0.25 cycle puts a predicted quadrature anywhere near a conjunction, so the phase must be found
+ * again (a search in a narrow period range) before visits can be aimed (Crest's choice).
+ */
+export const LOST_PHASE_ERR_CYCLES = 0.25;
+/** The phase error a recovery aims at (cycles). */
+const RECOVERED_PHASE_ERR_CYCLES = 0.05;
 
 /**
  * For a planet with an ephemeris: how many visits at ideal quadratures, at the target's typical
@@ -18,21 +26,38 @@ function visitsHint(summary: TargetSummary, setup: TargetSetup): string {
   return `; about ${n} visits at quadratures would reach it`;
 }
 
+/**
+ * Visits spread in phase that bring the phase error down to RECOVERED_PHASE_ERR_CYCLES: the
+ * Fisher information on the phase δ of K sin(2πφ + δ) from N visits spread in phase is
+ * N K² / (2σ²), so σ_δ = 2π σ_φ needs N = 2σ² / (K 2π σ_φ)² (docs/references.md [Kay1993]).
+ */
+export function recoveryVisits(kMps: number, sigmaMps: number): number {
+  return Math.max(3, Math.ceil((2 * sigmaMps * sigmaMps) / (kMps * 2 * Math.PI * RECOVERED_PHASE_ERR_CYCLES) ** 2));
+}
+
 /** Fills each target's warnings in place and returns the plan-wide ones. */
-export function planWarnings(plan: Plan, setups: TargetSetup[], windows: Window[]): string[] {
+export function planWarnings(plan: Plan, setups: TargetSetup[], windows: Window[], rule: TransitRule): string[] {
   const observable = new Set(windows.map((w) => w.targetId));
+  const windowEndBjd = Math.max(...plan.nights.map((n) => (n.darkEnd ? n.darkEnd.getTime() / 86_400_000 + 2_440_587.5 : -Infinity)));
   for (const summary of plan.targets) {
     const setup = setups.find((s) => s.target.id === summary.targetId)!;
     const w = summary.warnings;
     if (setup.skipped) w.push(setup.skipped);
-    const neverObservable = !observable.has(summary.targetId);
+    const neverObservable = !observable.has(summary.starId);
     if (neverObservable) w.push('never observable in the window under the constraints (altitude, airmass, Moon, dark time)');
     if (setup.exposure.warning) w.push(setup.exposure.warning);
     if (!neverObservable && summary.goal !== undefined && summary.kOverSigmaK !== undefined && summary.kOverSigmaK < summary.goal) {
       w.push(`goal K/sigma_K = ${summary.goal} not reached: ${summary.kOverSigmaK.toFixed(1)} with ${summary.visits} visits${visitsHint(summary, setup)}`);
     }
-    if (summary.phaseErrAtEnd !== undefined && summary.phaseErrAtEnd > POOR_PHASE_ERR_CYCLES) {
-      w.push(`ephemeris too poor by the window's end: phase error ±${summary.phaseErrAtEnd.toFixed(2)} cycles; refine P and Tc first`);
+    if (summary.phaseErrAtEnd !== undefined && summary.phaseErrAtEnd > LOST_PHASE_ERR_CYCLES && summary.kMps !== undefined) {
+      const n = recoveryVisits(summary.kMps, setup.exposure.budget.effMps);
+      w.push(
+        `phase must be recovered first: phase error ±${summary.phaseErrAtEnd.toFixed(2)} cycles by the window's end, beyond what the plan's linearised model can trust; about ${n} visits spread in phase bring it to ±${RECOVERED_PHASE_ERR_CYCLES} cycles`,
+      );
+    }
+    const eph = setup.target.ephemeris;
+    if (eph?.transitDurationHours !== undefined && Number.isFinite(windowEndBjd) && transitHalfWidthDays(eph, nearestEpoch(eph, windowEndBjd), rule) === 0) {
+      w.push(`transit time too uncertain to avoid by the window's end (keeping out of it would remove more than ${Math.round(rule.maxOrbitFraction * 100)}% of the orbit): visits may fall in transit`);
     }
   }
   const warnings: string[] = [];

@@ -1,20 +1,21 @@
 import type { Plan } from '../model.js';
 import { toCsv } from './csv.js';
+import { phasesText } from './plan-rows.js';
 
 export const PLAN_CSV_HEADER = [
-  'localDate', 'startLocal', 'startUtc', 'targetId', 'exposureSec', 'durationSec', 'airmass',
-  'moonSeparationDeg', 'midBjdTdb', 'phase', 'phaseErr', 'sigmaMps', 'sigmaEffMps',
+  'localDate', 'startLocal', 'startUtc', 'starId', 'exposureSec', 'durationSec', 'airmass',
+  'moonSeparationDeg', 'midBjdTdb', 'phases', 'sigmaMps', 'sigmaEffMps', 'sigmaWhiteMps',
 ];
 
-/** plan.csv: one row per visit, in time order. */
+/** plan.csv: one row per visit, in time order; `phases` lists each planet's predicted phase as `id=phase±error`, separated by `; `. */
 export function renderPlanCsv(plan: Plan): string {
   const visits = [...plan.visits].sort((a, b) => a.startUtc.localeCompare(b.startUtc));
   return toCsv(
     PLAN_CSV_HEADER,
     visits.map((v) => [
-      v.localDate, v.startLocal, v.startUtc, v.targetId, v.exposureSec.toFixed(0), v.durationSec.toFixed(0),
+      v.localDate, v.startLocal, v.startUtc, v.starId, v.exposureSec.toFixed(0), v.durationSec.toFixed(0),
       v.airmass.toFixed(4), v.moonSeparationDeg.toFixed(2), v.midBjdTdb.toFixed(6),
-      v.phase?.toFixed(5), v.phaseErr?.toFixed(5), v.sigmaMps.toFixed(4), v.sigmaEffMps.toFixed(4),
+      phasesText(v, 5), v.sigmaMps.toFixed(4), v.sigmaEffMps.toFixed(4), v.sigmaWhiteMps.toFixed(4),
     ]),
   );
 }

@@ -2,6 +2,7 @@ import ical from 'ical-generator';
 import { DateTime } from 'luxon';
 import type { Plan } from '../model.js';
 import { vtimezone } from './plan-ics-zone.js';
+import { phasesText } from './plan-rows.js';
 
 /**
  * plan.ics (RFC 5545): one event per visit in the site's time zone, with its VTIMEZONE.
@@ -24,17 +25,17 @@ export function renderPlanIcs(plan: Plan): string {
   const stamp = DateTime.fromISO(c.window.start, { zone: 'utc' });
   for (const visit of plan.visits) {
     const start = DateTime.fromISO(visit.startUtc, { zone: 'utc' }).setZone(zone);
-    const phase = visit.phase === undefined ? '' : `; predicted phase ${visit.phase.toFixed(3)} ± ${(visit.phaseErr ?? 0).toFixed(3)}`;
+    const phase = visit.phases.length === 0 ? '' : `; predicted phase ${phasesText(visit)}`;
     calendar.createEvent({
-      id: `${visit.targetId}-${start.toUTC().toFormat("yyyyLLdd'T'HHmmss")}@crest`,
+      id: `${visit.starId}-${start.toUTC().toFormat("yyyyLLdd'T'HHmmss")}@crest`,
       start,
       end: start.plus({ seconds: visit.durationSec }),
       stamp,
       timezone: zone,
-      summary: `RV ${visit.targetId}`,
+      summary: `RV ${visit.starId}`,
       location: c.site.name,
       description:
-        `Target ${visit.targetId}; exposure ${visit.exposureSec.toFixed(0)} s (block ${visit.durationSec.toFixed(0)} s with overheads); ` +
+        `Star ${visit.starId}; exposure ${visit.exposureSec.toFixed(0)} s (block ${visit.durationSec.toFixed(0)} s with overheads); ` +
         `airmass ${visit.airmass.toFixed(2)}${phase}; expected sigma ${visit.sigmaEffMps.toFixed(2)} m/s. Advisory: observatory safety rules take precedence.`,
     });
   }

@@ -8,14 +8,18 @@ export function clock(instant: string | Date | null, zone: string): string {
   return clockTime(typeof instant === 'string' ? new Date(instant) : instant, zone);
 }
 
-export function phaseText(visit: PlannedVisit): string {
-  return visit.phase === undefined ? '-' : `${visit.phase.toFixed(3)} ± ${(visit.phaseErr ?? 0).toFixed(3)}`;
+/** Each planet's predicted phase at a visit: `0.252 ± 0.004` for one planet, `b 0.252 ± 0.004; c 0.710 ± 0.020` for several (digits: decimals). */
+export function phasesText(visit: PlannedVisit, digits = 3): string {
+  if (visit.phases.length === 0) return digits === 3 ? '-' : '';
+  const one = (p: { phase: number; phaseErr: number }) => `${p.phase.toFixed(digits)}±${p.phaseErr.toFixed(digits)}`;
+  if (digits !== 3) return visit.phases.map((p) => `${p.targetId}=${one(p)}`).join('; ');
+  return visit.phases.length === 1 ? one(visit.phases[0]!) : visit.phases.map((p) => `${p.targetId} ${one(p)}`).join('; ');
 }
 
 export const VISIT_COLUMNS: Column[] = [
   { header: 'local' },
   { header: 'UTC' },
-  { header: 'target' },
+  { header: 'star' },
   { header: 'exp (s)', align: 'right' },
   { header: 'airmass', align: 'right' },
   { header: 'phase', align: 'right' },
@@ -26,10 +30,10 @@ export function visitRow(visit: PlannedVisit, zone: string): string[] {
   return [
     clock(visit.startUtc, zone),
     clock(visit.startUtc, 'UTC'),
-    visit.targetId,
+    visit.starId,
     fmt(visit.exposureSec, 0),
     fmt(visit.airmass, 2),
-    phaseText(visit),
+    phasesText(visit),
     fmt(visit.sigmaEffMps, 2),
   ];
 }

@@ -1,15 +1,18 @@
 // Known-phase detection maps for a planet with a transit ephemeris: the probability that a
 // weighted least-squares fit of K (phase fixed by the ephemeris, free offset) gives K̂/σ_K > n,
-// per (period, m sin i) cell. Circular orbits, the scheduler's signal model
-// v = γ − K sin(2π φ), φ = (t − Tc)/P (src/schedule/objective-ephemeris.ts).
+// per (period, m sin i) cell. Circular orbits, v = γ − K sin(2π φ), φ = (t − Tc)/P, with the
+// phase taken as known: the analytic σ_K is the information model's (src/rv/information.ts) for
+// K and γ alone; the simulated map draws the true Tc and P from their errors, so it shows what
+// a stale ephemeris costs such a fit.
 //
 // Rows other than the ephemeris period answer "had the period been P, with the same transit
 // time": the phases and their errors are recomputed from Tc at each P.
 
 import type { Ephemeris } from '../model.js';
-import { phaseAt, phaseErrCycles } from '../orbit/ephemeris.js';
+import { phaseAt } from '../orbit/ephemeris.js';
 import { semiAmplitudeMps } from '../orbit/semi-amplitude.js';
-import { ephemerisInformation, EPHEMERIS_STATS, signalMoments, updateEphemerisStats } from '../schedule/objective-ephemeris.js';
+import { buildStarModel } from './information-model.js';
+import { informationVisits, kVariances } from './information.js';
 import { detectionProbabilityKnownPhase } from './detect.js';
 import { createRng, deriveSeed } from './random.js';
 
@@ -39,18 +42,20 @@ export interface KnownPhaseMap {
 const atPeriod = (eph: Ephemeris, periodDays: number): Ephemeris => ({ ...eph, periodDays });
 
 /**
- * Expected σ_K (m/s) of the visits at period P: the scheduler's expected information on K with a
- * free offset, phases and phase errors from the ephemeris (objective-ephemeris.ts, which derives
- * E[I] = Σwq − ((Σwm)² + Σw²(q − m²))/Σw), and σ_K = 1/√E[I].
+ * σ_K (m/s) of the visits at period P for a fit of γ and K on the predicted phases: the
+ * information model of one circular planet with its ephemeris held fixed, each visit on a night
+ * of its own.
  */
 export function expectedSigmaKMps(timesBjd: number[], sigmaMps: number[], eph: Ephemeris): number {
-  const stats = new Float64Array(EPHEMERIS_STATS);
-  timesBjd.forEach((t, n) => {
-    const { m, q } = signalMoments(phaseAt(eph, t), phaseErrCycles(eph, t));
-    updateEphemerisStats(stats, 0, 1 / sigmaMps[n]! ** 2, m, q, 1);
+  if (timesBjd.length === 0) return Infinity;
+  const span: [number, number] = [Math.min(...timesBjd), Math.max(...timesBjd)];
+  const model = buildStarModel({
+    planets: [{ id: 'known-phase', kMps: 1, periodDays: eph.periodDays, tcBjd: eph.tcBjdTdb, periodErrDays: 0, tcErrDays: 0, ecc: 0, omegaDeg: 90 }],
+    nightlyJitterMps: 0,
+    spanBjd: span,
   });
-  const info = ephemerisInformation(stats, 0);
-  return info > 0 ? 1 / Math.sqrt(info) : Infinity;
+  const variance = kVariances(model, informationVisits(model, timesBjd.map((bjd, n) => ({ bjd, sigmaMps: sigmaMps[n]!, night: n, nightBjd: bjd }))))[0]!;
+  return Math.sqrt(variance);
 }
 
 function checkInput(input: KnownPhaseInput): void {

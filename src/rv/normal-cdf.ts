@@ -19,3 +19,15 @@ export function erfc(x: number): number {
 export function normalCdf(x: number): number {
   return 0.5 * erfc(-x / Math.SQRT2);
 }
+
+/** The x with Φ(x) = p, 0 < p < 1, by bisection on normalCdf (to its accuracy; common practice). */
+export function normalQuantile(p: number): number {
+  let lo = -40;
+  let hi = 40;
+  for (let i = 0; i < 200 && hi - lo > 1e-12; i++) {
+    const mid = (lo + hi) / 2;
+    if (normalCdf(mid) < p) lo = mid;
+    else hi = mid;
+  }
+  return (lo + hi) / 2;
+}

@@ -1,26 +1,35 @@
-// The problem in flat typed arrays: slots sorted by (night, start), per-night and per-target
-// slot lists, and where each target keeps its running sums. Built once per optimisation.
-import { EPHEMERIS_STATS, signalMoments } from './objective-ephemeris.js';
+// The problem in flat typed arrays: slots sorted by (night, start), per-night and per-star slot
+// lists, each slot's design rows for its star's information model, and where each search keeps
+// its running sums. Built once per optimisation.
+import { designRow, type StarModel } from '../rv/information-model.js';
 import { searchGrid, searchStatsLength, type SearchGrid } from './objective-search.js';
-import type { ScheduleProblem } from './types.js';
+import type { ScheduleProblem, ScheduleTarget } from './types.js';
 
 /** Ridge of a search target's information matrix, as a fraction of its median visit weight (objective-search.ts). */
 const SEARCH_RIDGE_FRACTION = 1e-3;
 
 export interface CompiledProblem {
   problem: ScheduleProblem;
+  /** Stars. */
   targetCount: number;
-  /** Per target: search grid, or null for an ephemeris target. */
+  models: (StarModel | null)[];
+  /** Planets of star t are positions planetFrom[t] .. planetFrom[t + 1] - 1 of the planet arrays. */
+  planetFrom: Int32Array;
+  planetPriority: Float64Array;
+  planetK: Float64Array;
+  planetGoal: Float64Array;
+  /** Per planet, for the greedy's first-visit estimate: the largest |s| among its star's slots. */
+  planetMaxAbsSignal: Float64Array;
+  /** Per star: search grid, or null. */
   grids: (SearchGrid | null)[];
-  priority: Float64Array;
-  kMps: Float64Array;
-  goal: Float64Array;
+  searchPriority: Float64Array;
+  searchK: Float64Array;
+  searchGoal: Float64Array;
   statsOffset: Int32Array;
   statsLength: number;
-  /** Per target, for the greedy's first-visit estimate: largest weight and largest |m| among its slots. */
+  /** Per star: largest visit weight among its slots. */
   maxWeight: Float64Array;
-  maxAbsSignal: Float64Array;
-  /** Per target: its slot positions in time order. */
+  /** Per star: its slot positions in time order. */
   targetSlots: Int32Array[];
 
   slotCount: number;
@@ -33,15 +42,19 @@ export interface CompiledProblem {
   endMs: Float64Array;
   hours: Float64Array;
   weight: Float64Array;
-  /** Ephemeris: mean signal m; search: mid time in days. */
-  valueA: Float64Array;
-  /** Ephemeris: mean square signal q; search: unused. */
-  valueB: Float64Array;
+  midDays: Float64Array;
+  /** Slot j's design rows (samples x parameters of its star's model) start at rows[rowOffset[j]]; -1 without a model. */
+  rowOffset: Float64Array;
+  rows: Float64Array;
+  /** The nominal signal s of the star's first planet at the slot (0 without planets). */
+  signal: Float64Array;
 
   nightCount: number;
   /** Problem nights sorted by their first slot's start (nights without slots last). */
   nightOrder: number[];
   nightHours: Float64Array;
+  /** Per night position: the night's middle (midDays scale), where nightly activity is evaluated. */
+  nightMidDays: Float64Array;
   /** Sorted slots of night n are positions nightFrom[n] .. nightTo[n] - 1. */
   nightFrom: Int32Array;
   nightTo: Int32Array;
@@ -53,12 +66,20 @@ function fail(message: string): never {
   throw new Error(`schedule problem: ${message}`);
 }
 
+function checkTarget(t: ScheduleTarget): void {
+  const positive = (x: { priority: number; kMps: number; goal: number }) => x.priority > 0 && x.kMps > 0 && x.goal > 0;
+  if (t.planets.length === 0 && !t.search) fail(`star ${t.id} has neither planets nor a search`);
+  if (t.planets.length > 0 && t.model?.planetCount !== t.planets.length) fail(`star ${t.id} needs a model with one planet per planet`);
+  for (const planet of t.planets) if (!positive(planet)) fail(`planet ${planet.id} needs priority, kMps and goal > 0`);
+  const search = t.search;
+  if (search && !(positive(search) && search.periodMinDays > 0 && search.periodMaxDays >= search.periodMinDays)) fail(`search ${search.id} needs priority, kMps, goal > 0 and 0 < periodMinDays <= periodMaxDays`);
+}
+
 export function compileProblem(problem: ScheduleProblem, searchGridSize: number): CompiledProblem {
   const targetPos = new Map<string, number>();
   problem.targets.forEach((t, i) => {
-    if (targetPos.has(t.id)) fail(`target ${t.id} appears twice`);
-    if (!(t.priority > 0 && t.kMps > 0 && t.goal > 0)) fail(`target ${t.id} needs priority, kMps and goal > 0`);
-    if (t.kind === 'search' && !(t.periodMinDays > 0 && t.periodMaxDays >= t.periodMinDays)) fail(`target ${t.id} needs 0 < periodMinDays <= periodMaxDays`);
+    if (targetPos.has(t.id)) fail(`star ${t.id} appears twice`);
+    checkTarget(t);
     targetPos.set(t.id, i);
   });
   const nightPos = new Map<number, number>();
@@ -67,19 +88,20 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
     nightPos.set(n.index, i);
   });
   for (const s of problem.slots) {
-    if (!targetPos.has(s.targetId)) fail(`slot ${s.slotId} names unknown target ${s.targetId}`);
+    if (!targetPos.has(s.targetId)) fail(`slot ${s.slotId} names unknown star ${s.targetId}`);
     if (!nightPos.has(s.nightIndex)) fail(`slot ${s.slotId} names unknown night ${s.nightIndex}`);
-    if (!(s.durationSec > 0 && s.sigmaEffMps > 0 && Number.isFinite(s.startMs))) fail(`slot ${s.slotId} needs durationSec > 0, sigmaEffMps > 0, a finite startMs`);
-    const kind = problem.targets[targetPos.get(s.targetId)!]!.kind;
-    if (kind === 'ephemeris' && !(Number.isFinite(s.phase) && (s.phaseErr ?? 0) >= 0)) fail(`slot ${s.slotId} of an ephemeris target needs phase and phaseErr >= 0`);
-    if (kind === 'search' && !Number.isFinite(s.midDays)) fail(`slot ${s.slotId} of a search target needs midDays`);
+    if (!(s.durationSec > 0 && s.sigmaWhiteMps > 0 && Number.isFinite(s.startMs) && Number.isFinite(s.midDays))) fail(`slot ${s.slotId} needs durationSec > 0, sigmaWhiteMps > 0, finite startMs and midDays`);
   }
 
   // Nights in time order of their slots; slots sorted by (night, start, id) so the order is total.
   const firstStart = new Float64Array(problem.nights.length).fill(Infinity);
+  const midSum = new Float64Array(problem.nights.length);
+  const midCount = new Float64Array(problem.nights.length);
   for (const s of problem.slots) {
     const n = nightPos.get(s.nightIndex)!;
     firstStart[n] = Math.min(firstStart[n]!, s.startMs);
+    midSum[n] += s.midDays;
+    midCount[n]++;
   }
   const nightOrder = problem.nights.map((_, i) => i).sort((a, b) => firstStart[a]! - firstStart[b]! || problem.nights[a]!.index - problem.nights[b]!.index);
   const rank = new Int32Array(problem.nights.length);
@@ -91,17 +113,29 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
   const T = problem.targets.length;
   const S = order.length;
   const N = problem.nights.length;
+  const planetFrom = new Int32Array(T + 1);
+  problem.targets.forEach((t, i) => (planetFrom[i + 1] = planetFrom[i]! + t.planets.length));
+  const planets = problem.targets.flatMap((t) => t.planets);
+  const models = problem.targets.map((t) => (t.planets.length > 0 ? t.model! : null));
+  const rowLength = (t: number) => (models[t] ? models[t]!.samples.length * models[t]!.paramCount : 0);
+  let rowsTotal = 0;
+  for (const s of problem.slots) rowsTotal += rowLength(targetPos.get(s.targetId)!);
   const c: CompiledProblem = {
     problem,
     targetCount: T,
+    models,
+    planetFrom,
+    planetPriority: Float64Array.from(planets, (p) => p.priority),
+    planetK: Float64Array.from(planets, (p) => p.kMps),
+    planetGoal: Float64Array.from(planets, (p) => p.goal),
+    planetMaxAbsSignal: new Float64Array(planets.length),
     grids: [],
-    priority: Float64Array.from(problem.targets, (t) => t.priority),
-    kMps: Float64Array.from(problem.targets, (t) => t.kMps),
-    goal: Float64Array.from(problem.targets, (t) => t.goal),
+    searchPriority: Float64Array.from(problem.targets, (t) => t.search?.priority ?? 0),
+    searchK: Float64Array.from(problem.targets, (t) => t.search?.kMps ?? 0),
+    searchGoal: Float64Array.from(problem.targets, (t) => t.search?.goal ?? 1),
     statsOffset: new Int32Array(T),
     statsLength: 0,
     maxWeight: new Float64Array(T),
-    maxAbsSignal: new Float64Array(T),
     targetSlots: [],
     slotCount: S,
     slotSource: Int32Array.from(order),
@@ -111,11 +145,14 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
     endMs: new Float64Array(S),
     hours: new Float64Array(S),
     weight: new Float64Array(S),
-    valueA: new Float64Array(S),
-    valueB: new Float64Array(S),
+    midDays: new Float64Array(S),
+    rowOffset: new Float64Array(S),
+    rows: new Float64Array(rowsTotal),
+    signal: new Float64Array(S),
     nightCount: N,
     nightOrder,
     nightHours: Float64Array.from(nightOrder, (n) => problem.nights[n]!.hoursAvailable),
+    nightMidDays: Float64Array.from(nightOrder, (n) => problem.nights[n]!.midDays ?? (midCount[n]! > 0 ? midSum[n]! / midCount[n]! : 0)),
     nightFrom: new Int32Array(N),
     nightTo: new Int32Array(N),
     spacingMs: Math.max(0, problem.constraints.minSpacingHours) * 3_600_000,
@@ -123,6 +160,7 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
   };
   const perTarget: number[][] = problem.targets.map(() => []);
   c.nightFrom.fill(S);
+  let rowAt = 0;
   for (let j = 0; j < S; j++) {
     const s = problem.slots[order[j]!]!;
     const t = targetPos.get(s.targetId)!;
@@ -132,18 +170,25 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
     c.startMs[j] = s.startMs;
     c.endMs[j] = s.startMs + s.durationSec * 1000;
     c.hours[j] = s.durationSec / 3600;
+    c.midDays[j] = s.midDays;
     // Weighted least squares: a visit weighs 1/sigma^2 (common practice).
-    const w = 1 / (s.sigmaEffMps * s.sigmaEffMps);
+    const w = 1 / (s.sigmaWhiteMps * s.sigmaWhiteMps);
     c.weight[j] = w;
     c.maxWeight[t] = Math.max(c.maxWeight[t]!, w);
-    if (problem.targets[t]!.kind === 'ephemeris') {
-      const { m, q } = s.signalMoments ?? signalMoments(s.phase!, s.phaseErr ?? 0);
-      c.valueA[j] = m;
-      c.valueB[j] = q;
-      c.maxAbsSignal[t] = Math.max(c.maxAbsSignal[t]!, Math.abs(m));
-    } else {
-      c.valueA[j] = s.midDays!;
-    }
+    const model = models[t];
+    if (model) {
+      c.rowOffset[j] = rowAt;
+      const p = model.paramCount;
+      model.samples.forEach((sample, k) => designRow(model, sample, s.midDays, c.rows, rowAt + k * p));
+      // Sample 0 is the nominal ephemeris (information-model.ts).
+      for (let i = 0; i < model.planetCount; i++) {
+        const signal = c.rows[rowAt + model.kIndex[i]!]!;
+        const at = planetFrom[t]! + i;
+        c.planetMaxAbsSignal[at] = Math.max(c.planetMaxAbsSignal[at]!, Math.abs(signal));
+        if (i === 0) c.signal[j] = signal;
+      }
+      rowAt += rowLength(t);
+    } else c.rowOffset[j] = -1;
     perTarget[t]!.push(j);
     c.nightFrom[n] = Math.min(c.nightFrom[n]!, j);
     c.nightTo[n] = j + 1;
@@ -154,14 +199,13 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
   let offset = 0;
   problem.targets.forEach((t, i) => {
     c.statsOffset[i] = offset;
-    if (t.kind === 'ephemeris') {
+    if (!t.search) {
       c.grids.push(null);
-      offset += EPHEMERIS_STATS;
       return;
     }
     const weights = Array.from(c.targetSlots[i]!, (j) => c.weight[j]!).sort((a, b) => a - b);
     const median = weights.length ? weights[weights.length >> 1]! : 1;
-    const grid = searchGrid(t.periodMinDays, t.periodMaxDays, t.kMps, searchGridSize, SEARCH_RIDGE_FRACTION * median);
+    const grid = searchGrid(t.search.periodMinDays, t.search.periodMaxDays, t.search.kMps, searchGridSize, SEARCH_RIDGE_FRACTION * median);
     c.grids.push(grid);
     offset += searchStatsLength(grid);
   });

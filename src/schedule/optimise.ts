@@ -15,6 +15,7 @@ import { localSearch, type LocalSearchSettings } from './local-search.js';
 import { improves, openNightList, shuffled } from './moves.js';
 import { PlanState } from './state.js';
 import type { ScheduleOptions, ScheduleProblem, ScheduleResult, TargetOutcome } from './types.js';
+import { goalValue } from './utility.js';
 
 /** Opens nights greedily (never those in `excluded`) until `count` are open. */
 function chooseNightsGreedy(state: PlanState, count: number, excluded: Set<number>): void {
@@ -43,26 +44,47 @@ function chooseNightsGreedy(state: PlanState, count: number, excluded: Set<numbe
   }
 }
 
+/** Per planet and per search: what the plan reaches (a star's visits serve all of them). */
 function outcomes(state: PlanState): TargetOutcome[] {
   const c = state.c;
-  return c.problem.targets.map((target, t) => {
+  const overshoot = state.overshootWeight;
+  return c.problem.targets.flatMap((star, t) => {
     const visits = state.targetVisits[t]!;
-    const kOverSigmaK = state.fractionOfGoal(t, 0, 0) * c.goal[t]!;
-    const info = (kOverSigmaK / c.kMps[t]!) ** 2;
-    const outcome: TargetOutcome = {
-      targetId: target.id,
-      kind: target.kind,
-      visits: visits.length,
-      hours: visits.reduce((sum, j) => sum + c.hours[j]!, 0),
-      informationPerMps2: info,
-      sigmaKMps: info > 0 ? 1 / Math.sqrt(info) : Infinity,
-      kOverSigmaK,
-      goal: target.goal,
-      utility: state.targetUtility[t]!,
-    };
-    // Efficiency (sigma^2/N)/Var(K^) generalised to unequal weights: I / sum w (docs/references.md [Information-efficiency]).
-    if (target.kind === 'ephemeris' && visits.length > 0) outcome.informationEfficiency = info / visits.reduce((sum, j) => sum + c.weight[j]!, 0);
-    return outcome;
+    const shared = { starId: star.id, visits: visits.length, hours: visits.reduce((sum, j) => sum + c.hours[j]!, 0) };
+    const weightSum = visits.reduce((sum, j) => sum + c.weight[j]!, 0);
+    const out: TargetOutcome[] = star.planets.map((planet, i) => {
+      const at = c.planetFrom[t]! + i;
+      const variance = state.kVariance[at]!;
+      const kOverSigmaK = state.planetFractionOfGoal(at) * planet.goal;
+      const outcome: TargetOutcome = {
+        targetId: planet.id,
+        kind: 'ephemeris',
+        ...shared,
+        informationPerMps2: 1 / variance,
+        sigmaKMps: Math.sqrt(variance),
+        kOverSigmaK,
+        goal: planet.goal,
+        utility: planet.priority * goalValue(kOverSigmaK / planet.goal, overshoot),
+      };
+      // Efficiency (sigma^2/N)/Var(K^) generalised to unequal weights: I / sum w (docs/references.md [Visits-needed]).
+      if (visits.length > 0) outcome.informationEfficiency = 1 / variance / weightSum;
+      return outcome;
+    });
+    if (star.search) {
+      const kOverSigmaK = state.searchFractionOfGoal(t, 0, 0) * star.search.goal;
+      const info = (kOverSigmaK / star.search.kMps) ** 2;
+      out.push({
+        targetId: star.search.id,
+        kind: 'search',
+        ...shared,
+        informationPerMps2: info,
+        sigmaKMps: info > 0 ? 1 / Math.sqrt(info) : Infinity,
+        kOverSigmaK,
+        goal: star.search.goal,
+        utility: star.search.priority * goalValue(kOverSigmaK / star.search.goal, overshoot),
+      });
+    }
+    return out;
   });
 }
 

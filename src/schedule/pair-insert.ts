@@ -1,8 +1,8 @@
-// Pair insertion, a local-search move for ephemeris targets with fewer than two visits: one
+// Pair insertion, a local-search move for stars with planets and fewer than two visits: one
 // visit alone carries no information on K (the free offset absorbs it), so no single add or
-// replace can start such a target. The move inserts two of its visits, one on each side of the
-// signal (m > 0 and m < 0), taking out whatever chosen visits overlap them, and is kept if the
-// total utility rises. Only the few best slots on each side (largest w m^2) are paired.
+// replace can start such a star. The move inserts two of its visits, one on each side of its
+// first planet's signal (s > 0 and s < 0), taking out whatever chosen visits overlap them, and is
+// kept if the total utility rises. Only the few best slots on each side (largest w s^2) are paired.
 import type { Rng } from '../rv/random.js';
 import { improves, shuffled } from './moves.js';
 import type { PlanState } from './state.js';
@@ -48,8 +48,8 @@ function pairValue(state: PlanState, b1: number, b2: number): number {
 function bestSide(state: PlanState, slots: number[], positive: boolean): number[] {
   const c = state.c;
   return slots
-    .filter((j) => (c.valueA[j]! >= 0) === positive)
-    .sort((a, b) => c.weight[b]! * c.valueA[b]! ** 2 - c.weight[a]! * c.valueA[a]! ** 2 || a - b)
+    .filter((j) => (c.signal[j]! >= 0) === positive)
+    .sort((a, b) => c.weight[b]! * c.signal[b]! ** 2 - c.weight[a]! * c.signal[a]! ** 2 || a - b)
     .slice(0, SIDE);
 }
 
@@ -57,7 +57,7 @@ function bestSide(state: PlanState, slots: number[], positive: boolean): number[
 export function pairInsertPass(state: PlanState, rng: Rng, onProgress?: (utility: number, step: string) => void): boolean {
   const c = state.c;
   const targets: number[] = [];
-  for (let t = 0; t < c.targetCount; t++) if (!c.grids[t] && state.targetVisits[t]!.length < 2) targets.push(t);
+  for (let t = 0; t < c.targetCount; t++) if (c.models[t] && state.targetVisits[t]!.length < 2) targets.push(t);
   let improved = false;
   for (const t of shuffled(targets, rng)) {
     const open = Array.from(c.targetSlots[t]!).filter((j) => state.nightOpen[c.slotNight[j]!] && !state.chosen[j]);

@@ -1,9 +1,9 @@
 // Slow reference implementations for tests and the bench: the utility of a set of slots computed
-// from scratch (pairwise sums, 3x3 determinants by elimination), a feasibility check written
+// from scratch (each star's information from a fresh accumulator, 3x3 determinants by elimination), a feasibility check written
 // straight from the constraints, and exhaustive search for the best schedule of a small problem.
 import { compileProblem } from './compile.js';
 import type { SearchGrid } from './objective-search.js';
-import { signalMoments } from './objective-ephemeris.js';
+import { informationVisits, kVariances } from '../rv/information.js';
 import type { CandidateSlot, ScheduleProblem } from './types.js';
 import { goalValue } from './utility.js';
 
@@ -33,39 +33,56 @@ function determinant(matrix: number[][]): number {
   return det;
 }
 
-/** K/sigma_K of each target for the given visits, from scratch (search targets on the optimiser's period grid). */
+/** K/sigma_K of each planet and search for the given visits, from scratch, in the order of ScheduleResult.targets. */
 export function referenceKOverSigmaK(problem: ScheduleProblem, visits: CandidateSlot[], settings: ReferenceSettings): number[] {
-  return kOverSigmaKOnGrids(problem, visits, compileProblem(problem, settings.searchGridSize).grids);
+  return kOverSigmaKOnGrids(problem, visits, compileProblem(problem, settings.searchGridSize).grids).map((r) => r.ratio);
 }
 
-function kOverSigmaKOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], grids: (SearchGrid | null)[]): number[] {
-  return problem.targets.map((target, t) => {
+interface Ratio {
+  ratio: number;
+  goal: number;
+  priority: number;
+}
+
+function kOverSigmaKOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], grids: (SearchGrid | null)[]): Ratio[] {
+  const nightMid = nightMiddles(problem);
+  return problem.targets.flatMap((target, t) => {
     const mine = visits.filter((v) => v.targetId === target.id);
-    const w = mine.map((v) => 1 / v.sigmaEffMps ** 2);
+    const out: Ratio[] = [];
+    if (target.model) {
+      // A fresh accumulator over the visits: no running state from earlier moves.
+      const variance = kVariances(
+        target.model,
+        informationVisits(target.model, mine.map((v) => ({ bjd: v.midDays, sigmaMps: v.sigmaWhiteMps, night: v.nightIndex, nightBjd: nightMid.get(v.nightIndex)! }))),
+      );
+      target.planets.forEach((planet, i) => out.push({ ratio: variance[i] === Infinity ? 0 : planet.kMps / Math.sqrt(variance[i]!), goal: planet.goal, priority: planet.priority }));
+    }
     const grid = grids[t];
-    if (!grid) {
-      // E[I] = sum_i w_i E[s_i^2] - (1/W) sum_i sum_j w_i w_j E[s_i s_j], E[s_i s_j] = m_i m_j (i != j), q_i (i = j).
-      const moments = mine.map((v) => v.signalMoments ?? signalMoments(v.phase!, v.phaseErr ?? 0));
-      const W = w.reduce((a, b) => a + b, 0);
-      if (W === 0) return 0;
-      let info = 0;
-      for (let i = 0; i < mine.length; i++) {
-        info += w[i]! * moments[i]!.q;
-        for (let k = 0; k < mine.length; k++) info -= (w[i]! * w[k]! * (i === k ? moments[i]!.q : moments[i]!.m * moments[k]!.m)) / W;
+    if (grid && target.search) {
+      const w = mine.map((v) => 1 / v.sigmaWhiteMps ** 2);
+      let total = 0;
+      for (let p = 0; p < grid.angularFreq.length; p++) {
+        const m = [0, 1, 2].map((r) => [0, 1, 2].map((k) => (r === k ? grid.eps : 0)));
+        mine.forEach((v, i) => {
+          const x = [1, Math.sin(grid.angularFreq[p]! * v.midDays), Math.cos(grid.angularFreq[p]! * v.midDays)];
+          for (let r = 0; r < 3; r++) for (let k = 0; k < 3; k++) m[r]![k]! += w[i]! * x[r]! * x[k]!;
+        });
+        total += grid.logK[p]! + 0.25 * Math.log(determinant(m) / m[0]![0]!);
       }
-      return target.kMps * Math.sqrt(Math.max(0, info));
+      out.push({ ratio: Math.exp(total / grid.angularFreq.length), goal: target.search.goal, priority: target.search.priority });
     }
-    let total = 0;
-    for (let p = 0; p < grid.angularFreq.length; p++) {
-      const m = [0, 1, 2].map((r) => [0, 1, 2].map((k) => (r === k ? grid.eps : 0)));
-      mine.forEach((v, i) => {
-        const x = [1, Math.sin(grid.angularFreq[p]! * v.midDays!), Math.cos(grid.angularFreq[p]! * v.midDays!)];
-        for (let r = 0; r < 3; r++) for (let k = 0; k < 3; k++) m[r]![k]! += w[i]! * x[r]! * x[k]!;
-      });
-      total += grid.logK[p]! + 0.25 * Math.log(determinant(m) / m[0]![0]!);
-    }
-    return Math.exp(total / grid.angularFreq.length);
+    return out;
   });
+}
+
+/** Each night's middle as the scheduler takes it (compile.ts): given, or the mean of its slots. */
+function nightMiddles(problem: ScheduleProblem): Map<number, number> {
+  const out = new Map<number, number>();
+  for (const night of problem.nights) {
+    const mine = problem.slots.filter((s) => s.nightIndex === night.index);
+    out.set(night.index, night.midDays ?? (mine.length ? mine.reduce((sum, s) => sum + s.midDays, 0) / mine.length : 0));
+  }
+  return out;
 }
 
 /** Total utility of the given visits, from scratch. */
@@ -74,8 +91,7 @@ export function referenceUtility(problem: ScheduleProblem, visits: CandidateSlot
 }
 
 function utilityOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], grids: (SearchGrid | null)[], overshootWeight: number): number {
-  const ratios = kOverSigmaKOnGrids(problem, visits, grids);
-  return problem.targets.reduce((sum, t, i) => sum + t.priority * goalValue(ratios[i]! / t.goal, overshootWeight), 0);
+  return kOverSigmaKOnGrids(problem, visits, grids).reduce((sum, r) => sum + r.priority * goalValue(r.ratio / r.goal, overshootWeight), 0);
 }
 
 /** Every constraint of the problem, checked pairwise: an empty list means feasible. */

@@ -1,8 +1,9 @@
-// A plan under construction: which slots are chosen, which nights are open, and each target's
-// running sums, so that adding, removing or pricing one visit costs O(1) (ephemeris target) or
-// O(period grid) (search target), never a recomputation of the whole plan.
+// A plan under construction: which slots are chosen, which nights are open, and each star's
+// information (src/rv/information.ts) and search sums, so that adding, removing or pricing one
+// visit costs what that star's model costs (O(samples x parameters^2), or O(observed nights^2)
+// with correlated activity), plus O(period grid) for a search: never a recomputation of the plan.
+import { StarInformation, type InformationVisit } from '../rv/information.js';
 import type { CompiledProblem } from './compile.js';
-import { EPHEMERIS_STATS, ephemerisInformation, updateEphemerisStats } from './objective-ephemeris.js';
 import { searchLogScore, searchStatsLength, updateSearchStats } from './objective-search.js';
 import { goalValue } from './utility.js';
 
@@ -21,17 +22,24 @@ function lowerBound(list: number[], value: number): number {
 export class PlanState {
   readonly chosen: Uint8Array;
   readonly nightOpen: Uint8Array;
-  /** Chosen slots per night and per target, as sorted slot positions (slot order is time order). */
+  /** Chosen slots per night and per star, as sorted slot positions (slot order is time order). */
   readonly nightVisits: number[][];
   readonly targetVisits: number[][];
   readonly nightUsedHours: Float64Array;
+  /** Search running sums. */
   readonly stats: Float64Array;
+  /** Per star: its information on its planets' K (null without planets). */
+  readonly information: (StarInformation | null)[];
+  /** Var(K) of every planet as the plan stands (compiled planet order). */
+  readonly kVariance: Float64Array;
   readonly targetUtility: Float64Array;
-  /** Bumped whenever a target's visits change (cached gains of its slots go stale). */
+  /** Bumped whenever a star's visits change (cached gains of its slots go stale). */
   readonly targetVersion: Int32Array;
   utility = 0;
   hoursUsed = 0;
   openNights = 0;
+  private readonly visit: InformationVisit = { rows: new Float64Array(0), offset: 0, weight: 0, night: 0, nightBjd: 0 };
+  private readonly trialVariance: Float64Array;
 
   constructor(
     readonly c: CompiledProblem,
@@ -45,6 +53,9 @@ export class PlanState {
     this.targetVisits = Array.from({ length: c.targetCount }, () => []);
     this.nightUsedHours = new Float64Array(c.nightCount);
     this.stats = new Float64Array(c.statsLength);
+    this.information = c.models.map((model) => (model ? new StarInformation(model) : null));
+    this.kVariance = new Float64Array(c.planetK.length).fill(Infinity);
+    this.trialVariance = new Float64Array(Math.max(1, ...c.models.map((m) => m?.planetCount ?? 0)));
     this.targetUtility = new Float64Array(c.targetCount);
     this.targetVersion = new Int32Array(c.targetCount);
     for (let t = 0; t < c.targetCount; t++) {
@@ -53,23 +64,48 @@ export class PlanState {
     }
   }
 
-  /** (K/sigma_K)/goal of target t, with slot j added (sign 1), removed (-1), or as it is (0). */
-  fractionOfGoal(t: number, sign: number, j: number): number {
+  /** The information module's view of slot j (one reused object). */
+  private visitOf(j: number): InformationVisit {
     const c = this.c;
-    const offset = c.statsOffset[t]!;
-    const grid = c.grids[t];
-    const w = sign === 0 ? 0 : c.weight[j]!;
-    const a = sign === 0 ? 0 : c.valueA[j]!;
-    if (grid) return Math.exp(searchLogScore(this.stats, offset, grid, sign, w, a)) / c.goal[t]!;
-    // Fewer than two visits carry no information on K (the offset absorbs one); exact 0, free of rounding residue.
-    if (this.targetVisits[t]!.length + sign < 2) return 0;
-    const info = ephemerisInformation(this.stats, offset, sign, w, a, sign === 0 ? 0 : c.valueB[j]!);
-    return (c.kMps[t]! * Math.sqrt(info)) / c.goal[t]!;
+    const v = this.visit;
+    v.rows = c.rows;
+    v.offset = c.rowOffset[j]!;
+    v.weight = c.weight[j]!;
+    v.night = c.slotNight[j]!;
+    v.nightBjd = c.nightMidDays[c.slotNight[j]!]!;
+    return v;
   }
 
-  /** Utility of target t with slot j added (sign 1), removed (-1), or as it is (0). */
+  /** (K/sigma_K)/goal of planet i (compiled order) for a K variance. */
+  private planetFraction(i: number, variance: number): number {
+    return variance === Infinity ? 0 : this.c.planetK[i]! / Math.sqrt(variance) / this.c.planetGoal[i]!;
+  }
+
+  /** (K/sigma_K)/goal of planet i as the plan stands. */
+  planetFractionOfGoal(i: number): number {
+    return this.planetFraction(i, this.kVariance[i]!);
+  }
+
+  /** (K/sigma_K)/goal of star t's search with slot j added (sign 1), removed (-1), or as it is (0). */
+  searchFractionOfGoal(t: number, sign: number, j: number): number {
+    const c = this.c;
+    const w = sign === 0 ? 0 : c.weight[j]!;
+    const a = sign === 0 ? 0 : c.midDays[j]!;
+    return Math.exp(searchLogScore(this.stats, c.statsOffset[t]!, c.grids[t]!, sign, w, a)) / c.searchGoal[t]!;
+  }
+
+  /** Utility of star t with slot j added (sign 1), removed (-1), or as it is (0). */
   targetValue(t: number, sign: number, j: number): number {
-    return this.c.priority[t]! * goalValue(this.fractionOfGoal(t, sign, j), this.overshootWeight);
+    const c = this.c;
+    let value = 0;
+    const info = this.information[t];
+    if (info) {
+      const from = c.planetFrom[t]!;
+      const variance = sign === 0 ? this.kVariance.subarray(from, c.planetFrom[t + 1]) : info.variances(this.trialVariance, this.visitOf(j), sign as 1 | -1);
+      for (let i = 0; i < info.planetCount; i++) value += c.planetPriority[from + i]! * goalValue(this.planetFraction(from + i, variance[i]!), this.overshootWeight);
+    }
+    if (c.grids[t]) value += c.searchPriority[t]! * goalValue(this.searchFractionOfGoal(t, sign, j), this.overshootWeight);
+    return value;
   }
 
   /** Exact change of the total utility if slot j were added. */
@@ -85,33 +121,37 @@ export class PlanState {
   }
 
   /**
-   * Gain used to rank slots in greedy passes. It equals gain(j) except for the first visit of an
-   * ephemeris target, which alone carries no information (the offset absorbs it): that visit is
-   * credited half the utility of a pair made with an ideal partner (the target's largest weight
-   * at the opposite extreme of its signal), so that greedy starts new targets. Likewise a search
-   * target's first three visits (offset, sine and cosine need three before the ridge stops
-   * dominating): each is credited at least a third of the utility of three visits of its weight
-   * spread evenly in phase, where the sine/cosine information is 3w/2 on both axes at every
-   * period, so K/sigma_K = K_geo sqrt(3w/2) with K_geo the grid's geometric-mean K.
+   * Gain used to rank slots in greedy passes. It equals gain(j) except for a star's first visits,
+   * which alone carry little or nothing: the first visit of a star with planets (the offset
+   * absorbs it) is credited half the utility of a pair made with an ideal partner (the star's
+   * largest weight at the opposite extreme of each planet's signal; two visits with K alone free
+   * give I = w1 w2 / (w1 + w2) (s1 - s2)^2), so that greedy starts new stars. Likewise a search's
+   * first three visits (offset, sine and cosine need three before the ridge stops dominating):
+   * each is credited at least a third of the utility of three visits of its weight spread evenly
+   * in phase, where the sine/cosine information is 3w/2 on both axes at every period, so
+   * K/sigma_K = K_geo sqrt(3w/2) with K_geo the grid's geometric-mean K.
    */
   rankingGain(j: number): number {
     const c = this.c;
     const t = c.slotTarget[j]!;
+    const visits = this.targetVisits[t]!.length;
+    const gain = this.gain(j);
+    let credit = 0;
     const grid = c.grids[t];
-    if (grid) {
-      if (this.targetVisits[t]!.length >= 3) return this.gain(j);
-      const x = (Math.exp(grid.meanLogK) * Math.sqrt(1.5 * c.weight[j]!)) / c.goal[t]!;
-      return Math.max(this.gain(j), (c.priority[t]! * goalValue(x, this.overshootWeight)) / 3);
+    if (grid && visits < 3) credit += (c.searchPriority[t]! * goalValue((Math.exp(grid.meanLogK) * Math.sqrt(1.5 * c.weight[j]!)) / c.searchGoal[t]!, this.overshootWeight)) / 3;
+    if (this.information[t] && visits === 0) {
+      const w = c.weight[j]!;
+      const wp = c.maxWeight[t]!;
+      const model = c.models[t]!;
+      for (let i = 0; i < model.planetCount; i++) {
+        const at = c.planetFrom[t]! + i;
+        const m = c.rows[c.rowOffset[j]! + model.kIndex[i]!]!;
+        const partner = m >= 0 ? -c.planetMaxAbsSignal[at]! : c.planetMaxAbsSignal[at]!;
+        const info = ((w * wp) / (w + wp)) * (m - partner) * (m - partner);
+        credit += 0.5 * c.planetPriority[at]! * goalValue((c.planetK[at]! * Math.sqrt(info)) / c.planetGoal[at]!, this.overshootWeight);
+      }
     }
-    if (this.targetVisits[t]!.length > 0) return this.gain(j);
-    const w = c.weight[j]!;
-    const wp = c.maxWeight[t]!;
-    const m = c.valueA[j]!;
-    const partner = m >= 0 ? -c.maxAbsSignal[t]! : c.maxAbsSignal[t]!;
-    // Two visits: I = w1 w2 / (w1 + w2) (s1 - s2)^2 (the formula of objective-ephemeris.ts with N = 2).
-    const info = ((w * wp) / (w + wp)) * (m - partner) * (m - partner);
-    const x = (c.kMps[t]! * Math.sqrt(info)) / c.goal[t]!;
-    return 0.5 * c.priority[t]! * goalValue(x, this.overshootWeight);
+    return Math.max(gain, credit);
   }
 
   /** Whether slot j can be added: open night, budgets, no overlap in its night, spacing for its target. */
@@ -163,11 +203,16 @@ export class PlanState {
     this.nightUsedHours[n] += sign * c.hours[j]!;
     this.hoursUsed += sign * c.hours[j]!;
     const grid = c.grids[t];
-    if (mine.length === 0) {
+    if (grid) {
       // No visits left: clear the sums exactly rather than keep the rounding residue of the removals.
-      this.stats.fill(0, c.statsOffset[t]!, c.statsOffset[t]! + (grid ? searchStatsLength(grid) : EPHEMERIS_STATS));
-    } else if (grid) updateSearchStats(this.stats, c.statsOffset[t]!, grid, c.weight[j]!, c.valueA[j]!, sign);
-    else updateEphemerisStats(this.stats, c.statsOffset[t]!, c.weight[j]!, c.valueA[j]!, c.valueB[j]!, sign);
+      if (mine.length === 0) this.stats.fill(0, c.statsOffset[t]!, c.statsOffset[t]! + searchStatsLength(grid));
+      else updateSearchStats(this.stats, c.statsOffset[t]!, grid, c.weight[j]!, c.midDays[j]!, sign);
+    }
+    const info = this.information[t];
+    if (info) {
+      info.apply(this.visitOf(j), sign);
+      info.variances(this.kVariance.subarray(c.planetFrom[t]!, c.planetFrom[t + 1]!));
+    }
     const value = this.targetValue(t, 0, 0);
     this.utility += value - this.targetUtility[t]!;
     this.targetUtility[t] = value;

@@ -1,8 +1,9 @@
 // Invented scheduling problems for tests and the bench: nights one day apart, each target visible
 // for a few hours a night in a window that drifts earlier by about 4 minutes a night (a sidereal
 // day is shorter than a solar one, common practice), evenly spaced candidate slots in that window,
-// ephemerides whose phase error grows as sqrt(sigma_T0^2 + n^2 sigma_P^2) after n orbits
-// (docs/references.md [Ephemeris-propagation]). All values are made up.
+// one circular planet per ephemeris star, with catalogue errors on Tc and P that the star's
+// information model carries as priors (src/rv/information-model.ts). All values are made up.
+import { buildStarModel } from '../rv/information-model.js';
 import { createRng, type Rng } from '../rv/random.js';
 import type { CandidateSlot, ScheduleNight, ScheduleProblem, ScheduleTarget, ScheduleTimeModel } from './types.js';
 
@@ -34,13 +35,27 @@ function between(rng: Rng, lo: number, hi: number): number {
   return lo + (hi - lo) * rng.uniform();
 }
 
-function syntheticTarget(rng: Rng, i: number, search: boolean): ScheduleTarget {
-  const base = { id: `${search ? 'SRCH' : 'EPH'}-${String(i + 1).padStart(4, '0')}`, priority: Math.ceil(between(rng, 0, 3)), goal: 5 };
+interface SyntheticOrbit {
+  periodDays: number;
+  tcDays: number;
+  tcErrDays: number;
+  periodErrDays: number;
+}
+
+function syntheticTarget(rng: Rng, i: number, search: boolean, orbit: SyntheticOrbit, spanDays: [number, number]): ScheduleTarget {
+  const id = `${search ? 'SRCH' : 'EPH'}-${String(i + 1).padStart(4, '0')}`;
+  const priority = Math.ceil(between(rng, 0, 3));
   if (search) {
     const periodMinDays = Math.exp(between(rng, Math.log(2), Math.log(20)));
-    return { ...base, kind: 'search', kMps: between(rng, 2, 8), periodMinDays, periodMaxDays: periodMinDays * between(rng, 2, 8) };
+    return { id, planets: [], search: { id, priority, goal: 5, kMps: between(rng, 2, 8), periodMinDays, periodMaxDays: periodMinDays * between(rng, 2, 8) } };
   }
-  return { ...base, kind: 'ephemeris', kMps: between(rng, 2, 12) };
+  const kMps = between(rng, 2, 12);
+  const model = buildStarModel({
+    planets: [{ id, kMps, periodDays: orbit.periodDays, tcBjd: orbit.tcDays, periodErrDays: orbit.periodErrDays, tcErrDays: orbit.tcErrDays, ecc: 0, omegaDeg: 90 }],
+    nightlyJitterMps: 0,
+    spanBjd: spanDays,
+  });
+  return { id, planets: [{ id, priority, goal: 5, kMps }], model };
 }
 
 export function syntheticProblem(spec: SyntheticSpec): ScheduleProblem {
@@ -50,15 +65,22 @@ export function syntheticProblem(spec: SyntheticSpec): ScheduleProblem {
     localDate: new Date(FIRST_NIGHT_MS + i * DAY_MS).toISOString().slice(0, 10),
     clearProbability: between(rng, 0.5, 0.9),
     hoursAvailable: spec.nightHours,
+    midDays: i + spec.nightHours / 48,
   }));
   const searchCount = Math.round(spec.targets * spec.searchFraction);
-  const targets = Array.from({ length: spec.targets }, (_, i) => syntheticTarget(rng, i, i >= spec.targets - searchCount));
+  const kinds = Array.from({ length: spec.targets }, (_, i) => i >= spec.targets - searchCount);
+  const targets: ScheduleTarget[] = [];
   const slots: CandidateSlot[] = [];
-  for (const target of targets) {
+  kinds.forEach((search, i) => {
     const periodDays = Math.exp(between(rng, Math.log(1), Math.log(15)));
-    const tcMs = FIRST_NIGHT_MS + between(rng, 0, periodDays) * DAY_MS;
-    const tcErrDays = spec.phaseErrors ? between(rng, 0.0005, 0.03) : 0;
-    const periodErrDays = spec.phaseErrors ? between(rng, 0, 0.002) : 0;
+    const orbit: SyntheticOrbit = {
+      periodDays,
+      tcDays: between(rng, 0, periodDays),
+      tcErrDays: spec.phaseErrors ? between(rng, 0.0005, 0.03) : 0,
+      periodErrDays: spec.phaseErrors ? between(rng, 0, 0.002) : 0,
+    };
+    const target = syntheticTarget(rng, i, search, orbit, [0, spec.nights]);
+    targets.push(target);
     const durationSec = Math.round(between(rng, 600, 2400));
     const sigmaMps = between(rng, 1, 4);
     const windowHours = between(rng, 2, spec.nightHours);
@@ -73,16 +95,9 @@ export function syntheticProblem(spec: SyntheticSpec): ScheduleProblem {
       for (let k = 0; k < spec.slotsPerNight; k++) {
         const startMs = FIRST_NIGHT_MS + night.index * DAY_MS + (opens + (spec.slotsPerNight === 1 ? usable / 2 : (usable * k) / (spec.slotsPerNight - 1))) * HOUR_MS;
         const midDays = (startMs + (durationSec * 1000) / 2 - FIRST_NIGHT_MS) / DAY_MS;
-        const slot: CandidateSlot = { slotId: `${target.id}/${night.index}/${k}`, targetId: target.id, nightIndex: night.index, startMs, durationSec, sigmaEffMps: sigmaMps * between(rng, 1, 1.3) };
-        if (target.kind === 'search') slot.midDays = midDays;
-        else {
-          const orbits = (startMs - tcMs) / DAY_MS / periodDays;
-          slot.phase = orbits - Math.floor(orbits);
-          slot.phaseErr = Math.sqrt(tcErrDays ** 2 + (orbits * periodErrDays) ** 2) / periodDays;
-        }
-        slots.push(slot);
+        slots.push({ slotId: `${target.id}/${night.index}/${k}`, targetId: target.id, nightIndex: night.index, startMs, durationSec, sigmaWhiteMps: sigmaMps * between(rng, 1, 1.3), midDays });
       }
     }
-  }
+  });
   return { nights, targets, slots, time: spec.time, constraints: { minSpacingHours: spec.minSpacingHours, onePerNight: spec.onePerNight } };
 }

@@ -1,5 +1,7 @@
-// The scheduler's plain-data interface: nights, candidate slots and targets in; chosen slots out.
-// Nothing here depends on the sky, precision or orbit code: the caller turns those into slots.
+// The scheduler's plain-data interface: nights, candidate slots and stars in; chosen slots out.
+// Nothing here depends on the sky or precision code: the caller turns those into slots, and each
+// star brings its information model (src/rv/information-model.ts).
+import type { StarModel } from '../rv/information-model.js';
 
 /** One night that may hold visits. */
 export interface ScheduleNight {
@@ -11,54 +13,58 @@ export interface ScheduleNight {
   clearProbability: number;
   /** Hours of dark time that visits may fill; chosen visits in one night never sum to more. */
   hoursAvailable: number;
+  /** The night's middle in the slots' midDays scale (where nightly activity is evaluated); default: the mean of its slots. */
+  midDays?: number;
 }
 
-/** One possible visit: a target observed from `startMs` for `durationSec` in one night. */
+/** One possible visit: a star observed from `startMs` for `durationSec` in one night. */
 export interface CandidateSlot {
   slotId: string;
+  /** The star (ScheduleTarget.id). */
   targetId: string;
   nightIndex: number;
   /** Start of the visit, ms since 1970 (UTC). The visit occupies [startMs, startMs + durationSec). */
   startMs: number;
   /** Exposure plus readout plus acquisition. */
   durationSec: number;
-  /** Per-visit RV uncertainty with jitter; the visit's weight is 1/sigma^2. */
-  sigmaEffMps: number;
-  /** Ephemeris targets: predicted orbital phase in cycles (0 = mid-transit) and its 1-sigma error. */
-  phase?: number;
-  phaseErr?: number;
-  /**
-   * Ephemeris targets of an eccentric orbit: the expected signal E[s] and E[s²] at this visit,
-   * computed by the caller from the orbit's shape. Omitted: the circular closed form from phase.
-   */
-  signalMoments?: { m: number; q: number };
-  /** Search targets: mid-exposure time in days (any fixed zero point, e.g. BJD_TDB). */
-  midDays?: number;
+  /** The visit's white noise (photon, floor, white part of the jitter); its weight is 1/sigma^2. */
+  sigmaWhiteMps: number;
+  /** Mid-exposure time in days, BJD_TDB (search targets: any fixed zero point will do). */
+  midDays: number;
 }
 
-interface TargetBase {
+/** A planet with an ephemeris: scored by the information on its K (src/rv/information.ts). */
+export interface SchedulePlanet {
   id: string;
   /** Weight in the total utility; > 0. */
   priority: number;
-  /** Semi-amplitude (for search targets: at periodMinDays). */
   kMps: number;
   /** K / sigma_K to reach. */
   goal: number;
 }
 
-/** A planet with an ephemeris: the information on K at the predicted phases. */
-export interface EphemerisScheduleTarget extends TargetBase {
-  kind: 'ephemeris';
-}
-
 /** A blind search: phase coverage over a period range; K scales as P^(-1/3) from periodMinDays. */
-export interface SearchScheduleTarget extends TargetBase {
-  kind: 'search';
+export interface ScheduleSearch {
+  id: string;
+  priority: number;
+  /** Semi-amplitude at periodMinDays. */
+  kMps: number;
+  goal: number;
   periodMinDays: number;
   periodMaxDays: number;
 }
 
-export type ScheduleTarget = EphemerisScheduleTarget | SearchScheduleTarget;
+/**
+ * A star: what one visit observes. Its planets (in the order of `model.planets`) share every
+ * visit through the star's information model; a blind search may ride along or stand alone.
+ */
+export interface ScheduleTarget {
+  id: string;
+  planets: SchedulePlanet[];
+  /** The star's information model; required when it has planets. */
+  model?: StarModel;
+  search?: ScheduleSearch;
+}
 
 export type ScheduleTimeModel =
   /** Choose this many nights among the problem's nights. */
@@ -100,13 +106,17 @@ export interface ScheduleOptions {
   onProgress?: (utility: number, step: string) => void;
 }
 
+/** What the plan reaches for one planet or search (a star with two planets has two outcomes). */
 export interface TargetOutcome {
+  /** The planet's or search's id. */
   targetId: string;
+  starId: string;
   kind: 'ephemeris' | 'search';
+  /** Visits and hours of the star. */
   visits: number;
   hours: number;
   /**
-   * Ephemeris: expected information on K, sum w (s - mean s)^2, in (m/s)^-2.
+   * Ephemeris: 1 / Var(K), every other parameter marginalised, in (m/s)^-2.
    * Search: the same quantity implied by the grid's geometric-mean K/sigma_K at kMps.
    */
   informationPerMps2: number;
@@ -115,7 +125,7 @@ export interface TargetOutcome {
   goal: number;
   /** This target's term of the total utility. */
   utility: number;
-  /** Ephemeris targets: information / sum w; 1 is the best any schedule can do. */
+  /** Ephemeris targets: information / sum w; 1 is the best a white-noise, known-phase schedule can do. */
   informationEfficiency?: number;
 }
 

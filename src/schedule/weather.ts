@@ -1,10 +1,11 @@
 // Weather: each night is clear with its own probability, independently of the others (the
 // site's clear-night fraction, per month if given; common practice). A clouded night loses all
 // its visits. The plan is replayed over seeded random weather to estimate, per target, the
-// probability of reaching K/sigma_K >= goal, and the mean of K/sigma_K and of the utility.
+// probability of reaching K/sigma_K >= goal, and the mean of K/sigma_K and of the utility, per
+// planet and per search (each star's information rebuilt from its clear visits every trial).
 import { createRng } from '../rv/random.js';
-import { compileProblem } from './compile.js';
-import { EPHEMERIS_STATS, ephemerisInformation, updateEphemerisStats } from './objective-ephemeris.js';
+import { StarInformation, type InformationVisit } from '../rv/information.js';
+import { compileProblem, type CompiledProblem } from './compile.js';
 import { searchLogScore, searchStatsLength, updateSearchStats } from './objective-search.js';
 import type { ScheduleProblem, ScheduleResult } from './types.js';
 import { goalValue } from './utility.js';
@@ -42,29 +43,48 @@ export function simulateWeather(problem: ScheduleProblem, result: ScheduleResult
 
   const rng = createRng(seed);
   const clear = new Uint8Array(c.nightCount);
-  const reached = new Float64Array(c.targetCount);
-  const sumRatio = new Float64Array(c.targetCount);
-  const stats = new Float64Array(Math.max(EPHEMERIS_STATS, ...c.grids.map((g) => (g ? searchStatsLength(g) : 0))));
+  // Outcome slots: the planets in compiled order, then one per search.
+  const searchSlot = new Int32Array(c.targetCount).fill(-1);
+  const ids = problem.targets.flatMap((t) => t.planets.map((p) => p.id));
+  problem.targets.forEach((t, i) => {
+    if (t.search) searchSlot[i] = ids.push(t.search.id) - 1;
+  });
+  const reached = new Float64Array(ids.length);
+  const sumRatio = new Float64Array(ids.length);
+  const stats = new Float64Array(Math.max(1, ...c.grids.map((g) => (g ? searchStatsLength(g) : 0))));
+  const information = c.models.map((model) => (model ? new StarInformation(model) : null));
+  const variance = new Float64Array(Math.max(1, ...c.models.map((m) => m?.planetCount ?? 0)));
   let clearNights = 0;
   let utility = 0;
+  const count = (slot: number, ratio: number, goal: number, priority: number) => {
+    sumRatio[slot] += ratio;
+    // A hair of tolerance so a plan that reaches the goal exactly counts as reaching it.
+    if (ratio >= goal * (1 - 1e-9)) reached[slot]++;
+    utility += priority * goalValue(ratio / goal, overshoot);
+  };
   for (let trial = 0; trial < trials; trial++) {
     usedNights.forEach((n, i) => {
       clear[n] = rng.uniform() < clearProbability[i]! ? 1 : 0;
       clearNights += clear[n]!;
     });
     for (let t = 0; t < c.targetCount; t++) {
-      stats.fill(0);
       const grid = c.grids[t];
+      const info = information[t];
+      stats.fill(0);
+      info?.clear();
       for (const j of perTarget[t]!) {
         if (!clear[c.slotNight[j]!]) continue;
-        if (grid) updateSearchStats(stats, 0, grid, c.weight[j]!, c.valueA[j]!, 1);
-        else updateEphemerisStats(stats, 0, c.weight[j]!, c.valueA[j]!, c.valueB[j]!, 1);
+        if (grid) updateSearchStats(stats, 0, grid, c.weight[j]!, c.midDays[j]!, 1);
+        if (info) info.apply(visitOf(c, j), 1);
       }
-      const ratio = grid ? Math.exp(searchLogScore(stats, 0, grid)) : c.kMps[t]! * Math.sqrt(ephemerisInformation(stats, 0));
-      sumRatio[t] += ratio;
-      // A hair of tolerance so a plan that reaches the goal exactly counts as reaching it.
-      if (ratio >= c.goal[t]! * (1 - 1e-9)) reached[t]++;
-      utility += c.priority[t]! * goalValue(ratio / c.goal[t]!, overshoot);
+      if (info) {
+        info.variances(variance);
+        for (let i = 0; i < info.planetCount; i++) {
+          const at = c.planetFrom[t]! + i;
+          count(at, variance[i] === Infinity ? 0 : c.planetK[at]! / Math.sqrt(variance[i]!), c.planetGoal[at]!, c.planetPriority[at]!);
+        }
+      }
+      if (grid) count(searchSlot[t]!, Math.exp(searchLogScore(stats, 0, grid)), c.searchGoal[t]!, c.searchPriority[t]!);
     }
   }
   return {
@@ -72,6 +92,11 @@ export function simulateWeather(problem: ScheduleProblem, result: ScheduleResult
     seed,
     meanClearNights: clearNights / trials,
     meanUtility: utility / trials,
-    targets: problem.targets.map((target, t) => ({ targetId: target.id, goalProbability: reached[t]! / trials, meanKOverSigmaK: sumRatio[t]! / trials })),
+    targets: ids.map((targetId, i) => ({ targetId, goalProbability: reached[i]! / trials, meanKOverSigmaK: sumRatio[i]! / trials })),
   };
+}
+
+/** Slot j as the information module sees it. */
+export function visitOf(c: CompiledProblem, j: number): InformationVisit {
+  return { rows: c.rows, offset: c.rowOffset[j]!, weight: c.weight[j]!, night: c.slotNight[j]!, nightBjd: c.nightMidDays[c.slotNight[j]!]! };
 }

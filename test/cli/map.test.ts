@@ -11,7 +11,7 @@ import { runCliAsync, tempFiles } from './run-cli.js';
 /** The fixture plan with Alba observed on four more nights (7 visits in all), days apart. */
 function planWithSearchVisits(): Plan {
   const plan = fixturePlan();
-  const alba = plan.visits.filter((v) => v.targetId === 'Alba');
+  const alba = plan.visits.filter((v) => v.starId === 'Alba');
   const extra = [2.9, 6.1, 8.8, 13.2].map((days, k) => {
     const base = alba[k % alba.length]!;
     const start = new Date(Date.parse(base.startUtc) + days * 86_400_000);

@@ -57,15 +57,15 @@ export function icsMismatches(plan: Plan, text: string): string[] {
   const byStart = new Map(events.map((e) => [e.startMs, e]));
   for (const v of plan.visits) {
     const e = byStart.get(Date.parse(v.startUtc));
-    const label = `${v.targetId} ${v.startUtc}`;
+    const label = `${v.starId} ${v.startUtc}`;
     if (!e) {
       problems.push(`${label}: no event starts then`);
       continue;
     }
     if (e.tzid !== zone) problems.push(`${label}: DTSTART TZID ${e.tzid}, not ${zone}`);
     if (e.endMs - e.startMs !== v.durationSec * 1000) problems.push(`${label}: event lasts ${(e.endMs - e.startMs) / 1000} s, block ${v.durationSec} s`);
-    if (!e.description.includes(v.targetId) || !e.description.includes(`${v.exposureSec.toFixed(0)} s`)) problems.push(`${label}: description lacks target or exposure`);
-    if (v.phase !== undefined && !e.description.includes(v.phase.toFixed(3))) problems.push(`${label}: description lacks the phase`);
+    if (!e.description.includes(v.starId) || !e.description.includes(`${v.exposureSec.toFixed(0)} s`)) problems.push(`${label}: description lacks target or exposure`);
+    if (v.phases.some((p) => !e.description.includes(p.phase.toFixed(3)))) problems.push(`${label}: description lacks the phase`);
     if (!e.stampIsUtc) problems.push(`${label}: DTSTAMP not in UTC form`);
   }
   return problems;

@@ -83,7 +83,7 @@ export function checkVisits(plan: Plan): VisitCheck {
       violations.push(`${localDate}: visits on a night without a dark span`);
       continue;
     }
-    const targets = plan.campaign.targets.filter((t) => visits.some((v) => v.targetId === t.id));
+    const targets = plan.campaign.targets.filter((t) => visits.some((v) => v.starId === t.id));
     const spans = (windows: { targetId: string; start: Date; end: Date }[], id: string) =>
       joined(windows.filter((w) => w.targetId === id).map((w) => ({ startMs: w.start.getTime(), endMs: w.end.getTime() })));
     const eased = relaxed(site, constraints);
@@ -93,22 +93,22 @@ export function checkVisits(plan: Plan): VisitCheck {
     const exact = new Map(targets.map((t) => [t.id, spans(exactPieces, t.id)]));
     const fast = groupBy(computeWindows(site, targets, [night], constraints).windows, (w) => w.targetId);
     for (const v of visits) {
-      const label = `${v.targetId} ${v.startUtc}`;
+      const label = `${v.starId} ${v.startUtc}`;
       if (v.durationSec !== v.exposureSec + instrument.acquisitionSec + instrument.readoutSec) violations.push(`${label}: block is not acquisition + exposure + readout`);
       if (DateTime.fromISO(v.startLocal).toMillis() !== startMs(v) || DateTime.fromISO(v.startLocal, { setZone: true }).offset !== DateTime.fromMillis(startMs(v), { zone: site.timeZone }).offset) {
         violations.push(`${label}: local start ${v.startLocal} is not the same instant in ${site.timeZone}`);
       }
       if (startMs(v) < night.darkStart.getTime() || endMs(v) > night.darkEnd.getTime()) violations.push(`${label}: outside the dark span`);
-      check.maxOutsideReferenceMin = Math.max(check.maxOutsideReferenceMin, outsideReferenceMin(v, reference.get(v.targetId) ?? [], violations));
-      check.maxWindowEdgeErrorMin = Math.max(check.maxWindowEdgeErrorMin, windowEdgeErrorMin(v, fast.get(v.targetId) ?? [], exact.get(v.targetId) ?? []));
+      check.maxOutsideReferenceMin = Math.max(check.maxOutsideReferenceMin, outsideReferenceMin(v, reference.get(v.starId) ?? [], violations));
+      check.maxWindowEdgeErrorMin = Math.max(check.maxWindowEdgeErrorMin, windowEdgeErrorMin(v, fast.get(v.starId) ?? [], exact.get(v.starId) ?? []));
     }
     const ordered = [...visits].sort((a, b) => startMs(a) - startMs(b));
     for (let i = 1; i < ordered.length; i++) {
-      if (startMs(ordered[i]!) < endMs(ordered[i - 1]!)) violations.push(`${localDate}: ${ordered[i - 1]!.targetId} and ${ordered[i]!.targetId} overlap`);
+      if (startMs(ordered[i]!) < endMs(ordered[i - 1]!)) violations.push(`${localDate}: ${ordered[i - 1]!.starId} and ${ordered[i]!.starId} overlap`);
     }
   }
 
-  for (const [targetId, visits] of groupBy(plan.visits, (v) => v.targetId)) {
+  for (const [targetId, visits] of groupBy(plan.visits, (v) => v.starId)) {
     const starts = visits.map(startMs).sort((a, b) => a - b);
     for (let i = 1; i < starts.length; i++) {
       if (starts[i]! - starts[i - 1]! < constraints.minSpacingHours * 3_600_000) violations.push(`${targetId}: two visits closer than ${constraints.minSpacingHours} h`);
@@ -127,11 +127,11 @@ export function checkVisits(plan: Plan): VisitCheck {
 function outsideReferenceMin(v: PlannedVisit, windows: Span[], violations: string[]): number {
   const home = windows.find((w) => startMs(v) >= w.startMs - TOL_MS && startMs(v) <= w.endMs + TOL_MS);
   if (!home) {
-    violations.push(`${v.targetId} ${v.startUtc}: no reference window at its start`);
+    violations.push(`${v.starId} ${v.startUtc}: no reference window at its start`);
     return Infinity;
   }
   const outsideMin = Math.max(0, home.startMs - startMs(v), endMs(v) - home.endMs) / 60_000;
-  if (outsideMin > REFERENCE_TOLERANCE_MIN) violations.push(`${v.targetId} ${v.startUtc}: ${outsideMin.toFixed(2)} min outside the reference window`);
+  if (outsideMin > REFERENCE_TOLERANCE_MIN) violations.push(`${v.starId} ${v.startUtc}: ${outsideMin.toFixed(2)} min outside the reference window`);
   return outsideMin;
 }
 

@@ -16,14 +16,14 @@ describe('demo plan and transits', () => {
   it('plans no exposure that overlaps a predicted transit, widened by its 1-sigma error (scan over epochs)', () => {
     let checked = 0;
     for (const v of plan.visits) {
-      const eph = plan.campaign.targets.find((t) => t.id === v.targetId)!.ephemeris;
+      const eph = plan.campaign.targets.find((t) => t.id === v.starId)!.ephemeris;
       if (!eph?.transitDurationHours) continue;
       const half = v.exposureSec / 2 / 86_400;
       const n = Math.round((v.midBjdTdb - eph.tcBjdTdb) / eph.periodDays);
       for (let k = n - 1; k <= n + 1; k++) {
         const tc = eph.tcBjdTdb + k * eph.periodDays;
         const margin = eph.transitDurationHours / 48 + Math.hypot(eph.tcErrDays, k * eph.periodErrDays);
-        expect(v.midBjdTdb + half <= tc - margin || v.midBjdTdb - half >= tc + margin, `${v.targetId} ${v.startUtc}`).toBe(true);
+        expect(v.midBjdTdb + half <= tc - margin || v.midBjdTdb - half >= tc + margin, `${v.starId} ${v.startUtc}`).toBe(true);
       }
       checked++;
     }

@@ -37,7 +37,7 @@ export function describePlanProperties(names: string[], planOf: (name: string) =
       const plan = planOf(name);
       const { header, rows } = parsePlanCsv(renderPlanCsv(plan));
       expect(header).toEqual(PLAN_CSV_HEADER);
-      expect(rows.map((r) => `${r.targetId} ${r.startUtc}`).sort()).toEqual(plan.visits.map((v) => `${v.targetId} ${v.startUtc}`).sort());
+      expect(rows.map((r) => `${r.targetId} ${r.startUtc}`).sort()).toEqual(plan.visits.map((v) => `${v.starId} ${v.startUtc}`).sort());
       const visits = ephemerisVisits(rows);
       for (const summary of plan.targets.filter((t) => t.kind === 'ephemeris')) {
         const target = plan.campaign.targets.find((t) => t.id === summary.targetId)!;

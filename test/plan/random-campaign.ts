@@ -34,7 +34,7 @@ function star(rng: Rng, id: string, site: Site, windowStart: string): Target {
   const decDeg = anywhere ? between(rng, -89, 89) : Math.max(-89, Math.min(89, site.latitudeDeg + between(rng, -45, 45)));
   const teffK = between(rng, 3800, 6300);
   return {
-    id, raDeg, decDeg, pmRaMasYr: 100 * rng.normal(), pmDecMasYr: 100 * rng.normal(), epochYear: 2016,
+    id, starId: id, raDeg, decDeg, pmRaMasYr: 100 * rng.normal(), pmDecMasYr: 100 * rng.normal(), epochYear: 2016,
     vmag: between(rng, 7, 11.5), teffK, massSun: 0.5 + (teffK - 3800) / 4000, vsiniKms: between(rng, 1, 6),
     jitterMps: between(rng, 1, 3), priority: pick(rng, [0.5, 1, 1, 2]), estimated: [], source: `random ${id}`,
   };
@@ -87,10 +87,15 @@ export function randomCampaign(index: number): Campaign {
   // to the scheduler's owner), so search targets come with given nights and hours only.
   const searchFraction = time.mode === 'choose-nights' ? 0 : 0.3;
   const count = whole(rng, 2, 3);
-  const targets = Array.from({ length: count }, (_, k) => {
+  const targets: Target[] = [];
+  for (let k = 0; k < count; k++) {
     const id = `Rv${index}-${String.fromCharCode(97 + k)}`;
-    return k > 0 && rng.uniform() < searchFraction ? searchTarget(rng, id, site, window.start) : ephemerisTarget(rng, id, site, startJd, window.start);
-  });
+    const target = k > 0 && rng.uniform() < searchFraction ? searchTarget(rng, id, site, window.start) : ephemerisTarget(rng, id, site, startJd, window.start);
+    // One in four later rows is a second planet of the star before it: the same star fields, its own orbit.
+    const previous = targets[k - 1];
+    if (previous && target.ephemeris && rng.uniform() < 0.25) targets.push({ ...previous, id, starId: previous.starId, ephemeris: target.ephemeris, planet: target.planet!, search: undefined, source: `random ${id}` } as Target);
+    else targets.push(target);
+  }
   return {
     name: `random campaign ${index}`,
     file: `random-${index}.yaml`,
@@ -108,6 +113,8 @@ export function randomCampaign(index: number): Campaign {
       minWindowMinutes: 20,
     },
     goals: { significance: pick(rng, [3, 5, 8]) },
+    noise: { nightlyJitterFraction: pick(rng, [0, 0.5, 0.8]) },
+    transits: { confidence: 0.95, maxOrbitFraction: 0.2 },
     seed: index,
   };
 }

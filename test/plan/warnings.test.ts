@@ -30,12 +30,12 @@ describe('never observable', () => {
     expect(90 - Math.abs(campaign.site.latitudeDeg - polar.decDeg)).toBeLessThan(0);
     for (const night of plan.nights) expect(referenceWindows(campaign.site, [polar], night, campaign.constraints)).toEqual([]);
     expect(warningsOf('Polar-7').some((w) => w.includes('never observable'))).toBe(true);
-    expect(plan.visits.some((v) => v.targetId === 'Polar-7')).toBe(false);
+    expect(plan.visits.some((v) => v.starId === 'Polar-7')).toBe(false);
   });
 
   it('observable targets do not get it', () => {
     for (const id of ['Vago-2', 'Tarsa-4']) expect(warningsOf(id).some((w) => w.includes('never observable'))).toBe(false);
-    expect(plan.visits.some((v) => v.targetId === 'Tarsa-4')).toBe(true);
+    expect(plan.visits.some((v) => v.starId === 'Tarsa-4')).toBe(true);
   });
 });
 
@@ -71,7 +71,7 @@ describe('goal not reached on the demo', () => {
     expect(short.length).toBeGreaterThan(0);
     for (const t of short) {
       const target = demo.targets.find((x) => x.id === t.targetId)!;
-      const exposureSec = demoPlan.visits.find((v) => v.targetId === t.targetId)!.exposureSec;
+      const exposureSec = demoPlan.visits.find((v) => v.starId === t.targetId)!.exposureSec;
       const sigma = visitPrecision(demo.instrument, target, exposureSec, 1.2).effMps;
       const n = Math.ceil((t.goal! * sigma / t.kMps!) ** 2);
       expect(t.warnings.join(' ')).toContain(`about ${n} visits at quadratures`);

@@ -36,7 +36,7 @@ const instrument: Instrument = {
 
 function target(id: string, raDeg: number, decDeg: number, vmag: number, extra: Partial<Target>): Target {
   return {
-    id, raDeg, decDeg, pmRaMasYr: 0, pmDecMasYr: 0, epochYear: 2000, vmag, teffK: 5300, massSun: 0.9,
+    id, starId: id, raDeg, decDeg, pmRaMasYr: 0, pmDecMasYr: 0, epochYear: 2000, vmag, teffK: 5300, massSun: 0.9,
     vsiniKms: 2, jitterMps: 1.5, priority: 1, estimated: [], source: `fixture ${id}`, ...extra,
   };
 }
@@ -66,6 +66,8 @@ export const CAMPAIGN: Campaign = {
   time: { mode: 'choose-nights', nights: 5 },
   constraints: { twilight: 'nautical', maxAirmass: 2, moonSeparationDeg: 30, minSpacingHours: 20, minWindowMinutes: 30 },
   goals: { significance: 5 },
+  noise: { nightlyJitterFraction: 0.5 },
+  transits: { confidence: 0.95, maxOrbitFraction: 0.2 },
   seed: 7,
 };
 
@@ -95,17 +97,18 @@ export const NIGHTS: Night[] = Array.from({ length: 12 }, (_, i) => {
 const JD_UNIX_EPOCH = 2440587.5;
 
 /** A visit as the scheduler would write it (BJD taken as JD(UTC) here: a fixture, not a reduction). */
-function visit(targetId: string, start: Date, exposureSec: number, airmass: number, sigmaMps: number): PlannedVisit {
-  const t = TARGETS.find((x) => x.id === targetId)!;
+function visit(starId: string, start: Date, exposureSec: number, airmass: number, sigmaMps: number): PlannedVisit {
+  const t = TARGETS.find((x) => x.id === starId)!;
   const mid = new Date(start.getTime() + (exposureSec / 2) * 1000);
   const midBjdTdb = mid.getTime() / 86_400_000 + JD_UNIX_EPOCH;
   const localDate = `2027-04-${String(start.getUTCHours() < 12 ? start.getUTCDate() - 1 : start.getUTCDate()).padStart(2, '0')}`;
   const local = new Date(start.getTime() - 4 * 3.6e6).toISOString().replace('Z', '-04:00');
-  const phase = t.ephemeris ? { phase: phaseAt(t.ephemeris, midBjdTdb), phaseErr: phaseErrCycles(t.ephemeris, midBjdTdb) } : {};
+  const phases = t.ephemeris ? [{ targetId: starId, phase: phaseAt(t.ephemeris, midBjdTdb), phaseErr: phaseErrCycles(t.ephemeris, midBjdTdb) }] : [];
   return {
-    targetId, localDate, startUtc: start.toISOString(), startLocal: local, midBjdTdb, exposureSec,
-    durationSec: exposureSec + 150, airmass, moonSeparationDeg: 60, ...phase, sigmaMps,
+    starId, localDate, startUtc: start.toISOString(), startLocal: local, midBjdTdb, exposureSec,
+    durationSec: exposureSec + 150, airmass, moonSeparationDeg: 60, phases, sigmaMps,
     sigmaEffMps: Math.hypot(sigmaMps, t.jitterMps),
+    sigmaWhiteMps: Math.hypot(sigmaMps, t.jitterMps * Math.SQRT1_2),
   };
 }
 
@@ -123,14 +126,14 @@ export const VISITS: PlannedVisit[] = [
   visit('Mirador-7', at(20, 23, 50), 600, 1.3, 1.5),
 ];
 
-const hours = (id: string) => VISITS.filter((v) => v.targetId === id).reduce((s, v) => s + v.durationSec / 3600, 0);
-const count = (id: string) => VISITS.filter((v) => v.targetId === id).length;
+const hours = (id: string) => VISITS.filter((v) => v.starId === id).reduce((s, v) => s + v.durationSec / 3600, 0);
+const count = (id: string) => VISITS.filter((v) => v.starId === id).length;
 
 export const SUMMARIES: TargetSummary[] = [
-  { targetId: 'Teyu-3', kind: 'ephemeris', priority: 1, kMps: 5.9, visits: count('Teyu-3'), hours: hours('Teyu-3'), sigmaKMps: 4.5, kOverSigmaK: 1.3, goal: 5, goalProbability: 0.0, informationEfficiency: 0.1, phaseErrAtEnd: 0.0009, warnings: [] },
-  { targetId: 'Mirador-7', kind: 'ephemeris', priority: 1, kMps: 8.5, visits: count('Mirador-7'), hours: hours('Mirador-7'), sigmaKMps: 2.0, kOverSigmaK: 4.2, goal: 5, goalProbability: 0.2, informationEfficiency: 0.55, phaseErrAtEnd: 0.002, warnings: [] },
-  { targetId: 'Alba', kind: 'search', priority: 1, kMps: 3.1, visits: count('Alba'), hours: hours('Alba'), sigmaKMps: 1.2, kOverSigmaK: 2.6, goal: 5, goalProbability: 0.05, warnings: [] },
-  { targetId: 'Quena-2', kind: 'monitor', priority: 0.5, visits: 0, hours: 0, warnings: ['never observable in the window'] },
+  { targetId: 'Teyu-3', starId: 'Teyu-3', kind: 'ephemeris', priority: 1, kMps: 5.9, visits: count('Teyu-3'), hours: hours('Teyu-3'), sigmaKMps: 4.5, kOverSigmaK: 1.3, goal: 5, goalProbability: 0.0, informationEfficiency: 0.1, phaseErrAtEnd: 0.0009, warnings: [] },
+  { targetId: 'Mirador-7', starId: 'Mirador-7', kind: 'ephemeris', priority: 1, kMps: 8.5, visits: count('Mirador-7'), hours: hours('Mirador-7'), sigmaKMps: 2.0, kOverSigmaK: 4.2, goal: 5, goalProbability: 0.2, informationEfficiency: 0.55, phaseErrAtEnd: 0.002, warnings: [] },
+  { targetId: 'Alba', starId: 'Alba', kind: 'search', priority: 1, kMps: 3.1, visits: count('Alba'), hours: hours('Alba'), sigmaKMps: 1.2, kOverSigmaK: 2.6, goal: 5, goalProbability: 0.05, warnings: [] },
+  { targetId: 'Quena-2', starId: 'Quena-2', kind: 'monitor', priority: 0.5, visits: 0, hours: 0, warnings: ['never observable in the window'] },
 ];
 
 /** The whole plan: visits on the evenings of 11, 13, 16, 19 and 20 April; 14 and 17 April are backups. */

@@ -16,7 +16,7 @@ beforeAll(async () => {
   writeFileSync('test-output/report-fixture.html', page);
 });
 
-const visitsOf = (id: string) => plan.visits.filter((v) => v.targetId === id).sort((a, b) => a.startUtc.localeCompare(b.startUtc));
+const visitsOf = (id: string) => plan.visits.filter((v) => v.starId === id).sort((a, b) => a.startUtc.localeCompare(b.startUtc));
 
 describe('report.html is one self-contained file', () => {
   it('references nothing outside itself', () => {
@@ -74,7 +74,7 @@ describe('the charts hold one mark per planned item', () => {
     for (const [i, date] of dates.entries()) {
       const visits = plan.visits.filter((v) => v.localDate === date);
       expect(markCount(nights[i]!.html, 'visit_blocks')).toBe(visits.length);
-      expect(markCount(nights[i]!.html, 'altitude_lines')).toBe(new Set(visits.map((v) => v.targetId)).size);
+      expect(markCount(nights[i]!.html, 'altitude_lines')).toBe(new Set(visits.map((v) => v.starId)).size);
       expect(markCount(nights[i]!.html, 'twilight_bands')).toBeGreaterThanOrEqual(5);
     }
   });
@@ -112,7 +112,7 @@ describe('numbers recomputed from the visits', () => {
     let sw = 0, sws = 0, swss = 0;
     for (const v of visitsOf(targetId).slice(0, n)) {
       const w = 1 / v.sigmaEffMps ** 2;
-      const s = -Math.sin(2 * Math.PI * v.phase!);
+      const s = -Math.sin(2 * Math.PI * v.phases[0]!.phase);
       sw += w; sws += w * s; swss += w * s * s;
     }
     const det = sw * swss - sws * sws;

@@ -41,7 +41,7 @@ function randomSite(i: number): Site {
 }
 
 function star(id: string, decDeg: number): Target {
-  return { id, raDeg: between(0, 360), decDeg, pmRaMasYr: 300 * rng.normal(), pmDecMasYr: 300 * rng.normal(), epochYear: 2016, vmag: 9, teffK: 5500, massSun: 1, vsiniKms: 2, jitterMps: 1.5, priority: 1, estimated: [], source: 'random' };
+  return { id, starId: id, raDeg: between(0, 360), decDeg, pmRaMasYr: 300 * rng.normal(), pmDecMasYr: 300 * rng.normal(), epochYear: 2016, vmag: 9, teffK: 5500, massSun: 1, vsiniKms: 2, jitterMps: 1.5, priority: 1, estimated: [], source: 'random' };
 }
 
 describe('computeWindows against the one-minute reference sampler', () => {

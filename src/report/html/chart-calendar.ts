@@ -23,12 +23,12 @@ function calendarDates(plan: Plan): string[] {
  */
 export function calendarFigure(plan: Plan): ChartFigure {
   const dates = calendarDates(plan);
-  const targetIds = plan.campaign.targets.map((t) => t.id);
+  const targetIds = [...new Set(plan.campaign.targets.map((t) => t.starId))];
   const backupRank = new Map(plan.backups.map((b) => [b.localDate, b.rank]));
   const column = (d: string, status: string) => ({ night: dayMs(d), nightEnd: dayMs(d) + DAY_MS, status });
   const planned = plan.plannedDates.map((d) => column(d, 'planned night'));
   const backups = plan.backups.map((b) => column(b.localDate, 'backup night'));
-  const visits = plan.visits.map((v) => ({ night: dayMs(v.localDate) + DAY_MS / 2, target: v.targetId, date: v.localDate }));
+  const visits = plan.visits.map((v) => ({ night: dayMs(v.localDate) + DAY_MS / 2, target: v.starId, date: v.localDate }));
   const moon = plan.nights.map((n) => ({ night: dayMs(n.localDate), nightEnd: dayMs(n.localDate) + DAY_MS, moonPct: n.moon.illumination * 100 }));
   const domain = [dayMs(dates[0]!), dayMs(dates[dates.length - 1]!) + DAY_MS];
   const width = Math.min(900, Math.max(480, dates.length * 9));
@@ -86,7 +86,7 @@ export function calendarFigure(plan: Plan): ChartFigure {
     spacing: 6,
   } as unknown as TopLevelSpec;
 
-  const visitsOn = (d: string) => plan.visits.filter((v) => v.localDate === d).map((v) => v.targetId);
+  const visitsOn = (d: string) => plan.visits.filter((v) => v.localDate === d).map((v) => v.starId);
   const moonOf = (d: string) => plan.nights.find((n) => n.localDate === d)?.moon.illumination;
   const plannedSet = new Set(plan.plannedDates);
   const listed = dates.filter((d) => plannedSet.has(d) || backupRank.has(d));

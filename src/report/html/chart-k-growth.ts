@@ -1,7 +1,7 @@
 import type { TopLevelSpec } from 'vega-lite';
-import type { PlannedVisit, Plan, TargetSummary } from '../../model.js';
-import { planetSignalShape, type SignalShape } from '../../orbit/signal-shape.js';
-import { EPHEMERIS_STATS, ephemerisInformation, updateEphemerisStats } from '../../schedule/objective-ephemeris.js';
+import type { Plan, TargetSummary } from '../../model.js';
+import { starVisitInformation } from '../../plan/visit-information.js';
+import { StarInformation } from '../../rv/information.js';
 import { fmt } from '../table.js';
 import type { ChartFigure } from './figure.js';
 import { MUTED, OKABE_ITO } from './palette.js';
@@ -14,25 +14,28 @@ export interface KGrowthPoint {
 }
 
 /**
- * K/σ_K after each visit in time order, recomputed from the visits: K √E[I] with E[I] the expected
- * least-squares information on K with a free offset, over each visit's Gaussian phase error
- * (the scheduler's objective, src/schedule/objective-ephemeris.ts, which cites its sources), with
- * the signal shape of the planet's orbit (src/orbit/signal-shape.ts; eccentric orbits too).
+ * K/σ_K of one planet after each of its star's visits in time order: K / √Var(K) from the star's
+ * information model (src/rv/information.ts: free offset, the other planets, the ephemeris and
+ * its prior, nightly and correlated noise), the model the planner used.
  */
-export function kGrowthSeries(kMps: number, visits: PlannedVisit[], shape: SignalShape): KGrowthPoint[] {
-  const stats = new Float64Array(EPHEMERIS_STATS);
-  return visits.map((v, i) => {
-    const { m, q } = shape.moments(v.phase ?? 0, v.phaseErr ?? 0);
-    updateEphemerisStats(stats, 0, 1 / (v.sigmaEffMps * v.sigmaEffMps), m, q, 1);
-    return { visit: i + 1, date: v.localDate, kOverSigmaK: kMps * Math.sqrt(ephemerisInformation(stats, 0)) };
+export function kGrowthSeries(plan: Plan, summary: TargetSummary & { kMps: number }): KGrowthPoint[] {
+  const visits = visitsOf(plan, summary.starId);
+  const star = starVisitInformation(plan.campaign, plan.nights, summary.starId, visits);
+  if (!star) return [];
+  const planet = star.model.planets.findIndex((p) => p.input.id === summary.targetId);
+  const info = new StarInformation(star.model);
+  const variance = new Float64Array(star.model.planetCount);
+  return star.visits.map((v, i) => {
+    info.apply(v, 1);
+    const sigmaK = Math.sqrt(info.variances(variance)[planet]!);
+    return { visit: i + 1, date: visits[i]!.localDate, kOverSigmaK: sigmaK === Infinity ? 0 : summary.kMps / sigmaK };
   });
 }
 
 /** K/σ_K growing with each planned visit of one ephemeris target, against its goal. */
 export function kGrowthFigure(plan: Plan, summary: TargetSummary & { kMps: number }): ChartFigure {
   const goal = summary.goal ?? plan.campaign.goals.significance;
-  const target = plan.campaign.targets.find((t) => t.id === summary.targetId);
-  const series = kGrowthSeries(summary.kMps, visitsOf(plan, summary.targetId), planetSignalShape(target?.planet));
+  const series = kGrowthSeries(plan, summary);
   const yMax = Math.max(goal, ...series.map((p) => p.kOverSigmaK)) * 1.15;
   const x = { field: 'visit', type: 'quantitative' as const, title: 'Visits so far', scale: { domain: [0, Math.max(series.length, 1) + 0.5], nice: false }, axis: { tickMinStep: 1, format: 'd' } };
   const spec = {
@@ -71,7 +74,7 @@ export function kGrowthFigure(plan: Plan, summary: TargetSummary & { kMps: numbe
     title: `${summary.targetId}: K/σ_K after each visit`,
     caption:
       `Expected significance of K after each planned visit, in time order, against the goal of ${fmt(goal, 1)} (dashed). ` +
-      `It includes the free velocity offset and the phase uncertainty; after all ${series.length} visits: ${fmt(last?.kOverSigmaK, 1)}.`,
+      `It includes the free velocity offset, the ephemeris uncertainty, the star's other planets and its nightly noise; after all ${series.length} visits: ${fmt(last?.kOverSigmaK, 1)}.`,
     spec,
     columns: [{ header: 'visit', align: 'right' }, { header: 'night' }, { header: 'K/sigma_K', align: 'right' }],
     rows: series.map((p) => [String(p.visit), p.date, fmt(p.kOverSigmaK, 2)]),

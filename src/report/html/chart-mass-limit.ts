@@ -28,7 +28,7 @@ export interface MassLimit {
  * Undefined with fewer visits than a fit needs.
  */
 export function searchMassLimit(plan: Plan, summary: TargetSummary, target: Target, periodsDays: number[]): MassLimit | undefined {
-  const visits = visitsOf(plan, summary.targetId);
+  const visits = visitsOf(plan, summary.starId);
   const sigmaMps = equivalentSigmaMps(visits);
   if (sigmaMps === undefined || visits.length < MIN_VISITS) return undefined;
   const significance = summary.goal ?? plan.campaign.goals.significance;

@@ -47,7 +47,7 @@ export function nightFigure(plan: Plan, localDate: string, visits: PlannedVisit[
   // during the night shifts the labels after it by the change, which is rare and stated.
   const noonMs = localNoon(localDate, zone).getTime();
   const hours = (ms: number) => 12 + (ms - noonMs) / HOUR_MS;
-  const ids = [...new Set(visits.map((v) => v.targetId))];
+  const ids = [...new Set(visits.map((v) => v.starId))];
   const styles = targetStyles(plan, ids);
   const siteNightClock = siteClock(site, new Date((fromMs + toMs) / 2));
   const curves = ids.flatMap((id) => {
@@ -60,10 +60,10 @@ export function nightFigure(plan: Plan, localDate: string, visits: PlannedVisit[
   });
   const blocks = visits.map((v) => {
     const start = Date.parse(v.startUtc);
-    const target = plan.campaign.targets.find((t) => t.id === v.targetId);
+    const target = plan.campaign.targets.find((t) => t.starId === v.starId);
     const mid = start + (v.durationSec * 1000) / 2;
     const top = target ? altitudeDeg(preparePosition(target, siteNightClock), mid) : 90;
-    return { target: v.targetId, start: hours(start), end: hours(start + v.durationSec * 1000), bottom: 0, top: Math.max(0, top) };
+    return { target: v.starId, start: hours(start), end: hours(start + v.durationSec * 1000), bottom: 0, top: Math.max(0, top) };
   });
   const bands = night ? skyBands(night, fromMs, toMs).map((b) => ({ state: b.state, start: hours(b.startMs), end: hours(b.endMs) })) : [];
   const floorDeg = Math.max(site.minAltitudeDeg, altitudeForAirmassDeg(constraints.maxAirmass));

@@ -19,9 +19,8 @@ export function rvPhaseFigure(plan: Plan, summary: TargetSummary & { kMps: numbe
   const shape = planetSignalShape(plan.campaign.targets.find((t) => t.id === summary.targetId)?.planet);
   const rvAt = (phase: number) => k * shape.at(phase);
   const curve = Array.from({ length: CURVE_POINTS + 1 }, (_, i) => ({ phase: i / CURVE_POINTS, rv: rvAt(i / CURVE_POINTS) }));
-  const visits = visitsOf(plan, summary.targetId).map((v, i) => {
-    const phase = v.phase ?? 0;
-    const phaseErr = v.phaseErr ?? 0;
+  const visits = visitsOf(plan, summary.starId).map((v, i) => {
+    const { phase, phaseErr } = v.phases.find((p) => p.targetId === summary.targetId) ?? { phase: 0, phaseErr: 0 };
     const rv = rvAt(phase);
     return {
       n: i + 1, date: v.localDate, phase, rv,

@@ -17,6 +17,7 @@ const localDate = z.iso.date();
 
 const targetSchema = z.looseObject({
   id: z.string(),
+  starId: z.string(),
   raDeg: num,
   decDeg: num,
   pmRaMasYr: num,
@@ -41,6 +42,7 @@ const campaignSchema = z.looseObject({
   instrument: z.looseObject({ name: z.string() }),
   targets: z.array(targetSchema),
   window: z.looseObject({ start: localDate, end: localDate }),
+  noise: z.looseObject({ nightlyJitterFraction: num }),
   time: z.looseObject({ mode: z.enum(['choose-nights', 'given-nights', 'hours']) }),
   constraints: z.looseObject({ twilight: z.string(), maxAirmass: num, moonSeparationDeg: num }),
   goals: z.looseObject({ significance: num }),
@@ -61,7 +63,7 @@ const nightSchema = z.looseObject({
 });
 
 const visitSchema = z.looseObject({
-  targetId: z.string(),
+  starId: z.string(),
   localDate,
   startUtc: z.iso.datetime({ offset: true }),
   startLocal: z.string(),
@@ -70,14 +72,15 @@ const visitSchema = z.looseObject({
   durationSec: num,
   airmass: num,
   moonSeparationDeg: num,
-  phase: optNum,
-  phaseErr: optNum,
+  phases: z.array(z.looseObject({ targetId: z.string(), phase: num, phaseErr: num })),
   sigmaMps: num,
   sigmaEffMps: num.positive(),
+  sigmaWhiteMps: num.positive(),
 });
 
 const summarySchema = z.looseObject({
   targetId: z.string(),
+  starId: z.string(),
   kind: z.enum(['ephemeris', 'search', 'monitor']),
   priority: num,
   kMps: optNum,

@@ -26,7 +26,7 @@ function spread(values: number[], decimals: number, dash = '–'): string {
 /** One row per target: what a time request needs (σ per visit is the visits' equivalent σ with jitter). */
 export function proposalRows(plan: Plan): string[][] {
   return plan.targets.map((s) => {
-    const visits = visitsOf(plan, s.targetId);
+    const visits = visitsOf(plan, s.starId);
     return [
       s.targetId,
       fmt(targetOf(plan, s.targetId)?.vmag, 1),

@@ -1,8 +1,8 @@
 import type { Plan, PlannedVisit, Target } from '../../model.js';
 
-/** A target's planned visits in time order. */
-export function visitsOf(plan: Plan, targetId: string): PlannedVisit[] {
-  return plan.visits.filter((v) => v.targetId === targetId).sort((a, b) => a.startUtc.localeCompare(b.startUtc));
+/** A star's planned visits in time order. */
+export function visitsOf(plan: Plan, starId: string): PlannedVisit[] {
+  return plan.visits.filter((v) => v.starId === starId).sort((a, b) => a.startUtc.localeCompare(b.startUtc));
 }
 
 /** The campaign's target with this id (every summary and visit names one). */

@@ -1,0 +1,164 @@
+// The information on each planet's K that a star's visits give, kept up to date visit by visit
+// (docs/references.md [Fisher-RV]). Nothing else in Crest computes information on K.
+//
+// Data model: y_i = j_iᵀθ + a_n(i) + e_i, with e_i white (photon noise, instrument floor and the
+// white part of the jitter: weight w_i = 1/σ_i²) and a_n shared by every visit of night n (the
+// nightly part of the jitter, τ², plus quasi-periodic activity across nights when the star has a
+// rotation period). Split each night into its weighted mean and the residuals about it: the
+// residuals carry Σ w (j − ū)(j − ū)ᵀ, free of a_n, and the means ȳ_n = ū_nᵀθ + a_n + ē_n
+// (Var ē_n = 1/W_n) have covariance M = diag(1/W_n) + τ² I + K_activity. So
+//   F = Λ + Σ_i w_i j_i j_iᵀ − Σ_n u_n u_nᵀ / W_n + Ūᵀ M⁻¹ Ū,   u_n = Σ_{i∈n} w_i j_i, ū_n = u_n / W_n,
+// the Cramér–Rao bound of the linearised model with Gaussian priors Λ ([Kay1993] §3.9). Without
+// activity M is diagonal and a night adds −τ²/(1 + τ² W_n) u_n u_nᵀ to Σ w j jᵀ (the Woodbury
+// identity, [Golub-VanLoan2013] §2.1.4): adding or removing a visit costs O(p²) per sample. With
+// activity M⁻¹ is kept explicitly and updated by bordering, rank-one and deletion formulas
+// (correlated-nights.ts): O(m²) for the star's m observed nights, never a refactorisation.
+//
+// Var(K_k) = Σ_s w_s (F_s⁻¹)_kk over the model's sample ephemerides (information-model.ts).
+import { CorrelatedNights } from './correlated-nights.js';
+import { type StarModel, designRows, packedLength } from './information-model.js';
+import { addTrailingVariances } from './packed-cholesky.js';
+
+/** One visit as the information sees it. */
+export interface InformationVisit {
+  /** Design rows for every sample (designRows in information-model.ts), from `offset`. */
+  rows: Float64Array;
+  offset: number;
+  /** 1/σ² of the visit's white noise, (m/s)⁻². */
+  weight: number;
+  /** Any integer naming the visit's night; visits of one night share the nightly noise. */
+  night: number;
+  /** A time (BJD_TDB) for the night, where the activity kernel is evaluated. */
+  nightBjd: number;
+}
+
+interface NightSums {
+  weight: number;
+  /** u = Σ w j, per sample. */
+  u: Float64Array;
+}
+
+export class StarInformation {
+  readonly sampleCount: number;
+  readonly paramCount: number;
+  readonly packed: number;
+  readonly planetCount: number;
+  /** Λ + Σ w j jᵀ − the nightly terms (all of F without activity; F − Ūᵀ M⁻¹ Ū with it), per sample. */
+  private readonly base: Float64Array;
+  private readonly nights = new Map<number, NightSums>();
+  private readonly tau2: number;
+  private readonly correlated?: CorrelatedNights;
+  private readonly work: Float64Array;
+  private readonly uNew: Float64Array;
+  private readonly delta: Float64Array;
+  visitCount = 0;
+
+  constructor(readonly model: StarModel) {
+    this.sampleCount = model.samples.length;
+    this.paramCount = model.paramCount;
+    this.packed = packedLength(model.paramCount);
+    this.planetCount = model.planetCount;
+    this.base = new Float64Array(this.sampleCount * this.packed);
+    this.reset();
+    this.tau2 = model.input.nightlyJitterMps ** 2;
+    if (model.input.activity) this.correlated = new CorrelatedNights(model.input.activity, this.tau2, this.sampleCount, this.paramCount);
+    this.work = new Float64Array(this.packed);
+    this.uNew = new Float64Array(this.paramCount);
+    this.delta = new Float64Array(this.sampleCount * this.packed);
+  }
+
+  private reset(): void {
+    for (let s = 0; s < this.sampleCount; s++) this.base.set(this.model.priorPrecision, s * this.packed);
+  }
+
+  /** Var(K) of each planet (out, length planetCount), with visit v added (sign 1), removed (-1), or as it is (v undefined). */
+  variances(out: Float64Array, v?: InformationVisit, sign: 1 | -1 = 1): Float64Array {
+    out.fill(0);
+    if (this.visitCount + (v ? sign : 0) <= 0) return out.fill(Infinity);
+    if (v) this.deltas(v, sign, true);
+    const { packed, paramCount: p, planetCount } = this;
+    for (let s = 0; s < this.sampleCount; s++) {
+      const at = s * packed;
+      for (let i = 0; i < packed; i++) this.work[i] = this.base[at + i]! + (v ? this.delta[at + i]! : 0);
+      if (this.correlated) this.correlated.addTo(this.work, s);
+      addTrailingVariances(this.work, p, planetCount, this.model.samples[s]!.weight, out);
+    }
+    return out;
+  }
+
+  /** Adds (sign 1) or removes (-1) visit v. */
+  apply(v: InformationVisit, sign: 1 | -1): void {
+    this.deltas(v, sign, false);
+    const { base, delta } = this;
+    for (let i = 0; i < base.length; i++) base[i] += delta[i]!;
+    const night = this.nights.get(v.night);
+    const p = this.paramCount;
+    if (this.correlated) this.correlated.commit(v, sign, night?.weight ?? 0, night?.u);
+    if (night) {
+      night.weight += sign * v.weight;
+      for (let i = 0; i < night.u.length; i++) night.u[i] += sign * v.weight * v.rows[v.offset + i]!;
+      if (night.weight <= 1e-9 * v.weight) this.nights.delete(v.night);
+    } else {
+      if (sign < 0) throw new Error('information: removing a visit from a night without visits');
+      const u = new Float64Array(this.sampleCount * p);
+      for (let i = 0; i < u.length; i++) u[i] = v.weight * v.rows[v.offset + i]!;
+      this.nights.set(v.night, { weight: v.weight, u });
+    }
+    this.visitCount += sign;
+    // No visits left: back to the prior exactly, free of the rounding residue of the removals.
+    if (this.visitCount === 0) this.clear();
+  }
+
+  /** Forgets every visit. */
+  clear(): void {
+    this.visitCount = 0;
+    this.reset();
+    this.nights.clear();
+    this.correlated?.clear();
+  }
+
+  /**
+   * this.delta ← the change of `base` when v is added or removed: sign w j jᵀ − c(W') u' u'ᵀ +
+   * c(W) u uᵀ with c(W) = τ²/(1 + τ²W) without activity (the Woodbury form above), or
+   * c(W) = 1/W with it (the nightly means then move into the correlated part, whose change is
+   * added too when `withCorrelated`).
+   */
+  private deltas(v: InformationVisit, sign: 1 | -1, withCorrelated: boolean): void {
+    const { packed, paramCount: p, delta, uNew } = this;
+    const night = this.nights.get(v.night);
+    const w = v.weight;
+    const before = night?.weight ?? 0;
+    const after = before + sign * w;
+    const coupling = (weight: number) => (weight <= 1e-9 * w ? 0 : this.correlated ? 1 / weight : this.tau2 / (1 + this.tau2 * weight));
+    const cBefore = coupling(before);
+    const cAfter = coupling(after);
+    for (let s = 0; s < this.sampleCount; s++) {
+      const j = s * p;
+      const row = v.offset + j;
+      const at = s * packed;
+      for (let r = 0; r < p; r++) uNew[r] = (night ? night.u[j + r]! : 0) + sign * w * v.rows[row + r]!;
+      let idx = at;
+      for (let r = 0; r < p; r++) {
+        const jr = v.rows[row + r]!;
+        const ur = night ? night.u[j + r]! : 0;
+        for (let c = 0; c <= r; c++) {
+          const uc = night ? night.u[j + c]! : 0;
+          delta[idx++] = sign * w * jr * v.rows[row + c]! - cAfter * uNew[r]! * uNew[c]! + cBefore * ur * uc;
+        }
+      }
+    }
+    if (withCorrelated && this.correlated) this.correlated.addDelta(v, sign, before, night?.u, delta);
+  }
+}
+
+/** Var(K) of each planet for a set of visits, from a fresh accumulator. */
+export function kVariances(model: StarModel, visits: InformationVisit[]): Float64Array {
+  const info = new StarInformation(model);
+  for (const v of visits) info.apply(v, 1);
+  return info.variances(new Float64Array(model.planetCount));
+}
+
+/** The visits of one star as the information sees them: design rows at each time, one night key per visit. */
+export function informationVisits(model: StarModel, visits: { bjd: number; sigmaMps: number; night: number; nightBjd: number }[]): InformationVisit[] {
+  return visits.map((v) => ({ rows: designRows(model, v.bjd), offset: 0, weight: 1 / (v.sigmaMps * v.sigmaMps), night: v.night, nightBjd: v.nightBjd }));
+}
