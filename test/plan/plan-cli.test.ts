@@ -5,7 +5,7 @@
 import { copyFileSync, existsSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { runCliAsync, tempFiles, type CliResult } from '../cli/run-cli.js';
+import { runCliInProcess, tempFiles, type CliResult } from '../cli/run-cli.js';
 import { demoRuns } from '../support/demo-plan.js';
 import { fixture } from './fixtures.js';
 import { ephemerisVisits, kOverSigmaKFromCsv, orbitSignal, parsePlanCsv } from './recompute-k.js';
@@ -66,7 +66,7 @@ describe('crest plan --nights', () => {
       'campaign.yaml': 'name: few\nsite: la-silla\ninstrument: stable-4m\ntargets: targets.csv\nwindow: { start: 2027-04-01, end: 2027-04-10 }\ntime: { mode: choose-nights, nights: 5 }\n',
       'targets.csv': read(path.dirname(fixture('small')), 'targets.csv'),
     });
-    const r = await runCliAsync(['plan', path.join(dir, 'campaign.yaml'), '--nights', '2', '--json', '--out', path.join(dir, 'out')]);
+    const r = await runCliInProcess(['plan', path.join(dir, 'campaign.yaml'), '--nights', '2', '--json', '--out', path.join(dir, 'out')]);
     expect(r.status).toBe(0);
     const plan = JSON.parse(r.stdout) as { plannedDates: string[]; visits: { localDate: string }[]; campaign: { time: unknown } };
     expect(plan.campaign.time).toEqual({ mode: 'choose-nights', nights: 2 });
@@ -81,7 +81,7 @@ describe('crest plan on bad input', () => {
       'campaign.yaml': 'name: bad\nsite: la-silla\ninstrument: stable-4m\ntargets: targets.csv\nwindow: { start: 2027-04-01, end: 2027-04-05 }\ntime: { mode: choose-nights, nights: 0 }\n',
       'targets.csv': read(path.dirname(fixture('small')), 'targets.csv'),
     });
-    const r = await runCliAsync(['plan', path.join(dir, 'campaign.yaml'), '--out', path.join(dir, 'out')]);
+    const r = await runCliInProcess(['plan', path.join(dir, 'campaign.yaml'), '--out', path.join(dir, 'out')]);
     expect(r.status).toBe(2);
     expect(oneLine(r)).toBe(true);
     expect(r.stderr).toContain('time.nights');
@@ -89,14 +89,14 @@ describe('crest plan on bad input', () => {
   });
 
   it('--nights on a campaign that does not choose nights: exit 2, one line naming the flag', async () => {
-    const r = await runCliAsync(['plan', fixture('small'), '--nights', '3', '--out', path.join(tempFiles({}), 'out')]);
+    const r = await runCliInProcess(['plan', fixture('small'), '--nights', '3', '--out', path.join(tempFiles({}), 'out')]);
     expect(r.status).toBe(2);
     expect(oneLine(r)).toBe(true);
     expect(r.stderr).toContain('--nights');
   });
 
   it('a campaign file that does not exist: exit 2, one line', async () => {
-    const r = await runCliAsync(['plan', path.join(tempFiles({}), 'missing.yaml')]);
+    const r = await runCliInProcess(['plan', path.join(tempFiles({}), 'missing.yaml')]);
     expect(r.status).toBe(2);
     expect(oneLine(r)).toBe(true);
   });
@@ -110,7 +110,7 @@ describe('--out pointing at the folder that holds the inputs', () => {
     const dir = tempFiles({ 'campaign.yaml': campaignText.replace('targets: targets.csv', 'targets: plan.csv') });
     copyFileSync(path.join(small, 'targets.csv'), path.join(dir, 'plan.csv'));
     const before = read(dir, 'plan.csv');
-    const r = await runCliAsync(['plan', 'campaign.yaml', '--out', '.'], dir);
+    const r = await runCliInProcess(['plan', 'campaign.yaml', '--out', '.'], dir);
     expect(r.status).toBe(2);
     expect(oneLine(r)).toBe(true);
     expect(r.stderr).toContain('--out');
@@ -123,7 +123,7 @@ describe('--out pointing at the folder that holds the inputs', () => {
     copyFileSync(path.join(small, 'targets.csv'), path.join(dir, 'targets.csv'));
     const campaign = JSON.stringify({ name: 'as json', site: 'la-silla', instrument: 'stable-4m', targets: 'targets.csv', window: { start: '2027-04-01', end: '2027-04-04' }, time: { mode: 'choose-nights', nights: 1 } });
     writeFileSync(path.join(dir, 'plan.json'), campaign);
-    const r = await runCliAsync(['plan', path.join(dir, 'plan.json'), '--out', dir]);
+    const r = await runCliInProcess(['plan', path.join(dir, 'plan.json'), '--out', dir]);
     expect(r.status).toBe(2);
     expect(oneLine(r)).toBe(true);
     expect(read(dir, 'plan.json')).toBe(campaign);
@@ -133,7 +133,7 @@ describe('--out pointing at the folder that holds the inputs', () => {
     const dir = tempFiles({ 'campaign.yaml': campaignText });
     copyFileSync(path.join(small, 'targets.csv'), path.join(dir, 'targets.csv'));
     const before = read(dir, 'targets.csv');
-    const r = await runCliAsync(['plan', 'campaign.yaml', '--out', '.'], dir);
+    const r = await runCliInProcess(['plan', 'campaign.yaml', '--out', '.'], dir);
     expect(r.status).toBe(0);
     expect(readdirSync(dir).sort()).toEqual(['campaign.yaml', ...OUTPUTS, 'targets.csv'].sort());
     expect(read(dir, 'targets.csv')).toBe(before);
