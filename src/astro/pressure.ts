@@ -1,7 +1,7 @@
 // Air pressure at a site's elevation, for the refraction of star altitudes.
 
 /** Sea-level pressure of the standard atmosphere (hPa) [USSA1976]. */
-export const SEA_LEVEL_PRESSURE_HPA = 1013.25;
+const SEA_LEVEL_PRESSURE_HPA = 1013.25;
 
 /**
  * Pressure (hPa) at `elevationM` above sea level: the barometric formula of the standard
