@@ -5,6 +5,10 @@ export default defineConfig({
     include: ['test/**/*.test.ts'],
     testTimeout: 120_000,
     hookTimeout: 120_000,
+    // Two workers for the two cores (vitest's default leaves one core idle).
+    maxWorkers: 2,
+    // The demo plan is built once per run and shared (test/support/demo-plan.ts).
+    globalSetup: ['test/support/demo-plan-setup.ts'],
     // The JSON report feeds the closing `N passed, N failed` line of .ci/run.
     reporters: ['default', ['json', { outputFile: 'test-output/vitest.json' }]],
   },

@@ -28,7 +28,7 @@ export { computeNights } from './sky/nights.js';
 export { computeWindows } from './sky/visibility.js';
 export { siteClock, preparePosition, altitudeDeg, airmassAt } from './sky/target-position.js';
 export { kastenYoungAirmass } from './astro/airmass.js';
-export { bjdTdb } from './astro/bjd.js';
+export { bjdTdb, starBjdTdb } from './astro/bjd.js';
 
 // Precision and detectability
 export { visitPrecision } from './rv/precision.js';

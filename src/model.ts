@@ -1,4 +1,4 @@
-// The shared data model (DESIGN.md, "Data model"). Units are in the names.
+// The shared data model (docs/design.md, "Data model"). Units are in the names.
 
 export interface HorizonPoint {
   azimuthDeg: number;
@@ -170,7 +170,7 @@ export interface Campaign {
   seed: number;
 }
 
-/** One night of the site (DESIGN.md "Data model"). Instants are UTC; null where the Sun never gets that low/high. */
+/** One night of the site (docs/design.md, "Data model"). Instants are UTC; null where the Sun never gets that low/high. */
 export interface Night {
   /** The local date of the evening (site time zone), YYYY-MM-DD. */
   localDate: string;
@@ -217,9 +217,9 @@ export interface VisitPhase {
 export interface PlannedVisit {
   starId: string;
   localDate: string;
-  /** Start of the exposure, ISO 8601 UTC. */
+  /** Start of the visit block, acquisition included (the exposure starts acquisitionSec later), ISO 8601 UTC. */
   startUtc: string;
-  /** Start of the exposure in the site's zone, ISO 8601 with offset. */
+  /** The same instant (start of the block, acquisition included) in the site's zone, ISO 8601 with offset. */
   startLocal: string;
   /** Mid-exposure time as BJD_TDB. */
   midBjdTdb: number;

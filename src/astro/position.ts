@@ -37,23 +37,36 @@ export function rotateToDate(frame: OfDateFrame, [x, y, z]: Vec3): Vec3 {
   ];
 }
 
+const MAS_RAD = Math.PI / 180 / 3.6e6;
+
 /**
- * J2000 coordinates with proper motion carried linearly from the star's epoch to the frame's
- * epoch (Meeus 1998, ch. 21: alpha += mu_alpha t, delta += mu_delta t; mu_alpha = pmRA / cos delta).
- * Radial velocity and parallax are left out (below 0.1" over decades for all but the nearest stars).
+ * The star's J2000 unit vector with proper motion carried from its epoch to `epochYear`: the
+ * motion is a step along the sky's local east and north unit vectors, p' = p + t (mu_a* e + mu_d n),
+ * renormalised (the straight-line space motion without radial velocity [ESA1997 Vol. 1 sect. 1.5.5]).
+ * Valid at the poles, where a step in right ascension is not. Radial velocity and parallax are
+ * left out (below 0.1" over decades for all but the nearest stars).
  */
-export function properMotionJ2000(star: StarCoordinates, epochYear: number): { raDeg: number; decDeg: number } {
+export function properMotionVectorJ2000(star: StarCoordinates, epochYear: number): Vec3 {
   const years = epochYear - star.epochYear;
-  const cosDec = Math.max(Math.cos((star.decDeg * Math.PI) / 180), 1e-9);
-  const raDeg = star.raDeg + (star.pmRaMasYr * years) / 3.6e6 / cosDec;
-  const decDeg = Math.max(-90, Math.min(90, star.decDeg + (star.pmDecMasYr * years) / 3.6e6));
-  return { raDeg: ((raDeg % 360) + 360) % 360, decDeg };
+  const [x, y, z] = unitVectorFromRaDec(star.raDeg, star.decDeg);
+  const ra = (star.raDeg * Math.PI) / 180;
+  const east: Vec3 = [-Math.sin(ra), Math.cos(ra), 0];
+  const north: Vec3 = [-z * Math.cos(ra), -z * Math.sin(ra), Math.hypot(x, y)];
+  const a = star.pmRaMasYr * years * MAS_RAD;
+  const d = star.pmDecMasYr * years * MAS_RAD;
+  const v: Vec3 = [x + a * east[0] + d * north[0], y + a * east[1] + d * north[1], z + a * east[2] + d * north[2]];
+  const r = Math.hypot(...v);
+  return [v[0] / r, v[1] / r, v[2] / r];
+}
+
+/** J2000 right ascension (0..360) and declination (deg) with proper motion carried to `epochYear` (above). */
+export function properMotionJ2000(star: StarCoordinates, epochYear: number): { raDeg: number; decDeg: number } {
+  return raDecFromVector(properMotionVectorJ2000(star, epochYear));
 }
 
 /** Unit vector of the star on the true equator and equinox of the frame's date (no aberration). */
 export function starVectorOfDate(star: StarCoordinates, frame: OfDateFrame): Vec3 {
-  const j2000 = properMotionJ2000(star, frame.epochYear);
-  return rotateToDate(frame, unitVectorFromRaDec(j2000.raDeg, j2000.decDeg));
+  return rotateToDate(frame, properMotionVectorJ2000(star, frame.epochYear));
 }
 
 /** Right ascension and declination (deg) on the true equator and equinox of date. */

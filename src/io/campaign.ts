@@ -40,7 +40,7 @@ const timeSchema = z.discriminatedUnion(
   { error: 'mode is one of choose-nights, given-nights, hours' },
 );
 
-/** Campaign file schema (DESIGN.md "Input files"). Paths are relative to the campaign file. */
+/** Campaign file schema (docs/design.md, "Input files"). Paths are relative to the campaign file. */
 export const campaignSchema = z.strictObject({
   name: z.string({ error: 'a campaign name' }).min(1, 'a campaign name'),
   site: z.string({ error: 'a site id or a path to a site file' }).min(1, 'a site id or a path to a site file'),

@@ -26,7 +26,7 @@ function angleField(parse: (text: string) => number, allowed: string, min: numbe
   );
 }
 
-/** Columns of a target list (DESIGN.md "Input files"); header names are case-insensitive. */
+/** Columns of a target list (docs/design.md, "Input files"); header names are case-insensitive. */
 const rowSchema = z.strictObject({
   id: z.string({ error: 'required: a star or planet name' }).trim().min(1, 'required: a star or planet name'),
   star: z.preprocess((cell: Cell) => (cell === undefined || cell.trim() === '' ? undefined : cell.trim()), z.string().optional()),

@@ -17,7 +17,7 @@ export function tcAtEpochBjd(eph: Ephemeris, epoch: number): number {
 
 /**
  * Uncertainty (days) of the predicted mid-transit time after n orbits:
- * σ_Tc(n)² = σ_T0² + n² σ_P² (REFERENCES.md, common practice; the two errors taken as independent).
+ * σ_Tc(n)² = σ_T0² + n² σ_P² (docs/references.md [Ephemeris-propagation], common practice; the two errors taken as independent).
  */
 export function tcErrAtEpochDays(eph: Ephemeris, epoch: number): number {
   return Math.hypot(eph.tcErrDays, epoch * eph.periodErrDays);

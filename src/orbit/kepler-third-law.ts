@@ -17,7 +17,7 @@ export interface TwoBody {
 
 /**
  * Semi-major axis of the relative orbit (au) from the period.
- * Kepler's third law in Newton's form, a³ = G (M★ + m_p) P² / 4π² (REFERENCES.md).
+ * Kepler's third law in Newton's form, a³ = G (M★ + m_p) P² / 4π² (docs/references.md [Kepler-third-law]).
  */
 export function semiMajorAxisAu(bodies: TwoBody & { periodDays: number }): number {
   const periodSec = bodies.periodDays * DAY_SEC;

@@ -12,7 +12,7 @@ export interface MassFromKInput {
 
 /**
  * The mass function times G, in m³/s²: G f = (G m_p sin i)³ / (G(M★ + m_p))² = P K³ (1 − e²)^(3/2) / 2π
- * (REFERENCES.md, "Inverse"; Cumming, Marcy & Butler 1999).
+ * (docs/references.md [Mass-function]; [CMB1999]).
  */
 export function massFunctionGm(input: MassFromKInput): number {
   const { kMps, periodDays, ecc = 0 } = input;

@@ -5,7 +5,7 @@ type Orbit = TwoBody & { periodDays: number };
 
 /**
  * Semi-major axis of the star's own orbit about the barycentre (m):
- * a★ = a · m_p / (M★ + m_p) (REFERENCES.md, "Orbits and the reflex velocity").
+ * a★ = a · m_p / (M★ + m_p) (docs/references.md [Reflex-orbit]).
  */
 export function starOrbitRadiusM(orbit: Orbit): number {
   return semiMajorAxisAu(orbit) * AU_M * planetMassFraction(orbit.starMassSun, orbit.planetMassEarth);
@@ -13,7 +13,7 @@ export function starOrbitRadiusM(orbit: Orbit): number {
 
 /**
  * Projected semi-major axis of the star's orbit (m) from its RV semi-amplitude:
- * a★ sin i = K P √(1 − e²) / 2π (REFERENCES.md).
+ * a★ sin i = K P √(1 − e²) / 2π (docs/references.md [Reflex-orbit]).
  */
 export function projectedStarOrbitM(input: { kMps: number; periodDays: number; ecc?: number }): number {
   const { kMps, periodDays, ecc = 0 } = input;
@@ -31,7 +31,7 @@ export interface OrbitalSpeeds {
  * Barycentric speeds of planet and star where their separation equals a (exact at all times for a
  * circular orbit). Vis-viva, v² = G(M★ + m_p)(2/r − 1/a), gives the relative speed √(G(M★ + m_p)/a)
  * = 2πa/P at r = a; the bodies share it in inverse proportion to their masses, so that momentum
- * balances, M★ v★ = m_p v_p (REFERENCES.md).
+ * balances, M★ v★ = m_p v_p (docs/references.md [Reflex-orbit]).
  */
 export function orbitalSpeedsMps(orbit: Orbit): OrbitalSpeeds {
   const aM = semiMajorAxisAu(orbit) * AU_M;

@@ -26,7 +26,7 @@ export function trueAnomalyAtRad(orbit: Pick<RvOrbit, 'periodDays' | 'periastron
 
 /**
  * The star's radial velocity (m/s, positive away from the observer) at time t (BJD_TDB):
- * v(t) = γ + K [cos(ν + ω) + e cos ω] (REFERENCES.md; Lovis & Fischer 2010).
+ * v(t) = γ + K [cos(ν + ω) + e cos ω] (docs/references.md [Kepler-RV]; [LovisFischer2010]).
  */
 export function radialVelocityMps(orbit: RvOrbit, tBjd: number): number {
   const omega = (orbit.omegaDeg * Math.PI) / 180;

@@ -14,7 +14,7 @@ export const PHASE_LAYOUTS: readonly PhaseLayout[] = ['random', 'quadrature'];
 /**
  * Least squares for v = γ + K s(t) with known phase gives Var(K̂) = σ² / Σ (s_i − s̄)². Balanced
  * quadratures (s = ±1) reach σ²/N; uniform random phases give E Σ (s_i − s̄)² ≈ N/2, so
- * σ_K ≈ σ √(2/N) (REFERENCES.md, "Visits needed"; common practice).
+ * σ_K ≈ σ √(2/N) (docs/references.md [Visits-needed]; common practice).
  * Returns the factor c in σ_K = σ √(c/N).
  */
 function layoutFactor(layout: PhaseLayout): number {
@@ -31,7 +31,7 @@ export const MIN_VISITS = 2;
 
 /**
  * Visits needed for K/σ_K ≥ n: N = c (n σ / K)², rounded up, at least MIN_VISITS; c = 2 at random
- * phases, 1 at quadratures (REFERENCES.md, "Visits needed").
+ * phases, 1 at quadratures (docs/references.md [Visits-needed]).
  */
 export function visitsNeeded(kMps: number, sigmaMps: number, significance: number, layout: PhaseLayout): number {
   const exact = layoutFactor(layout) * ((significance * sigmaMps) / kMps) ** 2;
@@ -41,7 +41,7 @@ export function visitsNeeded(kMps: number, sigmaMps: number, significance: numbe
 
 /**
  * Probability that K̂/σ_K exceeds n when K̂ is normal with mean K and spread σ_K:
- * P = Φ(K/σ_K − n) (REFERENCES.md, "Detection probability").
+ * P = Φ(K/σ_K − n) (docs/references.md [Detection-probability]).
  */
 export function detectionProbabilityKnownPhase(kMps: number, sigmaK: number, significance: number): number {
   return normalCdf(kMps / sigmaK - significance);

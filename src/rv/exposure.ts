@@ -79,7 +79,7 @@ export function fixedExposure(instrument: Instrument, star: PrecisionStar, airma
   return choice;
 }
 
-/** Telescope time for one visit (s): exposure + readout + acquisition (DESIGN.md, "Visit"). */
+/** Telescope time for one visit (s): exposure + readout + acquisition (docs/design.md, "Visits"). */
 export function visitCostSec(instrument: Instrument, exposureSec: number): number {
   return exposureSec + instrument.readoutSec + instrument.acquisitionSec;
 }

@@ -67,7 +67,7 @@ function checkInput(input: KnownPhaseInput): void {
 const kOf = (input: KnownPhaseInput, periodDays: number, planetMassEarth: number) =>
   semiAmplitudeMps({ starMassSun: input.starMassSun, planetMassEarth, periodDays });
 
-/** The analytic map: P = Φ(K/σ_K − n) per cell (REFERENCES.md "Detection probability", src/rv/detect.ts). */
+/** The analytic map: P = Φ(K/σ_K − n) per cell (docs/references.md [Detection-probability], src/rv/detect.ts). */
 export function knownPhaseMapAnalytic(input: KnownPhaseInput): KnownPhaseMap {
   checkInput(input);
   const sigmaKMps = input.periodsDays.map((p) => expectedSigmaKMps(input.timesBjd, input.sigmaMps, atPeriod(input.ephemeris, p)));
@@ -82,7 +82,7 @@ export function knownPhaseMapAnalytic(input: KnownPhaseInput): KnownPhaseMap {
  * (Tc + δT, P + δP, δ normal), makes v_i = K s_true,i + σ_i ε_i at the visit times, fits K by weighted
  * least squares with a free offset on the predicted signal s_i = −sin(2π φ_i):
  *   K̂ = Σ w (s − s̄)(v − v̄) / Σ w (s − s̄)²,  σ_K = 1 / √(Σ w (s − s̄)²)   (weighted means s̄, v̄;
- * REFERENCES.md "Visits needed", weighted form), and counts a detection when K̂/σ_K > n.
+ * docs/references.md [Visits-needed], weighted form), and counts a detection when K̂/σ_K > n.
  * One seeded stream per cell (deriveSeed), as in the injection map.
  */
 export function knownPhaseMapSimulated(input: KnownPhaseInput & { trialsPerCell: number; seed: number }): KnownPhaseMap {

@@ -59,8 +59,8 @@ export interface PrecisionBudget {
 /**
  * Photon noise of one visit (m/s) and its factors. σ ∝ 1/√(photons) (Bouchy, Pepe & Queloz 2001,
  * A&A 374, 733), hence σ = σ_ref · 10^(0.2 (V − V_ref)) · (t/t_ref)^(−1/2) · (D/D_ref)^(−1)
- * · 10^(0.2 k (X − 1)) · line-width factor · spectral-type factor (REFERENCES.md, "Precision of
- * one visit"); the reference point is at airmass 1.
+ * · 10^(0.2 k (X − 1)) · line-width factor · spectral-type factor (docs/references.md
+ * [Photon-noise]); the reference point is at airmass 1.
  */
 export function photonNoise(
   instrument: Instrument,
@@ -91,7 +91,7 @@ export function quadratureSum(...terms: number[]): number {
 
 /**
  * The precision budget of one visit: σ_visit² = σ_photon² + σ_floor², σ_eff² = σ_visit² + σ_jitter²
- * (REFERENCES.md, "Budget"; common practice).
+ * (docs/references.md [Noise-budget]; common practice).
  */
 export function visitPrecision(
   instrument: Instrument,

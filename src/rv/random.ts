@@ -44,6 +44,13 @@ export function createRng(seed: number): Rng {
   let m = Math.trunc(seed) | 0;
   const s = new Uint32Array(4);
   for (let i = 0; i < 4; i++) [m, s[i]] = mulberry32Step(m);
+  return rngFromState(s);
+}
+
+/** The generator started from a given 128-bit state (four 32-bit words, not all zero), e.g. a published test state. */
+export function rngFromState(state: ArrayLike<number>): Rng {
+  const s = Uint32Array.from(state);
+  if (s.length !== 4 || s.every((w) => w === 0)) throw new RangeError('the state must be four 32-bit words, not all zero');
   let spare: number | null = null;
 
   const nextUint32 = (): number => {

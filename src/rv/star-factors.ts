@@ -7,7 +7,7 @@ import { interpolateTable } from './star-defaults.js';
 /**
  * Line-width factor σ(v sin i) / σ(v sin i_ref) = ((w0² + v sin i²) / (w0² + v sin i_ref²))^(3/4).
  *
- * Derived from the information content of a Gaussian line (REFERENCES.md, "Line width"): a line of
+ * Derived from the information content of a Gaussian line (docs/references.md [Line-width]): a line of
  * fixed equivalent width W and Gaussian width s has depth ∝ W / s, and the RV information
  * ∫ (dF/dv)² dv ∝ depth² / s ∝ W² / s³ (Bouchy, Pepe & Queloz 2001, A&A 374, 733, eq. for Q).
  * So σ ∝ s^(3/2) = (s²)^(3/4), with s² = w0² + (v sin i)² when rotation is treated as a Gaussian
@@ -34,7 +34,7 @@ const HOT_PER_KK = 1.0;
  * spectrograph (unnormalised; only ratios are used). Smooth (infinitely differentiable):
  *   ln f(T) = 0.25 (T / 1000 K) + 1.0 · softplus((T − 6200 K) / 200 K) · 0.2
  * i.e. a gentle loss of lines towards hotter stars (cooler stars have more and deeper lines) and a
- * steep loss above ~6200 K (REFERENCES.md, "Spectral type"). The shape and its coefficients are
+ * steep loss above ~6200 K (docs/references.md [Spectral-type]). The shape and its coefficients are
  * from memory (the trend seen in instrument exposure-time calculators), not fitted to a
  * published table: relative to 5300 K the curve gives about 0.64 at 3500 K, 0.82 at 4500 K,
  * 1.27 at 6000 K, 1.9 at 6500 K, 3.4 at 7000 K and 12 at 8000 K. An instrument profile's

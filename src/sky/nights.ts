@@ -7,9 +7,11 @@ import { belowSpans, type BelowSpan } from './crossings.js';
 import { localDateRange, localNoon, nextLocalDate } from './local-time.js';
 
 /**
- * The Moon counts as up when its topocentric centre is above -0.833 deg: standard refraction
- * (34') plus a mean semidiameter (15.5'), the rise/set convention of Meeus 1998 ch. 15 for a
- * topocentric position. The same altitude is used for rise, set and "up" everywhere in Crest.
+ * The Moon counts as up when its topocentric centre is above -0.833 deg = -(34' + 16'): standard
+ * refraction at the horizon plus the Sun's semidiameter, the rise/set altitude of
+ * [Meeus1998 ch. 15] for a topocentric position. The Moon's mean semidiameter is 15.5', so its
+ * upper limb is then 0.5' below the horizon. The same altitude is used for rise, set and "up"
+ * everywhere in Crest.
  */
 export const MOON_UP_ALTITUDE_DEG = -0.833;
 

@@ -3,6 +3,8 @@ import { Body, DefineStar, Equator, Horizon, MakeTime, SiderealTime } from 'astr
 import { kastenYoungAirmass } from '../astro/airmass.js';
 import { observerOf } from '../astro/bodies.js';
 import { properMotionJ2000 } from '../astro/position.js';
+import { pressureHpaAtElevation } from '../astro/pressure.js';
+import { apparentAltitudeDeg } from '../astro/refraction.js';
 import { julianYearsSinceJ2000 } from '../astro/time-scales.js';
 import { angleBetweenDeg, type Vec3 } from '../astro/vectors.js';
 import type { Constraints, Night, Site, Target, Window } from '../model.js';
@@ -23,14 +25,15 @@ const STEP_MS = 60_000;
 /**
  * Windows of each target in one night by brute force: at every minute of the dark span, the star
  * (astronomy-engine DefineStar with proper motion carried to that minute; Equator of date with
- * aberration; Horizon with normal refraction), the Moon (topocentric Equator and Horizon) and the
+ * aberration; Horizon without refraction, then refraction at the site's pressure), the Moon (topocentric Equator and Horizon) and the
  * sidereal time are computed afresh, and each limit is tested; runs of passing minutes are the
  * windows. No window-length filter. Independent of the fast engine except for the shared
- * definitions (airmass formula, mask interpolation, Moon rule).
+ * definitions (airmass formula, refraction, mask interpolation, Moon rule).
  */
 export function referenceWindows(site: Site, targets: Target[], night: Night, constraints: Constraints): ReferenceWindow[] {
   if (!night.darkStart || !night.darkEnd) return [];
   const observer = observerOf(site);
+  const pressureHpa = pressureHpaAtElevation(site.elevationM);
   const times: Date[] = [];
   for (let t = night.darkStart.getTime(); t <= night.darkEnd.getTime(); t += STEP_MS) times.push(new Date(t));
   const moonLimitDeg = requiredMoonSeparationDeg(constraints.moonSeparationDeg, night.moon.illumination);
@@ -49,7 +52,8 @@ export function referenceWindows(site: Site, targets: Target[], night: Night, co
       const j2000 = properMotionJ2000(target, 2000 + julianYearsSinceJ2000(date));
       DefineStar(Body.Star1, j2000.raDeg / 15, j2000.decDeg, 1000);
       const eq = Equator(Body.Star1, time, observer, true, true);
-      const hor = Horizon(time, observer, eq.ra, eq.dec, 'normal');
+      const geometric = Horizon(time, observer, eq.ra, eq.dec);
+      const hor = { altitude: apparentAltitudeDeg(geometric.altitude, pressureHpa), azimuth: geometric.azimuth };
       const haHours = ((((SiderealTime(time) + site.longitudeDeg / 15 - eq.ra) % 24) + 36) % 24) - 12;
       const r = Math.hypot(eq.vec.x, eq.vec.y, eq.vec.z);
       const vector: Vec3 = [eq.vec.x / r, eq.vec.y / r, eq.vec.z / r];

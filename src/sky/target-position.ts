@@ -3,6 +3,7 @@ import { MakeTime, SiderealTime } from 'astronomy-engine';
 import { kastenYoungAirmass } from '../astro/airmass.js';
 import { DAY_MS, SIDEREAL_PER_SOLAR } from '../astro/constants.js';
 import { ofDateFrame, starVectorOfDate, type OfDateFrame, type StarCoordinates } from '../astro/position.js';
+import { pressureHpaAtElevation } from '../astro/pressure.js';
 import { apparentAltitudeDeg } from '../astro/refraction.js';
 import type { Vec3 } from '../astro/vectors.js';
 import type { Site } from '../model.js';
@@ -17,6 +18,8 @@ const DEG = Math.PI / 180;
 export interface SiteClock {
   t0Ms: number;
   elevationM: number;
+  /** Air pressure at the site's elevation (hPa), for refraction. */
+  pressureHpa: number;
   lst0Deg: number;
   latitudeDeg: number;
   sinLat: number;
@@ -30,6 +33,7 @@ export function siteClock(site: Pick<Site, 'latitudeDeg' | 'longitudeDeg' | 'ele
   return {
     t0Ms: at.getTime(),
     elevationM: site.elevationM,
+    pressureHpa: pressureHpaAtElevation(site.elevationM),
     lst0Deg: gastHours * 15 + site.longitudeDeg,
     latitudeDeg: site.latitudeDeg,
     sinLat: Math.sin(site.latitudeDeg * DEG),
@@ -78,9 +82,9 @@ export function geometricAltitudeDeg(p: PreparedPosition, t: Date | number): num
   return Math.asin(Math.max(-1, Math.min(1, sinH))) / DEG;
 }
 
-/** Apparent (refracted) altitude in degrees: what minimum altitudes and horizon masks are compared with. */
+/** Apparent (refracted at the site's pressure) altitude in degrees: what minimum altitudes and horizon masks are compared with. */
 export function altitudeDeg(p: PreparedPosition, t: Date | number): number {
-  return apparentAltitudeDeg(geometricAltitudeDeg(p, t));
+  return apparentAltitudeDeg(geometricAltitudeDeg(p, t), p.clock.pressureHpa);
 }
 
 /** Kasten & Young airmass at an instant (Infinity below the horizon). */

@@ -1,6 +1,7 @@
 // Visibility windows: when each target is observable in each night, by closed form and root finding.
 import { altitudeForAirmassDeg } from '../astro/airmass.js';
 import { DAY_MS, SIDEREAL_PER_SOLAR } from '../astro/constants.js';
+import { pressureHpaAtElevation } from '../astro/pressure.js';
 import { trueAltitudeDeg } from '../astro/refraction.js';
 import type { Constraints, Night, Site, Target, Window } from '../model.js';
 import { maskAltitudeDeg } from './horizon-mask.js';
@@ -33,7 +34,7 @@ function limitsOf(site: Site, constraints: Constraints): Limits {
   const airmassFloorDeg = altitudeForAirmassDeg(constraints.maxAirmass);
   const floorApparentDeg = Math.max(site.minAltitudeDeg, airmassFloorDeg);
   const floorText = `${floorApparentDeg.toFixed(1)} deg (site minimum ${site.minAltitudeDeg} deg, airmass ${constraints.maxAirmass})`;
-  return { floorApparentDeg, floorTrueDeg: trueAltitudeDeg(floorApparentDeg), floorText };
+  return { floorApparentDeg, floorTrueDeg: trueAltitudeDeg(floorApparentDeg, pressureHpaAtElevation(site.elevationM)), floorText };
 }
 
 /**

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { altitudeForAirmassDeg, kastenYoungAirmass } from '../../src/astro/airmass.js';
 
 describe('Kasten & Young airmass', () => {
-  // Kasten & Young 1989, Applied Optics 28, 4735 (values computed from the formula, REFERENCES.md).
+  // Kasten & Young 1989, Applied Optics 28, 4735 (values computed from the formula, docs/references.md [KastenYoung1989]).
   it.each([
     [30, 1.994],
     [10, 5.586],

@@ -1,5 +1,5 @@
 import { describe, it } from 'vitest';
-import { runCliAsync, tempFiles } from './run-cli.js';
+import { runCliInProcess, tempFiles } from './run-cli.js';
 
 const CAMPAIGN = (overrides: Record<string, string> = {}) => {
   const fields: Record<string, string> = {
@@ -52,7 +52,7 @@ const CASES: [string, string[], RegExp][] = [
 
 describe('bad input: exit 2 and one line naming the place', () => {
   it.concurrent.for(CASES)('%s', async ([, args, place], { expect }) => {
-    const r = args[0] === '--cwd' ? await runCliAsync(['plan', 'campaign.yaml'], args[1]) : await runCliAsync(args);
+    const r = args[0] === '--cwd' ? await runCliInProcess(['plan', 'campaign.yaml'], args[1]) : await runCliInProcess(args);
     expect(r.status).toBe(2);
     expect(r.stdout).toBe('');
     const lines = r.stderr.trimEnd().split('\n');

@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { runCli } from './run-cli.js';
+import { runCliInProcess } from './run-cli.js';
 
 describe('crest sites', () => {
-  it('lists at least eight valid bundled sites in both hemispheres', () => {
+  it('lists at least eight valid bundled sites in both hemispheres', async () => {
     // Every bundled file passes the site schema, or the command would exit 2.
-    const r = runCli(['sites', '--json']);
+    const r = await runCliInProcess(['sites', '--json']);
     expect(r.status).toBe(0);
     const sites = JSON.parse(r.stdout) as { id: string; latitudeDeg: number; longitudeDeg: number; timeZone: string; sourceNote: string }[];
     expect(sites.length).toBeGreaterThanOrEqual(8);
@@ -14,10 +14,10 @@ describe('crest sites', () => {
     expect(new Set(sites.map((s) => s.id)).size).toBe(sites.length);
   });
 
-  it('prints a table with one row per site', () => {
-    const r = runCli(['sites']);
+  it('prints a table with one row per site', async () => {
+    const r = await runCliInProcess(['sites']);
     expect(r.status).toBe(0);
-    const ids = (JSON.parse(runCli(['sites', '--json']).stdout) as { id: string }[]).map((s) => s.id);
+    const ids = (JSON.parse((await runCliInProcess(['sites', '--json'])).stdout) as { id: string }[]).map((s) => s.id);
     const lines = r.stdout.trim().split('\n');
     expect(lines[0]).toMatch(/^id\s+name\s+lat \(deg\)/);
     expect(lines.length).toBe(ids.length + 2); // header and rule

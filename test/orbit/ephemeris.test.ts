@@ -27,7 +27,7 @@ describe('ephemeris propagation', () => {
   });
 
   it('grows σ_Tc(n) as √(σ_T0² + n² σ_P²), matching a Monte Carlo of the ephemeris', () => {
-    // REFERENCES.md (common practice); checked against 40 000 seeded draws of (Tc, P).
+    // docs/references.md [Ephemeris-propagation] (common practice); checked against 40 000 seeded draws of (Tc, P).
     const draw = normals(7);
     for (const n of [0, 30, 300]) {
       let sum = 0;
@@ -45,7 +45,7 @@ describe('ephemeris propagation', () => {
   });
 
   it('gives phases in [0, 1) with 0 at transit and 0.25 a quarter period later', () => {
-    // Definition (REFERENCES.md: quadratures at phases 0.25 and 0.75).
+    // Definition (docs/references.md [Kepler-RV]: quadratures at phases 0.25 and 0.75).
     const atTransit = phaseAt(EPH, EPH.tcBjdTdb + 12 * EPH.periodDays);
     expect(Math.min(atTransit, 1 - atTransit)).toBeLessThan(1e-9); // 0, or just below 1 by rounding
     expect(phaseAt(EPH, EPH.tcBjdTdb + 12.25 * EPH.periodDays)).toBeCloseTo(0.25, 9);

@@ -14,7 +14,7 @@ const SYSTEMS = [
 
 describe('planet mass from K (the exact inverse)', () => {
   it.each(SYSTEMS)('inverse(forward(m)) = m to 1e-9 from 0.1 Earth to 80 Jupiter masses (%o)', (system) => {
-    // Property: the inverse undoes the forward formula of REFERENCES.md.
+    // Property: the inverse undoes the forward formula of docs/references.md [K-formula].
     for (const massEarth of MASSES_EARTH) {
       const kMps = semiAmplitudeMps({ ...system, planetMassEarth: massEarth });
       const back = planetMassFromKEarth({ ...system, kMps });
@@ -23,7 +23,7 @@ describe('planet mass from K (the exact inverse)', () => {
   });
 
   it('solves the mass function (m sin i)³ / (M★ + m)² = P K³ (1 − e²)^(3/2) / 2πG', () => {
-    // REFERENCES.md "Inverse": the mass found satisfies the mass function to rounding.
+    // docs/references.md [Mass-function]: the mass found satisfies the mass function to rounding.
     const input = { starMassSun: 0.7, kMps: 3000, periodDays: 2.5, ecc: 0.4, inclinationDeg: 70 };
     const m = planetMassFromKEarth(input) * GM_EARTH;
     const sinI = Math.sin((70 * Math.PI) / 180);

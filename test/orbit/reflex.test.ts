@@ -13,7 +13,7 @@ const CASES = [
 
 describe('reflex orbit of the star', () => {
   it.each(CASES)('a★ sin i = K P √(1 − e²) / 2π (%o)', (orbit) => {
-    // REFERENCES.md, "Orbits and the reflex velocity": the identity ties K to the star's orbit.
+    // docs/references.md [Reflex-orbit]: the identity ties K to the star's orbit.
     const kMps = semiAmplitudeMps(orbit);
     const projected = projectedStarOrbitM({ kMps, periodDays: orbit.periodDays, ecc: orbit.ecc });
     const sinI = Math.sin((orbit.inclinationDeg * Math.PI) / 180);
@@ -21,7 +21,7 @@ describe('reflex orbit of the star', () => {
   });
 
   it.each(CASES)('momentum balance M★ v★ = m_p v_p (%o)', (orbit) => {
-    // REFERENCES.md: momentum balance about the barycentre.
+    // docs/references.md [Reflex-orbit]: momentum balance about the barycentre.
     const { planetMps, starMps } = orbitalSpeedsMps(orbit);
     expect((orbit.starMassSun * EARTH_PER_SUN * starMps) / (orbit.planetMassEarth * planetMps)).toBeCloseTo(1, 12);
   });

@@ -12,7 +12,7 @@ function orbitFromTc(ecc: number, omegaDeg: number, tcBjd = TC, periodDays = 6.3
 /**
  * The star's distance behind the barycentre, in units of a★ sin i: z = r sin(ν + ω) with
  * r = (1 − e²) / (1 + e cos ν) (the ellipse in polar form). Its time derivative is the RV,
- * dz/dt = (v − γ) · 2π / (K P √(1 − e²)) (REFERENCES.md: K = 2π a★ sin i / (P √(1 − e²))).
+ * dz/dt = (v − γ) · 2π / (K P √(1 − e²)) (docs/references.md [Reflex-orbit]: K = 2π a★ sin i / (P √(1 − e²))).
  */
 function depth(orbit: RvOrbit, t: number): number {
   const nu = trueAnomalyAtRad(orbit, t);
@@ -23,7 +23,7 @@ const SHAPES: [number, number][] = [[0, 90], [0, 17], [0.2, 40], [0.5, 250], [0.
 
 describe('Keplerian RV curve', () => {
   it('is v = γ − K sin(2π (t − Tc)/P) for a circular orbit', () => {
-    // REFERENCES.md: circular orbit with mid-transit time Tc (common practice).
+    // docs/references.md [Kepler-RV]: circular orbit with mid-transit time Tc (common practice).
     for (const omegaDeg of [90, 0, 200]) {
       const orbit = orbitFromTc(0, omegaDeg);
       for (let j = 0; j < 50; j++) {

@@ -6,7 +6,7 @@ const base = { starMassSun: 0.8, planetMassEarth: 10, periodDays: 12 };
 
 describe('semi-amplitude K: properties of K = (2πG/P)^(1/3) m sin i (M★ + m)^(−2/3) / √(1 − e²)', () => {
   it('scales as P^(−1/3)', () => {
-    // Property of the formula (REFERENCES.md): eight times the period halves K.
+    // Property of the formula (docs/references.md [K-formula]): eight times the period halves K.
     for (const periodDays of [0.5, 3, 40, 1000]) {
       const ratio = semiAmplitudeMps({ ...base, periodDays: 8 * periodDays }) / semiAmplitudeMps({ ...base, periodDays });
       expect(ratio).toBeCloseTo(0.5, 13);
@@ -30,7 +30,7 @@ describe('semi-amplitude K: properties of K = (2πG/P)^(1/3) m sin i (M★ + m)^
   });
 
   it('scales with sin i and 1/√(1 − e²)', () => {
-    // Property of the formula (REFERENCES.md).
+    // Property of the formula (docs/references.md [K-formula]).
     const k = semiAmplitudeMps(base);
     expect(semiAmplitudeMps({ ...base, inclinationDeg: 30 }) / k).toBeCloseTo(0.5, 13);
     expect(semiAmplitudeMps({ ...base, ecc: 0.6 }) / k).toBeCloseTo(1.25, 13);

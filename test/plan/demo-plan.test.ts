@@ -1,14 +1,13 @@
-// crest plan's properties on the bundled demo campaign (plan-properties.ts).
+// crest plan's properties on the bundled demo campaign (plan-properties.ts), on the plan.json
+// that `crest plan` wrote in the global setup (test/support/demo-plan.ts).
 import { beforeAll, describe, expect, it } from 'vitest';
-import { readCampaign } from '../../src/io/campaign.js';
-import { DEMO_CAMPAIGN } from '../../src/io/paths.js';
 import type { Plan } from '../../src/model.js';
-import { buildPlan } from '../../src/plan/build-plan.js';
-import { describePlanProperties, WEATHER_TRIALS } from './plan-properties.js';
+import { demoPlan } from '../support/demo-plan.js';
+import { describePlanProperties } from './plan-properties.js';
 
 let plan: Plan;
 beforeAll(() => {
-  plan = buildPlan(readCampaign(DEMO_CAMPAIGN), { weatherTrials: WEATHER_TRIALS });
+  plan = demoPlan();
 });
 
 describePlanProperties(['demo'], () => plan, 50);

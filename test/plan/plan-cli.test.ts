@@ -1,10 +1,12 @@
 // `crest plan` as a subprocess (dist/cli.js; `npm test` builds it first): the five files and the
 // summary, the same bytes from two runs with the same seed, --json, K/sigma_K recomputed from the
-// written plan.csv, bad input, and an output folder that holds the inputs.
+// written plan.csv, bad input, and an output folder that holds the inputs. The two demo runs are
+// the shared ones of the global setup (test/support/demo-plan.ts).
 import { copyFileSync, existsSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
-import { beforeAll, describe, expect, it } from 'vitest';
-import { runCliAsync, tempFiles, type CliResult } from '../cli/run-cli.js';
+import { describe, expect, it } from 'vitest';
+import { runCliInProcess, tempFiles, type CliResult } from '../cli/run-cli.js';
+import { demoRuns } from '../support/demo-plan.js';
 import { fixture } from './fixtures.js';
 import { planFromJson } from '../../src/report/html/plan-from-json.js';
 import { CSV_ROUNDING, csvVisits, kOverSigmaKFromCsv, parsePlanCsv } from './recompute-k.js';
@@ -17,14 +19,10 @@ const read = (dir: string, name: string) => readFileSync(path.join(dir, name), '
 const oneLine = (r: CliResult) => r.stderr.trim().split('\n').length === 1 && r.stderr.trim().length > 0;
 
 describe('crest plan on the demo', () => {
-  const summaryDir = tempFiles({});
-  const jsonDir = tempFiles({});
-  let summary: CliResult;
-  let json: CliResult;
-  beforeAll(async () => {
-    // Two runs side by side, the second with --json: the files of both must be the same bytes.
-    [summary, json] = await Promise.all([runCliAsync(['plan', '--out', summaryDir]), runCliAsync(['plan', '--out', jsonDir, '--json'])]);
-  });
+  // Two runs side by side, the second with --json: the files of both must be the same bytes.
+  const { summary: summaryRun, json: jsonRun } = demoRuns();
+  const [summaryDir, jsonDir] = [summaryRun.dir, jsonRun.dir];
+  const [summary, json] = [summaryRun.result, jsonRun.result];
 
   it('exits 0, writes the five files and prints the summary', () => {
     expect(summary.status).toBe(0);
@@ -41,6 +39,8 @@ describe('crest plan on the demo', () => {
   });
 
   it('--json prints plan.json: one JSON document with schemaVersion 1', () => {
+    expect(json.stderr).toBe('');
+    expect(() => JSON.parse(json.stdout)).not.toThrow();
     expect(json.stdout).toBe(read(jsonDir, 'plan.json'));
     const plan = JSON.parse(json.stdout) as { schemaVersion: number; visits: unknown[]; campaign: { name: string } };
     expect(plan.schemaVersion).toBe(1);
@@ -66,7 +66,7 @@ describe('crest plan --nights', () => {
       'campaign.yaml': 'name: few\nsite: la-silla\ninstrument: stable-4m\ntargets: targets.csv\nwindow: { start: 2027-04-01, end: 2027-04-10 }\ntime: { mode: choose-nights, nights: 5 }\n',
       'targets.csv': read(path.dirname(fixture('small')), 'targets.csv'),
     });
-    const r = await runCliAsync(['plan', path.join(dir, 'campaign.yaml'), '--nights', '2', '--json', '--out', path.join(dir, 'out')]);
+    const r = await runCliInProcess(['plan', path.join(dir, 'campaign.yaml'), '--nights', '2', '--json', '--out', path.join(dir, 'out')]);
     expect(r.status).toBe(0);
     const plan = JSON.parse(r.stdout) as { plannedDates: string[]; visits: { localDate: string }[]; campaign: { time: unknown } };
     expect(plan.campaign.time).toEqual({ mode: 'choose-nights', nights: 2 });
@@ -81,7 +81,7 @@ describe('crest plan on bad input', () => {
       'campaign.yaml': 'name: bad\nsite: la-silla\ninstrument: stable-4m\ntargets: targets.csv\nwindow: { start: 2027-04-01, end: 2027-04-05 }\ntime: { mode: choose-nights, nights: 0 }\n',
       'targets.csv': read(path.dirname(fixture('small')), 'targets.csv'),
     });
-    const r = await runCliAsync(['plan', path.join(dir, 'campaign.yaml'), '--out', path.join(dir, 'out')]);
+    const r = await runCliInProcess(['plan', path.join(dir, 'campaign.yaml'), '--out', path.join(dir, 'out')]);
     expect(r.status).toBe(2);
     expect(oneLine(r)).toBe(true);
     expect(r.stderr).toContain('time.nights');
@@ -89,14 +89,14 @@ describe('crest plan on bad input', () => {
   });
 
   it('--nights on a campaign that does not choose nights: exit 2, one line naming the flag', async () => {
-    const r = await runCliAsync(['plan', fixture('small'), '--nights', '3', '--out', path.join(tempFiles({}), 'out')]);
+    const r = await runCliInProcess(['plan', fixture('small'), '--nights', '3', '--out', path.join(tempFiles({}), 'out')]);
     expect(r.status).toBe(2);
     expect(oneLine(r)).toBe(true);
     expect(r.stderr).toContain('--nights');
   });
 
   it('a campaign file that does not exist: exit 2, one line', async () => {
-    const r = await runCliAsync(['plan', path.join(tempFiles({}), 'missing.yaml')]);
+    const r = await runCliInProcess(['plan', path.join(tempFiles({}), 'missing.yaml')]);
     expect(r.status).toBe(2);
     expect(oneLine(r)).toBe(true);
   });
@@ -110,7 +110,7 @@ describe('--out pointing at the folder that holds the inputs', () => {
     const dir = tempFiles({ 'campaign.yaml': campaignText.replace('targets: targets.csv', 'targets: plan.csv') });
     copyFileSync(path.join(small, 'targets.csv'), path.join(dir, 'plan.csv'));
     const before = read(dir, 'plan.csv');
-    const r = await runCliAsync(['plan', 'campaign.yaml', '--out', '.'], dir);
+    const r = await runCliInProcess(['plan', 'campaign.yaml', '--out', '.'], dir);
     expect(r.status).toBe(2);
     expect(oneLine(r)).toBe(true);
     expect(r.stderr).toContain('--out');
@@ -123,7 +123,7 @@ describe('--out pointing at the folder that holds the inputs', () => {
     copyFileSync(path.join(small, 'targets.csv'), path.join(dir, 'targets.csv'));
     const campaign = JSON.stringify({ name: 'as json', site: 'la-silla', instrument: 'stable-4m', targets: 'targets.csv', window: { start: '2027-04-01', end: '2027-04-04' }, time: { mode: 'choose-nights', nights: 1 } });
     writeFileSync(path.join(dir, 'plan.json'), campaign);
-    const r = await runCliAsync(['plan', path.join(dir, 'plan.json'), '--out', dir]);
+    const r = await runCliInProcess(['plan', path.join(dir, 'plan.json'), '--out', dir]);
     expect(r.status).toBe(2);
     expect(oneLine(r)).toBe(true);
     expect(read(dir, 'plan.json')).toBe(campaign);
@@ -133,7 +133,7 @@ describe('--out pointing at the folder that holds the inputs', () => {
     const dir = tempFiles({ 'campaign.yaml': campaignText });
     copyFileSync(path.join(small, 'targets.csv'), path.join(dir, 'targets.csv'));
     const before = read(dir, 'targets.csv');
-    const r = await runCliAsync(['plan', 'campaign.yaml', '--out', '.'], dir);
+    const r = await runCliInProcess(['plan', 'campaign.yaml', '--out', '.'], dir);
     expect(r.status).toBe(0);
     expect(readdirSync(dir).sort()).toEqual(['campaign.yaml', ...OUTPUTS, 'targets.csv'].sort());
     expect(read(dir, 'targets.csv')).toBe(before);

@@ -12,10 +12,10 @@ import { createRng } from '../../src/rv/random.js';
 import { semiAmplitudeMps } from '../../src/orbit/semi-amplitude.js';
 import { fitK } from '../rv/least-squares.js';
 
-/** The star's RV shape at phase φ for a circular orbit: v = γ − K sin(2πφ) (REFERENCES.md, common practice). */
+/** The star's RV shape at phase φ for a circular orbit: v = γ − K sin(2πφ) (docs/references.md [Kepler-RV], common practice). */
 const shape = (phase: number) => -Math.sin(2 * Math.PI * phase);
 
-describe('least-squares identities for K (REFERENCES.md, "Visits needed"; common practice)', () => {
+describe('least-squares identities for K (docs/references.md [Visits-needed]; common practice)', () => {
   it('balanced quadratures give Var(K̂) = σ²/N exactly', () => {
     const sigma = 2.7;
     for (const n of [2, 10, 36]) {

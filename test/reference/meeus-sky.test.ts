@@ -1,5 +1,5 @@
 // Checks against worked examples of Meeus, Astronomical Algorithms, 2nd ed. (1998), as listed in
-// REFERENCES.md (from memory; the numbers agree with several independent public test suites).
+// docs/references.md [Meeus1998] (from memory; the numbers agree with several independent public test suites).
 import { Body, e_tilt, MakeTime } from 'astronomy-engine';
 import { describe, expect, it } from 'vitest';
 import { apparentPlace, moonIlluminatedFraction, observerOf } from '../../src/astro/bodies.js';

@@ -32,7 +32,7 @@ describe('K table from the IAU 2015 nominal constants', () => {
     const periodDays = periodDaysFromAu({ ...orbit, semiMajorAxisAu: aAu });
     const kMps = semiAmplitudeMps({ ...orbit, periodDays });
     // A second route from the same constants: K = 2π a★ / P for a circular edge-on orbit
-    // (a★ sin i = K P √(1 − e²) / 2π, REFERENCES.md).
+    // (a★ sin i = K P √(1 − e²) / 2π, docs/references.md [Reflex-orbit]).
     const viaStarOrbit = (2 * Math.PI * starOrbitRadiusM({ ...orbit, periodDays })) / (periodDays * DAY_SEC);
     expect(Math.abs(viaStarOrbit / kMps - 1)).toBeLessThan(1e-12);
     // The table quotes two or three figures; it rounds 4.85 down to 4.8, so allow one unit in the last digit.
@@ -47,13 +47,13 @@ describe('K table from the IAU 2015 nominal constants', () => {
   });
 
   it('gives 0.0895 m/s for the Earth on a one-year orbit', () => {
-    // REFERENCES.md "Earth on a one-year orbit: 0.0895 m/s" (Lovis & Fischer 2010, from memory)
+    // docs/references.md [K-table]: the Earth on a one-year orbit, 0.0895 m/s ([LovisFischer2010], from memory)
     const kMps = semiAmplitudeMps({ starMassSun: 1, planetMassEarth: 1, periodDays: JULIAN_YEAR_DAYS });
     expect(kMps.toPrecision(3)).toBe('0.0895');
   });
 
   it('matches the handy form 28.4329 m/s (M_Jup, 1 M_sun, 1 yr)', () => {
-    // Handy form of Lovis & Fischer 2010 (REFERENCES.md): K = 28.4329 m/s · ((M★ + m_p)/M_sun)^(−2/3)
+    // Handy form of Lovis & Fischer 2010 (docs/references.md [K-handy-form]): K = 28.4329 m/s · ((M★ + m_p)/M_sun)^(−2/3)
     // for a Jupiter mass on a one-year orbit; its constant was derived with slightly different mass
     // values, hence 1e-4.
     const kMps = semiAmplitudeMps({ starMassSun: 1, planetMassEarth: EARTH_PER_JUPITER, periodDays: JULIAN_YEAR_DAYS });

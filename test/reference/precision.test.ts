@@ -86,7 +86,7 @@ describe('spectral-type factor', () => {
   });
 });
 
-describe('the budget (REFERENCES.md, "Budget"; common practice)', () => {
+describe('the budget (docs/references.md [Noise-budget]; common practice)', () => {
   it('adds photon, floor and jitter in quadrature, and keeps every factor', () => {
     const star = { vmag: 10.7, teffK: 4900, vsiniKms: 6, jitterMps: 2.1 };
     const b = visitPrecision(instrument, star, 900, 1.4);

@@ -11,7 +11,7 @@ import { computeNight } from '../../src/sky/nights.js';
 const SITES = ['la-silla', 'mauna-kea', 'roque-muchachos', 'siding-spring', 'sutherland', 'calar-alto'];
 const DATES = Array.from({ length: 12 }, (_, m) => `2027-${String(m + 1).padStart(2, '0')}-15`);
 
-describe('nights against suncalc (REFERENCES.md: within 2 minutes away from the poles)', () => {
+describe('nights against suncalc (docs/references.md [Night-crosscheck]: within 2 minutes away from the poles)', () => {
   for (const id of SITES) {
     it(`${id}: sunset, sunrise and the three twilights on twelve dates`, () => {
       const site = readSite(path.join(SITES_DIR, `${id}.json`));

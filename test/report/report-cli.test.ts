@@ -1,20 +1,16 @@
-// `crest report PLAN.json`: the built CLI run as a subprocess (npm test builds dist/ first).
-import { spawnSync } from 'node:child_process';
+// `crest report PLAN.json`: the built CLI run in-process (npm test builds dist/ first).
 import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { renderReportHtml } from '../../src/report/html/report-html.js';
 import { renderPlanJson } from '../../src/report/plan-json.js';
+import { runCliInProcess } from '../cli/run-cli.js';
 import { fixturePlan } from './fixture.js';
 
-const CLI = path.resolve('dist/cli.js');
 let dir: string;
 
-function crest(...args: string[]) {
-  const r = spawnSync(process.execPath, [CLI, ...args], { encoding: 'utf8' });
-  return { status: r.status, stdout: r.stdout, stderr: r.stderr };
-}
+const crest = (...args: string[]) => runCliInProcess(args);
 
 beforeAll(() => {
   dir = mkdtempSync(path.join(os.tmpdir(), 'crest-report-'));
@@ -25,7 +21,7 @@ afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
 describe('crest report', () => {
   it('re-renders report.html beside plan.json, byte for byte what the plan in memory gives', async () => {
-    const r = crest('report', path.join(dir, 'plan.json'));
+    const r = await crest('report', path.join(dir, 'plan.json'));
     expect(r.stderr).toBe('');
     expect(r.status).toBe(0);
     const written = readFileSync(path.join(dir, 'report.html'), 'utf8');
@@ -33,9 +29,9 @@ describe('crest report', () => {
     expect(written).toBe(await renderReportHtml(fixturePlan()));
   });
 
-  it('writes under --out and prints one JSON document with --json', () => {
+  it('writes under --out and prints one JSON document with --json', async () => {
     const out = path.join(dir, 'elsewhere');
-    const r = crest('report', path.join(dir, 'plan.json'), '--out', out, '--json');
+    const r = await crest('report', path.join(dir, 'plan.json'), '--out', out, '--json');
     expect(r.status).toBe(0);
     const doc = JSON.parse(r.stdout);
     expect(doc.written).toEqual([path.join(out, 'report.html')]);
@@ -47,29 +43,29 @@ describe('crest report', () => {
     ['a campaign file', 'campaign.json', '{"name": "Demo", "site": "la-silla"}', /campaign\.json: schemaVersion = \(missing\): a Crest plan/],
     ['malformed JSON', 'broken.json', '{"schemaVersion": 1,', /broken\.json: malformed JSON/],
     ['a list', 'list.json', '[1, 2]', /list\.json: \(file\) = "\[\.\.\.\]": a Crest plan/],
-  ])('refuses %s with one line and exit status 2', (_what, name, text, message) => {
+  ])('refuses %s with one line and exit status 2', async (_what, name, text, message) => {
     const file = path.join(dir, name);
     writeFileSync(file, text);
     const out = path.join(dir, `out-${name}`);
-    const r = crest('report', file, '--out', out);
+    const r = await crest('report', file, '--out', out);
     expect(r.status).toBe(2);
     expect(r.stderr.trim().split('\n')).toHaveLength(1);
     expect(r.stderr).toMatch(message);
     expect(existsSync(out)).toBe(false);
   });
 
-  it('names the key of a bad instant inside a plan', () => {
+  it('names the key of a bad instant inside a plan', async () => {
     const plan = JSON.parse(renderPlanJson(fixturePlan()));
     plan.nights[2].sunset = 'yesterday evening';
     const file = path.join(dir, 'bad-night.json');
     writeFileSync(file, JSON.stringify(plan));
-    const r = crest('report', file);
+    const r = await crest('report', file);
     expect(r.status).toBe(2);
     expect(r.stderr).toMatch(/bad-night\.json: nights\[2\]\.sunset = "yesterday evening"/);
   });
 
-  it('reports a missing file as bad input', () => {
-    const r = crest('report', path.join(dir, 'nowhere.json'));
+  it('reports a missing file as bad input', async () => {
+    const r = await crest('report', path.join(dir, 'nowhere.json'));
     expect(r.status).toBe(2);
     expect(r.stderr).toMatch(/nowhere\.json: plan file no such file/);
   });

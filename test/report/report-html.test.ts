@@ -104,8 +104,8 @@ describe('the charts hold one mark per planned item', () => {
 
 describe('numbers recomputed from the visits', () => {
   /**
-   * Slow reference: weighted least squares for v = γ + K s with s = −sin 2πφ (REFERENCES.md
-   * "Keplerian RV"); Var(K̂) is the (K, K) element of the inverse 2×2 normal matrix. The fixture's
+   * Slow reference: weighted least squares for v = γ + K s with s = −sin 2πφ (docs/references.md
+   * [Kepler-RV]); Var(K̂) is the (K, K) element of the inverse 2×2 normal matrix. The fixture's
    * phase errors are below 0.003 cycles, so the expected information differs from this by < 0.1%.
    */
   function referenceKOverSigmaK(kMps: number, n: number, targetId: string): number {

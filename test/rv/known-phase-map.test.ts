@@ -49,7 +49,7 @@ describe('known-phase detection map', () => {
 
   it('expected σ_K equals the direct least-squares σ_K on the predicted phases, whatever the catalogue errors', () => {
     const exact = { ...EPH, periodErrDays: 0, tcErrDays: 0 };
-    // Direct reference: σ_K = 1/√(Σ w (s − s̄)²), s = −sin 2π(t − Tc)/P, weighted mean s̄ (REFERENCES.md "Visits needed").
+    // Direct reference: σ_K = 1/√(Σ w (s − s̄)²), s = −sin 2π(t − Tc)/P, weighted mean s̄ (docs/references.md [Visits-needed]).
     const { timesBjd, sigmaMps } = input;
     const w = sigmaMps.map((s) => 1 / (s * s));
     const s = timesBjd.map((t) => -Math.sin((2 * Math.PI * (t - EPH.tcBjdTdb)) / EPH.periodDays));

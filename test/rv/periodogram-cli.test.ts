@@ -1,12 +1,12 @@
-import { execFileSync, spawnSync } from 'node:child_process';
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { parseRvSeries } from '../../src/io/rv-series.js';
+import { runCliInProcess } from '../cli/run-cli.js';
 
 const EXAMPLE = 'examples/rv/invented-star.csv';
-const crest = (...args: string[]) => spawnSync('node', ['dist/cli.js', ...args], { encoding: 'utf8' });
+const crest = (...args: string[]) => runCliInProcess(args);
 
 describe('RV series reader', () => {
   it('reads a series with comments and any header case and order', () => {
@@ -28,8 +28,10 @@ describe('RV series reader', () => {
 });
 
 describe('crest periodogram', () => {
-  it('finds the invented 11.3-day signal of the example file, with a small FAP', () => {
-    const out = JSON.parse(execFileSync('node', ['dist/cli.js', 'periodogram', EXAMPLE, '--json', '--top', '4'], { encoding: 'utf8' }));
+  it('finds the invented 11.3-day signal of the example file, with a small FAP', async () => {
+    const run = await crest('periodogram', EXAMPLE, '--json', '--top', '4');
+    expect(run.status).toBe(0);
+    const out = JSON.parse(run.stdout);
     expect(out.visits).toBe(30);
     expect(out.peaks).toHaveLength(4);
     const best = out.peaks[0];
@@ -43,23 +45,23 @@ describe('crest periodogram', () => {
     for (const p of out.peaks.slice(1)) expect(p.fapBaluev).toBeGreaterThan(best.fapBaluev);
   });
 
-  it('prints a table with the data summary', () => {
-    const r = crest('periodogram', EXAMPLE, '--top', '3');
+  it('prints a table with the data summary', async () => {
+    const r = await crest('periodogram', EXAMPLE, '--top', '3');
     expect(r.status).toBe(0);
     expect(r.stdout).toMatch(/30 visits over 88\.1 days/);
     expect(r.stdout).toMatch(/rank\s+period \(d\)/);
     expect(r.stdout.trim().split('\n').filter((l) => /^\s+[123]\s/.test(l))).toHaveLength(3);
   });
 
-  it('exits 2 with one line for a bad row and for a bad flag', () => {
+  it('exits 2 with one line for a bad row and for a bad flag', async () => {
     const dir = mkdtempSync(join(tmpdir(), 'crest-pg-'));
     const file = join(dir, 'bad.csv');
     writeFileSync(file, 'bjd,rvMps,sigmaMps\n2461000.1,3,1\n2461001.1,fast,1\n');
-    const bad = crest('periodogram', file);
+    const bad = await crest('periodogram', file);
     expect(bad.status).toBe(2);
     expect(bad.stderr.trim().split('\n')).toHaveLength(1);
     expect(bad.stderr).toMatch(/bad\.csv: row 2 \(line 3\): rvMps = "fast"/);
-    const flag = crest('periodogram', EXAMPLE, '--max-period', '1');
+    const flag = await crest('periodogram', EXAMPLE, '--max-period', '1');
     expect(flag.status).toBe(2);
     expect(flag.stderr).toMatch(/--max-period = 1: longer than the shortest period/);
   });

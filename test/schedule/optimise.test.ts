@@ -88,7 +88,7 @@ describe('information efficiency', () => {
       const result = optimiseSchedule(problem, { seed: 1 });
       const target = result.targets[0]!;
       expect(target.visits).toBe(24);
-      // (sigma^2/N) / Var(K^) with Var(K^) = 1/I (REFERENCES.md "Information efficiency").
+      // (sigma^2/N) / Var(K^) with Var(K^) = 1/I (docs/references.md [Information-efficiency]).
       const efficiency = (2 ** 2 / target.visits) * target.informationPerMps2;
       expect(efficiency).toBeCloseTo(target.informationEfficiency!, 12);
       expect(efficiency).toBeGreaterThan(0.95);

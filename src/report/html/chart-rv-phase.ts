@@ -15,7 +15,7 @@ const CURVE_POINTS = 200;
 export function rvPhaseFigure(plan: Plan, summary: TargetSummary & { kMps: number }): ChartFigure {
   const k = summary.kMps;
   // v − γ = K s(φ): −K sin 2πφ for a circular orbit, the Keplerian curve for an eccentric one
-  // (REFERENCES.md "Keplerian RV"; src/orbit/signal-shape.ts).
+  // (docs/references.md [Kepler-RV]; src/orbit/signal-shape.ts).
   const shape = planetSignalShape(plan.campaign.targets.find((t) => t.id === summary.targetId)?.planet);
   const rvAt = (phase: number) => k * shape.at(phase);
   const curve = Array.from({ length: CURVE_POINTS + 1 }, (_, i) => ({ phase: i / CURVE_POINTS, rv: rvAt(i / CURVE_POINTS) }));
