@@ -1,7 +1,7 @@
 // The pipeline of `crest plan`: nights → windows → candidate visits → optimiser → weather → Plan.
 // Pure: the campaign comes in already read and validated; nothing here reads or writes files.
 import { DateTime } from 'luxon';
-import { bjdTdb } from '../astro/bjd.js';
+import { starBjdTdb } from '../astro/bjd.js';
 import type { Campaign, Plan, PlannedVisit, TargetSummary } from '../model.js';
 import { phaseErrCycles } from '../orbit/ephemeris.js';
 import { optimiseSchedule } from '../schedule/optimise.js';
@@ -45,7 +45,7 @@ export function buildPlan(campaign: Campaign, options: PlanOptions = {}): Plan {
   const bySlot = new Map(details.map((d) => [d.slot.slotId, d]));
   const visits = result.slotIds.map((id) => plannedVisit(bySlot.get(id)!, campaign));
   const windowEndBjd = (t: TargetSetup) =>
-    bjdTdb(DateTime.fromISO(window.end, { zone: site.timeZone }).plus({ days: 1 }).toJSDate(), t.target.raDeg, t.target.decDeg);
+    starBjdTdb(DateTime.fromISO(window.end, { zone: site.timeZone }).plus({ days: 1 }).toJSDate(), t.target);
   const targets = setups.map((setup) => targetSummary(setup, result, weather.targets, windowEndBjd(setup)));
   const plannedDates =
     time.mode === 'given-nights' ? [...time.dates].sort() : result.nightIndices.map((i) => nights[i]!.localDate);

@@ -2,7 +2,7 @@
 // scheduler may choose among, one star at a time (a visit observes a star and so all its planets),
 // each with its airmass, precision and the predicted phase of each planet.
 import { DateTime } from 'luxon';
-import { bjdTdb } from '../astro/bjd.js';
+import { starBjdTdb } from '../astro/bjd.js';
 import type { Campaign, Night, Target, VisitPhase, Window } from '../model.js';
 import { overlapsTransit, phaseAt, phaseErrCycles, type TransitRule } from '../orbit/ephemeris.js';
 import { semiAmplitudeMps } from '../orbit/semi-amplitude.js';
@@ -168,7 +168,7 @@ export function candidateSlots(campaign: Campaign, nights: Night[], windows: Win
       const firstMs = Math.ceil(w.start.getTime() / 60_000) * 60_000;
       for (let startMs = firstMs; startMs + durationMs <= w.end.getTime(); startMs += stepMs) {
         const midMs = startMs + leadMs + exposureMs / 2;
-        const midBjdTdb = bjdTdb(new Date(midMs), star.raDeg, star.decDeg);
+        const midBjdTdb = starBjdTdb(new Date(midMs), star);
         const halfExposureDays = setup.exposure.exposureSec / 2 / 86_400;
         if (transiting.some((eph) => overlapsTransit(eph, midBjdTdb - halfExposureDays, midBjdTdb + halfExposureDays, rule))) continue;
         const airmass = airmassAt(position, midMs);
