@@ -1,5 +1,9 @@
 // The shared data model (DESIGN.md, "Data model"). Units are in the names.
 
+import type { BandId } from './rv/bands.js';
+import type { Entrance } from './rv/seeing.js';
+import type { SpectralRegion } from './rv/teff-information.js';
+
 export interface HorizonPoint {
   azimuthDeg: number;
   altitudeDeg: number;
@@ -28,10 +32,18 @@ export interface Site {
   file: string;
 }
 
+/** The measured point every other star's photon noise is scaled from (src/rv/precision.ts). */
 export interface InstrumentReference {
+  /** Photon-noise σ (m/s) at this point. */
   sigmaMps: number;
-  vmag: number;
+  /** The reference star's magnitude in the instrument's band. */
+  mag: number;
   exposureSec: number;
+  airmass: number;
+  /** Seeing FWHM (arcsec) at that airmass. */
+  seeingArcsec: number;
+  /** S/N per pixel at the instrument's wavelengthNm. */
+  snrPerPixel: number;
   teffK: number;
   vsiniKms: number;
 }
@@ -40,18 +52,35 @@ export interface Instrument {
   id: string;
   name: string;
   apertureM: number;
+  resolvingPower: number;
+  /** Photometric band the profile's magnitudes are in. */
+  band: BandId;
+  /** Wavelength (nm) of the reference S/N and of the extinction coefficient. */
+  wavelengthNm: number;
+  /** Wavelength coverage [min, max] (nm). */
+  coverageNm: [number, number];
+  /** Which RV-information table applies (src/rv/teff-information.ts). */
+  spectralRegion: SpectralRegion;
   /** Photon-noise precision at one reference point; all other stars scale from it. */
   reference: InstrumentReference;
+  readNoiseE: number;
+  pixelsPerResolutionElement: number;
+  /** Detector pixels summed across the order into one spectral pixel. */
+  spatialPixels: number;
+  entrance: Entrance;
+  /** Dark-sky surface brightness in the band (mag/arcsec²). */
+  skyMagPerArcsec2: number;
   floorMps: number;
   readoutSec: number;
   acquisitionSec: number;
   minExposureSec: number;
   maxExposureSec: number;
+  /** Extinction at wavelengthNm (mag per airmass). */
   extinctionMagPerAirmass: number;
-  /** Intrinsic plus instrumental line width w0 (km/s) for the rotation factor. */
-  lineWidthKms: number;
   /** Optional override of the spectral-type factor: [teffK, factor] pairs, interpolated. */
   teffFactors?: [number, number][];
+  /** Where each number comes from, by field name. */
+  sources: Record<string, string>;
   sourceNote: string;
   file: string;
 }

@@ -76,12 +76,12 @@ function budgetRows(b: PrecisionBudget, instrument: Instrument, star: PrecisionS
   const f = b.factors;
   const times = (x: number) => `x ${x.toFixed(3)}`;
   return [
-    ['reference photon noise', `${fmt(b.referenceSigmaMps, 2)} m/s`, `V = ${ref.vmag}, ${ref.exposureSec} s, Teff ${ref.teffK} K, v sin i ${ref.vsiniKms} km/s, airmass 1`],
+    ['reference photon noise', `${fmt(b.referenceSigmaMps, 2)} m/s`, `${instrument.band} = ${ref.mag}, ${ref.exposureSec} s, Teff ${ref.teffK} K, v sin i ${ref.vsiniKms} km/s, airmass ${ref.airmass}`],
     ['magnitude', times(f.magnitude), `10^(0.2 (V - V_ref)), V = ${star.vmag}`],
     ['exposure', times(f.exposure), `(t / t_ref)^(-1/2), t = ${b.exposureSec} s`],
     ['aperture', times(f.aperture), `(D / D_ref)^(-1), D = ${b.apertureM} m, D_ref = ${instrument.apertureM} m`],
     ['extinction', times(f.extinction), `10^(0.2 k (X - 1)), k = ${instrument.extinctionMagPerAirmass} mag, X = ${b.airmass}`],
-    ['line width', times(f.lineWidth), `rotation: v sin i = ${star.vsiniKms} km/s, w0 = ${instrument.lineWidthKms} km/s`],
+    ['line width', times(f.lineWidth), `rotation: v sin i = ${star.vsiniKms} km/s, w0 = ${fmt(b.lineWidthKms, 1)} km/s`],
     ['spectral type', times(f.spectralType), `Teff = ${star.teffK} K, ${b.spectralTypeSource}`],
     ['photon noise', `${fmt(b.photonMps, 2)} m/s`, 'the product of the lines above'],
     ['instrument floor', `${fmt(b.floorMps, 2)} m/s`, 'systematics; does not average down'],
