@@ -4,6 +4,7 @@
 import { eccentricAnomalyRad } from './kepler-equation.js';
 import { trueAnomalyRad } from './anomalies.js';
 import { periastronFromConjunctionBjd } from './periastron-time.js';
+import { GH_W, GH_X } from '../rv/gauss-hermite.js';
 
 export interface SignalShape {
   ecc: number;
@@ -24,16 +25,8 @@ const SAMPLES = 512;
 /** Below this phase error the moments are taken by Gauss–Hermite quadrature of s itself. */
 const QUADRATURE_BELOW = 0.02;
 
-// 20-point Gauss–Hermite nodes and weights (Abramowitz & Stegun 1964, Table 25.10):
-// ∫ e^(−x²) f(x) dx ≈ Σ w_k f(x_k); with x = ε/(σ√2), E[f(φ+ε)] = Σ w_k f(φ + σ√2 x_k) / √π.
-const GH_X = [
-  0.2453407083009, 0.7374737285454, 1.2340762153953, 1.7385377121166, 2.2549740020893, 2.7888060584281, 3.347854567384, 3.9447640401156,
-  4.6036824495507, 5.3874808900112,
-];
-const GH_W = [
-  4.622436696006e-1, 2.866755053628e-1, 1.090172060200e-1, 2.481052088746e-2, 3.243773342238e-3, 2.283386360164e-4, 7.802556478532e-6,
-  1.086069370769e-7, 4.399340992273e-10, 2.229393645534e-13,
-];
+// Gauss–Hermite nodes and weights (src/rv/gauss-hermite.ts): with x = ε/(σ√2),
+// E[f(φ+ε)] = Σ w_k f(φ + σ√2 x_k) / √π.
 
 /**
  * The signal of a Keplerian orbit: v = γ + K [cos(ν + ω) + e cos ω] (REFERENCES.md, "Keplerian
