@@ -25,6 +25,8 @@ export interface Site {
   hourAngleLimitsHours?: { east: number; west: number };
   /** Fraction of clear nights: one number, or twelve monthly values (January first). */
   clearFraction: number | number[];
+  /** Median seeing FWHM at the zenith (arcsec); omitted: each instrument's reference seeing. */
+  medianSeeingArcsec?: number;
   /** Semester boundaries as month-day (`MM-DD`) pairs; B may end in the next year. */
   semesters?: { A: { start: string; end: string }; B: { start: string; end: string } };
   sourceNote: string;
@@ -126,6 +128,16 @@ export interface Target {
   ephemeris?: Ephemeris;
   planet?: PlanetSpec;
   search?: SearchSpec;
+  /** Magnitudes given in other bands (V is `vmag`); a missing one comes from V and Teff. */
+  mags?: Partial<Record<BandId, number>>;
+  /** Chromospheric activity log R'HK and surface gravity log g (cgs), when given. */
+  logRhk?: number;
+  logg?: number;
+  /** The target's own exposure (s) or σ per visit (m/s, photon + floor); either wins over the chosen exposure. */
+  exposureSec?: number;
+  sigmaMps?: number;
+  /** How the jitter was found: "as given", or the relations behind the default. */
+  jitterSource?: string;
   /** Names of fields filled with documented defaults rather than given. */
   estimated: string[];
   /** Where the row came from, for messages: `targets.csv row 3`. */

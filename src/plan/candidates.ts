@@ -7,7 +7,7 @@ import { overlapsTransit, phaseAt, phaseErrCycles } from '../orbit/ephemeris.js'
 import { semiAmplitudeMps } from '../orbit/semi-amplitude.js';
 import { signalShape, type SignalShape } from '../orbit/signal-shape.js';
 import { targetKMps } from '../orbit/target-k.js';
-import { chooseExposureSec, visitCostSec, type ExposureChoice } from '../rv/exposure.js';
+import { chooseExposureSec, fixedExposure, visitCostSec, type ExposureChoice } from '../rv/exposure.js';
 import { visitPrecision } from '../rv/precision.js';
 import { TYPICAL_AIRMASS } from '../rv/target-detect.js';
 import { moonSeparationDeg, moonTrack } from '../sky/moon-track.js';
@@ -44,10 +44,15 @@ export interface TargetSetup {
 export function setupTargets(campaign: Campaign): TargetSetup[] {
   const { instrument, goals } = campaign;
   return campaign.targets.map((target) => {
-    const exposure = chooseExposureSec(instrument, target, TYPICAL_AIRMASS);
-    const setup: TargetSetup = { target, exposure, durationSec: visitCostSec(instrument, exposure.exposureSec) };
     const kMps = targetKMps(target);
     const goal = target.goalSignificance ?? goals.significance;
+    // The target's own exposure or sigma wins; otherwise the fewest hours for its K (src/rv/exposure.ts).
+    const options = { seeingArcsec: campaign.site.medianSeeingArcsec, kMps, significance: goal };
+    const exposure =
+      target.exposureSec === undefined
+        ? chooseExposureSec(instrument, target, TYPICAL_AIRMASS, target.sigmaMps, options)
+        : fixedExposure(instrument, target, TYPICAL_AIRMASS, target.exposureSec, options);
+    const setup: TargetSetup = { target, exposure, durationSec: visitCostSec(instrument, exposure.exposureSec) };
     if (target.ephemeris && kMps !== undefined) {
       setup.scheduleTarget = { kind: 'ephemeris', id: target.id, priority: target.priority, kMps, goal };
       if (target.planet && target.planet.ecc > 0) setup.shape = signalShape(target.planet.ecc, target.planet.omegaDeg);
@@ -112,7 +117,7 @@ export function candidateSlots(campaign: Campaign, nights: Night[], windows: Win
         const halfExposureDays = setup.exposure.exposureSec / 2 / 86_400;
         if (target.ephemeris && overlapsTransit(target.ephemeris, midBjdTdb - halfExposureDays, midBjdTdb + halfExposureDays)) continue;
         const airmass = airmassAt(position, midMs);
-        const budget = visitPrecision(instrument, target, setup.exposure.exposureSec, airmass);
+        const budget = visitPrecision(instrument, target, setup.exposure.exposureSec, airmass, { seeingArcsec: site.medianSeeingArcsec });
         const slot: CandidateSlot = {
           slotId: `${target.id}|${localDate}|${startMs}`,
           targetId: target.id,
