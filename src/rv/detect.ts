@@ -1,6 +1,8 @@
 // Detectability of a Keplerian signal of known period and phase with a free offset: σ_K after N
 // visits, visits needed for K/σ_K = n, the probability of a detection at small N, and the
-// smallest detectable m sin i. The instrument floor is a term of σ_K that does not average down.
+// smallest detectable m sin i. The instrument floor is a term of σ_K that does not average down:
+// σ_K² = σ²/E[S] + (σ_floor/n)², so K/σ_K never exceeds n K/σ_floor and no K at or below the floor
+// reaches K/σ_K = n, however many visits (Crest's rule, README "Noise model").
 
 import { planetMassFromKEarth } from '../orbit/minimum-mass.js';
 import { standardNormalMean } from './gauss-hermite.js';
@@ -27,21 +29,25 @@ export function phaseSumMoments(visits: number, layout: PhaseLayout): { mean: nu
   return { mean: (visits - 1) / 2, variance: visits / 8 + 1 / 4 - 3 / (8 * visits) };
 }
 
-/**
- * σ_K (m/s) after N visits: √(σ² / E[S] + σ_floor²). σ is the scatter that averages down (photon
- * and jitter); the floor is a systematic that no number of visits removes, so it enters σ_K in
- * full (Crest's rule, README "Noise model").
- */
-export function sigmaKMps(sigmaMps: number, visits: number, layout: PhaseLayout, floorMps = 0): number {
-  return Math.sqrt(sigmaMps ** 2 / phaseSumMoments(visits, layout).mean + floorMps ** 2);
+/** The floor's term of σ_K (m/s) for a goal of n: σ_floor / n, so that K = σ_floor is the limit of K = n σ_K. */
+export function floorOnKMps(floorMps: number, significance: number): number {
+  return floorMps / significance;
 }
 
 /**
- * Visits (not rounded) for K/σ_K = n: solve K² = n² (σ²/E[S] + f²), i.e. E[S] = n²σ² / (K² − n²f²):
- * N = 2 E[S] + 1 at random phases, N = E[S] at quadratures. Infinity when K ≤ n f.
+ * σ_K (m/s) after N visits: √(σ² / E[S] + floorOnK²). σ is the scatter that averages down (photon
+ * and jitter); floorOnK (floorOnKMps) is the floor's term, which no number of visits removes.
+ */
+export function sigmaKMps(sigmaMps: number, visits: number, layout: PhaseLayout, floorOnK = 0): number {
+  return Math.sqrt(sigmaMps ** 2 / phaseSumMoments(visits, layout).mean + floorOnK ** 2);
+}
+
+/**
+ * Visits (not rounded) for K/σ_K = n: solve K² = n² σ²/E[S] + f², i.e. E[S] = n²σ² / (K² − f²)
+ * with f the floor: N = 2 E[S] + 1 at random phases, N = E[S] at quadratures. Infinity when K ≤ f.
  */
 export function visitsExact(kMps: number, sigmaMps: number, significance: number, layout: PhaseLayout, floorMps = 0): number {
-  const room = kMps ** 2 - (significance * floorMps) ** 2;
+  const room = kMps ** 2 - floorMps ** 2;
   if (room <= 0) return Infinity;
   const sumNeeded = (significance * sigmaMps) ** 2 / room;
   return layout === 'random' ? 2 * sumNeeded + 1 : sumNeeded;
@@ -64,13 +70,14 @@ export function detectionProbabilityKnownPhase(kMps: number, sigmaK: number, sig
 
 /**
  * Probability of K̂/σ_K > n after N visits, averaged over the phases the visits fall at:
- * P = E_S[Φ(K / √(σ²/S + f²) − n)]. At random phases S is given the gamma distribution with
+ * P = E_S[Φ(K / √(σ²/S + (f/n)²) − n)], f the floor. At random phases S is given the gamma distribution with
  * E S and Var S of phaseSumMoments, taken by the Wilson–Hilferty cube-root normal approximation
  * (Johnson, Kotz & Balakrishnan, common practice) and 20-point Gauss–Hermite; within 0.03 of a
  * free-offset Monte Carlo for N ≥ 5 (test/rv/detect-small-n.test.ts). At quadratures S = N.
  */
 export function detectionProbability(kMps: number, sigmaMps: number, visits: number, significance: number, layout: PhaseLayout, floorMps = 0): number {
-  const at = (s: number) => (s <= 0 ? 0 : normalCdf(kMps / Math.sqrt(sigmaMps ** 2 / s + floorMps ** 2) - significance));
+  const floorOnK = floorOnKMps(floorMps, significance);
+  const at = (s: number) => (s <= 0 ? 0 : normalCdf(kMps / Math.sqrt(sigmaMps ** 2 / s + floorOnK ** 2) - significance));
   const { mean, variance } = phaseSumMoments(visits, layout);
   if (variance === 0) return at(mean);
   const shape = (mean * mean) / variance;
@@ -78,9 +85,9 @@ export function detectionProbability(kMps: number, sigmaMps: number, visits: num
   return standardNormalMean((z) => at(mean * Math.max(0, 1 - c + z * Math.sqrt(c)) ** 3));
 }
 
-/** The smallest K (m/s) reaching K/σ_K = n with N visits: K = n σ_K. */
+/** The smallest K (m/s) reaching K/σ_K = n with N visits: K = n σ_K, always above the floor. */
 export function minimumDetectableKMps(sigmaMps: number, visits: number, significance: number, layout: PhaseLayout, floorMps = 0): number {
-  return significance * sigmaKMps(sigmaMps, visits, layout, floorMps);
+  return significance * sigmaKMps(sigmaMps, visits, layout, floorOnKMps(floorMps, significance));
 }
 
 /** The K (m/s) detected with probability `level` after N visits (bisection; P rises with K). */

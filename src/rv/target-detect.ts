@@ -5,6 +5,7 @@ import type { Instrument, Target } from '../model.js';
 import { semiAmplitudeMps } from '../orbit/semi-amplitude.js';
 import {
   detectionProbability,
+  floorOnKMps,
   massLimitTable,
   PHASE_LAYOUTS,
   sigmaKMps,
@@ -190,7 +191,7 @@ function atPlannedVisits(row: TargetDetectability, options: DetectOptions): AtPl
   const visits = options.visits!;
   const n = options.significance;
   const { whiteMps, floorMps } = row;
-  const sigmaK = (layout: PhaseLayout) => sigmaKMps(whiteMps, visits, layout, floorMps);
+  const sigmaK = (layout: PhaseLayout) => sigmaKMps(whiteMps, visits, layout, floorOnKMps(floorMps, n));
   const at: AtPlannedVisits = { visits, sigmaKRandomMps: sigmaK('random'), sigmaKQuadratureMps: sigmaK('quadrature') };
   const planet = row.planet;
   const limits = (periodsDays: readonly number[], ecc: number) =>
@@ -214,9 +215,8 @@ function verdict(row: TargetDetectability, instrument: Instrument, significance:
   const planet = row.planet;
   if (!planet) return withNotes('no planet', 'no planet mass, K or search given: precision only');
   const k = planet.kMps.toFixed(2);
-  if (planet.kMps <= significance * instrument.floorMps) {
-    const below = planet.kMps < instrument.floorMps ? 'below the instrument floor' : `at most ${significance} x the instrument floor`;
-    return withNotes('out of reach', `K = ${k} m/s is ${below} of ${instrument.floorMps} m/s, which does not average down over visits: sigma_K never falls below it`);
+  if (planet.kMps <= instrument.floorMps) {
+    return withNotes('out of reach', `K = ${k} m/s is below the instrument floor of ${instrument.floorMps} m/s, which does not average down over visits`);
   }
   const goal = row.needed.find((v) => v.significance === significance)!;
   const n = `${significance} sigma`;

@@ -1,14 +1,14 @@
 // Small-N detection at random phases with a free offset: the analytic average over the phase
 // distribution against a Monte Carlo of the least-squares fit itself.
 import { describe, expect, it } from 'vitest';
-import { detectionProbability, phaseSumMoments, sigmaKMps, visitsNeeded } from '../../src/rv/detect.js';
+import { detectionProbability, minimumDetectableKMps, phaseSumMoments, sigmaKMps, visitsNeeded } from '../../src/rv/detect.js';
 import { createRng } from '../../src/rv/random.js';
 import { normalCdf } from '../../src/rv/normal-cdf.js';
 
 /**
  * Simulated campaigns: N uniform random phases, v = γ + K sin 2πφ + noise σ (γ = 3.7 m/s, fitted
- * with K by least squares), plus a campaign-wide systematic on K of spread `floor`. A detection is
- * K̂ / σ_K > n with σ_K = √(σ²/S + floor²) from the campaign's own phases.
+ * with K by least squares), plus a campaign-wide systematic on K of spread floor/n. A detection is
+ * K̂ / σ_K > n with σ_K = √(σ²/S + (floor/n)²) from the campaign's own phases.
  */
 function simulate(kMps: number, sigma: number, visits: number, n: number, floor: number, trials: number, seed: number) {
   const rng = createRng(seed);
@@ -26,8 +26,8 @@ function simulate(kMps: number, sigma: number, visits: number, n: number, floor:
       sxx += (s[i]! - sMean) ** 2;
       sxy += (s[i]! - sMean) * (y[i]! - yMean);
     }
-    const kHat = sxy / sxx + floor * rng.normal();
-    if (kHat / Math.sqrt(sigma ** 2 / sxx + floor ** 2) > n) detected++;
+    const kHat = sxy / sxx + (floor / n) * rng.normal();
+    if (kHat / Math.sqrt(sigma ** 2 / sxx + (floor / n) ** 2) > n) detected++;
     sumS += sxx;
     sumS2 += sxx * sxx;
   }
@@ -46,10 +46,10 @@ describe('detection probability at small N (free offset, random phases): analyti
     expect(Math.abs(detectionProbability(k, sigma, visits, n, 'random') - mc.p)).toBeLessThanOrEqual(0.03);
   });
 
-  it('with a floor that does not average down (0.8 m/s on K, N = 10 and 40)', () => {
+  it('with a floor that does not average down (2 m/s, N = 10 and 40)', () => {
     for (const visits of [10, 40]) {
-      const mc = simulate(4, 2, visits, 3, 0.8, 20_000, 7 + visits);
-      expect(Math.abs(detectionProbability(4, 2, visits, 3, 'random', 0.8) - mc.p)).toBeLessThanOrEqual(0.03);
+      const mc = simulate(3, 2, visits, 3, 2, 20_000, 7 + visits);
+      expect(Math.abs(detectionProbability(3, 2, visits, 3, 'random', 2) - mc.p)).toBeLessThanOrEqual(0.03);
     }
   });
 
@@ -82,10 +82,12 @@ describe('visits needed and the floor', () => {
     expect(sigmaKMps(2, n - 1, 'random')).toBeGreaterThan(2 / 5);
   });
 
-  it('no K at or below n × floor is reachable, and the probability stays low however many visits (property)', () => {
-    expect(visitsNeeded(1.0, 1, 3, 'random', 0.5)).toBe(Infinity);
-    expect(visitsNeeded(1.0, 1, 3, 'quadrature', 0.5)).toBe(Infinity);
-    // At most Φ(K/f − n), the chance the systematic alone lifts K̂ over n σ_K.
-    for (const visits of [10, 100, 10_000]) expect(detectionProbability(0.4, 1, visits, 3, 'random', 0.5)).toBeLessThanOrEqual(normalCdf(0.4 / 0.5 - 3) + 1e-9);
+  it('no K at or below the floor is reachable, and its probability stays low however many visits (property)', () => {
+    expect(visitsNeeded(0.5, 1, 3, 'random', 0.5)).toBe(Infinity);
+    expect(visitsNeeded(0.5, 1, 3, 'quadrature', 0.5)).toBe(Infinity);
+    expect(visitsNeeded(0.55, 1, 3, 'random', 0.5)).toBeLessThan(Infinity);
+    // At most Φ(n (K/f − 1)), the limit of infinitely many visits.
+    for (const visits of [10, 100, 10_000]) expect(detectionProbability(0.4, 1, visits, 3, 'random', 0.5)).toBeLessThanOrEqual(normalCdf(3 * (0.4 / 0.5 - 1)) + 1e-9);
+    for (const visits of [10, 100, 10_000]) expect(minimumDetectableKMps(1, visits, 3, 'random', 0.5)).toBeGreaterThan(0.5);
   });
 });
