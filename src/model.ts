@@ -237,6 +237,8 @@ export interface PlannedVisit {
   /** Per-visit precision (photon + floor) and with jitter. */
   sigmaMps: number;
   sigmaEffMps: number;
+  /** S/N per pixel at the instrument's reference wavelength. */
+  snrPerPixel: number;
 }
 
 export interface TargetSummary {

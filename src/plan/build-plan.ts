@@ -79,6 +79,7 @@ function plannedVisit(d: SlotDetail, campaign: Campaign): PlannedVisit {
     airmass: d.airmass,
     moonSeparationDeg: d.moonSeparationDeg,
     sigmaMps: d.sigmaMps,
+    snrPerPixel: d.snrPerPixel,
     sigmaEffMps: d.slot.sigmaEffMps,
   };
   if (d.slot.phase !== undefined) {

@@ -26,6 +26,8 @@ export interface SlotDetail {
   moonSeparationDeg: number;
   midBjdTdb: number;
   sigmaMps: number;
+  /** S/N per pixel at the instrument's wavelength. */
+  snrPerPixel: number;
 }
 
 export interface TargetSetup {
@@ -140,6 +142,7 @@ export function candidateSlots(campaign: Campaign, nights: Night[], windows: Win
           moonSeparationDeg: moonSeparationDeg(moon, position.vector, midMs),
           midBjdTdb,
           sigmaMps: budget.visitMps,
+          snrPerPixel: budget.snrPerPixel,
         });
       }
     }

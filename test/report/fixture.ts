@@ -116,6 +116,7 @@ function visit(targetId: string, start: Date, exposureSec: number, airmass: numb
     targetId, localDate, startUtc: start.toISOString(), startLocal: local, midBjdTdb, exposureSec,
     durationSec: exposureSec + 150, airmass, moonSeparationDeg: 60, ...phase, sigmaMps,
     sigmaEffMps: Math.hypot(sigmaMps, t.jitterMps),
+    snrPerPixel: 100 / sigmaMps,
   };
 }
 

@@ -74,6 +74,7 @@ const visitSchema = z.looseObject({
   phaseErr: optNum,
   sigmaMps: num,
   sigmaEffMps: num.positive(),
+  snrPerPixel: num,
 });
 
 const summarySchema = z.looseObject({
