@@ -71,8 +71,8 @@ export function detectionProbabilityKnownPhase(kMps: number, sigmaK: number, sig
 /**
  * Probability of K̂/σ_K > n after N visits, averaged over the phases the visits fall at:
  * P = E_S[Φ(K / √(σ²/S + (f/n)²) − n)], f the floor. At random phases S is given the gamma distribution with
- * E S and Var S of phaseSumMoments, taken by the Wilson–Hilferty cube-root normal approximation
- * (Johnson, Kotz & Balakrishnan, common practice) and 20-point Gauss–Hermite; within 0.03 of a
+ * E S and Var S of phaseSumMoments, taken by the cube-root normal approximation [WilsonHilferty1931]
+ * and 20-point Gauss–Hermite; within 0.03 of a
  * free-offset Monte Carlo for N ≥ 5 (test/rv/detect-small-n.test.ts). At quadratures S = N.
  */
 export function detectionProbability(kMps: number, sigmaMps: number, visits: number, significance: number, layout: PhaseLayout, floorMps = 0): number {
