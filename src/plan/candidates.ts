@@ -48,8 +48,9 @@ export function setupTargets(campaign: Campaign): TargetSetup[] {
   return campaign.targets.map((target) => {
     const kMps = targetKMps(target);
     const goal = target.goalSignificance ?? goals.significance;
-    // The target's own exposure or sigma wins; otherwise the fewest hours for its K (src/rv/exposure.ts).
-    const options = { seeingArcsec: campaign.site.medianSeeingArcsec, kMps, significance: goal };
+    // The target's own exposure or sigma wins; otherwise the fewest hours for its K within the
+    // visits the campaign can give (src/rv/exposure.ts).
+    const options = { seeingArcsec: campaign.site.medianSeeingArcsec, kMps, significance: goal, maxVisits: visitCap(campaign) };
     const exposure =
       target.exposureSec === undefined
         ? chooseExposureSec(instrument, target, TYPICAL_AIRMASS, target.sigmaMps, options)
@@ -67,6 +68,16 @@ export function setupTargets(campaign: Campaign): TargetSetup[] {
     }
     return setup;
   });
+}
+
+/**
+ * The most visits one target can get: one a night when visits are at least 12 h apart (the
+ * scheduler's onePerNight), over the campaign's nights; no cap in hours mode or with closer spacing.
+ */
+function visitCap(campaign: Campaign): number {
+  if (campaign.constraints.minSpacingHours < 12) return Infinity;
+  const time = campaign.time;
+  return time.mode === 'choose-nights' ? time.nights : time.mode === 'given-nights' ? time.dates.length : Infinity;
 }
 
 /** Clear-night probability of a night: the site's fraction, per month when given (common practice). */

@@ -15,6 +15,8 @@ export interface ExposureOptions extends PrecisionOptions {
   significance?: number;
   /** Phase layout for the visits count (default random). */
   layout?: PhaseLayout;
+  /** The most visits the campaign can give the target (e.g. one a night): exposures needing more are passed over. */
+  maxVisits?: number;
 }
 
 export interface ExposureChoice {
@@ -81,21 +83,25 @@ const HOURS_GRID_POINTS = 400;
 /**
  * The exposure that minimises the telescope time to K/σ_K = n: visits(t) · (t + readout +
  * acquisition), with visits(t) from visitsExact (white σ(t) = √(photon(t)² + jitter²), the floor
- * as a fixed term). A search over log-spaced whole seconds between the limits; undefined when
- * even the longest exposure cannot reach the goal (K at or below n × floor).
+ * as a fixed term). A search over log-spaced whole seconds between the limits; with `maxVisits`,
+ * only exposures needing at most that many visits count, and when none does, the one needing the
+ * fewest. Undefined when no exposure reaches the goal (K at or below the floor).
  */
 function fewestHoursSec(instrument: Instrument, star: ExposureStar, airmass: number, minSec: number, options: ExposureOptions): number | undefined {
-  const { kMps, significance = 5, layout = 'random' } = options;
+  const { kMps, significance = 5, layout = 'random', maxVisits = Infinity } = options;
   const overhead = instrument.readoutSec + instrument.acquisitionSec;
   let best: { sec: number; cost: number } | undefined;
+  let fewest: { sec: number; visits: number } | undefined;
   const ratio = instrument.maxExposureSec / minSec;
   for (let i = 0; i < HOURS_GRID_POINTS; i++) {
     const sec = Math.round(minSec * ratio ** (i / (HOURS_GRID_POINTS - 1)));
     const white = quadratureSum(photonNoise(instrument, star, sec, airmass, options).photonMps, star.jitterMps);
-    const cost = visitsExact(kMps!, white, significance, layout, instrument.floorMps) * (sec + overhead);
-    if (Number.isFinite(cost) && (!best || cost < best.cost)) best = { sec, cost };
+    const visits = visitsExact(kMps!, white, significance, layout, instrument.floorMps);
+    const cost = visits * (sec + overhead);
+    if (Number.isFinite(cost) && visits <= maxVisits && (!best || cost < best.cost)) best = { sec, cost };
+    if (Number.isFinite(visits) && (!fewest || visits < fewest.visits)) fewest = { sec, visits };
   }
-  return best?.sec;
+  return best?.sec ?? fewest?.sec;
 }
 
 /**

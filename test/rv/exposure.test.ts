@@ -114,6 +114,16 @@ describe('exposure for the fewest hours given K', () => {
     }
   });
 
+  it('with a cap on visits (one a night over the campaign), the cheapest exposure that fits under it', () => {
+    const star = { ...kDwarf, vmag: 11.5 };
+    const free = chooseExposureSec(stable4m, star, 1.2, undefined, { kMps: 3, significance: 5 });
+    const visitsAt = (sec: number) => visitsExact(3, Math.hypot(photonNoise(stable4m, star, sec, 1.2).photonMps, star.jitterMps), 5, 'random', stable4m.floorMps);
+    const cap = Math.floor(visitsAt(free.exposureSec) / 2);
+    const capped = chooseExposureSec(stable4m, star, 1.2, undefined, { kMps: 3, significance: 5, maxVisits: cap });
+    expect(capped.exposureSec).toBeGreaterThan(free.exposureSec);
+    expect(visitsAt(capped.exposureSec)).toBeLessThanOrEqual(cap);
+  });
+
   it('K at or below the floor: no exposure helps, the default goal is kept', () => {
     const choice = chooseExposureSec(stable4m, kDwarf, 1.2, undefined, { kMps: 0.9 * stable4m.floorMps, significance: 5 });
     expect(choice.goal).toBe('photon-at-noise-floor');
