@@ -5,6 +5,7 @@ import { INSTRUMENTS_DIR } from '../../src/io/paths.js';
 import type { Instrument } from '../../src/model.js';
 import { photonNoise, visitPrecision } from '../../src/rv/precision.js';
 import { entranceCoupling, seeingAtAirmassArcsec } from '../../src/rv/seeing.js';
+import { instrumentEfficiency, referenceObservation, signalToNoise } from '../../src/rv/signal-to-noise.js';
 import { lineWidthFactor, lineWidthKms } from '../../src/rv/star-factors.js';
 import { teffFactor } from '../../src/rv/teff-information.js';
 import { electronsPerPixel, transferSigmaMps } from '../support/photon-transfer.js';
@@ -40,6 +41,15 @@ describe('the 1 m/s class against published figures', () => {
       else hi = mid;
     }
     within20(photonNoise(stable4m, { ...g2, vmag: 8 }, hi, 1.2).photonMps, 1.0);
+  });
+});
+
+describe('overall efficiency solved from the published S/N', () => {
+  it('the 1 m/s class: η × fibre coupling in 1" seeing is a few per cent, as published for fibre spectrographs (about 6% total, [Tokovinin2013])', () => {
+    const refObs = referenceObservation(stable4m);
+    const total = instrumentEfficiency(stable4m) * signalToNoise(stable4m, refObs).coupling;
+    expect(total).toBeGreaterThan(0.03);
+    expect(total).toBeLessThan(0.12);
   });
 });
 
