@@ -51,6 +51,10 @@ describe('overall efficiency solved from the published S/N', () => {
     expect(total).toBeGreaterThan(0.03);
     expect(total).toBeLessThan(0.12);
   });
+
+  it('the red class: its reference S/N means the 15% average throughput published for a near-infrared fibre spectrograph of its class ([Donati2018])', () => {
+    within20(instrumentEfficiency(load('red-4m')), 0.15);
+  });
 });
 
 describe('classes carried over from the 1 m/s class (an independent photon count and the line-width law, [BeattyGaudi2015])', () => {
