@@ -57,18 +57,19 @@ describe('overall efficiency solved from the published S/N', () => {
   });
 });
 
-describe('classes carried over from the 1 m/s class (an independent photon count and the line-width law, [BeattyGaudi2015])', () => {
-  // Efficiency of the 1 m/s class from its published S/N, counting photons afresh (sky neglected: V = 6 in 60 s).
+describe('classes estimated from a published efficiency and the 1 m/s class (an independent photon count and the line-width law, [BeattyGaudi2015])', () => {
+  // 6% total efficiency, fibre losses at the reference seeing included: the published figure of a
+  // 1.5 m fibre spectrograph [Tokovinin2013]; photons counted afresh (sky neglected: bright stars).
   const readVariance = (i: Instrument) => i.spatialPixels * i.readNoiseE ** 2;
-  const solveElectrons = (snr: number, r: number) => (snr * snr + Math.sqrt(snr ** 4 + 4 * snr * snr * r)) / 2;
   const ref4 = stable4m.reference;
-  const eta = solveElectrons(ref4.snrPerPixel, readVariance(stable4m)) / electronsPerPixel(stable4m, ref4.mag, ref4.exposureSec, ref4.airmass, ref4.seeingArcsec, 1);
   const view = (i: Instrument) => ({ ...i, lineWidthKms: lineWidthKms(i.resolvingPower) });
 
-  it.each(['compact-1m', 'stable-2m'])('%s: its reference point within 20% of the carried-over S/N and sigma', (id) => {
+  it.each(['compact-1m', 'stable-2m'])('%s: its reference point within 20% of the S/N and sigma this gives', (id) => {
     const b = load(id);
     const ref = b.reference;
-    const electrons = electronsPerPixel(b, ref.mag, ref.exposureSec, ref.airmass, ref.seeingArcsec, eta);
+    const couplingOnly = electronsPerPixel(b, ref.mag, ref.exposureSec, ref.airmass, ref.seeingArcsec, 1) / electronsPerPixel(b, ref.mag, ref.exposureSec, ref.airmass, 1e-6, 1);
+    expect(couplingOnly).toBeGreaterThan(0.5); // the fibre takes most of the light at this seeing
+    const electrons = electronsPerPixel(b, ref.mag, ref.exposureSec, ref.airmass, ref.seeingArcsec, 0.06 / couplingOnly);
     const snr = electrons / Math.sqrt(electrons + readVariance(b));
     within20(ref.snrPerPixel, snr);
     within20(ref.sigmaMps, transferSigmaMps(view(stable4m), ref4.sigmaMps, ref4.snrPerPixel, view(b), snr));
