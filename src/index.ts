@@ -33,7 +33,8 @@ export { bjdTdb, starBjdTdb } from './astro/bjd.js';
 // Precision and detectability
 export { visitPrecision } from './rv/precision.js';
 export { chooseExposureSec, visitCostSec } from './rv/exposure.js';
-export { sigmaKMps, visitsNeeded, detectionProbabilityKnownPhase, massLimitTable } from './rv/detect.js';
+export { sigmaKMps, visitsNeeded, detectionProbability, detectionProbabilityKnownPhase, massLimitTable } from './rv/detect.js';
+export { defaultJitter } from './rv/jitter.js';
 export { targetDetectability } from './rv/target-detect.js';
 
 // Blind search

@@ -1,5 +1,9 @@
 // The shared data model (docs/design.md, "Data model"). Units are in the names.
 
+import type { BandId } from './rv/bands.js';
+import type { Entrance } from './rv/seeing.js';
+import type { SpectralRegion } from './rv/teff-information.js';
+
 export interface HorizonPoint {
   azimuthDeg: number;
   altitudeDeg: number;
@@ -21,6 +25,8 @@ export interface Site {
   hourAngleLimitsHours?: { east: number; west: number };
   /** Fraction of clear nights: one number, or twelve monthly values (January first). */
   clearFraction: number | number[];
+  /** Median seeing FWHM at the zenith (arcsec); omitted: each instrument's reference seeing. */
+  medianSeeingArcsec?: number;
   /** Semester boundaries as month-day (`MM-DD`) pairs; B may end in the next year. */
   semesters?: { A: { start: string; end: string }; B: { start: string; end: string } };
   sourceNote: string;
@@ -28,10 +34,18 @@ export interface Site {
   file: string;
 }
 
+/** The measured point every other star's photon noise is scaled from (src/rv/precision.ts). */
 export interface InstrumentReference {
+  /** Photon-noise σ (m/s) at this point. */
   sigmaMps: number;
-  vmag: number;
+  /** The reference star's magnitude in the instrument's band. */
+  mag: number;
   exposureSec: number;
+  airmass: number;
+  /** Seeing FWHM (arcsec) at that airmass. */
+  seeingArcsec: number;
+  /** S/N per pixel at the instrument's wavelengthNm. */
+  snrPerPixel: number;
   teffK: number;
   vsiniKms: number;
 }
@@ -40,18 +54,35 @@ export interface Instrument {
   id: string;
   name: string;
   apertureM: number;
+  resolvingPower: number;
+  /** Photometric band the profile's magnitudes are in. */
+  band: BandId;
+  /** Wavelength (nm) of the reference S/N and of the extinction coefficient. */
+  wavelengthNm: number;
+  /** Wavelength coverage [min, max] (nm). */
+  coverageNm: [number, number];
+  /** Which RV-information table applies (src/rv/teff-information.ts). */
+  spectralRegion: SpectralRegion;
   /** Photon-noise precision at one reference point; all other stars scale from it. */
   reference: InstrumentReference;
+  readNoiseE: number;
+  pixelsPerResolutionElement: number;
+  /** Detector pixels summed across the order into one spectral pixel. */
+  spatialPixels: number;
+  entrance: Entrance;
+  /** Dark-sky surface brightness in the band (mag/arcsec²). */
+  skyMagPerArcsec2: number;
   floorMps: number;
   readoutSec: number;
   acquisitionSec: number;
   minExposureSec: number;
   maxExposureSec: number;
+  /** Extinction at wavelengthNm (mag per airmass). */
   extinctionMagPerAirmass: number;
-  /** Intrinsic plus instrumental line width w0 (km/s) for the rotation factor. */
-  lineWidthKms: number;
   /** Optional override of the spectral-type factor: [teffK, factor] pairs, interpolated. */
   teffFactors?: [number, number][];
+  /** Where each number comes from, by field name. */
+  sources: Record<string, string>;
   sourceNote: string;
   file: string;
 }
@@ -113,6 +144,16 @@ export interface Target {
   ephemeris?: Ephemeris;
   planet?: PlanetSpec;
   search?: SearchSpec;
+  /** Magnitudes given in other bands (V is `vmag`); a missing one comes from V and Teff. */
+  mags?: Partial<Record<BandId, number>>;
+  /** Chromospheric activity log R'HK and surface gravity log g (cgs), when given. */
+  logRhk?: number;
+  logg?: number;
+  /** The target's own exposure (s) or σ per visit (m/s, photon + floor); either wins over the chosen exposure. */
+  exposureSec?: number;
+  sigmaMps?: number;
+  /** How the jitter was found: "as given", or the relations behind the default. */
+  jitterSource?: string;
   /** Names of fields filled with documented defaults rather than given. */
   estimated: string[];
   /** Where the row came from, for messages: `targets.csv row 3`. */
@@ -234,6 +275,8 @@ export interface PlannedVisit {
   sigmaMps: number;
   sigmaEffMps: number;
   sigmaWhiteMps: number;
+  /** S/N per pixel at the instrument's reference wavelength. */
+  snrPerPixel: number;
 }
 
 export interface TargetSummary {

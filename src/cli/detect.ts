@@ -24,6 +24,7 @@ interface DetectFlags extends StarFlags {
   exposure?: number;
   targetSigma?: number;
   airmass: number;
+  seeing?: number;
   json?: boolean;
   csv?: boolean;
 }
@@ -52,6 +53,7 @@ function detectOptions(opts: DetectFlags): DetectOptions {
     airmass: opts.airmass,
     exposureSec: opts.exposure,
     targetSigmaMps: opts.targetSigma,
+    seeingArcsec: opts.seeing,
     visits: opts.visits,
     hypothetical: opts.planetMass === undefined ? undefined : { massEarth: opts.planetMass, periodDays: opts.period!, ecc: opts.ecc },
     periodsDays: opts.visits === undefined ? undefined : LIMIT_PERIODS_DAYS,
@@ -75,7 +77,7 @@ function printTable(rows: TargetDetectability[], options: DetectOptions): void {
   ];
   const at = options.visits;
   if (at !== undefined) {
-    columns.push({ header: `P(${n}sig|N=${at})`, align: 'right' }, { header: `min msini (Me)`, align: 'right' });
+    columns.push({ header: `P(${n}sig|N=${at})`, align: 'right' }, { header: `min msini (Me)`, align: 'right' }, { header: 'msini 50%/90% (Me)', align: 'right' });
   }
   columns.push({ header: 'verdict' });
   const body = rows.map((r) => {
@@ -93,13 +95,14 @@ function printTable(rows: TargetDetectability[], options: DetectOptions): void {
     ];
     if (at !== undefined) {
       const p = r.atPlannedVisits!;
-      cells.push(pair(p.probabilityRandom, p.probabilityQuadrature, 2), pair(p.massMinRandomEarth, p.massMinQuadratureEarth, 1));
+      cells.push(pair(p.probabilityRandom, p.probabilityQuadrature, 2), pair(p.massMinRandomEarth, p.massMinQuadratureEarth, 1), pair(p.mass50RandomEarth, p.mass90RandomEarth, 1));
     }
     cells.push(r.verdict.level);
     return cells;
   });
   console.log(renderTable(columns, body));
-  console.log(`\nPairs a/b: at random orbital phases / at ideal quadratures. sigma per visit includes floor and jitter. "!": exposure at the maximum.`);
+  console.log(`\nPairs a/b: at random orbital phases / at ideal quadratures. sigma per visit includes floor and jitter; the floor does not average down. "!": exposure at the maximum; "-": never.`);
+  if (at !== undefined) console.log(`msini 50%/90%: the m sin i detected (K/sigma_K > ${n}) in half / nine in ten of such campaigns at random phases.`);
 }
 
 function printNotes(rows: TargetDetectability[]): void {
@@ -108,6 +111,9 @@ function printNotes(rows: TargetDetectability[]): void {
     const planet = r.planet ? ` [${r.planet.note}]` : '';
     const est = r.estimated.length ? ` (estimated: ${r.estimated.join(', ')})` : '';
     console.log(`  ${r.targetId}: ${r.verdict.level}: ${r.verdict.text}${planet}${est}`);
+    const b = r.exposure.budget;
+    console.log(`    S/N per pixel ${fmt(b.snrPerPixel, 1)} at ${b.snrWavelengthNm} nm; jitter ${fmt(b.jitterMps, 2)} m/s (${r.jitterSource ?? 'as given'})`);
+    if (b.teffWarning) console.log(`    warning: ${b.teffWarning}`);
   }
 }
 
@@ -125,7 +131,8 @@ function csvRows(rows: TargetDetectability[], options: DetectOptions): string {
     'target', 'vmag', 'teffK', 'massSun', 'planetSource', 'planetMassEarth', 'periodDays', 'ecc', 'kMps', 'exposureSec', 'tooFaint',
     'sigmaPhotonMps', 'sigmaVisitMps', 'sigmaEffMps', 'visitCostSec',
     ...levels.flatMap((n) => [`visits${n}Random`, `visits${n}Quadrature`, `hours${n}Random`, `hours${n}Quadrature`]),
-    'plannedVisits', 'sigmaKRandomMps', 'probabilityRandom', 'probabilityQuadrature', 'massMinRandomEarth', 'massMinQuadratureEarth',
+    'plannedVisits', 'sigmaKRandomMps', 'probabilityRandom', 'probabilityQuadrature', 'massMinRandomEarth', 'massMinQuadratureEarth', 'mass50RandomEarth', 'mass90RandomEarth',
+    'snrPerPixel', 'jitterSource',
     'verdict', 'verdictText',
   ];
   const body = rows.map((r) => {
@@ -138,7 +145,8 @@ function csvRows(rows: TargetDetectability[], options: DetectOptions): string {
         const v = r.needed.find((x) => x.significance === n);
         return [v?.random, v?.quadrature, v?.hoursRandom, v?.hoursQuadrature];
       }),
-      p?.visits, p?.sigmaKRandomMps, p?.probabilityRandom, p?.probabilityQuadrature, p?.massMinRandomEarth, p?.massMinQuadratureEarth,
+      p?.visits, p?.sigmaKRandomMps, p?.probabilityRandom, p?.probabilityQuadrature, p?.massMinRandomEarth, p?.massMinQuadratureEarth, p?.mass50RandomEarth, p?.mass90RandomEarth,
+      b.snrPerPixel, r.jitterSource,
       r.verdict.level, r.verdict.text,
     ];
   });

@@ -39,6 +39,7 @@ export const siteSchema = z.strictObject({
   clearFraction: z.union([fraction, z.array(fraction).length(12, 'twelve monthly values')], {
     error: 'a fraction from 0 to 1, or twelve monthly fractions',
   }),
+  medianSeeingArcsec: z.number().min(0.2, 'arcsec from 0.2 to 5').max(5, 'arcsec from 0.2 to 5').optional(),
   semesters: z
     .strictObject({ A: semesterBounds, B: semesterBounds })
     .optional(),

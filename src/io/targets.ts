@@ -2,7 +2,10 @@ import { parse as parseCsv, CsvError } from 'csv-parse/sync';
 import { z } from 'zod';
 import { InputError, inputError } from '../errors.js';
 import type { Target } from '../model.js';
-import { DEFAULT_VSINI_KMS, defaultJitterMps, massFromTeffSun } from '../rv/star-defaults.js';
+import type { BandId } from '../rv/bands.js';
+import { dwarfColour } from '../rv/dwarf-colours.js';
+import { defaultJitter } from '../rv/jitter.js';
+import { DEFAULT_VSINI_KMS, massFromTeffSun } from '../rv/star-defaults.js';
 import { readText } from './read-text.js';
 import { parseDecDeg, parseRaDeg } from './sexagesimal.js';
 
@@ -36,6 +39,15 @@ const rowSchema = z.strictObject({
   pmdecmasyr: numberField('proper motion in Dec, mas/yr, -20000 to 20000', -20000, 20000),
   epochyear: numberField('epoch of the coordinates as a year, 1900 to 2100', 1900, 2100),
   vmag: numberField('V magnitude from -2 to 20', -2, 20),
+  rmag: numberField('R magnitude (Cousins) from -2 to 20', -2, 20),
+  imag: numberField('I magnitude (Cousins) from -2 to 20', -2, 20),
+  jmag: numberField('J magnitude from -4 to 20', -4, 20),
+  hmag: numberField('H magnitude from -4 to 20', -4, 20),
+  gmag: numberField('Gaia G magnitude from -2 to 21', -2, 21),
+  logrhk: numberField("chromospheric activity log R'HK from -6 to -3.5", -6, -3.5),
+  logg: numberField('surface gravity log g (cgs) from 0 to 6', 0, 6),
+  exposuresec: numberField('exposure time in seconds, more than 0 and at most 100000', 0, 1e5, { exclusiveMin: true }),
+  sigmamps: numberField('sigma per visit in m/s (photon and floor), more than 0 and at most 10000', 0, 1e4, { exclusiveMin: true }),
   teffk: numberField('effective temperature in kelvin, 2300 to 12000', 2300, 12000),
   masssun: numberField('stellar mass in solar masses, more than 0.05 and at most 10', 0.05, 10, { exclusiveMin: true }),
   vsinikms: numberField('projected rotation in km/s, 0 to 300', 0, 300),
@@ -73,13 +85,18 @@ const CANONICAL: Record<string, string> = {
   omegadeg: 'omegaDeg', searchperiodmindays: 'searchPeriodMinDays', searchperiodmaxdays: 'searchPeriodMaxDays',
   searchmassearth: 'searchMassEarth', nightlyjitterfraction: 'nightlyJitterFraction', rotationdays: 'rotationDays', activitymps: 'activityMps',
   activitycoherencedays: 'activityCoherenceDays', eccsigma: 'eccSigma',
+  rmag: 'rmag', imag: 'imag', jmag: 'jmag', hmag: 'hmag', gmag: 'gmag', logrhk: 'logRhk',
+  exposuresec: 'exposureSec', sigmamps: 'sigmaMps',
 };
+/** Magnitude columns other than V, by band. */
+const BAND_COLUMNS: [BandId, 'rmag' | 'imag' | 'jmag' | 'hmag' | 'gmag'][] = [['R', 'rmag'], ['I', 'imag'], ['J', 'jmag'], ['H', 'hmag'], ['G', 'gmag']];
 const display = (column: string) => CANONICAL[column] ?? column;
 const REQUIRED = ['id', 'ra', 'dec', 'vmag', 'teffk'];
 /** Star fields: given once per star (on any of its rows) or repeated identically. */
 const STAR_COLUMNS = [
   'ra', 'dec', 'pmramasyr', 'pmdecmasyr', 'epochyear', 'vmag', 'teffk', 'masssun', 'vsinikms', 'jittermps',
-  'nightlyjitterfraction', 'rotationdays', 'activitymps', 'activitycoherencedays',
+  'nightlyjitterfraction', 'rotationdays', 'activitymps', 'activitycoherencedays', 'rmag', 'imag', 'jmag', 'hmag', 'gmag',
+  'logrhk', 'logg', 'exposuresec', 'sigmamps',
 ] as const;
 
 interface Place {
@@ -100,9 +117,13 @@ function buildTarget(row: Row, place: Place): Target {
   };
   need('ra', 'required on one row of the star: right ascension');
   need('dec', 'required on one row of the star: declination');
-  need('vmag', 'required on one row of the star: V magnitude from -2 to 20');
   need('teffk', 'required on one row of the star: effective temperature in kelvin');
   const teffK = row.teffk!;
+  const mags: Partial<Record<BandId, number>> = {};
+  for (const [band, column] of BAND_COLUMNS) if (row[column] !== undefined) mags[band] = row[column];
+  const firstBand = BAND_COLUMNS.find(([band]) => mags[band] !== undefined)?.[0];
+  if (row.vmag === undefined && firstBand === undefined) fail(place, 'vmag', 'required: V magnitude from -2 to 20, or a magnitude in another band (rmag, imag, jmag, hmag, gmag)');
+  if (row.exposuresec !== undefined && row.sigmamps !== undefined) fail(place, 'sigmamps', 'give exposureSec or sigmaMps, not both');
   const withDefault = <T>(value: T | undefined, name: string, fallback: T): T => {
     if (value !== undefined) return value;
     estimated.push(name);
@@ -130,6 +151,7 @@ function buildTarget(row: Row, place: Place): Target {
     fail(place, 'searchperiodmaxdays', 'longer than searchPeriodMinDays');
   }
 
+  const jitter = defaultJitter({ teffK, vsiniKms: row.vsinikms, logRhk: row.logrhk, logg: row.logg });
   const target: Target = {
     id: row.id,
     starId: row.star ?? row.id,
@@ -138,11 +160,13 @@ function buildTarget(row: Row, place: Place): Target {
     pmRaMasYr: row.pmramasyr ?? 0,
     pmDecMasYr: row.pmdecmasyr ?? 0,
     epochYear: row.epochyear ?? 2000,
-    vmag: row.vmag!,
+    // V from the first other band and the dwarf colours when not given [PecautMamajek2013].
+    vmag: withDefault(row.vmag, 'vmag', firstBand === undefined ? NaN : mags[firstBand]! + dwarfColour(firstBand, teffK)),
     teffK,
     massSun: withDefault(row.masssun, 'massSun', massFromTeffSun(teffK)),
     vsiniKms: withDefault(row.vsinikms, 'vsiniKms', DEFAULT_VSINI_KMS),
-    jitterMps: withDefault(row.jittermps, 'jitterMps', defaultJitterMps(teffK)),
+    jitterMps: withDefault(row.jittermps, 'jitterMps', jitter.jitterMps),
+    jitterSource: row.jittermps === undefined ? jitter.source : 'as given',
     priority: row.priority ?? 1,
     goalSignificance: row.goalsignificance,
     estimated,
@@ -150,6 +174,10 @@ function buildTarget(row: Row, place: Place): Target {
   };
   const optional = { nightlyJitterFraction: row.nightlyjitterfraction, rotationDays: row.rotationdays, activityMps: row.activitymps, activityCoherenceDays: row.activitycoherencedays };
   for (const [key, value] of Object.entries(optional)) if (value !== undefined) Object.assign(target, { [key]: value });
+  if (Object.keys(mags).length > 0) target.mags = mags;
+  for (const [key, value] of [['logRhk', row.logrhk], ['logg', row.logg], ['exposureSec', row.exposuresec], ['sigmaMps', row.sigmamps]] as const) {
+    if (value !== undefined) target[key] = value;
+  }
   if (hasPeriod) {
     target.ephemeris = {
       periodDays: row.perioddays!,

@@ -81,6 +81,7 @@ function plannedVisit(d: SlotDetail, campaign: Campaign): PlannedVisit {
     moonSeparationDeg: d.moonSeparationDeg,
     phases: d.phases,
     sigmaMps: d.sigmaMps,
+    snrPerPixel: d.snrPerPixel,
     sigmaEffMps: d.sigmaEffMps,
     sigmaWhiteMps: d.slot.sigmaWhiteMps,
   };

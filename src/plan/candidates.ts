@@ -7,7 +7,7 @@ import type { Campaign, Night, Target, VisitPhase, Window } from '../model.js';
 import { overlapsTransit, phaseAt, phaseErrCycles, type TransitRule } from '../orbit/ephemeris.js';
 import { semiAmplitudeMps } from '../orbit/semi-amplitude.js';
 import { targetKMps } from '../orbit/target-k.js';
-import { chooseExposureSec, visitCostSec, type ExposureChoice } from '../rv/exposure.js';
+import { chooseExposureSec, fixedExposure, visitCostSec, type ExposureChoice } from '../rv/exposure.js';
 import { normalQuantile } from '../rv/normal-cdf.js';
 import { visitPrecision } from '../rv/precision.js';
 import { TYPICAL_AIRMASS } from '../rv/target-detect.js';
@@ -32,6 +32,8 @@ export interface SlotDetail {
   sigmaMps: number;
   sigmaEffMps: number;
   phases: VisitPhase[];
+  /** S/N per pixel at the instrument's wavelength. */
+  snrPerPixel: number;
 }
 
 /** One row of the target list: its role in the plan, or why it has none. */
@@ -60,11 +62,18 @@ export interface StarSetup {
 
 /** Exposure (at a typical airmass) and the role of each row. */
 export function setupTargets(campaign: Campaign): TargetSetup[] {
-  const { instrument } = campaign;
+  const { instrument, goals } = campaign;
   return campaign.targets.map((target) => {
-    const exposure = chooseExposureSec(instrument, target, TYPICAL_AIRMASS);
-    const setup: TargetSetup = { target, exposure, durationSec: visitCostSec(instrument, exposure.exposureSec) };
     const kMps = targetKMps(target);
+    const goal = target.goalSignificance ?? goals.significance;
+    // The target's own exposure or sigma wins; otherwise the fewest hours for its K within the
+    // visits the campaign can give (src/rv/exposure.ts).
+    const options = { seeingArcsec: campaign.site.medianSeeingArcsec, kMps, significance: goal, maxVisits: visitCap(campaign) };
+    const exposure =
+      target.exposureSec === undefined
+        ? chooseExposureSec(instrument, target, TYPICAL_AIRMASS, target.sigmaMps, options)
+        : fixedExposure(instrument, target, TYPICAL_AIRMASS, target.exposureSec, options);
+    const setup: TargetSetup = { target, exposure, durationSec: visitCostSec(instrument, exposure.exposureSec) };
     if (target.ephemeris && kMps !== undefined) {
       setup.role = 'ephemeris';
       setup.kMps = kMps;
@@ -84,7 +93,8 @@ export function setupStars(campaign: Campaign, setups: TargetSetup[]): StarSetup
   const byId = new Map(setups.map((s) => [s.target.id, s]));
   return [...starsOf(campaign.targets)].map(([starId, rows]) => {
     const rowSetups = rows.map((t) => byId.get(t.id)!);
-    const lead = rowSetups[0]!;
+    // The star's visits take the exposure its hardest planet (smallest K) asks for; without planets, the first row's.
+    const lead = rowSetups.filter((r) => r.role === 'ephemeris').sort((a, b) => a.kMps! - b.kMps!)[0] ?? rowSetups[0]!;
     const star: StarSetup = { starId, star: lead.target, rows: rowSetups, exposure: lead.exposure, durationSec: lead.durationSec, noise: starNoise(lead.target, campaign.noise.nightlyJitterFraction) };
     const goalOf = (t: Target) => t.goalSignificance ?? campaign.goals.significance;
     const planets = planetRows(rows).map((t) => ({ id: t.id, priority: t.priority, kMps: byId.get(t.id)!.kMps!, goal: goalOf(t) }));
@@ -105,6 +115,16 @@ export function setupStars(campaign: Campaign, setups: TargetSetup[]): StarSetup
 /** The target list's stars as targets for the sky engine: one row per star, named by the star. */
 export function starTargets(stars: StarSetup[]): Target[] {
   return stars.map((s) => ({ ...s.star, id: s.starId }));
+}
+
+/**
+ * The most visits one target can get: one a night when visits are at least 12 h apart (the
+ * scheduler's onePerNight), over the campaign's nights; no cap in hours mode or with closer spacing.
+ */
+function visitCap(campaign: Campaign): number {
+  if (campaign.constraints.minSpacingHours < 12) return Infinity;
+  const time = campaign.time;
+  return time.mode === 'choose-nights' ? time.nights : time.mode === 'given-nights' ? time.dates.length : Infinity;
 }
 
 /** Clear-night probability of a night: the site's fraction, per month when given (common practice). */
@@ -172,7 +192,7 @@ export function candidateSlots(campaign: Campaign, nights: Night[], windows: Win
         const halfExposureDays = setup.exposure.exposureSec / 2 / 86_400;
         if (transiting.some((eph) => overlapsTransit(eph, midBjdTdb - halfExposureDays, midBjdTdb + halfExposureDays, rule))) continue;
         const airmass = airmassAt(position, midMs);
-        const budget = visitPrecision(instrument, star, setup.exposure.exposureSec, airmass);
+        const budget = visitPrecision(instrument, star, setup.exposure.exposureSec, airmass, { seeingArcsec: site.medianSeeingArcsec });
         const slot: CandidateSlot = {
           slotId: `${setup.starId}|${localDate}|${startMs}`,
           targetId: setup.starId,
@@ -192,6 +212,7 @@ export function candidateSlots(campaign: Campaign, nights: Night[], windows: Win
           sigmaMps: budget.visitMps,
           sigmaEffMps: budget.effMps,
           phases: ephemerides.map(({ id, eph }) => ({ targetId: id, phase: phaseAt(eph, midBjdTdb), phaseErr: phaseErrCycles(eph, midBjdTdb) })),
+          snrPerPixel: budget.snrPerPixel,
         });
       }
     }

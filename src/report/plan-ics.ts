@@ -25,13 +25,16 @@ export function renderPlanIcs(plan: Plan): string {
   const stamp = DateTime.fromISO(c.window.start, { zone: 'utc' });
   for (const visit of plan.visits) {
     const start = DateTime.fromISO(visit.startUtc, { zone: 'utc' }).setZone(zone);
+    // RFC 5545 3.3.5: a repeated local time means its first occurrence, so a visit starting or
+    // ending in the second occurrence of a repeated hour can only be written in UTC.
+    const repeated = secondOccurrence(start) || secondOccurrence(start.plus({ seconds: visit.durationSec }));
     const phase = visit.phases.length === 0 ? '' : `; predicted phase ${phasesText(visit)}`;
     calendar.createEvent({
       id: `${visit.starId}-${start.toUTC().toFormat("yyyyLLdd'T'HHmmss")}@crest`,
-      start,
-      end: start.plus({ seconds: visit.durationSec }),
+      start: repeated ? start.toUTC() : start,
+      end: (repeated ? start.toUTC() : start).plus({ seconds: visit.durationSec }),
       stamp,
-      timezone: zone,
+      timezone: repeated ? null : zone,
       summary: `RV ${visit.starId}`,
       location: c.site.name,
       description:
@@ -40,4 +43,10 @@ export function renderPlanIcs(plan: Plan): string {
     });
   }
   return calendar.toString();
+}
+
+/** True when the same wall-clock time occurred 30 or 60 minutes earlier (after a backward change). */
+export function secondOccurrence(local: DateTime): boolean {
+  const wall = (t: DateTime) => t.toFormat("yyyy-LL-dd'T'HH:mm:ss");
+  return [60, 30].some((minutes) => wall(local.minus({ minutes })) === wall(local));
 }

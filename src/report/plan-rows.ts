@@ -24,6 +24,7 @@ export const VISIT_COLUMNS: Column[] = [
   { header: 'airmass', align: 'right' },
   { header: 'phase', align: 'right' },
   { header: 'sigma (m/s)', align: 'right' },
+  { header: 'S/N', align: 'right' },
 ];
 
 export function visitRow(visit: PlannedVisit, zone: string): string[] {
@@ -35,6 +36,7 @@ export function visitRow(visit: PlannedVisit, zone: string): string[] {
     fmt(visit.airmass, 2),
     phasesText(visit),
     fmt(visit.sigmaEffMps, 2),
+    fmt(visit.snrPerPixel, 0),
   ];
 }
 

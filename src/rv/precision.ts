@@ -1,9 +1,15 @@
-// Per-visit RV precision: photon noise scaled from the instrument's reference point, combined
-// with the instrument floor and the star's jitter. Every factor is kept so a user can see where
-// the budget goes.
+// Per-visit RV precision: photon noise scaled from the instrument's reference point through the
+// S/N per pixel (star, sky, read noise, seeing and extinction at the airmass), the star's line
+// width and spectral type; combined with the instrument floor and the star's jitter. Every
+// factor is kept so a user can see where the budget goes.
 
+import { inputError } from '../errors.js';
 import type { Instrument } from '../model.js';
-import { lineWidthFactor, spectralTypeFactor, type SpectralTypeSource } from './star-factors.js';
+import type { BandId } from './bands.js';
+import { magnitudeIn } from './dwarf-colours.js';
+import { referenceObservation, signalToNoise, instrumentEfficiency, type SignalToNoise } from './signal-to-noise.js';
+import { lineWidthFactor, lineWidthKms } from './star-factors.js';
+import { teffFactor } from './teff-information.js';
 
 /** The star as the precision model sees it. */
 export interface PrecisionStar {
@@ -11,6 +17,10 @@ export interface PrecisionStar {
   teffK: number;
   vsiniKms: number;
   jitterMps: number;
+  /** Magnitudes given in other bands; a missing one comes from V and Teff (dwarf colours). */
+  mags?: Partial<Record<BandId, number>>;
+  /** Where the star came from (`targets.csv row 3`), for the error line of an unusable Teff. */
+  source?: string;
 }
 
 export interface PrecisionOptions {
@@ -19,21 +29,27 @@ export interface PrecisionOptions {
    * telescope". Omitted: the instrument's own aperture, where its reference point was measured.
    */
   apertureM?: number;
+  /** Seeing FWHM at the zenith (arcsec), e.g. the site's median; omitted: the reference's. */
+  seeingArcsec?: number;
 }
 
 /** Multiplicative factors on the reference photon noise; 1 means "as at the reference point". */
 export interface PrecisionFactors {
-  /** 10^(0.2 (V − V_ref)). */
+  /** 10^(0.2 (m − m_ref)) in the instrument's band. */
   magnitude: number;
   /** (t / t_ref)^(−1/2). */
   exposure: number;
   /** (D / D_ref)^(−1). */
   aperture: number;
-  /** 10^(0.2 k (X − 1)): the reference point is taken at the zenith. */
+  /** 10^(0.2 k (X − X_ref)) at the instrument's wavelength. */
   extinction: number;
-  /** ((w0² + v sin i²) / (w0² + v sin i_ref²))^(3/4). */
+  /** √(η_ref / η): light lost at the fibre or slit as the seeing grows with airmass. */
+  entrance: number;
+  /** How far sky and read noise pull the S/N below the photon limit, relative to the reference. */
+  detector: number;
+  /** ((w0² + v sin i²) / (w0² + v sin i_ref²))^(3/4), w0 from the resolving power. */
   lineWidth: number;
-  /** σ(Teff) / σ(Teff_ref) at fixed V and v sin i. */
+  /** σ(Teff) / σ(Teff_ref) at fixed magnitude. */
   spectralType: number;
 }
 
@@ -42,46 +58,99 @@ export interface PrecisionBudget {
   exposureSec: number;
   airmass: number;
   apertureM: number;
+  /** The band and the star's magnitude in it (estimated from V and Teff when not given). */
+  band: BandId;
+  mag: number;
+  magEstimated: boolean;
+  /** S/N per pixel at `snrWavelengthNm`, and what it is made of. */
+  snrPerPixel: number;
+  snrWavelengthNm: number;
+  snr: SignalToNoise;
   /** The instrument's photon-noise σ at its reference point (m/s). */
   referenceSigmaMps: number;
   factors: PrecisionFactors;
-  spectralTypeSource: SpectralTypeSource;
+  spectralTypeSource: string;
+  /** Set when the star's Teff is where the information table is least reliable. */
+  teffWarning?: string;
+  /** Width of a non-rotating star's lines on this instrument (km/s). */
+  lineWidthKms: number;
   /** referenceSigmaMps times every factor. */
   photonMps: number;
   floorMps: number;
   /** √(photon² + floor²): what the instrument delivers for this star in one visit. */
   visitMps: number;
   jitterMps: number;
+  /** √(photon² + jitter²): the part that averages down over visits. */
+  whiteMps: number;
   /** √(visit² + jitter²): the scatter to expect about a Keplerian. */
   effMps: number;
 }
 
+/** Spectral-type factor, or one input-error line naming the star when its Teff is off the table. */
+function spectralType(instrument: Instrument, star: Pick<PrecisionStar, 'teffK' | 'source'>) {
+  try {
+    return teffFactor(star.teffK, instrument.reference.teffK, instrument.spectralRegion, instrument.teffFactors);
+  } catch (err) {
+    if (!(err instanceof RangeError)) throw err;
+    throw inputError({ file: star.source ?? 'command line', field: 'teffK', value: star.teffK, allowed: `${err.message} (instrument ${instrument.id})` });
+  }
+}
+
 /**
- * Photon noise of one visit (m/s) and its factors. σ ∝ 1/√(photons) (Bouchy, Pepe & Queloz 2001,
- * A&A 374, 733), hence σ = σ_ref · 10^(0.2 (V − V_ref)) · (t/t_ref)^(−1/2) · (D/D_ref)^(−1)
- * · 10^(0.2 k (X − 1)) · line-width factor · spectral-type factor (docs/references.md
- * [Photon-noise]); the reference point is at airmass 1.
+ * Photon noise of one visit (m/s) and its factors. σ ∝ 1/(S/N) at fixed spectrum ([Bouchy2001]),
+ * so σ = σ_ref · (S/N_ref / S/N) · line-width factor · spectral-type factor, with S/N per pixel
+ * from signalToNoise (star, sky, read noise; extinction and entrance losses at the airmass).
+ * In the photon limit this is σ_ref · 10^(0.2 Δm) · (t/t_ref)^(−1/2) · (D/D_ref)^(−1) · ...
  */
 export function photonNoise(
   instrument: Instrument,
-  star: Pick<PrecisionStar, 'vmag' | 'teffK' | 'vsiniKms'>,
+  star: Pick<PrecisionStar, 'vmag' | 'teffK' | 'vsiniKms' | 'mags' | 'source'>,
   exposureSec: number,
   airmass: number,
   options: PrecisionOptions = {},
-): { photonMps: number; factors: PrecisionFactors; spectralTypeSource: SpectralTypeSource; apertureM: number } {
+): Omit<PrecisionBudget, 'floorMps' | 'visitMps' | 'jitterMps' | 'whiteMps' | 'effMps'> {
   const ref = instrument.reference;
   const apertureM = options.apertureM ?? instrument.apertureM;
-  const spectral = spectralTypeFactor(star.teffK, ref.teffK, instrument.teffFactors);
+  const refObs = referenceObservation(instrument);
+  const { mag, estimated } = magnitudeIn(star, instrument.band);
+  const efficiency = instrumentEfficiency(instrument);
+  const obs = { mag, exposureSec, airmass, apertureM, seeingZenithArcsec: options.seeingArcsec ?? refObs.seeingZenithArcsec };
+  const snr = signalToNoise(instrument, obs, efficiency);
+  const refSnr = signalToNoise(instrument, refObs, efficiency);
+  const spectral = spectralType(instrument, star);
+  const widthKms = lineWidthKms(instrument.resolvingPower);
+  // Photon-limited S/N is √S; the detector factor is what sky and read noise take off it.
+  const photonLimit = (s: SignalToNoise) => Math.sqrt(s.starElectrons) / s.snrPerPixel;
   const factors: PrecisionFactors = {
-    magnitude: 10 ** (0.2 * (star.vmag - ref.vmag)),
+    magnitude: 10 ** (0.2 * (mag - ref.mag)),
     exposure: (exposureSec / ref.exposureSec) ** -0.5,
     aperture: instrument.apertureM / apertureM,
-    extinction: 10 ** (0.2 * instrument.extinctionMagPerAirmass * (airmass - 1)),
-    lineWidth: lineWidthFactor(star.vsiniKms, ref.vsiniKms, instrument.lineWidthKms),
+    extinction: 10 ** (0.2 * instrument.extinctionMagPerAirmass * (airmass - ref.airmass)),
+    entrance: Math.sqrt(refSnr.coupling / snr.coupling),
+    detector: photonLimit(snr) / photonLimit(refSnr),
+    lineWidth: lineWidthFactor(star.vsiniKms, ref.vsiniKms, widthKms),
     spectralType: spectral.factor,
   };
   const product = Object.values(factors).reduce((a, b) => a * b, 1);
-  return { photonMps: ref.sigmaMps * product, factors, spectralTypeSource: spectral.source, apertureM };
+  const budget: ReturnType<typeof photonNoise> = {
+    instrumentId: instrument.id,
+    exposureSec,
+    airmass,
+    apertureM,
+    band: instrument.band,
+    mag,
+    magEstimated: estimated,
+    snrPerPixel: snr.snrPerPixel,
+    snrWavelengthNm: instrument.wavelengthNm,
+    snr,
+    referenceSigmaMps: ref.sigmaMps,
+    factors,
+    spectralTypeSource: spectral.source,
+    lineWidthKms: widthKms,
+    photonMps: ref.sigmaMps * product,
+  };
+  if (spectral.warning) budget.teffWarning = spectral.warning;
+  return budget;
 }
 
 /** Quadrature sum √(Σ x²) of independent noise terms (common practice). */
@@ -90,8 +159,8 @@ export function quadratureSum(...terms: number[]): number {
 }
 
 /**
- * The precision budget of one visit: σ_visit² = σ_photon² + σ_floor², σ_eff² = σ_visit² + σ_jitter²
- * (docs/references.md [Noise-budget]; common practice).
+ * The precision budget of one visit: σ_visit² = σ_photon² + σ_floor², σ_white² = σ_photon² +
+ * σ_jitter², σ_eff² = σ_visit² + σ_jitter² (common practice).
  */
 export function visitPrecision(
   instrument: Instrument,
@@ -103,17 +172,11 @@ export function visitPrecision(
   const photon = photonNoise(instrument, star, exposureSec, airmass, options);
   const visitMps = quadratureSum(photon.photonMps, instrument.floorMps);
   return {
-    instrumentId: instrument.id,
-    exposureSec,
-    airmass,
-    apertureM: photon.apertureM,
-    referenceSigmaMps: instrument.reference.sigmaMps,
-    factors: photon.factors,
-    spectralTypeSource: photon.spectralTypeSource,
-    photonMps: photon.photonMps,
+    ...photon,
     floorMps: instrument.floorMps,
     visitMps,
     jitterMps: star.jitterMps,
+    whiteMps: quadratureSum(photon.photonMps, star.jitterMps),
     effMps: quadratureSum(visitMps, star.jitterMps),
   };
 }

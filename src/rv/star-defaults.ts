@@ -44,13 +44,24 @@ export function massFromTeffSun(teffK: number): number {
 }
 
 /**
- * Default stellar jitter (m/s) for a star of unknown activity: ~1.5 m/s for quiet G and K dwarfs,
- * ~2 m/s for M dwarfs, rising to several m/s for F stars (Wright 2005, PASP 117, 657, from memory).
+ * Dwarf surface gravity log g (cgs) against Teff (K), after the mean dwarf sequence of
+ * [PecautMamajek2013] (rounded, from memory).
  */
-export function defaultJitterMps(teffK: number): number {
-  if (teffK < 3900) return 2;
-  if (teffK < 6000) return 1.5;
-  return interpolateTable([[6000, 1.5], [6500, 3], [7000, 5]], teffK);
+const LOGG_BY_TEFF: readonly [number, number][] = [
+  [3000, 5.0],
+  [3500, 4.85],
+  [4000, 4.7],
+  [4500, 4.6],
+  [5000, 4.55],
+  [5500, 4.5],
+  [5800, 4.44],
+  [6200, 4.35],
+  [6500, 4.25],
+  [7000, 4.2],
+];
+
+export function dwarfLoggFromTeff(teffK: number): number {
+  return interpolateTable(LOGG_BY_TEFF, teffK);
 }
 
 /** A slowly rotating, inactive dwarf (common practice). */

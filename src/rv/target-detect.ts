@@ -4,7 +4,8 @@
 import type { Instrument, Target } from '../model.js';
 import { semiAmplitudeMps } from '../orbit/semi-amplitude.js';
 import {
-  detectionProbabilityKnownPhase,
+  detectionProbability,
+  floorOnKMps,
   massLimitTable,
   PHASE_LAYOUTS,
   sigmaKMps,
@@ -23,7 +24,7 @@ export const DEMANDING_VISITS = 50;
 
 /** What detectability needs of a target: a Target, or a star given on the command line. */
 export type DetectStar = Pick<Target, 'id' | 'vmag' | 'teffK' | 'massSun' | 'vsiniKms' | 'jitterMps' | 'estimated'> &
-  Partial<Pick<Target, 'planet' | 'ephemeris' | 'search'>>;
+  Partial<Pick<Target, 'planet' | 'ephemeris' | 'search' | 'mags' | 'logg' | 'logRhk' | 'exposureSec' | 'sigmaMps' | 'jitterSource' | 'source'>>;
 
 export interface DetectPlanet {
   source: 'given' | 'search' | 'hypothetical';
@@ -79,10 +80,12 @@ export interface DetectOptions {
   /** K/σ_K to reach (the goal); visits are also reported for 3 and 5. */
   significance: number;
   airmass: number;
-  /** Fixed exposure (s); otherwise chooseExposureSec picks one. */
+  /** Fixed exposure (s); otherwise chooseExposureSec picks one. A target's own exposureSec wins. */
   exposureSec?: number;
-  /** Requested σ_visit for the exposure choice. */
+  /** Requested σ_visit for the exposure choice. A target's own sigmaMps wins. */
   targetSigmaMps?: number;
+  /** Zenith seeing (arcsec), e.g. the site's median. */
+  seeingArcsec?: number;
   /** A planet number of visits: σ_K, detection probability and mass limits at that N. */
   visits?: number;
   hypothetical?: HypotheticalPlanet;
@@ -102,12 +105,15 @@ export interface AtPlannedVisits {
   visits: number;
   sigmaKRandomMps: number;
   sigmaKQuadratureMps: number;
-  /** Φ(K/σ_K − n) at random phases and at quadratures; undefined without a planet. */
+  /** P(K̂/σ_K > n) at random phases (averaged over them) and at quadratures; undefined without a planet. */
   probabilityRandom?: number;
   probabilityQuadrature?: number;
   /** Smallest detectable m sin i at the planet's period (random phases, quadratures). */
   massMinRandomEarth?: number;
   massMinQuadratureEarth?: number;
+  /** m sin i at the planet's period detected in 50% and 90% of campaigns at random phases. */
+  mass50RandomEarth?: number;
+  mass90RandomEarth?: number;
   massLimits?: MassLimitRow[];
 }
 
@@ -119,10 +125,15 @@ export interface TargetDetectability {
   teffK: number;
   massSun: number;
   estimated: string[];
+  /** How the jitter was found ("as given", or the relations behind the default). */
+  jitterSource?: string;
   planet?: DetectPlanet;
   exposure: ExposureChoice;
   /** σ_eff per visit (m/s): photon, floor and jitter in quadrature. */
   sigmaMps: number;
+  /** The part of σ that averages down over visits (photon and jitter), and the floor that does not (m/s). */
+  whiteMps: number;
+  floorMps: number;
   /** The largest term of σ_eff. */
   dominantNoise: 'photon' | 'floor' | 'jitter';
   visitCostSec: number;
@@ -135,10 +146,12 @@ export interface TargetDetectability {
 /** Detectability of one target's planet on one instrument (see the interfaces above). */
 export function targetDetectability(target: DetectStar, instrument: Instrument, options: DetectOptions): TargetDetectability {
   const planet = planetOfTarget(target, options.hypothetical);
+  const exposureSec = target.exposureSec ?? options.exposureSec;
+  const precisionOptions = { seeingArcsec: options.seeingArcsec, kMps: planet?.kMps, significance: options.significance };
   const exposure =
-    options.exposureSec === undefined
-      ? chooseExposureSec(instrument, target, options.airmass, options.targetSigmaMps)
-      : fixedExposure(instrument, target, options.airmass, options.exposureSec);
+    exposureSec === undefined
+      ? chooseExposureSec(instrument, target, options.airmass, target.sigmaMps ?? options.targetSigmaMps, precisionOptions)
+      : fixedExposure(instrument, target, options.airmass, exposureSec, precisionOptions);
   const { budget } = exposure;
   const sigmaMps = budget.effMps;
   const costSec = visitCostSec(instrument, exposure.exposureSec);
@@ -146,7 +159,7 @@ export function targetDetectability(target: DetectStar, instrument: Instrument, 
   const levels = [...new Set([3, 5, options.significance])].sort((a, b) => a - b);
   const needed: VisitsAt[] = planet
     ? levels.map((n) => {
-        const [random, quadrature] = PHASE_LAYOUTS.map((layout) => visitsNeeded(planet.kMps, sigmaMps, n, layout)) as [number, number];
+        const [random, quadrature] = PHASE_LAYOUTS.map((layout) => visitsNeeded(planet.kMps, budget.whiteMps, n, layout, budget.floorMps)) as [number, number];
         return { significance: n, random, quadrature, hoursRandom: hours(random), hoursQuadrature: hours(quadrature) };
       })
     : [];
@@ -158,9 +171,12 @@ export function targetDetectability(target: DetectStar, instrument: Instrument, 
     teffK: target.teffK,
     massSun: target.massSun,
     estimated: target.estimated,
+    jitterSource: target.jitterSource,
     planet,
     exposure,
     sigmaMps,
+    whiteMps: budget.whiteMps,
+    floorMps: budget.floorMps,
     dominantNoise,
     visitCostSec: costSec,
     needed,
@@ -174,19 +190,22 @@ export function targetDetectability(target: DetectStar, instrument: Instrument, 
 function atPlannedVisits(row: TargetDetectability, options: DetectOptions): AtPlannedVisits {
   const visits = options.visits!;
   const n = options.significance;
-  const sigmaK = (layout: PhaseLayout) => sigmaKMps(row.sigmaMps, visits, layout);
+  const { whiteMps, floorMps } = row;
+  const sigmaK = (layout: PhaseLayout) => sigmaKMps(whiteMps, visits, layout, floorOnKMps(floorMps, n));
   const at: AtPlannedVisits = { visits, sigmaKRandomMps: sigmaK('random'), sigmaKQuadratureMps: sigmaK('quadrature') };
   const planet = row.planet;
+  const limits = (periodsDays: readonly number[], ecc: number) =>
+    massLimitTable({ starMassSun: row.massSun, sigmaMps: whiteMps, floorMps, visits, significance: n, periodsDays, ecc });
   if (planet) {
-    at.probabilityRandom = detectionProbabilityKnownPhase(planet.kMps, at.sigmaKRandomMps, n);
-    at.probabilityQuadrature = detectionProbabilityKnownPhase(planet.kMps, at.sigmaKQuadratureMps, n);
-    const [limit] = massLimitTable({ starMassSun: row.massSun, sigmaMps: row.sigmaMps, visits, significance: n, periodsDays: [planet.periodDays], ecc: planet.ecc });
+    at.probabilityRandom = detectionProbability(planet.kMps, whiteMps, visits, n, 'random', floorMps);
+    at.probabilityQuadrature = detectionProbability(planet.kMps, whiteMps, visits, n, 'quadrature', floorMps);
+    const [limit] = limits([planet.periodDays], planet.ecc);
     at.massMinRandomEarth = limit!.massMinRandomEarth;
     at.massMinQuadratureEarth = limit!.massMinQuadratureEarth;
+    at.mass50RandomEarth = limit!.mass50RandomEarth;
+    at.mass90RandomEarth = limit!.mass90RandomEarth;
   }
-  if (options.periodsDays) {
-    at.massLimits = massLimitTable({ starMassSun: row.massSun, sigmaMps: row.sigmaMps, visits, significance: n, periodsDays: options.periodsDays, ecc: planet?.ecc ?? 0 });
-  }
+  if (options.periodsDays) at.massLimits = limits(options.periodsDays, planet?.ecc ?? 0);
   return at;
 }
 
@@ -196,7 +215,7 @@ function verdict(row: TargetDetectability, instrument: Instrument, significance:
   const planet = row.planet;
   if (!planet) return withNotes('no planet', 'no planet mass, K or search given: precision only');
   const k = planet.kMps.toFixed(2);
-  if (planet.kMps < instrument.floorMps) {
+  if (planet.kMps <= instrument.floorMps) {
     return withNotes('out of reach', `K = ${k} m/s is below the instrument floor of ${instrument.floorMps} m/s, which does not average down over visits`);
   }
   const goal = row.needed.find((v) => v.significance === significance)!;

@@ -54,3 +54,34 @@ describe('transit duration', () => {
     expect(() => parseTargets(`${head}\nA,10:00:00,-10:00:00,9,5000,,,2.5\n`, 't.csv')).toThrow(/transitDurationHours = "2.5": needs periodDays/);
   });
 });
+
+describe('bands, activity, gravity and per-target exposure or sigma', () => {
+  const cols = 'id,ra,dec,vmag,jmag,gmag,teffK,vsiniKms,logRhk,logg,exposureSec,sigmaMps';
+
+  it('reads other bands, log R\'HK, log g and a per-target exposure; the jitter follows the relations', () => {
+    const [t] = parseTargets(`${cols}\nA,10:00:00,-10:00:00,9.1,7.6,8.9,5800,9,-4.6,4.3,600,\n`, 't.csv');
+    expect(t!.mags).toEqual({ J: 7.6, G: 8.9 });
+    expect(t!.logRhk).toBe(-4.6);
+    expect(t!.logg).toBe(4.3);
+    expect(t!.exposureSec).toBe(600);
+    expect(t!.sigmaMps).toBeUndefined();
+    expect(t!.jitterMps).toBeGreaterThan(20); // rotation at 9 km/s ([Saar1998])
+    expect(t!.jitterSource).toMatch(/rotation \[Saar1998\].*activity/);
+    expect(t!.estimated).toContain('jitterMps');
+  });
+
+  it('V may be left out when another band is given: estimated from the dwarf colours', () => {
+    const [t] = parseTargets(`id,ra,dec,jmag,teffK\nM,10:00:00,-10:00:00,7.0,3500\n`, 't.csv');
+    expect(t!.vmag).toBeGreaterThan(10);
+    expect(t!.vmag).toBeLessThan(11); // V − J ≈ 3.6 for an M2 dwarf ([PecautMamajek2013], from memory)
+    expect(t!.estimated).toContain('vmag');
+  });
+
+  it.each([
+    ['no magnitude at all', 'id,ra,dec,teffK\nA,10:00:00,-10:00:00,5000\n', /^t\.csv: row 1 \(line 2\): vmag = \(empty\): required: V magnitude .* or a magnitude in another band/],
+    ['exposure and sigma both', `${cols}\nA,10:00:00,-10:00:00,9,,,5000,,,,600,2\n`, /sigmaMps = "2": give exposureSec or sigmaMps, not both$/],
+    ['log g out of range', `${cols}\nA,10:00:00,-10:00:00,9,,,5000,,,7,,\n`, /logg = "7": surface gravity log g \(cgs\) from 0 to 6$/],
+  ])('bad input: %s', (_name, text, message) => {
+    expect(() => parseTargets(text, 't.csv')).toThrow(message);
+  });
+});

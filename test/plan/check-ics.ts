@@ -1,7 +1,9 @@
 // plan.ics read back with ical.js, a general-purpose iCalendar parser (RFC 5545), resolving each
 // event's TZID through the VTIMEZONE the file itself carries.
 import ICAL from 'ical.js';
+import { DateTime } from 'luxon';
 import type { Plan } from '../../src/model.js';
+import { secondOccurrence } from '../../src/report/plan-ics.js';
 
 export interface IcsEvent {
   uid: string;
@@ -27,7 +29,13 @@ export function parseIcs(text: string): ParsedIcs {
     const zone = tzid ? zones.get(tzid) : undefined;
     if (tzid && !zone) throw new Error(`TZID ${tzid} has no VTIMEZONE`);
     if (zone) value.zone = zone;
-    return value.toUnixTime() * 1000;
+    const ms = value.toUnixTime() * 1000;
+    // RFC 5545 3.3.5: a local time that occurs twice (a backward change) refers to the first
+    // occurrence; ical.js takes the second, so step back when the wall clock repeats.
+    if (!tzid) return ms;
+    const wall = (t: number) => DateTime.fromMillis(t, { zone: tzid }).toFormat("yyyy-LL-dd'T'HH:mm:ss");
+    const earlier = [3_600_000, 1_800_000].map((d) => ms - d).find((t) => wall(t) === wall(ms));
+    return earlier ?? ms;
   };
   const events = calendar.getAllSubcomponents('vevent').map((event) => {
     const start = event.getFirstProperty('dtstart')!;
@@ -62,7 +70,10 @@ export function icsMismatches(plan: Plan, text: string): string[] {
       problems.push(`${label}: no event starts then`);
       continue;
     }
-    if (e.tzid !== zone) problems.push(`${label}: DTSTART TZID ${e.tzid}, not ${zone}`);
+    // A visit in the second occurrence of a repeated hour is written in UTC (RFC 5545 3.3.5).
+    const start = DateTime.fromISO(v.startUtc, { zone });
+    const utcAllowed = e.tzid === null && (secondOccurrence(start) || secondOccurrence(start.plus({ seconds: v.durationSec })));
+    if (e.tzid !== zone && !utcAllowed) problems.push(`${label}: DTSTART TZID ${e.tzid}, not ${zone}`);
     if (e.endMs - e.startMs !== v.durationSec * 1000) problems.push(`${label}: event lasts ${(e.endMs - e.startMs) / 1000} s, block ${v.durationSec} s`);
     if (!e.description.includes(v.starId) || !e.description.includes(`${v.exposureSec.toFixed(0)} s`)) problems.push(`${label}: description lacks target or exposure`);
     if (v.phases.some((p) => !e.description.includes(p.phase.toFixed(3)))) problems.push(`${label}: description lacks the phase`);

@@ -11,7 +11,7 @@ import { visitPrecision } from '../../src/rv/precision.js';
 import type { Campaign, Plan } from '../../src/model.js';
 import { buildPlan } from '../../src/plan/build-plan.js';
 import { referenceWindows } from '../../src/sky/reference-sampler.js';
-import { demoPlan as sharedDemoPlan } from '../support/demo-plan.js';
+import { DEMO_CAMPAIGN } from '../../src/io/paths.js';
 import { fixture } from './fixtures.js';
 
 let campaign: Campaign;
@@ -70,10 +70,10 @@ describe('phase lost by the window\'s end', () => {
   });
 });
 
-describe('goal not reached on the demo', () => {
+describe('goal not reached on the demo cut to 7 nights', () => {
   it('names the visits at quadratures that would reach it: N = ceil((n sigma / K)^2) (docs/references.md [Visits-needed])', () => {
-    const demoPlan = sharedDemoPlan();
-    const demo = demoPlan.campaign;
+    const demo = { ...readCampaign(DEMO_CAMPAIGN), time: { mode: 'choose-nights', nights: 7 } as const };
+    const demoPlan = buildPlan(demo, { weatherTrials: 10 });
     const short = demoPlan.targets.filter((t) => t.kind === 'ephemeris' && t.kOverSigmaK! < t.goal!);
     expect(short.length).toBeGreaterThan(0);
     for (const t of short) {

@@ -47,11 +47,11 @@ describe('least-squares identities for K (docs/references.md [Visits-needed]; co
     }
   });
 
-  it('N ≈ 2(nσ/K)² at random phases and (nσ/K)² at quadratures, the fewest reaching K/σ_K = n', () => {
+  it('N = 2(nσ/K)² + 1 at random phases (E Σ(s − s̄)² = (N − 1)/2) and (nσ/K)² at quadratures, the fewest reaching K/σ_K = n', () => {
     for (const [k, sigma, n] of [[3, 2.5, 5], [1, 2.2, 3], [10, 1.5, 5], [0.8, 1.1, 7]] as const) {
       const random = visitsNeeded(k, sigma, n, 'random');
       const quad = visitsNeeded(k, sigma, n, 'quadrature');
-      expect(random).toBe(Math.max(MIN_VISITS, Math.ceil(2 * ((n * sigma) / k) ** 2)));
+      expect(random).toBe(Math.max(MIN_VISITS, Math.ceil(2 * ((n * sigma) / k) ** 2 + 1)));
       expect(quad).toBe(Math.max(MIN_VISITS, Math.ceil(((n * sigma) / k) ** 2)));
       for (const [layout, visits] of [['random', random], ['quadrature', quad]] as const) {
         expect(k / sigmaKMps(sigma, visits, layout)).toBeGreaterThanOrEqual(n - 1e-9);
@@ -135,12 +135,13 @@ describe('mass limits', () => {
   it('the smallest detectable mass gives back K = n σ_K through the forward K (round trip)', () => {
     const rows = massLimitTable({ starMassSun: 0.8, sigmaMps: 2.2, visits: 40, significance: 5, periodsDays: [1, 20, 700], ecc: 0.3 });
     for (const row of rows) {
-      expect(row.kMinRandomMps).toBeCloseTo(5 * 2.2 * Math.sqrt(2 / 40), 12);
+      expect(row.kMinRandomMps).toBeCloseTo(5 * 2.2 * Math.sqrt(2 / 39), 12);
       expect(row.kMinQuadratureMps).toBeCloseTo(5 * 2.2 / Math.sqrt(40), 12);
       const k = semiAmplitudeMps({ starMassSun: 0.8, planetMassEarth: row.massMinRandomEarth, periodDays: row.periodDays, ecc: 0.3 });
       expect(k).toBeCloseTo(row.kMinRandomMps, 9);
-      // Quadratures need 1/√2 of the K, hence (nearly) 1/√2 of the mass for small planets.
-      expect(row.massMinQuadratureEarth / row.massMinRandomEarth).toBeCloseTo(Math.SQRT1_2, 3);
+      // Quadratures need √((N − 1)/(2N)) of the K, hence (nearly) that fraction of the mass for small planets.
+      expect(row.massMinQuadratureEarth / row.massMinRandomEarth).toBeCloseTo(Math.sqrt(39 / 80), 3);
+      expect(row.mass50RandomEarth).toBeLessThan(row.mass90RandomEarth);
     }
     // m sin i ∝ P^(1/3) for a fixed K and m ≪ M★ (Cumming, Marcy & Butler 1999).
     expect(rows[1]!.massMinRandomEarth / rows[0]!.massMinRandomEarth).toBeCloseTo(Math.cbrt(20), 3);

@@ -12,14 +12,15 @@ describe('crest detect', () => {
     expect(r.stdout).toMatch(/logarithmic middle of 2-60 d/);
   });
 
-  it('--csv: one row per target; visits at random phases are about twice those at quadratures', () => {
+  it('--csv: one row per target; visits at random phases are twice those at quadratures, plus one ((N - 1)/2)', () => {
     const r = runCli(['detect', '--targets', DEMO, '--instrument', 'stable-2m', '--csv']);
     expect(r.status).toBe(0);
     const rows = parse(r.stdout, { columns: true }) as Record<string, string>[];
     expect(rows).toHaveLength(10);
     for (const row of rows) {
       const [random, quad] = [Number(row.visits5Random), Number(row.visits5Quadrature)];
-      expect(Math.abs(random - 2 * quad)).toBeLessThanOrEqual(2);
+      expect(Math.abs(random - 2 * quad - 1)).toBeLessThanOrEqual(2);
+      expect(Number(row.snrPerPixel)).toBeGreaterThan(0);
     }
   });
 

@@ -8,9 +8,10 @@ describe('crest precision', () => {
     const out = JSON.parse(r.stdout);
     const b = out.exposure.budget;
     const product = Object.values(b.factors as Record<string, number>).reduce((a, x) => a * x, 1);
-    expect(b.photonMps).toBeCloseTo(3.0 * product, 10); // stable-2m reference sigma 3 m/s
+    expect(b.photonMps).toBeCloseTo(1.43 * product, 10); // stable-2m reference sigma 1.43 m/s
     expect(b.factors.magnitude).toBeCloseTo(10 ** (0.2 * 2.5), 12);
-    expect(b.factors.exposure).toBeCloseTo(Math.sqrt(900 / 1200), 12);
+    expect(b.factors.exposure).toBeCloseTo(Math.sqrt(600 / 1200), 12);
+    expect(b.snrPerPixel).toBeGreaterThan(0);
     expect(b.effMps).toBeCloseTo(Math.hypot(b.photonMps, 1.5, 2.5), 10);
     expect(out.exposure.goal).toBe('fixed');
     expect(out.visitCostSec).toBe(1200 + 40 + 180);
@@ -21,6 +22,26 @@ describe('crest precision', () => {
     expect(r.status).toBe(0);
     expect(r.stdout).toMatch(/effective sigma/);
     expect(r.stdout).toMatch(/Warning: too faint/);
+  });
+
+  it('prints S/N per pixel, and the jitter with its source: a G star at v sin i 10 km/s gets 20-45 m/s ([Saar1998])', () => {
+    const r = runCli(['precision', '--instrument', 'stable-4m', '--vmag', '8', '--teff', '5800', '--vsini', '10', '--json']);
+    const out = JSON.parse(r.stdout);
+    expect(out.star.jitterMps).toBeGreaterThanOrEqual(20);
+    expect(out.star.jitterMps).toBeLessThanOrEqual(45);
+    expect(out.star.jitterSource).toMatch(/rotation \[Saar1998\]/);
+    const text = runCli(['precision', '--instrument', 'stable-4m', '--vmag', '8', '--teff', '5800', '--jitter', '3']);
+    expect(text.stdout).toMatch(/S\/N per pixel at 550 nm: \d+/);
+    expect(text.stdout).toMatch(/stellar jitter +3\.00 m\/s +as given/);
+  });
+
+  it('a hot star is refused in one line, a warm one warned about', () => {
+    const hot = runCli(['precision', '--instrument', 'stable-4m', '--vmag', '8', '--teff', '9500']);
+    expect(hot.status).toBe(2);
+    expect(hot.stderr.trim()).toMatch(/^crest: command line: teffK = 9500: outside 3000-8000 K, .*\(instrument stable-4m\)$/);
+    const warm = runCli(['precision', '--instrument', 'stable-4m', '--vmag', '8', '--teff', '7400']);
+    expect(warm.status).toBe(0);
+    expect(warm.stdout).toMatch(/Warning: Teff 7400 K is outside 3300-7000 K/);
   });
 
   it.each([

@@ -57,7 +57,9 @@ describe('targetDetectability', () => {
   it('at a planned N: Φ(K/σ_K − n) and the smallest detectable mass at the planet\'s period', () => {
     const d = targetDetectability(given, stable4m, { significance: 5, airmass: 1.2, visits: 30, periodsDays: [1, 10] });
     const at = d.atPlannedVisits!;
-    expect(at.sigmaKRandomMps).toBeCloseTo(d.sigmaMps * Math.sqrt(2 / 30), 12);
+    // σ_K² = σ_white² / E[S] + (floor/n)², E[S] = (N − 1)/2 at random phases.
+    expect(at.sigmaKRandomMps).toBeCloseTo(Math.sqrt((2 * d.whiteMps ** 2) / 29 + (stable4m.floorMps / 5) ** 2), 12);
+    expect(at.mass50RandomEarth!).toBeLessThan(at.mass90RandomEarth!);
     expect(at.massLimits).toHaveLength(2);
     const kMin = semiAmplitudeMps({ starMassSun: 0.85, planetMassEarth: at.massMinRandomEarth!, periodDays: 6.5, ecc: 0.3 });
     expect(kMin).toBeCloseTo(5 * at.sigmaKRandomMps, 9);
@@ -67,7 +69,19 @@ describe('targetDetectability', () => {
     const d = targetDetectability(tiny, stable4m, { significance: 5, airmass: 1.2 });
     expect(d.planet!.kMps).toBeLessThan(stable4m.floorMps);
     expect(d.verdict.level).toBe('out of reach');
-    expect(d.verdict.text).toMatch(/below the instrument floor of 0.5 m\/s, which does not average down/);
+    expect(d.verdict.text).toMatch(/below the instrument floor of 0.44 m\/s, which does not average down/);
+  });
+
+  it('the floor one way everywhere: no out-of-reach verdict beside a mass limit below the planet (issue 11)', () => {
+    for (const visits of [10, 100, 10_000]) {
+      const d = targetDetectability(tiny, stable4m, { significance: 5, airmass: 1.2, visits });
+      expect(d.verdict.level).toBe('out of reach');
+      expect(d.atPlannedVisits!.massMinRandomEarth!).toBeGreaterThan(d.planet!.massEarth!);
+      expect(d.atPlannedVisits!.mass50RandomEarth!).toBeGreaterThan(d.planet!.massEarth!);
+      expect(d.atPlannedVisits!.probabilityRandom!).toBeLessThan(0.01);
+      expect(5 * d.atPlannedVisits!.sigmaKRandomMps).toBeGreaterThan(stable4m.floorMps);
+      expect(d.needed.every((v) => v.random === Infinity)).toBe(true);
+    }
   });
 
   it(`says plainly when more than ${OUT_OF_REACH_VISITS} visits are needed`, () => {

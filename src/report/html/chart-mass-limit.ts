@@ -23,8 +23,9 @@ export interface MassLimit {
 
 /**
  * The smallest m sin i this plan can detect at each period, for one blind-search target: the
- * random-phase rule σ_K ≈ σ √(2/N) and K_min = n σ_K turned into a mass by the exact inverse of K,
- * from src/rv/detect.ts (massLimitTable). σ is the visits' equivalent per-visit σ with jitter.
+ * random-phase rule σ_K² = σ_white²/((N − 1)/2) + (σ_floor/n)² and K_min = n σ_K turned into a mass
+ * by the exact inverse of K, from src/rv/detect.ts (massLimitTable). σ is the visits' equivalent
+ * per-visit σ with jitter, the floor taken out of it and given apart.
  * Undefined with fewer visits than a fit needs.
  */
 export function searchMassLimit(plan: Plan, summary: TargetSummary, target: Target, periodsDays: number[]): MassLimit | undefined {
@@ -32,7 +33,10 @@ export function searchMassLimit(plan: Plan, summary: TargetSummary, target: Targ
   const sigmaMps = equivalentSigmaMps(visits);
   if (sigmaMps === undefined || visits.length < MIN_VISITS) return undefined;
   const significance = summary.goal ?? plan.campaign.goals.significance;
-  const rows = massLimitTable({ starMassSun: target.massSun, sigmaMps, visits: visits.length, significance, periodsDays });
+  // The floor does not average down: it is taken out of the per-visit σ and given apart (src/rv/detect.ts).
+  const floorMps = Math.min(plan.campaign.instrument.floorMps, sigmaMps);
+  const whiteMps = Math.sqrt(sigmaMps ** 2 - floorMps ** 2);
+  const rows = massLimitTable({ starMassSun: target.massSun, sigmaMps: whiteMps, floorMps, visits: visits.length, significance, periodsDays });
   return { sigmaMps, visits: visits.length, significance, rows };
 }
 

@@ -76,6 +76,7 @@ const visitSchema = z.looseObject({
   sigmaMps: num,
   sigmaEffMps: num.positive(),
   sigmaWhiteMps: num.positive(),
+  snrPerPixel: num,
 });
 
 const summarySchema = z.looseObject({
