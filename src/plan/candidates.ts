@@ -95,6 +95,8 @@ export function setupStars(campaign: Campaign, setups: TargetSetup[]): StarSetup
     const rowSetups = rows.map((t) => byId.get(t.id)!);
     // The star's visits take the exposure its hardest planet (smallest K) asks for; without planets, the first row's.
     const lead = rowSetups.filter((r) => r.role === 'ephemeris').sort((a, b) => a.kMps! - b.kMps!)[0] ?? rowSetups[0]!;
+    // Every row of the star is observed with that exposure.
+    for (const row of rowSetups) Object.assign(row, { exposure: lead.exposure, durationSec: lead.durationSec });
     const star: StarSetup = { starId, star: lead.target, rows: rowSetups, exposure: lead.exposure, durationSec: lead.durationSec, noise: starNoise(lead.target, campaign.noise.nightlyJitterFraction) };
     const goalOf = (t: Target) => t.goalSignificance ?? campaign.goals.significance;
     const planets = planetRows(rows).map((t) => ({ id: t.id, priority: t.priority, kMps: byId.get(t.id)!.kMps!, goal: goalOf(t) }));

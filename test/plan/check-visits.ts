@@ -83,7 +83,9 @@ export function checkVisits(plan: Plan): VisitCheck {
       violations.push(`${localDate}: visits on a night without a dark span`);
       continue;
     }
-    const targets = plan.campaign.targets.filter((t) => visits.some((v) => v.starId === t.id));
+    // One sky target per star (its first row carries the star fields), named by the star.
+    const stars = new Map(plan.campaign.targets.map((t) => [t.starId, t] as const).reverse());
+    const targets = [...stars.values()].filter((t) => visits.some((v) => v.starId === t.starId)).map((t) => ({ ...t, id: t.starId }));
     const spans = (windows: { targetId: string; start: Date; end: Date }[], id: string) =>
       joined(windows.filter((w) => w.targetId === id).map((w) => ({ startMs: w.start.getTime(), endMs: w.end.getTime() })));
     const eased = relaxed(site, constraints);

@@ -12,7 +12,7 @@ import { planFromJson } from '../../src/report/html/plan-from-json.js';
 import { CSV_ROUNDING, csvVisits, kOverSigmaKFromCsv, parsePlanCsv } from './recompute-k.js';
 
 /** Planets with an ephemeris in the demo's target list. */
-const EPHEMERIS_PLANETS = 8;
+const EPHEMERIS_PLANETS = 11;
 
 const OUTPUTS = ['plan.csv', 'plan.ics', 'plan.json', 'plan.md', 'report.html'];
 const read = (dir: string, name: string) => readFileSync(path.join(dir, name), 'utf8');

@@ -10,9 +10,10 @@ const names = Array.from({ length: RANDOM_CAMPAIGNS }, (_, i) => `random ${i}`);
 const plans = new Map<string, Plan>();
 const planOf = (name: string) => plans.get(name)!;
 
+// Fifty plans take about a minute on one core; the default hook limit is too tight on a loaded machine.
 beforeAll(() => {
   names.forEach((name, i) => plans.set(name, buildPlan(randomCampaign(i), { weatherTrials: WEATHER_TRIALS })));
-});
+}, 600_000);
 
 describe('the sample', () => {
   it('covers both hemispheres, all three time models, search targets and plans with many visits', () => {

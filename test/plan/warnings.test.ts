@@ -78,7 +78,7 @@ describe('goal not reached on the demo cut to 7 nights', () => {
     expect(short.length).toBeGreaterThan(0);
     for (const t of short) {
       const target = demo.targets.find((x) => x.id === t.targetId)!;
-      const exposureSec = demoPlan.visits.find((v) => v.starId === t.targetId)!.exposureSec;
+      const exposureSec = demoPlan.visits.find((v) => v.starId === t.starId)!.exposureSec;
       const sigma = visitPrecision(demo.instrument, target, exposureSec, 1.2).effMps;
       const n = Math.ceil((t.goal! * sigma / t.kMps!) ** 2);
       expect(t.warnings.join(' ')).toContain(`about ${n} visits at quadratures`);

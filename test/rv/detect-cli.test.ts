@@ -16,7 +16,7 @@ describe('crest detect', () => {
     const r = runCli(['detect', '--targets', DEMO, '--instrument', 'stable-2m', '--csv']);
     expect(r.status).toBe(0);
     const rows = parse(r.stdout, { columns: true }) as Record<string, string>[];
-    expect(rows).toHaveLength(10);
+    expect(rows).toHaveLength(13);
     for (const row of rows) {
       const [random, quad] = [Number(row.visits5Random), Number(row.visits5Quadrature)];
       expect(Math.abs(random - 2 * quad - 1)).toBeLessThanOrEqual(2);
