@@ -2,7 +2,7 @@
 // the readers (io) and the writers, which touch files only where their names say so.
 
 export type * from './model.js';
-export { InputError } from './errors.js';
+export { CrestError, InputError, OutputError, ValidationError } from './errors.js';
 
 // Input files
 export { readCampaign } from './io/campaign.js';

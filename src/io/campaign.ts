@@ -18,7 +18,7 @@ export const isoDate = z.preprocess(
   z.string({ error: 'a date as YYYY-MM-DD' }).refine((s) => /^\d{4}-\d{2}-\d{2}$/.test(s) && DateTime.fromISO(s).isValid, 'a date as YYYY-MM-DD'),
 );
 
-const constraintsSchema = z.strictObject({
+export const constraintsSchema = z.strictObject({
   twilight: z.enum(['civil', 'nautical', 'astronomical'], { error: 'one of civil, nautical, astronomical' }).default('nautical'),
   maxAirmass: z.number({ error: 'an airmass from 1 to 5' }).min(1, 'an airmass from 1 to 5').max(5, 'an airmass from 1 to 5').default(2),
   moonSeparationDeg: z.number({ error: 'degrees from 0 to 180' }).min(0, 'degrees from 0 to 180').max(180, 'degrees from 0 to 180').default(30),
@@ -29,15 +29,23 @@ const constraintsSchema = z.strictObject({
 /** The constraints a campaign gets when it gives none; commands that take them as flags share these. */
 export const DEFAULT_CONSTRAINTS: Constraints = constraintsSchema.parse({});
 
-const timeSchema = z.discriminatedUnion(
+export const timeSchema = z.discriminatedUnion(
   'mode',
   [
     z.strictObject({ mode: z.literal('choose-nights'), nights: z.number({ error: 'a whole number of nights, 1 to 366' }).int('a whole number of nights').min(1, 'at least 1 night').max(366, 'at most 366 nights') }),
-    z.strictObject({ mode: z.literal('given-nights'), dates: z.array(isoDate).min(1, 'at least one date') }),
+    z.strictObject({ mode: z.literal('given-nights'), dates: z.array(isoDate).min(1, 'at least one date').superRefine(eachDateOnce) }),
     z.strictObject({ mode: z.literal('hours'), hours: z.number({ error: 'a positive number of hours, at most 5000' }).positive('a positive number of hours').max(5000, 'at most 5000 hours') }),
   ],
   { error: 'mode is one of choose-nights, given-nights, hours' },
 );
+
+/** Given nights are a set: a date listed twice would be counted twice. */
+function eachDateOnce(dates: string[], ctx: z.RefinementCtx): void {
+  dates.forEach((date, i) => {
+    const first = dates.indexOf(date);
+    if (first !== i) ctx.addIssue({ code: 'custom', path: [i], message: `each date once (already given as dates[${first}])` });
+  });
+}
 
 /** Campaign file schema (DESIGN.md "Input files"). Paths are relative to the campaign file. */
 export const campaignSchema = z.strictObject({
@@ -51,7 +59,7 @@ export const campaignSchema = z.strictObject({
         .strictObject({ start: isoDate, end: isoDate })
         .refine((w) => w.start <= w.end, { path: ['end'], message: 'on or after window.start' })
         .refine((w) => DateTime.fromISO(w.end).diff(DateTime.fromISO(w.start), 'days').days <= 731, { path: ['end'], message: 'at most two years after window.start' }),
-      z.strictObject({ semester: z.string().regex(/^\d{4}[AB]$/, 'a semester such as 2027A or 2027B') }),
+      z.strictObject({ semester: z.string().regex(/^(19|2\d)\d\d[AB]$/, 'a semester such as 2027A or 2027B, years 1900 to 2999') }),
     ],
     { error: '{ start: YYYY-MM-DD, end: YYYY-MM-DD } or { semester: 2027A }' },
   ),

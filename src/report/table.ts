@@ -6,7 +6,8 @@ export interface Column {
 
 /** Renders rows as an aligned plain-text table with a rule under the header. */
 export function renderTable(columns: Column[], rows: string[][]): string {
-  const widths = columns.map((c, i) => Math.max(c.header.length, ...rows.map((r) => (r[i] ?? '').length)));
+  const widths = columns.map((c) => c.header.length);
+  for (const row of rows) for (let i = 0; i < widths.length; i++) widths[i] = Math.max(widths[i]!, (row[i] ?? '').length);
   const line = (cells: string[]) =>
     cells
       .map((cell, i) => (columns[i]!.align === 'right' ? cell.padStart(widths[i]!) : cell.padEnd(widths[i]!)))
