@@ -6,7 +6,7 @@ import type { Campaign, Constraints } from '../model.js';
 import { readInstrument } from './instrument.js';
 import { INSTRUMENTS_DIR, SITES_DIR } from './paths.js';
 import { readStructured } from './read-text.js';
-import { resolveRef } from './resolve.js';
+import { existingFile, resolveRef } from './resolve.js';
 import { readSite } from './site.js';
 import { semesterWindow } from './semester.js';
 import { readTargets } from './targets.js';
@@ -77,7 +77,7 @@ export function readCampaign(file: string): Campaign {
   const baseDir = path.dirname(path.resolve(file));
   const sitePath = resolveRef(c.site, SITES_DIR, 'site', { file, field: 'site', baseDir });
   const instrumentPath = resolveRef(c.instrument, INSTRUMENTS_DIR, 'instrument', { file, field: 'instrument', baseDir });
-  const targetsFile = path.resolve(baseDir, c.targets);
+  const targetsFile = existingFile(path.resolve(baseDir, c.targets), c.targets, 'target list', { file, field: 'targets' });
   const shown = (p: string) => path.relative(process.cwd(), p) || p;
   const site = readSite(shown(sitePath));
   const window = 'semester' in c.window ? semesterWindow(c.window.semester, site.semesters) : c.window;

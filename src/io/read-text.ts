@@ -9,6 +9,7 @@ const MAX_ALIASES = 100;
 
 /** Reads a whole text file, turning a missing or unreadable file into an input error. */
 export function readText(file: string, what: string): string {
+  if (file.trim() === '') throw inputError({ file: 'command line', field: what, value: file, allowed: 'a file name' });
   try {
     return readFileSync(file, 'utf8');
   } catch (err) {

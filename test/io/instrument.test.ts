@@ -37,7 +37,7 @@ describe('instrument profiles', () => {
   });
 
   it.each([
-    ['negative aperture', { apertureM: -1 }, /^i\.json: apertureM = -1: a positive number of metres$/],
+    ['negative aperture', { apertureM: -1 }, /^i\.json: apertureM = -1: 0.1 to 50 metres$/],
     ['reference magnitude out of range', { reference: { ...GOOD.reference, vmag: 25 } }, /^i\.json: reference\.vmag = 25: a V magnitude from -2 to 20$/],
     ['shortest exposure above the longest', { minExposureSec: 4000 }, /^i\.json: maxExposureSec = 3600: at least minExposureSec$/],
     ['a misspelt key', { floorMPS: 2 }, /^i\.json: floorMPS = 2: unknown key/],

@@ -1,5 +1,6 @@
 // The command line in-process: main(argv) from the build with stdout and stderr captured, so a
 // test can run thousands of cases without a subprocess each.
+import { format } from 'node:util';
 import { main } from '../../dist/cli/main.js';
 
 export interface MainResult {
@@ -24,14 +25,19 @@ export async function runMain(args: string[]): Promise<MainResult> {
     done?.();
     return true;
   }) as typeof process.stdout.write;
+  // The test runner replaces console's methods with its own, so they are caught here too.
+  const { log, error, warn } = console;
   process.stdout.write = capture(out);
   process.stderr.write = capture(err);
+  console.log = (...a: unknown[]) => void out.push(`${format(...a)}\n`);
+  console.error = console.warn = (...a: unknown[]) => void err.push(`${format(...a)}\n`);
   try {
     const status = await main(['node', 'crest', ...args]);
     return { status, stdout: out.join(''), stderr: err.join('') };
   } finally {
     process.stdout.write = writeOut;
     process.stderr.write = writeErr;
+    Object.assign(console, { log, error, warn });
     running = false;
   }
 }
