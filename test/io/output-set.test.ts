@@ -44,7 +44,8 @@ describe('output sets', () => {
     const dir = fresh();
     writeOutputSet(dir, OLD, []);
     killedAt(dir, 'moved plan.md');
-    expect(contents(dir)['plan.md']).toBe('new md'); // half moved: a reader must not see this
+    expect(readFileSync(path.join(dir, 'plan.md'), 'utf8')).toBe('new md'); // half moved: a reader must not see this
+    expect(readFileSync(path.join(dir, 'plan.csv'), 'utf8')).toBe('old csv');
     recoverBeforeReading(path.join(dir, 'plan.json'));
     expect(contents(dir)).toEqual(NEW);
   });
