@@ -72,14 +72,14 @@ export function mutateJson(text: string, rng: Rng): string {
   const data = JSON.parse(text) as unknown;
   const paths = keyPaths(data);
   const path = pick(rng, paths);
-  const parent = path.slice(0, -1).reduce<any>((node, key) => node[key], data);
+  const parent = path.slice(0, -1).reduce<any>((node, key) => node[key], data) as Record<string | number, unknown> & unknown[];
   const key = path[path.length - 1]!;
   const r = rng.uniform();
   if (r < 0.3) {
     if (Array.isArray(parent)) parent.splice(key as number, 1);
     else delete parent[key];
   } else if (r < 0.8) parent[key] = pick(rng, REPLACEMENTS);
-  else if (Array.isArray(parent)) parent.push(JSON.parse(JSON.stringify(parent[key])));
+  else if (Array.isArray(parent)) parent.push(JSON.parse(JSON.stringify(parent[key as number])));
   else parent[`${String(key)}X`] = parent[key];
   return JSON.stringify(data, null, rng.uniform() < 0.5 ? 2 : 0);
 }
