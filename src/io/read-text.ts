@@ -33,8 +33,8 @@ function checkText(file: string, what: string, text: string, kind: 'JSON' | 'YAM
 
 /**
  * Parses JSON or YAML (YAML is a superset of JSON). Every fault is an input error with its
- * line and column: syntax, duplicate keys, unknown tags or directives (YAML warnings), aliases
- * without an anchor, and more than MAX_ALIASES aliases.
+ * line and column: syntax, duplicate keys, unknown tags or directives (YAML warnings), and what
+ * checkNodes refuses.
  */
 export function readStructured(file: string, what: string): unknown {
   const text = readText(file, what);
@@ -43,7 +43,7 @@ export function readStructured(file: string, what: string): unknown {
   const doc = parseDocument(text, { prettyErrors: false, lineCounter: new LineCounter(), logLevel: 'silent', uniqueKeys: true });
   const fault = doc.errors[0] ?? doc.warnings[0];
   if (fault) throw syntaxError(file, text, fault.pos[0], kind, fault.message.split('\n')[0]!);
-  const firstAlias = checkAliases(file, text, doc);
+  const firstAlias = checkNodes(file, text, doc, kind);
   try {
     return doc.toJS({ maxAliasCount: MAX_ALIASES });
   } catch (err) {
@@ -52,8 +52,12 @@ export function readStructured(file: string, what: string): unknown {
   }
 }
 
-/** Refuses an alias without its anchor, or too many aliases; returns the offset of the first alias. */
-function checkAliases(file: string, text: string, doc: Document): number | undefined {
+/**
+ * Refuses what YAML allows but a Crest file never means: an alias without its anchor, more than
+ * MAX_ALIASES aliases, numbers written in hexadecimal or octal, and numbers beyond a double
+ * (`.inf`, `1e400`). Returns the offset of the first alias.
+ */
+function checkNodes(file: string, text: string, doc: Document, kind: string): number | undefined {
   let count = 0;
   let first: number | undefined;
   let fault: { offset: number; message: string } | undefined;
@@ -65,8 +69,15 @@ function checkAliases(file: string, text: string, doc: Document): number | undef
       else if (++count > MAX_ALIASES) fault = { offset, message: `more than ${MAX_ALIASES} aliases` };
       return fault ? visit.BREAK : undefined;
     },
+    Scalar(_key, node) {
+      const offset = node.range?.[0] ?? 0;
+      const source = text.slice(offset, node.range?.[1] ?? offset);
+      if (node.format === 'HEX' || node.format === 'OCT') fault = { offset, message: `${source} is not a decimal number` };
+      else if (typeof node.value === 'number' && !Number.isFinite(node.value)) fault = { offset, message: `${source} is not a finite number` };
+      return fault ? visit.BREAK : undefined;
+    },
   });
-  if (fault) throw syntaxError(file, text, fault.offset, 'YAML', fault.message);
+  if (fault) throw syntaxError(file, text, fault.offset, kind, fault.message);
   return first;
 }
 
