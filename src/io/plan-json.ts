@@ -145,7 +145,7 @@ const planSchema = z
  */
 export function planFromJson(data: unknown, file: string): Plan {
   if (data === null || typeof data !== 'object' || Array.isArray(data)) {
-    throw inputError({ file, field: '(top level)', value: Array.isArray(data) ? '[...]' : data, allowed: NOT_A_PLAN });
+    throw inputError({ file, field: '(file)', value: Array.isArray(data) ? '[...]' : data, allowed: NOT_A_PLAN });
   }
   const result = planSchema.safeParse(data);
   if (!result.success) throw issueToError(file, data, result.error);
@@ -155,5 +155,5 @@ export function planFromJson(data: unknown, file: string): Plan {
 /** Reads and checks a plan.json written by `crest plan`. */
 export function readPlan(file: string): Plan {
   recoverBeforeReading(file);
-  return planFromJson(readJson(file, 'plan.json written by crest plan'), file);
+  return planFromJson(readJson(file, 'plan file'), file);
 }
