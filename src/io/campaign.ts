@@ -12,10 +12,18 @@ import { semesterWindow } from './semester.js';
 import { readTargets } from './targets.js';
 import { issueToError } from './zod-issue.js';
 
+/** Years a campaign may lie in: the command-line dates' range (src/cli/nights.ts). */
+const FIRST_YEAR = 1900;
+const LAST_YEAR = 2100;
+const DATE_ALLOWED = `a date as YYYY-MM-DD, years ${FIRST_YEAR} to ${LAST_YEAR}`;
+
 /** A calendar date, ISO 8601 (YAML may hand us a Date for an unquoted date). */
 export const isoDate = z.preprocess(
-  (v) => (v instanceof Date ? v.toISOString().slice(0, 10) : v),
-  z.string({ error: 'a date as YYYY-MM-DD' }).refine((s) => /^\d{4}-\d{2}-\d{2}$/.test(s) && DateTime.fromISO(s).isValid, 'a date as YYYY-MM-DD'),
+  (v) => (v instanceof Date && !Number.isNaN(v.getTime()) ? v.toISOString().slice(0, 10) : v),
+  z.string({ error: DATE_ALLOWED }).refine((s) => {
+    const date = DateTime.fromISO(s);
+    return /^\d{4}-\d{2}-\d{2}$/.test(s) && date.isValid && date.year >= FIRST_YEAR && date.year <= LAST_YEAR;
+  }, DATE_ALLOWED),
 );
 
 export const constraintsSchema = z.strictObject({
@@ -59,7 +67,7 @@ export const campaignSchema = z.strictObject({
         .strictObject({ start: isoDate, end: isoDate })
         .refine((w) => w.start <= w.end, { path: ['end'], message: 'on or after window.start' })
         .refine((w) => DateTime.fromISO(w.end).diff(DateTime.fromISO(w.start), 'days').days <= 731, { path: ['end'], message: 'at most two years after window.start' }),
-      z.strictObject({ semester: z.string().regex(/^(19|2\d)\d\d[AB]$/, 'a semester such as 2027A or 2027B, years 1900 to 2999') }),
+      z.strictObject({ semester: z.string().regex(/^(19\d\d|20\d\d|2100)[AB]$/, `a semester such as 2027A or 2027B, years ${FIRST_YEAR} to ${LAST_YEAR}`) }),
     ],
     { error: '{ start: YYYY-MM-DD, end: YYYY-MM-DD } or { semester: 2027A }' },
   ),

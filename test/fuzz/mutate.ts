@@ -6,7 +6,7 @@ import type { Rng } from '../../src/rv/random.js';
 /** Awkward numbers and words: the edges of doubles, other bases, and number look-alikes. */
 export const AWKWARD = [
   '0', '-0', '-1', '1e309', '-1e309', '5e-324', '1e-209', '1e300', 'NaN', 'Infinity', '-Infinity', '0x10', '0b11', '1_000',
-  '9007199254740993', '2.4e6', '2461000.5', '99999', '10000', '', ' ', '1,5', '١٢', '1e', '.', '+', '--1', 'null', 'true',
+  '9007199254740993', '9999', '0001', '2.4e6', '2461000.5', '99999', '10000', '', ' ', '1,5', '١٢', '1e', '.', '+', '--1', 'null', 'true',
 ];
 /** Stray characters: delimiters, quotes and YAML indicators. */
 const STRAY = ['"', "'", ',', '#', '\n', '\r', '\t', '[', ']', '{', '}', ':', '&a', '*a', '!tag ', '|', '>', '%', '@', '\u0000', '\u00e9', '\ufeff', '\\'];
