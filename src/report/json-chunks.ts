@@ -12,11 +12,11 @@ const omitted = (value: unknown) => value === undefined || typeof value === 'fun
 
 /**
  * The text of JSON.stringify(value, null, 2), in pieces of about `pieceChars` characters, no
- * piece longer than the longest leaf. Walks the top `depth` levels; deeper values are whole leaves.
+ * piece longer than the longest leaf. Throws on a number that is not finite (NaN, ±Infinity). Walks the top `depth` levels; deeper values are whole leaves.
  */
 export function* jsonChunks(value: unknown, pieceChars = 1 << 16, depth = 3): Generator<string> {
   let buffer = '';
-  for (const part of parts(value, '', depth)) {
+  for (const part of parts(value, '', depth, '')) {
     buffer += part;
     if (buffer.length >= pieceChars) {
       yield buffer;
@@ -26,9 +26,16 @@ export function* jsonChunks(value: unknown, pieceChars = 1 << 16, depth = 3): Ge
   if (buffer) yield buffer;
 }
 
-function* parts(value: unknown, pad: string, depth: number): Generator<string> {
+/** JSON would write NaN and ±Infinity as null, silently: a number that is not finite is a fault. */
+const finiteOnly = (where: string) =>
+  function check(key: string, value: unknown): unknown {
+    if (typeof value === 'number' && !Number.isFinite(value)) throw new Error(`JSON output: ${key || where || 'a value'} is ${value}`);
+    return value;
+  };
+
+function* parts(value: unknown, pad: string, depth: number, where: string): Generator<string> {
   if (depth === 0 || !walked(value)) {
-    yield (JSON.stringify(value, null, 2) ?? 'null').replace(/\n/g, `\n${pad}`);
+    yield (JSON.stringify(value, finiteOnly(where), 2) ?? 'null').replace(/\n/g, `\n${pad}`);
     return;
   }
   const inner = pad + INDENT;
@@ -44,7 +51,7 @@ function* parts(value: unknown, pad: string, depth: number): Generator<string> {
   for (let i = 0; i < entries.length; i++) {
     const [key, v] = entries[i]!;
     yield `${i ? ',' : ''}\n${inner}${key === undefined ? '' : `${JSON.stringify(key)}: `}`;
-    yield* parts(v, inner, depth - 1);
+    yield* parts(v, inner, depth - 1, key ?? where);
   }
   yield `\n${pad}${close}`;
 }

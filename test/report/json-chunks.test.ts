@@ -25,3 +25,9 @@ describe('jsonChunks', () => {
     expect(Math.max(...pieces.map((p) => p.length))).toBeLessThan(2000);
   });
 });
+
+describe('jsonChunks and numbers that are not finite', () => {
+  it.each([NaN, Infinity, -Infinity])('refuses %s rather than write null', (bad) => {
+    expect(() => [...jsonChunks({ targets: [{ id: 'Star-1', kMps: bad }] })].join('')).toThrow(/kMps is/);
+  });
+});
