@@ -2,10 +2,10 @@
 // fuzz test's valid inputs, changes what it names, and must pass the fuzz checks with an exit
 // status of 2 and the expected one-line message. Add a file here for every failure the fuzz
 // test finds, once it is fixed.
-import { mkdtempSync, readdirSync, readFileSync } from 'node:fs';
+import { mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
-import { describe, expect, it } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 import { CAMPAIGN_YAML, INSTRUMENT_JSON, PLAN_JSON, RV_CSV, SITE_JSON, TARGETS_CSV } from './bases.js';
 import { caseFaults, runCase, type FuzzCase } from './fuzz-case.js';
 
@@ -53,6 +53,7 @@ function fuzzCase(c: CorpusCase): FuzzCase {
 
 describe('fuzz corpus: past failures stay fixed', () => {
   const root = mkdtempSync(path.join(tmpdir(), 'crest-corpus-'));
+  afterAll(() => rmSync(root, { recursive: true, force: true }));
   it.each(cases.map((c) => [c.name, c] as const))('%s', async (name, c) => {
     const fc = fuzzCase(c);
     const dir = path.join(root, name);

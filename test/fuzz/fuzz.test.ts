@@ -3,10 +3,10 @@
 // Infinity in an output, a changed input or a left-over temporary file (test/fuzz/fuzz-case.ts).
 // Most cases stop before planning (an --out naming an existing file is refused after the inputs
 // are read); every FULL_EVERY-th case of a kind runs to the end.
-import { mkdtempSync } from 'node:fs';
+import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
-import { describe, expect, it } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 import { createRng, type Rng } from '../../src/rv/random.js';
 import { CAMPAIGN_YAML, INSTRUMENT_JSON, PLAN_JSON, RV_CSV, SITE_JSON, TARGETS_CSV } from './bases.js';
 import { caseFaults, describeFailure, runCase, type FuzzCase } from './fuzz-case.js';
@@ -137,6 +137,7 @@ const KINDS: Kind[] = [
 
 describe('fuzz: mutated inputs never end in an internal error, NaN, a bare or multi-line message, or a changed input', () => {
   const root = mkdtempSync(path.join(tmpdir(), 'crest-fuzz-'));
+  afterAll(() => rmSync(root, { recursive: true, force: true }));
   KINDS.forEach((kind, k) => {
     it(`${kind.name}: ${kind.cases} seeded cases`, async () => {
       const rng = createRng(1700 + k);

@@ -1,14 +1,15 @@
 // Large inputs: long series, long lists and deep nesting must end in a result or one located
 // line, never in a stack overflow (argument spreads into Math.min, recursive parsers).
-import { mkdtempSync } from 'node:fs';
+import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
-import { describe, expect, it } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 import { renderTable } from '../../src/report/table.js';
 import { CAMPAIGN_YAML, INSTRUMENT_JSON, SITE_JSON } from './bases.js';
 import { caseFaults, runCase, type FuzzCase } from './fuzz-case.js';
 
 const root = mkdtempSync(path.join(tmpdir(), 'crest-size-'));
+afterAll(() => rmSync(root, { recursive: true, force: true }));
 
 async function passes(name: string, c: FuzzCase) {
   const dir = path.join(root, name);
