@@ -46,5 +46,6 @@ export function checkOutFolder(outDir: string, names: string[], inputs: string[]
   const protectedPaths = new Set(inputs.map(real));
   for (const file of names.map((name) => path.join(outDir, name))) {
     if (protectedPaths.has(real(file))) throw outputError(outDir, `a folder where no input file would be overwritten (${file} is an input)`);
+    if (existsSync(file) && !statSync(file).isFile()) throw outputError(outDir, `a folder where ${path.basename(file)} can be written (${file} is not a file)`);
   }
 }

@@ -54,9 +54,13 @@ export function recoverOutputSets(outDir: string): void {
   } catch {
     return;
   }
-  for (const name of names.filter((n) => n.startsWith(COMMIT)).sort()) finishCommit(outDir, path.join(outDir, name));
-  for (const name of names.filter((n) => n.startsWith(STAGING))) {
-    if (!alive(pidOf(name))) rmSync(path.join(outDir, name), { recursive: true, force: true });
+  try {
+    for (const name of names.filter((n) => n.startsWith(COMMIT)).sort()) finishCommit(outDir, path.join(outDir, name));
+    for (const name of names.filter((n) => n.startsWith(STAGING))) {
+      if (!alive(pidOf(name))) rmSync(path.join(outDir, name), { recursive: true, force: true });
+    }
+  } catch (err) {
+    throw outputError(outDir, `a folder where the files of an interrupted run can be put in place (${fileErrorReason(err)})`);
   }
 }
 

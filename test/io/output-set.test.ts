@@ -99,3 +99,11 @@ describe('the out folder, checked before any computation', () => {
     expect(() => checkOutFolder(locked, ['plan.md'], [])).toThrow(/a folder Crest can write in \(EACCES\)$/);
   });
 });
+
+describe('the out folder: a named output that is a folder', () => {
+  it('is refused before any computation', () => {
+    const dir = fresh();
+    mkdirSync(path.join(dir, 'plan.md'));
+    expect(() => checkOutFolder(dir, ['plan.md'], [])).toThrow(/a folder where plan\.md can be written \(.*plan\.md is not a file\)$/);
+  });
+});
