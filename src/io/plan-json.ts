@@ -6,6 +6,7 @@ import { instrumentSchema } from './instrument.js';
 import { recoverBeforeReading } from './output-set.js';
 import { readJson } from './read-text.js';
 import { siteSchema } from './site.js';
+import { slug } from './slug.js';
 import { issueToError } from './zod-issue.js';
 
 // The one reader of a saved plan.json (`crest report`, `crest map`): every field of the Plan is
@@ -129,6 +130,13 @@ const planSchema = z
   })
   .superRefine((plan, ctx) => {
     const ids = new Set(plan.campaign.targets.map((t) => t.id));
+    // Ids name output files (map-<id>.svg): two may not differ only in case or punctuation.
+    const bySlug = new Map<string, string>();
+    plan.campaign.targets.forEach((t, i) => {
+      const earlier = bySlug.get(slug(t.id));
+      if (earlier !== undefined) ctx.addIssue({ code: 'custom', path: ['campaign', 'targets', i, 'id'], message: `an id that differs from ${JSON.stringify(earlier)} in more than case or punctuation` });
+      bySlug.set(slug(t.id), t.id);
+    });
     const known = `a target id of campaign.targets`;
     plan.visits.forEach((v, i) => {
       if (!ids.has(v.targetId)) ctx.addIssue({ code: 'custom', path: ['visits', i, 'targetId'], message: known });

@@ -16,8 +16,8 @@ interface CorpusCase {
   /** Keys merged into the valid site file or instrument profile. */
   site?: Record<string, unknown>;
   instrument?: Record<string, unknown>;
-  /** Key paths removed from a valid JSON file. */
-  deleteKeys?: Record<string, (string | number)[][]>;
+  /** Edits of a valid JSON file: the value at a key path replaced, or the key removed when no value is given. */
+  jsonEdits?: Record<string, { path: (string | number)[]; value?: unknown }[]>;
   args: string[];
   /** The message, as a regular expression. */
   expect: string;
@@ -28,11 +28,13 @@ const cases = readdirSync(CORPUS)
   .filter((name) => name.endsWith('.json'))
   .map((name) => JSON.parse(readFileSync(path.join(CORPUS, name), 'utf8')) as CorpusCase);
 
-function withoutKeys(text: string, paths: (string | number)[][]): string {
+function edited(text: string, edits: { path: (string | number)[]; value?: unknown }[]): string {
   const data = JSON.parse(text);
-  for (const keyPath of paths) {
-    const parent = keyPath.slice(0, -1).reduce((node, key) => node[key], data);
-    delete parent[keyPath[keyPath.length - 1]!];
+  for (const edit of edits) {
+    const parent = edit.path.slice(0, -1).reduce((node, key) => node[key], data);
+    const key = edit.path[edit.path.length - 1]!;
+    if ('value' in edit) parent[key] = edit.value;
+    else delete parent[key];
   }
   return JSON.stringify(data, null, 2);
 }
@@ -47,7 +49,7 @@ function fuzzCase(c: CorpusCase): FuzzCase {
     'plan.json': PLAN_JSON,
     ...c.files,
   };
-  for (const [name, paths] of Object.entries(c.deleteKeys ?? {})) files[name] = withoutKeys(files[name]!, paths);
+  for (const [name, edits] of Object.entries(c.jsonEdits ?? {})) files[name] = edited(files[name]!, edits);
   return { files, args: c.args };
 }
 
