@@ -2,7 +2,7 @@
 // the readers (io) and the writers, which touch files only where their names say so.
 
 export type * from './model.js';
-export { InputError } from './errors.js';
+export { CrestError, InputError, OutputError, ValidationError } from './errors.js';
 
 // Input files
 export { readCampaign } from './io/campaign.js';
@@ -11,6 +11,7 @@ export { readInstrument, parseInstrument } from './io/instrument.js';
 export { readTargets, parseTargets } from './io/targets.js';
 export { readRvSeries, parseRvSeries } from './io/rv-series.js';
 export { readBundledSites } from './io/site-list.js';
+export { readPlan, planFromJson } from './io/plan-json.js';
 
 // Orbits
 export { semiAmplitudeMps } from './orbit/semi-amplitude.js';
@@ -57,3 +58,5 @@ export { renderPlanCsv } from './report/plan-csv.js';
 export { renderPlanJson } from './report/plan-json.js';
 export { renderPlanIcs } from './report/plan-ics.js';
 export { renderReportHtml } from './report/html/report-html.js';
+export { checkOutFolder } from './io/out-folder.js';
+export { writeOutputSet, recoverOutputSets } from './io/output-set.js';

@@ -1,4 +1,5 @@
 // Airmass from the apparent altitude.
+import { validationError } from '../errors.js';
 
 /**
  * Kasten & Young 1989 (Applied Optics 28, 4735):
@@ -16,7 +17,7 @@ export function kastenYoungAirmass(apparentAltitudeDeg: number): number {
  * formula is monotone in altitude, so bisection to 1e-9 deg.
  */
 export function altitudeForAirmassDeg(airmass: number): number {
-  if (!(airmass >= 1)) throw new RangeError(`airmass must be at least 1, got ${airmass}`);
+  if (!(airmass >= 1)) throw validationError('airmass', airmass, 'at least 1');
   let lo = -6.07995;
   let hi = 90;
   if (kastenYoungAirmass(hi) >= airmass) return hi;

@@ -163,7 +163,7 @@ export function registerDetect(program: Command): Command {
     .option('--significance <N>', 'K/sigma_K to reach', numberFlag('--significance', 'a number from 1 to 50', 1, 50), 5)
     .option('--visits <N>', 'a planned number of visits: detection probability and mass limits at that N', numberFlag('--visits', 'a whole number from 2 to 100000', 2, 1e5, { integer: true }))
     .option('--planet-mass <MEARTH>', 'hypothetical planet around every star: m sin i (Earth masses)', numberFlag('--planet-mass', 'Earth masses, more than 0 and at most 30000', 0, 3e4, { exclusiveMin: true }))
-    .option('--period <DAYS>', 'hypothetical planet: orbital period (days)', numberFlag('--period', 'days, more than 0 and at most 100000', 0, 1e5, { exclusiveMin: true }))
+    .option('--period <DAYS>', 'hypothetical planet: orbital period (days)', numberFlag('--period', 'days, from 0.01 to 100000', 0.01, 1e5))
     .option('--ecc <E>', 'hypothetical planet: eccentricity (default 0)', numberFlag('--ecc', 'an eccentricity from 0 to 0.99', 0, 0.99));
   addStarFlags(command);
   addExposureFlags(command);

@@ -1,10 +1,12 @@
 import { CommanderError } from 'commander';
-import { InputError } from '../errors.js';
+import { CrestError } from '../errors.js';
 import { buildProgram } from './program.js';
 
 /**
- * Runs the command line and returns the exit status: 0 success, 2 bad input (one line on
- * stderr, no stack trace), 1 internal fault (stack trace only with --debug).
+ * Runs the command line and returns the exit status: 0 success, 2 bad input or an output that
+ * cannot be written (one line on stderr, no stack trace), 1 internal fault (stack trace only
+ * with --debug). It never calls process.exit, so a test can call it in-process with any argv
+ * (argv[0] and argv[1] are node and the script, as in process.argv).
  */
 export async function main(argv: string[]): Promise<number> {
   const debug = argv.includes('--debug');
@@ -17,12 +19,13 @@ export async function main(argv: string[]): Promise<number> {
       if (err.code === 'commander.helpDisplayed' || err.code === 'commander.version' || err.exitCode === 0) return 0;
       return 2; // commander has already printed its one-line message
     }
-    if (err instanceof InputError) {
+    if (err instanceof CrestError) {
       process.stderr.write(`crest: ${err.message}\n`);
       if (debug) process.stderr.write(`${err.stack}\n`);
       return 2;
     }
-    process.stderr.write(`crest: internal error: ${(err as Error).message ?? String(err)}\n`);
+    const message = err instanceof Error ? err.message : String(err);
+    process.stderr.write(`crest: internal error: ${message.split('\n')[0]}\n`);
     if (debug) process.stderr.write(`${(err as Error).stack}\n`);
     else process.stderr.write('crest: run again with --debug for the stack trace, and report it.\n');
     return 1;

@@ -3,7 +3,7 @@
 // of the plan's blind-search targets, so mapping one target keeps the maps made before.
 import { existsSync, readFileSync } from 'node:fs';
 import path from 'node:path';
-import { slug } from '../io/write-outputs.js';
+import { slug } from '../io/slug.js';
 import type { Plan } from '../model.js';
 import type { DetectionMapData } from '../report/html/chart-detection-map.js';
 import { renderReportHtml } from '../report/html/report-html.js';

@@ -1,6 +1,7 @@
 // Which targets of a plan `crest map` maps, and the inputs of each map: the planned visits'
 // mid-exposure BJD_TDB and σ_eff (jitter included), the star's mass, and log-spaced axes.
 import { inputError } from '../errors.js';
+import { extent } from '../extent.js';
 import type { Ephemeris, Plan, PlannedVisit, Target } from '../model.js';
 import { planetMassFromKEarth } from '../orbit/minimum-mass.js';
 import { visitsOf } from '../report/html/target-visits.js';
@@ -47,8 +48,8 @@ function axes(settings: MapSettings, periods: [number, number], masses: [number,
 }
 
 function base(target: Target, visits: PlannedVisit[]): JobBase {
-  const times = visits.map((v) => v.midBjdTdb);
-  return { targetId: target.id, visits: visits.length, baselineDays: Math.max(...times) - Math.min(...times), starMassSun: target.massSun };
+  const times = extent(visits.map((v) => v.midBjdTdb));
+  return { targetId: target.id, visits: visits.length, baselineDays: times.max - times.min, starMassSun: target.massSun };
 }
 
 /** The planet's m sin i: given, or from its K at the ephemeris period (exact inverse of K). */

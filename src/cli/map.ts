@@ -1,10 +1,12 @@
 import path from 'node:path';
 import type { Command } from 'commander';
 import { inputError } from '../errors.js';
-import { readStructured } from '../io/read-text.js';
-import { slug, writeOutputs } from '../io/write-outputs.js';
+import { extent } from '../extent.js';
+import { readPlan } from '../io/plan-json.js';
+import { slug } from '../io/slug.js';
+import { checkOutFolder } from '../io/out-folder.js';
+import { writeOutputSet } from '../io/output-set.js';
 import { detectionMapFigure, type DetectionMapData } from '../report/html/chart-detection-map.js';
-import { planFromJson } from '../report/html/plan-from-json.js';
 import { renderSvg } from '../report/html/vega-svg.js';
 import { toCsv } from '../report/csv.js';
 import { fmt, percent } from '../report/table.js';
@@ -12,6 +14,7 @@ import { DEFAULT_FAP_THRESHOLD } from '../rv/injection.js';
 import { levelRows, type LevelRow } from '../rv/injection-map.js';
 import { injectionRecoveryParallel } from '../rv/injection-worker-pool.js';
 import { knownPhaseMapAnalytic, knownPhaseMapSimulated } from '../rv/known-phase-map.js';
+import { checkMapBudget } from './map-budget.js';
 import { mapDataFile, reportWithMaps } from './map-report.js';
 import { mapJobs, type MapJob, type MapSettings } from './map-targets.js';
 import { levelTableText, mapTableText } from './map-text.js';
@@ -91,7 +94,7 @@ async function runJob(job: MapJob, settings: MapSettings, threads: number | unde
     analytic: knownPhaseMapAnalytic({ ...job.input, ...planetMass }).detection[0]![0]!,
     simulated: knownPhaseMapSimulated({ ...simulatedInput, ...planetMass }).detection[0]![0]!,
   };
-  const maxDifference = Math.max(...analytic.detection.flatMap((row, i) => row.map((p, j) => Math.abs(p - simulated.detection[i]![j]!))));
+  const maxDifference = extent(analytic.detection.flatMap((row, i) => row.map((p, j) => Math.abs(p - simulated.detection[i]![j]!)))).max;
   const method =
     `Known phase from the ephemeris (Tc fixed; rows other than P = ${fmt(job.ephemeris.periodDays, 4)} d ask "had the period been P"), ` +
     `${job.visits} planned visits, circular orbits; detected when K̂/σ_K > ${job.input.significance}. ` +
@@ -158,19 +161,23 @@ const jsonLevels = (levels: LevelRow[]) =>
   levels.map((r) => ({ periodDays: r.periodDays, ...Object.fromEntries(r.levels.map((l) => [`mass${Math.round(l.level * 100)}`, l.mass])) }));
 
 async function runMap(opts: MapFlags): Promise<void> {
-  const plan = planFromJson(readStructured(opts.plan, 'plan file'), opts.plan);
+  const plan = readPlan(opts.plan);
   const settings: MapSettings = {
     periods: opts.periods, masses: opts.masses, grid: opts.grid ?? DEFAULT_GRID,
     trialsPerCell: opts.trials, fapThreshold: opts.fap, seed: opts.seed ?? plan.campaign.seed, eccMax: opts.eccMax,
   };
   const { jobs, skipped } = mapJobs(plan, settings, opts.target);
+  checkMapBudget(jobs, settings);
+  const outDir = opts.out ?? path.dirname(opts.plan);
+  const svgName = (targetId: string) => `map-${slug(targetId)}.svg`;
+  const names = jobs.flatMap((j) => (j.kind === 'search' ? [svgName(j.targetId), mapDataFile(j.targetId)] : [svgName(j.targetId)]));
+  checkOutFolder(outDir, [...names, 'report.html'], [opts.plan]);
   const progress = stderrProgress();
   const results: MapResult[] = [];
   for (const job of jobs) {
     const result = await runJob(job, settings, opts.threads, progress);
-    results.push({ ...result, svg: `map-${slug(job.targetId)}.svg` });
+    results.push({ ...result, svg: svgName(job.targetId) });
   }
-  const outDir = opts.out ?? path.dirname(opts.plan);
   const files: Record<string, string> = {};
   for (const r of results) {
     const figure = detectionMapFigure(r.chart);
@@ -180,7 +187,7 @@ async function runMap(opts: MapFlags): Promise<void> {
   for (const map of searchMaps) files[mapDataFile(map.targetId)] = `${JSON.stringify(map)}\n`;
   const report = await reportWithMaps(plan, outDir, searchMaps);
   if (report !== undefined) files['report.html'] = report;
-  const written = writeOutputs(outDir, files, [opts.plan]);
+  const written = writeOutputSet(outDir, files, [opts.plan]);
   if (opts.csv) return void process.stdout.write(csvText(results));
   if (!opts.json) return printText(results, skipped, written, opts.target !== undefined);
   printJson({

@@ -1,11 +1,12 @@
 import { inputError } from '../errors.js';
+import { parseDecimal } from '../io/decimal.js';
+import { jsonChunks } from '../report/json-chunks.js';
 
 /** A commander argument parser for a number flag in [min, max]; bad values are input errors. */
 export function numberFlag(flag: string, allowed: string, min: number, max: number, opts: { exclusiveMin?: boolean; integer?: boolean } = {}) {
   return (text: string): number => {
-    const value = Number(text);
+    const value = parseDecimal(text);
     const ok =
-      text.trim() !== '' &&
       Number.isFinite(value) &&
       (opts.exclusiveMin ? value > min : value >= min) &&
       value <= max &&
@@ -25,7 +26,8 @@ export function choiceFlag<T extends string>(flag: string, choices: readonly T[]
   };
 }
 
-/** Prints one JSON document on stdout. */
+/** Prints one JSON document on stdout, in pieces (a document may be longer than a string can be). */
 export function printJson(value: unknown): void {
-  process.stdout.write(`${JSON.stringify(value, null, 2)}\n`);
+  for (const piece of jsonChunks(value)) process.stdout.write(piece);
+  process.stdout.write('\n');
 }

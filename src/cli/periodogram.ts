@@ -1,5 +1,6 @@
 import type { Command } from 'commander';
 import { inputError } from '../errors.js';
+import { extent } from '../extent.js';
 import { readRvSeries, type RvSeries } from '../io/rv-series.js';
 import { fmt, renderTable } from '../report/table.js';
 import { baselineDays, DEFAULT_MAX_PERIOD_PER_BASELINE, DEFAULT_MIN_PERIOD_DAYS, DEFAULT_OVERSAMPLE } from '../rv/frequency-grid.js';
@@ -55,7 +56,7 @@ function checkedRange(series: RvSeries, opts: PeriodogramOptions) {
 
 function printText(series: RvSeries, search: PeriodogramSearch): void {
   const { grid } = search;
-  const first = Math.min(...series.timesBjd);
+  const first = extent(series.timesBjd).min;
   console.log(`RV series: ${series.file}`);
   console.log(`  ${series.timesBjd.length} visits over ${fmt(grid.baselineDays, 1)} days (BJD_TDB ${fmt(first, 3)} to ${fmt(first + grid.baselineDays, 3)})`);
   console.log(`  median sigma ${fmt(median(series.sigmaMps), 2)} m/s; weighted rms about the mean ${fmt(weightedRmsMps(series), 2)} m/s`);
@@ -95,7 +96,7 @@ export function registerPeriodogram(program: Command): Command {
         file,
         visits: series.timesBjd.length,
         baselineDays: grid.baselineDays,
-        firstBjd: Math.min(...series.timesBjd),
+        firstBjd: extent(series.timesBjd).min,
         medianSigmaMps: median(series.sigmaMps),
         weightedRmsMps: weightedRmsMps(series),
         grid: { minPeriodDays: grid.minPeriodDays, maxPeriodDays: grid.maxPeriodDays, oversample: grid.oversample, frequencies: grid.count, stepPerDay: grid.stepPerDay },

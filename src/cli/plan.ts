@@ -4,7 +4,9 @@ import { inputError } from '../errors.js';
 import type { Campaign } from '../model.js';
 import { readCampaign } from '../io/campaign.js';
 import { DEMO_CAMPAIGN } from '../io/paths.js';
-import { checkOutputs, slug, writeOutputs } from '../io/write-outputs.js';
+import { checkOutFolder } from '../io/out-folder.js';
+import { writeOutputSet } from '../io/output-set.js';
+import { slug } from '../io/slug.js';
 import { buildPlan } from '../plan/build-plan.js';
 import { renderReportHtml } from '../report/html/report-html.js';
 import { renderPlanCsv } from '../report/plan-csv.js';
@@ -47,10 +49,10 @@ export function registerPlan(program: Command): Command {
       const campaign = withNights(readCampaign(campaignFile), opts.nights);
       const outDir = opts.out ?? path.join('crest-out', slug(campaign.name));
       const inputs = [campaignFile, campaign.targetsFile, campaign.site.file, campaign.instrument.file];
-      checkOutputs(outDir, PLAN_FILES, inputs);
+      checkOutFolder(outDir, PLAN_FILES, inputs);
       const plan = buildPlan(campaign, { seed: opts.seed });
       const json = renderPlanJson(plan);
-      const written = writeOutputs(
+      const written = writeOutputSet(
         outDir,
         { 'plan.md': renderPlanMarkdown(plan), 'plan.csv': renderPlanCsv(plan), 'plan.json': json, 'plan.ics': renderPlanIcs(plan), 'report.html': await renderReportHtml(plan) },
         inputs,

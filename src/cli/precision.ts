@@ -79,7 +79,7 @@ export function starFromFlags(flags: StarFlags, id: string): DetectStar {
 /** Exposure and σ flags shared by `crest precision` and `crest detect`. */
 export function addExposureFlags(command: Command): Command {
   return command
-    .option('--exposure <SEC>', 'fixed exposure time (s)', numberFlag('--exposure', 'seconds, more than 0 and at most 100000', 0, 1e5, { exclusiveMin: true }))
+    .option('--exposure <SEC>', 'fixed exposure time (s)', numberFlag('--exposure', 'seconds from 1 to 100000', 1, 1e5))
     .option('--target-sigma <MPS>', 'choose the exposure reaching this sigma per visit (photon + floor, m/s)', numberFlag('--target-sigma', 'm/s, more than 0 and at most 10000', 0, 1e4, { exclusiveMin: true }))
     .option('--airmass <X>', 'airmass of the visit', numberFlag('--airmass', 'an airmass from 1 to 10', 1, 10), TYPICAL_AIRMASS)
     .option('--seeing <ARCSEC>', "seeing FWHM at the zenith (arcsec; default the instrument's reference seeing)", numberFlag('--seeing', 'arcsec from 0.2 to 5', 0.2, 5));

@@ -1,22 +1,11 @@
 import path from 'node:path';
 import type { Command } from 'commander';
-import { InputError } from '../errors.js';
-import { readText } from '../io/read-text.js';
-import { writeOutputs } from '../io/write-outputs.js';
-import { planFromJson } from '../report/html/plan-from-json.js';
+import { readPlan } from '../io/plan-json.js';
+import { checkOutFolder } from '../io/out-folder.js';
+import { writeOutputSet } from '../io/output-set.js';
 import { renderReportHtml } from '../report/html/report-html.js';
 import { savedMaps } from './map-report.js';
 import { printJson } from './options.js';
-
-/** Parses plan.json text; a syntax error is one input-error line. */
-function parsePlanText(file: string): unknown {
-  const text = readText(file, 'plan file');
-  try {
-    return JSON.parse(text);
-  } catch (err) {
-    throw new InputError(`${file}: malformed JSON: ${(err as Error).message.split('\n')[0]}; expected a plan.json written by crest plan`);
-  }
-}
 
 export function registerReport(program: Command): Command {
   return program
@@ -26,10 +15,12 @@ export function registerReport(program: Command): Command {
     .option('--out <dir>', 'folder for report.html (default: the plan file\'s folder)')
     .option('--json', 'print one JSON document')
     .action(async (file: string, opts: { out?: string; json?: boolean }) => {
-      const plan = planFromJson(parsePlanText(file), file);
+      const plan = readPlan(file);
+      const outDir = opts.out ?? path.dirname(file);
+      checkOutFolder(outDir, ['report.html'], [file]);
       // Detection maps saved by `crest map` beside the plan are kept in the page.
       const html = await renderReportHtml(plan, savedMaps(plan, path.dirname(file)));
-      const [written] = writeOutputs(opts.out ?? path.dirname(file), { 'report.html': html }, [file]);
+      const [written] = writeOutputSet(outDir, { 'report.html': html }, [file]);
       if (opts.json) return printJson({ plan: file, written: [written], charts: (html.match(/<figure class="chart /g) ?? []).length });
       console.log(`Wrote ${written}`);
     });

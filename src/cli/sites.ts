@@ -1,11 +1,13 @@
 import type { Command } from 'commander';
+import { extent } from '../extent.js';
 import { readBundledSites } from '../io/site-list.js';
 import { fmt, renderTable } from '../report/table.js';
 import { printJson } from './options.js';
 
 function clearText(clear: number | number[]): string {
   if (typeof clear === 'number') return clear.toFixed(2);
-  return `${Math.min(...clear).toFixed(2)}-${Math.max(...clear).toFixed(2)} by month`;
+  const { min, max } = extent(clear);
+  return `${min.toFixed(2)}-${max.toFixed(2)} by month`;
 }
 
 export function registerSites(program: Command): Command {

@@ -6,20 +6,28 @@ import type { Campaign, Constraints } from '../model.js';
 import { readInstrument } from './instrument.js';
 import { INSTRUMENTS_DIR, SITES_DIR } from './paths.js';
 import { readStructured } from './read-text.js';
-import { resolveRef } from './resolve.js';
+import { existingFile, resolveRef } from './resolve.js';
 import { readSite } from './site.js';
 import { semesterWindow } from './semester.js';
 import { readTargets } from './targets.js';
 import { issueToError } from './zod-issue.js';
 import { DEFAULT_NIGHTLY_JITTER_FRACTION } from '../rv/star-noise.js';
 
+/** Years a campaign may lie in: the command-line dates' range (src/cli/nights.ts). */
+const FIRST_YEAR = 1900;
+const LAST_YEAR = 2100;
+const DATE_ALLOWED = `a date as YYYY-MM-DD, years ${FIRST_YEAR} to ${LAST_YEAR}`;
+
 /** A calendar date, ISO 8601 (YAML may hand us a Date for an unquoted date). */
 export const isoDate = z.preprocess(
-  (v) => (v instanceof Date ? v.toISOString().slice(0, 10) : v),
-  z.string({ error: 'a date as YYYY-MM-DD' }).refine((s) => /^\d{4}-\d{2}-\d{2}$/.test(s) && DateTime.fromISO(s).isValid, 'a date as YYYY-MM-DD'),
+  (v) => (v instanceof Date && !Number.isNaN(v.getTime()) ? v.toISOString().slice(0, 10) : v),
+  z.string({ error: DATE_ALLOWED }).refine((s) => {
+    const date = DateTime.fromISO(s);
+    return /^\d{4}-\d{2}-\d{2}$/.test(s) && date.isValid && date.year >= FIRST_YEAR && date.year <= LAST_YEAR;
+  }, DATE_ALLOWED),
 );
 
-const constraintsSchema = z.strictObject({
+export const constraintsSchema = z.strictObject({
   twilight: z.enum(['civil', 'nautical', 'astronomical'], { error: 'one of civil, nautical, astronomical' }).default('nautical'),
   maxAirmass: z.number({ error: 'an airmass from 1 to 5' }).min(1, 'an airmass from 1 to 5').max(5, 'an airmass from 1 to 5').default(2),
   moonSeparationDeg: z.number({ error: 'degrees from 0 to 180' }).min(0, 'degrees from 0 to 180').max(180, 'degrees from 0 to 180').default(30),
@@ -30,15 +38,23 @@ const constraintsSchema = z.strictObject({
 /** The constraints a campaign gets when it gives none; commands that take them as flags share these. */
 export const DEFAULT_CONSTRAINTS: Constraints = constraintsSchema.parse({});
 
-const timeSchema = z.discriminatedUnion(
+export const timeSchema = z.discriminatedUnion(
   'mode',
   [
     z.strictObject({ mode: z.literal('choose-nights'), nights: z.number({ error: 'a whole number of nights, 1 to 366' }).int('a whole number of nights').min(1, 'at least 1 night').max(366, 'at most 366 nights') }),
-    z.strictObject({ mode: z.literal('given-nights'), dates: z.array(isoDate).min(1, 'at least one date') }),
+    z.strictObject({ mode: z.literal('given-nights'), dates: z.array(isoDate).min(1, 'at least one date').superRefine(eachDateOnce) }),
     z.strictObject({ mode: z.literal('hours'), hours: z.number({ error: 'a positive number of hours, at most 5000' }).positive('a positive number of hours').max(5000, 'at most 5000 hours') }),
   ],
   { error: 'mode is one of choose-nights, given-nights, hours' },
 );
+
+/** Given nights are a set: a date listed twice would be counted twice. */
+function eachDateOnce(dates: string[], ctx: z.RefinementCtx): void {
+  dates.forEach((date, i) => {
+    const first = dates.indexOf(date);
+    if (first !== i) ctx.addIssue({ code: 'custom', path: [i], message: `each date once (already given as dates[${first}])` });
+  });
+}
 
 /** Campaign file schema (docs/design.md, "Input files"). Paths are relative to the campaign file. */
 export const campaignSchema = z.strictObject({
@@ -52,7 +68,7 @@ export const campaignSchema = z.strictObject({
         .strictObject({ start: isoDate, end: isoDate })
         .refine((w) => w.start <= w.end, { path: ['end'], message: 'on or after window.start' })
         .refine((w) => DateTime.fromISO(w.end).diff(DateTime.fromISO(w.start), 'days').days <= 731, { path: ['end'], message: 'at most two years after window.start' }),
-      z.strictObject({ semester: z.string().regex(/^\d{4}[AB]$/, 'a semester such as 2027A or 2027B') }),
+      z.strictObject({ semester: z.string().regex(/^(19\d\d|20\d\d|2100)[AB]$/, `a semester such as 2027A or 2027B, years ${FIRST_YEAR} to ${LAST_YEAR}`) }),
     ],
     { error: '{ start: YYYY-MM-DD, end: YYYY-MM-DD } or { semester: 2027A }' },
   ),
@@ -81,7 +97,7 @@ export function readCampaign(file: string): Campaign {
   const baseDir = path.dirname(path.resolve(file));
   const sitePath = resolveRef(c.site, SITES_DIR, 'site', { file, field: 'site', baseDir });
   const instrumentPath = resolveRef(c.instrument, INSTRUMENTS_DIR, 'instrument', { file, field: 'instrument', baseDir });
-  const targetsFile = path.resolve(baseDir, c.targets);
+  const targetsFile = existingFile(path.resolve(baseDir, c.targets), c.targets, 'target list', { file, field: 'targets' });
   const shown = (p: string) => path.relative(process.cwd(), p) || p;
   const site = readSite(shown(sitePath));
   const window = 'semester' in c.window ? semesterWindow(c.window.semester, site.semesters) : c.window;

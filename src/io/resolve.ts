@@ -1,4 +1,4 @@
-import { existsSync, readdirSync } from 'node:fs';
+import { existsSync, readdirSync, statSync } from 'node:fs';
 import path from 'node:path';
 import { inputError } from '../errors.js';
 
@@ -11,6 +11,13 @@ export function listIds(dir: string): string[] {
     .sort();
 }
 
+/** A referenced path that names a file, else an input error at the key or flag that gave it. */
+export function existingFile(resolved: string, ref: string, what: string, context: { file: string; field: string }): string {
+  if (existsSync(resolved) && statSync(resolved).isFile()) return resolved;
+  const problem = existsSync(resolved) ? 'is not a file' : 'does not exist';
+  throw inputError({ file: context.file, field: context.field, value: ref, allowed: `a ${what} file (${path.relative(process.cwd(), resolved) || resolved} ${problem})` });
+}
+
 /**
  * A reference is either a path (contains a slash or a file extension) or an id of a bundled file.
  * `baseDir` resolves relative paths (the campaign file's folder).
@@ -21,7 +28,7 @@ export function resolveRef(
   what: string,
   context: { file: string; field: string; baseDir: string },
 ): string {
-  if (/[\\/]/.test(ref) || /\.(json|ya?ml)$/i.test(ref)) return path.resolve(context.baseDir, ref);
+  if (/[\\/]/.test(ref) || /\.(json|ya?ml)$/i.test(ref)) return existingFile(path.resolve(context.baseDir, ref), ref, what, context);
   const ids = listIds(bundledDir);
   if (ids.includes(ref)) return path.join(bundledDir, `${ref}.json`);
   throw inputError({

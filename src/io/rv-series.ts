@@ -1,6 +1,8 @@
-import { parse as parseCsv, CsvError } from 'csv-parse/sync';
 import { z } from 'zod';
-import { InputError, inputError } from '../errors.js';
+import { inputError } from '../errors.js';
+import { extent } from '../extent.js';
+import { parseCsvTable } from './csv-records.js';
+import { parseDecimal } from './decimal.js';
 import { readText } from './read-text.js';
 
 /** A radial-velocity time series as read from a user's CSV file. */
@@ -17,7 +19,7 @@ export const MIN_RV_POINTS = 5;
 
 const cell = (allowed: string, ok: (v: number) => boolean) =>
   z.preprocess(
-    (text: string | undefined) => (text === undefined || text.trim() === '' ? undefined : Number(text.trim())),
+    (text: string | undefined) => (text === undefined || text.trim() === '' ? undefined : parseDecimal(text)),
     z.number({ error: (issue) => (issue.input === undefined ? `required: ${allowed}` : allowed) }).refine((v) => Number.isFinite(v) && ok(v), allowed),
   );
 
@@ -25,33 +27,27 @@ const cell = (allowed: string, ok: (v: number) => boolean) =>
 const rowSchema = z.strictObject({
   bjd: cell('a full BJD_TDB in days, 2400000 to 2600000', (v) => v >= 2.4e6 && v <= 2.6e6),
   rvmps: cell('radial velocity in m/s, -1e6 to 1e6', (v) => Math.abs(v) <= 1e6),
-  sigmamps: cell('uncertainty in m/s, more than 0 and at most 10000', (v) => v > 0 && v <= 1e4),
+  // Below 1 mm/s the weights 1/sigma^2 of the periodogram and its FAP leave the range of a double.
+  sigmamps: cell('uncertainty in m/s, from 0.001 to 10000', (v) => v >= 1e-3 && v <= 1e4),
 });
 const HEADER: Record<string, string> = { bjd: 'bjd', rvmps: 'rvMps', sigmamps: 'sigmaMps' };
 
 /** Parses an RV series (CSV, RFC 4180, header `bjd,rvMps,sigmaMps`; `#` starts a comment line). */
 export function parseRvSeries(text: string, file: string): RvSeries {
-  let records: { record: string[]; info: { lines: number } }[];
-  try {
-    records = parseCsv(text, { bom: true, info: true, skip_empty_lines: true, trim: true, comment: '#', comment_no_infix: true }) as unknown as typeof records;
-  } catch (err) {
-    if (!(err instanceof CsvError)) throw err;
-    throw new InputError(`${file}: line ${(err as CsvError & { lines?: number }).lines ?? '?'}: malformed CSV: ${err.message}`);
-  }
-  if (records.length === 0) throw inputError({ file, field: '(file)', value: '', allowed: 'empty file; expected the header bjd,rvMps,sigmaMps and one row per visit' });
-  const [header, ...rows] = records;
-  const columns = header!.record.map((name) => name.trim().toLowerCase());
+  const table = parseCsvTable(text, file, 'the header bjd,rvMps,sigmaMps and one row per visit');
+  const columns = table.header.map((name) => name.trim().toLowerCase());
   const expected = Object.keys(HEADER);
   if (columns.length !== expected.length || !expected.every((c) => columns.includes(c))) {
-    throw inputError({ file, where: 'header', field: 'columns', value: header!.record.join(','), allowed: 'exactly the columns bjd, rvMps, sigmaMps (any order, any case)' });
+    throw inputError({ file, where: 'header', field: 'columns', value: table.header.join(','), allowed: 'exactly the columns bjd, rvMps, sigmaMps (any order, any case)' });
   }
   const series: RvSeries = { file, timesBjd: [], rvMps: [], sigmaMps: [] };
-  rows.forEach(({ record, info }, index) => {
-    const raw = Object.fromEntries(columns.map((c, i) => [c, record[i]]));
+  const { rows } = table;
+  rows.forEach(({ cells, line }, index) => {
+    const raw = Object.fromEntries(columns.map((c, i) => [c, cells[i]]));
     const result = rowSchema.safeParse(raw);
     if (!result.success) {
       const column = String(result.error.issues[0]!.path[0]);
-      throw inputError({ file, where: `row ${index + 1} (line ${info.lines})`, field: HEADER[column] ?? column, value: raw[column], allowed: result.error.issues[0]!.message });
+      throw inputError({ file, where: `row ${index + 1} (line ${line})`, field: HEADER[column] ?? column, value: raw[column], allowed: result.error.issues[0]!.message });
     }
     series.timesBjd.push(result.data.bjd);
     series.rvMps.push(result.data.rvmps);
@@ -60,7 +56,8 @@ export function parseRvSeries(text: string, file: string): RvSeries {
   if (rows.length < MIN_RV_POINTS) {
     throw inputError({ file, field: 'rows', value: rows.length, allowed: `at least ${MIN_RV_POINTS} visits for a periodogram and its false-alarm probability` });
   }
-  if (Math.min(...series.timesBjd) === Math.max(...series.timesBjd)) {
+  const times = extent(series.timesBjd);
+  if (times.min === times.max) {
     throw inputError({ file, field: 'bjd', value: series.timesBjd[0], allowed: 'visits at two or more distinct times' });
   }
   return series;

@@ -1,4 +1,5 @@
 // Angles written as decimal degrees or sexagesimal text (common practice in star catalogues).
+import { parseDecimal } from './decimal.js';
 
 const SEXAGESIMAL = /^([+-]?)(\d{1,3})[:\s](\d{1,2})(?:[:\s](\d{1,2}(?:\.\d*)?))?$/;
 
@@ -11,12 +12,11 @@ function parseParts(text: string): { sign: number; value: number } | undefined {
   return { sign: m[1] === '-' ? -1 : 1, value: Number(m[2]) + minutes / 60 + seconds / 3600 };
 }
 
-const DECIMAL = /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/;
-
 /** Right ascension in degrees from `hh:mm:ss.s` (hours) or decimal degrees; NaN if malformed. */
 export function parseRaDeg(text: string): number {
   const t = text.trim();
-  if (DECIMAL.test(t)) return Number(t);
+  const decimal = parseDecimal(t);
+  if (!Number.isNaN(decimal)) return decimal;
   const parts = parseParts(t);
   if (!parts || parts.sign < 0 || t.startsWith('+')) return Number.NaN;
   return parts.value * 15;
@@ -25,7 +25,8 @@ export function parseRaDeg(text: string): number {
 /** Declination in degrees from `±dd:mm:ss` or decimal degrees; NaN if malformed. */
 export function parseDecDeg(text: string): number {
   const t = text.trim();
-  if (DECIMAL.test(t)) return Number(t);
+  const decimal = parseDecimal(t);
+  if (!Number.isNaN(decimal)) return decimal;
   const parts = parseParts(t);
   return parts ? parts.sign * parts.value : Number.NaN;
 }

@@ -1,10 +1,11 @@
 import { z } from 'zod';
-import { DateTime } from 'luxon';
+import { DateTime, IANAZone } from 'luxon';
 import type { Site } from '../model.js';
 import { readStructured } from './read-text.js';
 import { issueToError } from './zod-issue.js';
 
-const isZone = (name: string) => DateTime.local().setZone(name).isValid;
+/** An IANA zone name; luxon would also take fixed offsets such as `UTC+25`, which are no zone. */
+const isZone = (name: string) => IANAZone.isValidZone(name);
 const fraction = z.number().min(0, 'a fraction from 0 to 1').max(1, 'a fraction from 0 to 1');
 
 const monthDay = z

@@ -1,20 +1,22 @@
-import { parse as parseCsv, CsvError } from 'csv-parse/sync';
 import { z } from 'zod';
-import { InputError, inputError } from '../errors.js';
+import { inputError } from '../errors.js';
 import type { Target } from '../model.js';
 import type { BandId } from '../rv/bands.js';
 import { dwarfColour } from '../rv/dwarf-colours.js';
 import { defaultJitter } from '../rv/jitter.js';
 import { DEFAULT_VSINI_KMS, massFromTeffSun } from '../rv/star-defaults.js';
+import { parseCsvTable } from './csv-records.js';
+import { parseDecimal } from './decimal.js';
 import { readText } from './read-text.js';
 import { parseDecDeg, parseRaDeg } from './sexagesimal.js';
+import { slug } from './slug.js';
 
 type Cell = string | undefined;
 
 /** A number cell; blank means "not given". The text is what the error line says is allowed. */
 function numberField(allowed: string, min: number, max: number, opts: { exclusiveMin?: boolean } = {}) {
   return z.preprocess(
-    (cell: Cell) => (cell === undefined || cell.trim() === '' ? undefined : Number(cell.trim())),
+    (cell: Cell) => (cell === undefined || cell.trim() === '' ? undefined : parseDecimal(cell)),
     z
       .number({ error: allowed })
       .refine((v) => Number.isFinite(v) && (opts.exclusiveMin ? v > min : v >= min) && v <= max, allowed)
@@ -66,7 +68,7 @@ const rowSchema = z.strictObject({
   planetmassearth: numberField('planet mass in Earth masses, more than 0 and at most 30000', 0, 3e4, { exclusiveMin: true }),
   planetkmps: numberField('semi-amplitude K in m/s, more than 0 and at most 10000', 0, 1e4, { exclusiveMin: true }),
   ecc: z.preprocess(
-    (cell: Cell) => (cell === undefined || cell.trim() === '' ? undefined : Number(cell.trim())),
+    (cell: Cell) => (cell === undefined || cell.trim() === '' ? undefined : parseDecimal(cell)),
     z.number({ error: 'eccentricity from 0 to 0.99' }).min(0, 'eccentricity from 0 to 0.99').max(0.99, 'eccentricity from 0 to 0.99 (e >= 1 is not a bound orbit)').optional(),
   ),
   omegadeg: numberField('argument of periastron in degrees, 0 to 360', 0, 360),
@@ -208,33 +210,22 @@ function buildTarget(row: Row, place: Place): Target {
 
 /** Parses a target list (CSV, RFC 4180, header row). `file` names it in messages. */
 export function parseTargets(text: string, file: string): Target[] {
-  if (text.trim() === '') throw inputError({ file, field: '(file)', value: '', allowed: 'empty file; expected a header row and one row per target' });
-  let records: { record: string[]; info: { lines: number } }[];
-  try {
-    records = parseCsv(text, { bom: true, info: true, skip_empty_lines: true, trim: true, comment: '#', comment_no_infix: true }) as unknown as typeof records;
-  } catch (err) {
-    if (err instanceof CsvError) {
-      const line = (err as CsvError & { lines?: number }).lines;
-      throw new InputError(`${file}: line ${line ?? '?'}: malformed CSV: ${err.message.replace(/^Invalid Record Length: /, '')}`);
-    }
-    throw err;
-  }
-  const [header, ...rows] = records;
-  const columns = header!.record.map((name) => name.trim().toLowerCase());
+  const table = parseCsvTable(text, file, 'a header row and one row per target');
+  const columns = table.header.map((name) => name.trim().toLowerCase());
   columns.forEach((column, i) => {
     if (!COLUMNS.includes(column)) {
-      throw inputError({ file, where: `header column ${i + 1}`, field: 'column', value: header!.record[i], allowed: `unknown column; known: ${COLUMNS.map(display).join(', ')}` });
+      throw inputError({ file, where: `header column ${i + 1}`, field: 'column', value: table.header[i], allowed: `unknown column; known: ${COLUMNS.map(display).join(', ')}` });
     }
-    if (columns.indexOf(column) !== i) throw inputError({ file, where: `header column ${i + 1}`, field: 'column', value: header!.record[i], allowed: 'each column once' });
+    if (columns.indexOf(column) !== i) throw inputError({ file, where: `header column ${i + 1}`, field: 'column', value: table.header[i], allowed: 'each column once' });
   });
   for (const column of REQUIRED.filter((c) => c !== 'vmag' && c !== 'teffk')) {
-    if (!columns.includes(column)) throw inputError({ file, where: 'header', field: display(column), value: undefined, allowed: `required column missing; the header has: ${header!.record.join(', ')}` });
+    if (!columns.includes(column)) throw inputError({ file, where: 'header', field: display(column), value: undefined, allowed: `required column missing; the header has: ${table.header.join(', ')}` });
   }
-  if (rows.length === 0) throw inputError({ file, field: '(file)', value: '', allowed: 'no target rows after the header' });
+  if (table.rows.length === 0) throw inputError({ file, field: '(file)', value: '', allowed: 'no target rows after the header' });
 
-  const parsed = rows.map(({ record, info }, index) => {
-    const raw = Object.fromEntries(columns.map((c, i) => [c, record[i] ?? '']));
-    const place: Place = { file, where: `row ${index + 1} (line ${info.lines})`, raw };
+  const parsed = table.rows.map(({ cells, line }, index) => {
+    const raw = Object.fromEntries(columns.map((c, i) => [c, cells[i] ?? '']));
+    const place: Place = { file, where: `row ${index + 1} (line ${line})`, raw };
     const result = rowSchema.safeParse(raw);
     if (!result.success) {
       const issue = result.error.issues[0]!;
@@ -243,10 +234,15 @@ export function parseTargets(text: string, file: string): Target[] {
     }
     return { row: result.data, place };
   });
+  // Ids name output files (map-<id>.svg), so two ids may not differ only in case or punctuation.
   const seen = new Map<string, Place>();
+  const bySlug = new Map<string, string>();
   for (const { row, place } of parsed) {
     if (seen.has(row.id)) fail(place, 'id', `each id once (also on ${seen.get(row.id)!.where})`);
+    const earlier = bySlug.get(slug(row.id));
+    if (earlier !== undefined) fail(place, 'id', `an id that differs from ${JSON.stringify(earlier)} in more than case or punctuation (both would be written to the same file names)`);
     seen.set(row.id, place);
+    bySlug.set(slug(row.id), row.id);
   }
   return [...groupStars(parsed, seen).values()].flatMap((group) => group.map(({ row, place }) => buildTarget(row, place)));
 }

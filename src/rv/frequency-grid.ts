@@ -1,3 +1,5 @@
+import { validationError } from '../errors.js';
+
 /**
  * The frequency grid of a periodogram: uniform in frequency, step 1/(T · oversample) with T the
  * baseline of the series, from 1/maxPeriod to 1/minPeriod (frequencies in cycles per day).
@@ -44,16 +46,16 @@ export function baselineDays(timesDays: ArrayLike<number>): number {
   return hi - lo;
 }
 
-/** The grid for a series; throws RangeError on options that leave no frequency to search. */
+/** The grid for a series; throws ValidationError on options that leave no frequency to search. */
 export function frequencyGrid(timesDays: ArrayLike<number>, options: FrequencyGridOptions = {}): FrequencyGrid {
   const baseline = baselineDays(timesDays);
-  if (!(baseline > 0)) throw new RangeError('the series needs at least two distinct times');
+  if (!(baseline > 0)) throw validationError('timesDays', timesDays.length, 'at least two distinct times');
   const oversample = options.oversample ?? DEFAULT_OVERSAMPLE;
   const minPeriodDays = options.minPeriodDays ?? DEFAULT_MIN_PERIOD_DAYS;
   const maxPeriodDays = options.maxPeriodDays ?? DEFAULT_MAX_PERIOD_PER_BASELINE * baseline;
-  if (!(oversample > 0)) throw new RangeError(`oversample must be positive, got ${oversample}`);
+  if (!(oversample > 0)) throw validationError('oversample', oversample, 'a positive number');
   if (!(minPeriodDays > 0 && maxPeriodDays > minPeriodDays)) {
-    throw new RangeError(`need 0 < minPeriodDays < maxPeriodDays, got ${minPeriodDays} and ${maxPeriodDays}`);
+    throw validationError('minPeriodDays', minPeriodDays, `more than 0 and below maxPeriodDays (${maxPeriodDays})`);
   }
   const startPerDay = 1 / maxPeriodDays;
   const stepPerDay = 1 / (baseline * oversample);

@@ -76,15 +76,20 @@ function checkInput(input: InjectionInput): void {
   if (!(eMax >= 0 && eMax < 1)) throw new RangeError(`eccentricity must lie in [0, 1), got ${eMax}`);
 }
 
-/** Builds the grid, the periodogram kernel and the FAP context shared by every cell. */
-export function prepareInjection(input: InjectionInput): InjectionSetup {
-  checkInput(input);
+/** The periodogram grid of an injection map: the defaults, widened to cover the injected periods. */
+export function injectionGrid(input: InjectionInput): FrequencyGrid {
   const baseline = baselineDays(input.timesBjd);
-  const grid = frequencyGrid(input.timesBjd, {
+  return frequencyGrid(input.timesBjd, {
     ...input.grid,
     minPeriodDays: input.grid?.minPeriodDays ?? Math.min(DEFAULT_MIN_PERIOD_DAYS, 0.9 * Math.min(...input.periodsDays)),
     maxPeriodDays: input.grid?.maxPeriodDays ?? Math.max(DEFAULT_MAX_PERIOD_PER_BASELINE * baseline, 1.1 * Math.max(...input.periodsDays)),
   });
+}
+
+/** Builds the grid, the periodogram kernel and the FAP context shared by every cell. */
+export function prepareInjection(input: InjectionInput): InjectionSetup {
+  checkInput(input);
+  const grid = injectionGrid(input);
   return {
     input,
     grid,

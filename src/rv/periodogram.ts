@@ -1,4 +1,5 @@
 import { type FrequencyGrid } from './frequency-grid.js';
+import { validationError } from '../errors.js';
 
 /**
  * Generalised Lomb–Scargle periodogram (Zechmeister & Kürster 2009, A&A 496, 577; "ZK09"):
@@ -28,8 +29,9 @@ function normalisedWeights(sigmaMps: ArrayLike<number>): Float64Array {
   let sum = 0;
   for (let i = 0; i < w.length; i++) {
     const s = sigmaMps[i]!;
-    if (!(s > 0) || !Number.isFinite(s)) throw new RangeError(`sigma must be positive and finite, got ${s} at index ${i}`);
     w[i] = 1 / (s * s);
+    // 1/sigma^2 overflows below about 1e-154: such weights would make every sum NaN.
+    if (!(s > 0) || !Number.isFinite(w[i]!)) throw validationError(`sigmaMps[${i}]`, s, 'a positive, finite uncertainty of at least 1e-150');
     sum += w[i]!;
   }
   for (let i = 0; i < w.length; i++) w[i]! /= sum;

@@ -49,6 +49,10 @@ const CASES: [string, string[], RegExp][] = [
   ['empty campaign file', planCase({ 'campaign.yaml': '  \n' }), /^crest: campaign\.yaml: \(file\) = \(empty\)/],
   ['window end before start', planCase({ 'campaign.yaml': CAMPAIGN({ window: '{ start: 2027-03-10, end: 2027-03-01 }' }) }), /^crest: campaign\.yaml: window\.end = "2027-03-01"/],
   ['missing campaign file', ['plan', 'no-such-campaign.yaml'], /^crest: no-such-campaign\.yaml: campaign file no such file/],
+  // The demo campaign is read, then the out folder is refused before any planning.
+  ['--out under /proc', ['plan', '--out', '/proc/self/crest'], /^crest: command line: --out = "\/proc\/self\/crest": a folder on a disk, not under \/proc/],
+  ['--out naming a file', ['plan', '--out', 'package.json'], /^crest: command line: --out = "package\.json": names an existing file; give a folder$/],
+  ['--out under a file', ['plan', '--out', 'package.json/out'], /^crest: command line: --out = "package\.json\/out": lies under .*package\.json, which is a file/],
 ];
 
 describe('bad input: exit 2 and one line naming the place', () => {

@@ -99,6 +99,7 @@ describe('crest map', () => {
       ['--threads', '0'],
       ['--target', 'Nowhere'],
       ['--ecc-max', '0.95'],
+      ['--target', 'Alba', '--periods', '0.001:100000'],
     ];
     const results = await Promise.all(cases.map((flags) => runCliAsync(['map', '--plan', planFile, ...flags])));
     for (const r of results) {
@@ -106,6 +107,8 @@ describe('crest map', () => {
       expect(r.stderr.trim().split('\n')).toHaveLength(1);
     }
     expect(results[6]!.stderr).toContain('Teyu-3, Mirador-7, Alba');
+    // A period range whose periodogram grid would take hours is refused before any work.
+    expect(results[8]!.stderr).toMatch(/^crest: command line: --periods = "0\.001:100000": a map of at most 1e\+9 frequency-trials/);
     const missing = await runCliAsync(['map', '--plan', path.join(dir, 'none.json')]);
     expect(missing.status).toBe(2);
   });

@@ -64,7 +64,7 @@ describe('campaign files', () => {
     ['no time model', BASE, /campaign\.yaml: time = \(missing\)/],
     ['hours mode without hours', `${BASE}time: { mode: hours }\n`, /campaign\.yaml: time\.hours = \(missing\): required: a positive number of hours, at most 5000$/],
     ['nights given as text', `${BASE}time: { mode: choose-nights, nights: ten }\n`, /campaign\.yaml: time\.nights = "ten": a whole number of nights, 1 to 366$/],
-    ['a missing target list', `${BASE.replace('targets.csv', 'other.csv')}time: { mode: hours, hours: 5 }\n`, /other\.csv: target list no such file/],
+    ['a missing target list', `${BASE.replace('targets.csv', 'other.csv')}time: { mode: hours, hours: 5 }\n`, /campaign\.yaml: targets = "other\.csv": a target list file \(.*other\.csv does not exist\)$/],
   ])('names the key of a bad value: %s', (_name, text, message) => {
     expect(() => readCampaign(campaignFile(text))).toThrow(message);
   });

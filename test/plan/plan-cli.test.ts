@@ -8,7 +8,7 @@ import { describe, expect, it } from 'vitest';
 import { runCliInProcess, tempFiles, type CliResult } from '../cli/run-cli.js';
 import { demoRuns } from '../support/demo-plan.js';
 import { fixture } from './fixtures.js';
-import { planFromJson } from '../../src/report/html/plan-from-json.js';
+import { planFromJson } from '../../src/io/plan-json.js';
 import { CSV_ROUNDING, csvVisits, kOverSigmaKFromCsv, parsePlanCsv } from './recompute-k.js';
 
 /** Planets with an ephemeris in the demo's target list. */

@@ -41,7 +41,7 @@ describe('crest report', () => {
 
   it.each([
     ['a campaign file', 'campaign.json', '{"name": "Demo", "site": "la-silla"}', /campaign\.json: schemaVersion = \(missing\): a Crest plan/],
-    ['malformed JSON', 'broken.json', '{"schemaVersion": 1,', /broken\.json: malformed JSON/],
+    ['malformed JSON', 'broken.json', '{"schemaVersion": 1,', /broken\.json: line 1, column 21: malformed JSON: the text ends too early/],
     ['a list', 'list.json', '[1, 2]', /list\.json: \(file\) = "\[\.\.\.\]": a Crest plan/],
   ])('refuses %s with one line and exit status 2', async (_what, name, text, message) => {
     const file = path.join(dir, name);

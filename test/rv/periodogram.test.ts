@@ -1,3 +1,4 @@
+import { ValidationError } from '../../src/errors.js';
 import { describe, expect, it } from 'vitest';
 import { frequencyGrid, gridFrequency } from '../../src/rv/frequency-grid.js';
 import { argMax, findPeaks } from '../../src/rv/periodogram-peaks.js';
@@ -50,8 +51,8 @@ describe('frequency grid', () => {
     const last = gridFrequency(grid, grid.count - 1);
     expect(last).toBeLessThanOrEqual(1 / 1.5); // default Pmin = 1.5 d
     expect(last + grid.stepPerDay).toBeGreaterThan(1 / 1.5);
-    expect(() => frequencyGrid(t, { minPeriodDays: 10, maxPeriodDays: 5 })).toThrow(RangeError);
-    expect(() => frequencyGrid([3, 3])).toThrow(RangeError);
+    expect(() => frequencyGrid(t, { minPeriodDays: 10, maxPeriodDays: 5 })).toThrow(ValidationError);
+    expect(() => frequencyGrid([3, 3])).toThrow(ValidationError);
   });
 });
 

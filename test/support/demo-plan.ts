@@ -4,7 +4,7 @@ import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { inject } from 'vitest';
 import type { Plan } from '../../src/model.js';
-import { planFromJson } from '../../src/report/html/plan-from-json.js';
+import { planFromJson } from '../../src/io/plan-json.js';
 import type { CliResult } from '../cli/run-cli.js';
 
 export interface DemoRun {

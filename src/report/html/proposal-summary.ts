@@ -1,3 +1,4 @@
+import { extent } from '../../extent.js';
 import type { Plan, TargetSummary } from '../../model.js';
 import { fmt, percent, type Column } from '../table.js';
 import { searchMassLimit } from './chart-mass-limit.js';
@@ -18,8 +19,7 @@ export const PROPOSAL_COLUMNS: Column[] = [
 /** `600` when all equal, `300-900` otherwise, `-` when empty. */
 function spread(values: number[], decimals: number, dash = '–'): string {
   if (!values.length) return '-';
-  const lo = Math.min(...values);
-  const hi = Math.max(...values);
+  const { min: lo, max: hi } = extent(values);
   return lo.toFixed(decimals) === hi.toFixed(decimals) ? lo.toFixed(decimals) : `${lo.toFixed(decimals)}${dash}${hi.toFixed(decimals)}`;
 }
 
