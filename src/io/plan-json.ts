@@ -2,7 +2,6 @@ import { z } from 'zod';
 import { inputError } from '../errors.js';
 import type { Plan } from '../model.js';
 import { constraintsSchema, isoDate, timeSchema } from './campaign.js';
-import { instrumentSchema } from './instrument.js';
 import { recoverBeforeReading } from './output-set.js';
 import { readJson } from './read-text.js';
 import { siteSchema } from './site.js';
@@ -69,7 +68,8 @@ const campaignSchema = z.object({
   name: z.string(),
   file: z.string(),
   site: siteSchema.extend({ file: z.string() }),
-  instrument: instrumentSchema.extend({ file: z.string() }),
+  // The instrument as read (readInstrument fills and converts the file's fields): checked for what names it.
+  instrument: z.looseObject({ id: z.string(), name: z.string(), file: z.string() }),
   targets: z.array(targetSchema).min(1, 'at least one target'),
   targetsFile: z.string(),
   window: z.object({ start: localDate, end: localDate }),
@@ -176,7 +176,7 @@ export function planFromJson(data: unknown, file: string): Plan {
   }
   const result = planSchema.safeParse(data);
   if (!result.success) throw issueToError(file, data, result.error);
-  return result.data as Plan;
+  return result.data as unknown as Plan;
 }
 
 /** Reads and checks a plan.json written by `crest plan`. */

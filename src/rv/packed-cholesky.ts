@@ -2,9 +2,9 @@
 // held as a packed lower triangle: the K's of an information matrix F, every other parameter
 // marginalised: Var(θ_k) = (F⁻¹)_kk. With F = L Lᵀ (Cholesky), the trailing block of F⁻¹ is
 // (L_T L_Tᵀ)⁻¹ with L_T the trailing block of L, so (F⁻¹)_kk = Σ_r (L_T⁻¹)_rk² ([Golub-VanLoan2013]
-// §4.2). A pivot at or below 1e-10 of its diagonal means the parameter is not determined: a
-// nuisance parameter (γ with no visits) leaves every K undetermined (variance Infinity); a K
-// (one visit, which γ absorbs) gets Infinity and is held fixed for the K's after it.
+// §4.2). A pivot at or below 1e-10 of its diagonal means the parameter is not determined, and
+// every K of the star is then taken as undetermined (variance Infinity): γ with no visits, one
+// visit that γ absorbs, or two visits of a two-planet star.
 import { packedIndex } from './information-model.js';
 
 const PIVOT_TOLERANCE = 1e-10;
@@ -15,7 +15,6 @@ const PIVOT_TOLERANCE = 1e-10;
  */
 export function addTrailingVariances(a: Float64Array, p: number, trailing: number, weight: number, out: Float64Array): void {
   const first = p - trailing;
-  let degenerate = 0;
   for (let i = 0; i < p; i++) {
     const rowI = (i * (i + 1)) / 2;
     for (let j = 0; j < i; j++) {
@@ -23,43 +22,32 @@ export function addTrailingVariances(a: Float64Array, p: number, trailing: numbe
       let sum = a[rowI + j]!;
       for (let k = 0; k < j; k++) sum -= a[rowI + k]! * a[rowJ + k]!;
       const pivot = a[rowJ + j]!;
-      a[rowI + j] = pivot === Infinity ? 0 : sum / pivot;
+      a[rowI + j] = sum / pivot;
     }
     const diagonal = a[rowI + i]!;
     let d = diagonal;
     for (let k = 0; k < i; k++) d -= a[rowI + k]! * a[rowI + k]!;
     if (!(d > PIVOT_TOLERANCE * diagonal) || !(diagonal > 0)) {
-      if (i < first) {
-        for (let k = 0; k < trailing; k++) out[k] = Infinity;
-        return;
-      }
-      degenerate |= 1 << (i - first);
-      a[rowI + i] = Infinity;
-      for (let k = 0; k < i; k++) a[rowI + k] = 0;
-      continue;
+      for (let k = 0; k < trailing; k++) out[k] = Infinity;
+      return;
     }
     a[rowI + i] = Math.sqrt(d);
   }
   if (trailing === 1) {
     const l = a[packedIndex(p - 1, p - 1)]!;
-    out[0] += degenerate ? Infinity : weight / (l * l);
+    out[0] += weight / (l * l);
     return;
   }
   // Columns of L_T⁻¹ by forward substitution: L_T x = e_c.
   const x = new Float64Array(trailing);
   for (let c = 0; c < trailing; c++) {
-    if (degenerate & (1 << c)) {
-      out[c] += Infinity;
-      continue;
-    }
     x.fill(0);
     let norm = 0;
     for (let r = c; r < trailing; r++) {
       const row = first + r;
       let sum = r === c ? 1 : 0;
       for (let k = c; k < r; k++) sum -= a[packedIndex(row, first + k)]! * x[k]!;
-      const pivot = a[packedIndex(row, row)]!;
-      x[r] = pivot === Infinity ? 0 : sum / pivot;
+      x[r] = sum / a[packedIndex(row, row)]!;
       norm += x[r]! * x[r]!;
     }
     out[c] += weight * norm;

@@ -92,7 +92,10 @@ function spectralType(instrument: Instrument, star: Pick<PrecisionStar, 'teffK' 
     return teffFactor(star.teffK, instrument.reference.teffK, instrument.spectralRegion, instrument.teffFactors);
   } catch (err) {
     if (!(err instanceof RangeError)) throw err;
-    throw inputError({ file: star.source ?? 'command line', field: 'teffK', value: star.teffK, allowed: `${err.message} (instrument ${instrument.id})` });
+    // A target's source reads `targets.csv row 3 (line 5)`: the file, then the place in it.
+    const place = /^(.*) (row \d+ \(line \d+\))$/.exec(star.source ?? '');
+    const where = place ? { file: place[1]!, where: place[2]! } : { file: star.source ?? 'command line' };
+    throw inputError({ ...where, field: 'teffK', value: star.teffK, allowed: `${err.message} (instrument ${instrument.id})` });
   }
 }
 

@@ -122,8 +122,9 @@ export class PlanState {
 
   /**
    * Gain used to rank slots in greedy passes. It equals gain(j) except for a star's first visits,
-   * which alone carry little or nothing: the first visit of a star with planets (the offset
-   * absorbs it) is credited half the utility of a pair made with an ideal partner (the star's
+   * which alone carry little or nothing: while a star's visits do not yet determine its K's
+   * (one visit, which the offset absorbs; two for a two-planet star), each visit is credited
+   * half the utility of a pair made with an ideal partner (the star's
    * largest weight at the opposite extreme of each planet's signal; two visits with K alone free
    * give I = w1 w2 / (w1 + w2) (s1 - s2)^2), so that greedy starts new stars. Likewise a search's
    * first three visits (offset, sine and cosine need three before the ridge stops dominating):
@@ -139,7 +140,8 @@ export class PlanState {
     let credit = 0;
     const grid = c.grids[t];
     if (grid && visits < 3) credit += (c.searchPriority[t]! * goalValue((Math.exp(grid.meanLogK) * Math.sqrt(1.5 * c.weight[j]!)) / c.searchGoal[t]!, this.overshootWeight)) / 3;
-    if (this.information[t] && visits === 0) {
+    // Until the star's visits determine its K's (one visit per planet beyond the offset), each is credited as half a pair.
+    if (this.information[t] && this.kVariance[c.planetFrom[t]!] === Infinity) {
       const w = c.weight[j]!;
       const wp = c.maxWeight[t]!;
       const model = c.models[t]!;

@@ -45,21 +45,59 @@ export const SITE_JSON = `${JSON.stringify(
 )}\n`;
 
 export const INSTRUMENT_JSON = `${JSON.stringify(
-  {
-    id: 'fuzz-echelle',
-    name: 'Fuzz echelle (invented)',
-    apertureM: 2.5,
-    reference: { sigmaMps: 2, vmag: 8, exposureSec: 900, teffK: 5300, vsiniKms: 2 },
-    floorMps: 1,
-    readoutSec: 40,
-    acquisitionSec: 180,
-    minExposureSec: 120,
-    maxExposureSec: 3600,
-    extinctionMagPerAirmass: 0.15,
-    lineWidthKms: 5,
-    teffFactors: [[4000, 0.8], [6000, 1.2]],
-    sourceNote: 'invented for the fuzz test',
+{
+  "id": "fuzz-echelle",
+  "name": "Fuzz echelle (invented)",
+  "apertureM": 1.93,
+  "resolvingPower": 75000,
+  "band": "V",
+  "wavelengthNm": 550,
+  "coverageNm": [
+    387,
+    694
+  ],
+  "spectralRegion": "optical",
+  "reference": {
+    "sigmaMps": 1.43,
+    "mag": 8,
+    "exposureSec": 600,
+    "airmass": 1.2,
+    "seeingArcsec": 1.5,
+    "snrPerPixel": 117,
+    "teffK": 5800,
+    "vsiniKms": 2
   },
+  "readNoiseE": 5,
+  "pixelsPerResolutionElement": 3.0,
+  "spatialPixels": 6,
+  "entrance": {
+    "kind": "fibre",
+    "diameterArcsec": 3.0
+  },
+  "skyMagPerArcsec2": 21.3,
+  "floorMps": 1.5,
+  "readoutSec": 40,
+  "acquisitionSec": 180,
+  "minExposureSec": 120,
+  "maxExposureSec": 3600,
+  "extinctionMagPerAirmass": 0.15,
+  "sources": {
+    "apertureM": "invented for the fuzz test",
+    "resolvingPower": "invented for the fuzz test",
+    "coverageNm": "invented for the fuzz test",
+    "reference": "invented for the fuzz test",
+    "readNoiseE": "invented for the fuzz test",
+    "pixelsPerResolutionElement": "invented for the fuzz test",
+    "spatialPixels": "invented for the fuzz test",
+    "entrance": "invented for the fuzz test",
+    "skyMagPerArcsec2": "invented for the fuzz test",
+    "floorMps": "invented for the fuzz test",
+    "overheads": "invented for the fuzz test",
+    "exposureLimits": "invented for the fuzz test",
+    "extinctionMagPerAirmass": "invented for the fuzz test"
+  },
+  "sourceNote": "invented for the fuzz test"
+},
   null,
   2,
 )}\n`;

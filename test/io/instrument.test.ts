@@ -60,7 +60,7 @@ describe('instrument profiles', () => {
   });
 
   it.each([
-    ['negative aperture', { apertureM: -1 }, /^i\.json: apertureM = -1: a positive number of metres$/],
+    ['negative aperture', { apertureM: -1 }, /^i\.json: apertureM = -1: metres from 0.1 to 50$/],
     ['reference magnitude out of range', { reference: { ...GOOD.reference, mag: 25 } }, /^i\.json: reference\.mag = 25: a magnitude from -2 to 20$/],
     ['an unknown band', { band: 'K' }, /^i\.json: band = "K": one of V, R, I, J, H, G$/],
     ['shortest exposure above the longest', { minExposureSec: 4000 }, /^i\.json: maxExposureSec = 3600: at least minExposureSec$/],

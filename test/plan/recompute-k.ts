@@ -60,6 +60,7 @@ export function kOverSigmaKFromCsv(plan: Plan, summary: TargetSummary, visits: C
   const model = starModel(rows, plan.campaign)!;
   const nightPos = new Map(plan.nights.map((n, i) => [n.localDate, i]));
   const mine = visits.filter((v) => v.starId === summary.starId);
+  if (mine.length === 0) return 0;
   const variance = denseKVariances(
     model,
     mine.map((v) => ({ bjd: v.midBjdTdb, sigmaMps: v.sigmaWhiteMps, night: nightPos.get(v.localDate)!, nightBjd: nightMiddleJd(plan.nights[nightPos.get(v.localDate)!]) })),

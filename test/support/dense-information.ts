@@ -69,12 +69,13 @@ export function solveDense(a: number[][], b: number[][]): number[][] | null {
   const m = b[0]!.length;
   const aa = a.map((row) => row.slice());
   const bb = b.map((row) => row.slice());
-  let scale = 0;
-  for (const row of aa) for (const v of row) scale = Math.max(scale, Math.abs(v));
+  // Singular when a pivot vanishes against its own column's size (the prior and the data differ in
+  // scale by many orders, so one scale for the whole matrix would call a good K column singular).
+  const scale = aa[0]!.map((_, c) => Math.max(...aa.map((row) => Math.abs(row[c]!))));
   for (let col = 0; col < n; col++) {
     let piv = col;
     for (let r = col + 1; r < n; r++) if (Math.abs(aa[r]![col]!) > Math.abs(aa[piv]![col]!)) piv = r;
-    if (!(Math.abs(aa[piv]![col]!) > 1e-12 * scale)) return null;
+    if (!(Math.abs(aa[piv]![col]!) > 1e-12 * scale[col]!)) return null;
     [aa[col], aa[piv]] = [aa[piv]!, aa[col]!];
     [bb[col], bb[piv]] = [bb[piv]!, bb[col]!];
     const lead = aa[col]![col]!;
