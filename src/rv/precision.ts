@@ -93,7 +93,7 @@ function spectralType(instrument: Instrument, star: Pick<PrecisionStar, 'teffK' 
   } catch (err) {
     if (!(err instanceof RangeError)) throw err;
     // A target's source reads `targets.csv row 3 (line 5)`: the file, then the place in it.
-    const place = /^(.*) (row \d+ \(line \d+\))$/.exec(star.source ?? '');
+    const place = /^(.*?):? (row \d+ \(line \d+\))$/.exec(star.source ?? '');
     const where = place ? { file: place[1]!, where: place[2]! } : { file: star.source ?? 'command line' };
     throw inputError({ ...where, field: 'teffK', value: star.teffK, allowed: `${err.message} (instrument ${instrument.id})` });
   }

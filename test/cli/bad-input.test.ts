@@ -34,7 +34,7 @@ const CASES: [string, string[], RegExp][] = [
   ['RA 25h', planCase({ 'targets.csv': targets('Bruma,25:00:00,-20:00:00,9,5000,,,,') }), /^crest: targets\.csv: row 2 \(line 3\): ra = "25:00:00"/],
   ['Dec +95 deg', planCase({ 'targets.csv': targets('Bruma,11:00:00,+95:00:00,9,5000,,,,') }), /^crest: targets\.csv: row 2 \(line 3\): dec = "\+95:00:00"/],
   ['negative period in the target list', planCase({ 'targets.csv': targets('Bruma,11:00:00,-20:00:00,9,5000,-3,2461000.1,5,') }), /^crest: targets\.csv: row 2 \(line 3\): periodDays = "-3"/],
-  ['a star too hot for the RV-information table', planCase({ 'targets.csv': targets('Bruma,11:00:00,-20:00:00,9,9500,3,2461000.1,5,') }), /^crest: targets\.csv row 2 \(line 3\): teffK = 9500: outside 3000-8000 K, .*\(instrument stable-2m\)$/],
+  ['a star too hot for the RV-information table', planCase({ 'targets.csv': targets('Bruma,11:00:00,-20:00:00,9,9500,3,2461000.1,5,') }), /^crest: targets\.csv: row 2 \(line 3\): teffK = 9500: outside 3000-8000 K, .*\(instrument stable-2m\)$/],
   ['negative period flag', [...AMP.slice(0, 3), '--period', '-3', '--k', '2'], /^crest: command line: --period = "-3"/],
   ['e >= 1 in the target list', planCase({ 'targets.csv': targets('Bruma,11:00:00,-20:00:00,9,5000,3,2461000.1,5,1.2') }), /^crest: targets\.csv: row 2 \(line 3\): ecc = "1\.2"/],
   ['e >= 1 flag', [...AMP, '--k', '2', '--ecc', '1'], /^crest: command line: --ecc = "1"/],
