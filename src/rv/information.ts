@@ -17,7 +17,7 @@
 // Var(K_k) = Σ_s w_s (F_s⁻¹)_kk over the model's sample ephemerides (information-model.ts).
 import { CorrelatedNights } from './correlated-nights.js';
 import { type StarModel, designRows, packedLength } from './information-model.js';
-import { addRankTwoVariances, addTrailingVariances, choleskyInPlace, type RankTwoScratch } from './packed-cholesky.js';
+import { addRankTwoVariances, addTrailingVariances, addVariancesFromFactor, choleskyInPlace, type RankTwoScratch } from './packed-cholesky.js';
 
 /** One visit as the information sees it. */
 export interface InformationVisit {
@@ -46,6 +46,8 @@ export class StarInformation {
   /** Λ + Σ w j jᵀ − the nightly terms (all of F without activity; F − Ūᵀ M⁻¹ Ū with it), per sample. */
   private readonly base: Float64Array;
   private readonly nights = new Map<number, NightSums>();
+  /** Night sums no longer in use, kept to spare the allocator (the optimiser adds and removes visits by the million). */
+  private readonly spare: Float64Array[] = [];
   private readonly tau2: number;
   private readonly correlated?: CorrelatedNights;
   private readonly work: Float64Array;
@@ -57,6 +59,7 @@ export class StarInformation {
   private readonly current: Float64Array;
   private stale = true;
   private readonly scratch: RankTwoScratch;
+  private readonly one: Float64Array;
   visitCount = 0;
 
   constructor(readonly model: StarModel) {
@@ -75,23 +78,34 @@ export class StarInformation {
     this.factorOk = new Uint8Array(this.sampleCount);
     this.current = new Float64Array(this.sampleCount * this.planetCount);
     this.scratch = { y1: new Float64Array(this.paramCount), y2: new Float64Array(this.paramCount) };
+    this.one = new Float64Array(this.planetCount);
   }
 
   /** Factors F of every sample (without activity) and keeps each sample's Var(K). */
   private refactor(): void {
     const { packed, paramCount: p, planetCount } = this;
-    const one = new Float64Array(planetCount);
+    const one = this.one;
+    this.factor.set(this.base);
     for (let s = 0; s < this.sampleCount; s++) {
-      const l = this.factor.subarray(s * packed, (s + 1) * packed);
-      l.set(this.base.subarray(s * packed, (s + 1) * packed));
-      this.factorOk[s] = choleskyInPlace(l, p) ? 1 : 0;
+      this.factorOk[s] = choleskyInPlace(this.factor, p, s * packed) ? 1 : 0;
       if (!this.factorOk[s]) continue;
-      this.work.set(this.base.subarray(s * packed, (s + 1) * packed));
       one.fill(0);
-      addTrailingVariances(this.work, p, planetCount, 1, one);
-      this.current.set(one, s * planetCount);
+      addVariancesFromFactor(this.factor, s * packed, p, planetCount, 1, one);
+      for (let k = 0; k < planetCount; k++) this.current[s * planetCount + k] = one[k]!;
     }
     this.stale = false;
+  }
+
+  /** Var(K) as the visits stand from the factors kept for trials (without activity); false when F is singular. */
+  private currentVariances(out: Float64Array): boolean {
+    if (this.stale) this.refactor();
+    const { planetCount } = this;
+    for (let s = 0; s < this.sampleCount; s++) if (!this.factorOk[s]) return false;
+    for (let s = 0; s < this.sampleCount; s++) {
+      const w = this.model.samples[s]!.weight;
+      for (let k = 0; k < planetCount; k++) out[k] += w * this.current[s * planetCount + k]!;
+    }
+    return true;
   }
 
   /**
@@ -134,8 +148,10 @@ export class StarInformation {
   /** Var(K) of each planet (out, length planetCount), with visit v added (sign 1), removed (-1), or as it is (v undefined). */
   variances(out: Float64Array, v?: InformationVisit, sign: 1 | -1 = 1): Float64Array {
     out.fill(0);
-    if (this.visitCount + (v ? sign : 0) <= 0) return out.fill(Infinity);
+    // γ and the K's have no prior: fewer visits than 1 + planets leave the K's undetermined.
+    if (this.visitCount + (v ? sign : 0) < 1 + this.planetCount) return out.fill(Infinity);
     if (v && this.lowRankVariances(out, v, sign)) return out;
+    if (!v && !this.correlated && this.currentVariances(out)) return out;
     if (v) this.deltas(v, sign, true);
     const { packed, paramCount: p, planetCount } = this;
     for (let s = 0; s < this.sampleCount; s++) {
@@ -159,10 +175,13 @@ export class StarInformation {
     if (night) {
       night.weight += sign * v.weight;
       for (let i = 0; i < night.u.length; i++) night.u[i] += sign * v.weight * v.rows[v.offset + i]!;
-      if (night.weight <= 1e-9 * v.weight) this.nights.delete(v.night);
+      if (night.weight <= 1e-9 * v.weight) {
+        this.nights.delete(v.night);
+        this.spare.push(night.u);
+      }
     } else {
       if (sign < 0) throw new Error('information: removing a visit from a night without visits');
-      const u = new Float64Array(this.sampleCount * p);
+      const u = this.spare.pop() ?? new Float64Array(this.sampleCount * p);
       for (let i = 0; i < u.length; i++) u[i] = v.weight * v.rows[v.offset + i]!;
       this.nights.set(v.night, { weight: v.weight, u });
     }
@@ -176,6 +195,7 @@ export class StarInformation {
     this.visitCount = 0;
     this.stale = true;
     this.reset();
+    for (const night of this.nights.values()) this.spare.push(night.u);
     this.nights.clear();
     this.correlated?.clear();
   }

@@ -10,32 +10,23 @@ import { packedIndex } from './information-model.js';
 const PIVOT_TOLERANCE = 1e-10;
 
 /**
- * Adds weight × Var(θ_k) for the last `trailing` of the p parameters to out[0 .. trailing),
- * overwriting `a` (packed, p(p+1)/2) with its Cholesky factor.
+ * Adds weight × Var(θ_k) for the last `trailing` of the p parameters to out[0 .. trailing)
+ * (Infinity when F is singular), overwriting `a` (packed, p(p+1)/2) with its Cholesky factor.
  */
 export function addTrailingVariances(a: Float64Array, p: number, trailing: number, weight: number, out: Float64Array): void {
-  const first = p - trailing;
-  for (let i = 0; i < p; i++) {
-    const rowI = (i * (i + 1)) / 2;
-    for (let j = 0; j < i; j++) {
-      const rowJ = (j * (j + 1)) / 2;
-      let sum = a[rowI + j]!;
-      for (let k = 0; k < j; k++) sum -= a[rowI + k]! * a[rowJ + k]!;
-      const pivot = a[rowJ + j]!;
-      a[rowI + j] = sum / pivot;
-    }
-    const diagonal = a[rowI + i]!;
-    let d = diagonal;
-    for (let k = 0; k < i; k++) d -= a[rowI + k]! * a[rowI + k]!;
-    if (!(d > PIVOT_TOLERANCE * diagonal) || !(diagonal > 0)) {
-      for (let k = 0; k < trailing; k++) out[k] = Infinity;
-      return;
-    }
-    a[rowI + i] = Math.sqrt(d);
+  if (!choleskyInPlace(a, p)) {
+    for (let k = 0; k < trailing; k++) out[k] = Infinity;
+    return;
   }
+  addVariancesFromFactor(a, 0, p, trailing, weight, out);
+}
+
+/** Adds weight × Var(θ_k) of the last `trailing` parameters to out, from the Cholesky factor l (packed, at lAt). */
+export function addVariancesFromFactor(l: Float64Array, lAt: number, p: number, trailing: number, weight: number, out: Float64Array): void {
+  const first = p - trailing;
   if (trailing === 1) {
-    const l = a[packedIndex(p - 1, p - 1)]!;
-    out[0] += weight / (l * l);
+    const d = l[lAt + packedIndex(p - 1, p - 1)]!;
+    out[0] += weight / (d * d);
     return;
   }
   // Columns of L_T⁻¹ by forward substitution: L_T x = e_c.
@@ -46,8 +37,8 @@ export function addTrailingVariances(a: Float64Array, p: number, trailing: numbe
     for (let r = c; r < trailing; r++) {
       const row = first + r;
       let sum = r === c ? 1 : 0;
-      for (let k = c; k < r; k++) sum -= a[packedIndex(row, first + k)]! * x[k]!;
-      x[r] = sum / a[packedIndex(row, row)]!;
+      for (let k = c; k < r; k++) sum -= l[lAt + packedIndex(row, first + k)]! * x[k]!;
+      x[r] = sum / l[lAt + packedIndex(row, row)]!;
       norm += x[r]! * x[r]!;
     }
     out[c] += weight * norm;
@@ -55,14 +46,14 @@ export function addTrailingVariances(a: Float64Array, p: number, trailing: numbe
 }
 
 /**
- * The Cholesky factor of packed `a`, in place; false (a left partly factored) when a pivot is at
+ * The Cholesky factor of packed `a` (starting at `at`), in place; false (a left partly factored) when a pivot is at
  * or below 1e-10 of its diagonal, i.e. the matrix is singular for our purposes.
  */
-export function choleskyInPlace(a: Float64Array, p: number): boolean {
+export function choleskyInPlace(a: Float64Array, p: number, at = 0): boolean {
   for (let i = 0; i < p; i++) {
-    const rowI = (i * (i + 1)) / 2;
+    const rowI = at + (i * (i + 1)) / 2;
     for (let j = 0; j < i; j++) {
-      const rowJ = (j * (j + 1)) / 2;
+      const rowJ = at + (j * (j + 1)) / 2;
       let sum = a[rowI + j]!;
       for (let k = 0; k < j; k++) sum -= a[rowI + k]! * a[rowJ + k]!;
       a[rowI + j] = sum / a[rowJ + j]!;

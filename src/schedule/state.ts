@@ -101,8 +101,11 @@ export class PlanState {
     const info = this.information[t];
     if (info) {
       const from = c.planetFrom[t]!;
-      const variance = sign === 0 ? this.kVariance.subarray(from, c.planetFrom[t + 1]) : info.variances(this.trialVariance, this.visitOf(j), sign as 1 | -1);
-      for (let i = 0; i < info.planetCount; i++) value += c.planetPriority[from + i]! * goalValue(this.planetFraction(from + i, variance[i]!), this.overshootWeight);
+      if (sign !== 0) info.variances(this.trialVariance, this.visitOf(j), sign as 1 | -1);
+      for (let i = 0; i < info.planetCount; i++) {
+        const variance = sign === 0 ? this.kVariance[from + i]! : this.trialVariance[i]!;
+        value += c.planetPriority[from + i]! * goalValue(this.planetFraction(from + i, variance), this.overshootWeight);
+      }
     }
     if (c.grids[t]) value += c.searchPriority[t]! * goalValue(this.searchFractionOfGoal(t, sign, j), this.overshootWeight);
     return value;
@@ -213,7 +216,8 @@ export class PlanState {
     const info = this.information[t];
     if (info) {
       info.apply(this.visitOf(j), sign);
-      info.variances(this.kVariance.subarray(c.planetFrom[t]!, c.planetFrom[t + 1]!));
+      info.variances(this.trialVariance);
+      for (let i = 0; i < info.planetCount; i++) this.kVariance[c.planetFrom[t]! + i] = this.trialVariance[i]!;
     }
     const value = this.targetValue(t, 0, 0);
     this.utility += value - this.targetUtility[t]!;

@@ -293,11 +293,11 @@ describe('model layout read by the dense reference', () => {
   });
 
   it('the sample ephemerides reproduce the prior covariance of (α, β) (sigma points match second moments)', () => {
-    // Catalogue transit 150 d before the span, σ_Tc = 0.05 P, σ_P = 0.01 d: both directions of
-    // (α, β) exceed the 0.005-cycle sampling threshold. Cov from Tc_ref = Tc + n P (common practice): Var δTc_ref =
+    // Catalogue transit 150 d before the span, σ_Tc = 0.05 P, σ_P = 0.02 d: both directions of
+    // (α, β) exceed the 0.01-cycle sampling threshold. Cov from Tc_ref = Tc + n P (common practice): Var δTc_ref =
     // σ_Tc² + n² σ_P², Cov(δTc_ref, δP) = n σ_P²; α = δTc_ref / P, β = δP U / P.
     const span: [number, number] = [BJD0, BJD0 + 90];
-    const pl: PlanetInput = { id: 'b', kMps: 5, periodDays: 6.2, tcBjd: BJD0 - 150, tcErrDays: 0.31, periodErrDays: 0.01, ecc: 0, omegaDeg: 90 };
+    const pl: PlanetInput = { id: 'b', kMps: 5, periodDays: 6.2, tcBjd: BJD0 - 150, tcErrDays: 0.31, periodErrDays: 0.02, ecc: 0, omegaDeg: 90 };
     const model = buildStarModel({ planets: [pl], nightlyJitterMps: 0, spanBjd: span });
     const n = Math.round((model.planets[0]!.tcRefBjd - pl.tcBjd) / pl.periodDays);
     const u = model.planets[0]!.orbitsScale;
