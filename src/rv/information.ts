@@ -123,9 +123,8 @@ export class StarInformation {
     const w = v.weight;
     const before = night?.weight ?? 0;
     const after = before + sign * w;
-    const coupling = (weight: number) => (weight <= 1e-9 * w ? 0 : this.tau2 / (1 + this.tau2 * weight));
-    const c0 = night ? coupling(before) : 0;
-    const c1 = coupling(after);
+    const c0 = night ? this.coupling(before, w, false) : 0;
+    const c1 = this.coupling(after, w, false);
     const m11 = sign * w - c1 * w * w;
     const m12 = night ? -sign * c1 * w : 0;
     const m22 = night ? c0 - c1 : 0;
@@ -190,6 +189,12 @@ export class StarInformation {
     if (this.visitCount === 0) this.clear();
   }
 
+  /** c(W) of the nightly terms: τ²/(1 + τ² W) without activity, 1/W with it; 0 for an empty night (W ≈ 0 against a visit's weight w). */
+  private coupling(weight: number, w: number, correlated: boolean): number {
+    if (weight <= 1e-9 * w) return 0;
+    return correlated ? 1 / weight : this.tau2 / (1 + this.tau2 * weight);
+  }
+
   /** Forgets every visit. */
   clear(): void {
     this.visitCount = 0;
@@ -212,9 +217,8 @@ export class StarInformation {
     const w = v.weight;
     const before = night?.weight ?? 0;
     const after = before + sign * w;
-    const coupling = (weight: number) => (weight <= 1e-9 * w ? 0 : this.correlated ? 1 / weight : this.tau2 / (1 + this.tau2 * weight));
-    const cBefore = coupling(before);
-    const cAfter = coupling(after);
+    const cBefore = this.coupling(before, w, this.correlated !== undefined);
+    const cAfter = this.coupling(after, w, this.correlated !== undefined);
     for (let s = 0; s < this.sampleCount; s++) {
       const j = s * p;
       const row = v.offset + j;
