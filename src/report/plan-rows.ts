@@ -8,12 +8,14 @@ export function clock(instant: string | Date | null, zone: string): string {
   return clockTime(typeof instant === 'string' ? new Date(instant) : instant, zone);
 }
 
-/** Each planet's predicted phase at a visit: `0.252 ± 0.004` for one planet, `b 0.252 ± 0.004; c 0.710 ± 0.020` for several (digits: decimals). */
+/** Each planet's predicted phase at a visit: `0.252±0.004` for one planet, `b 0.252±0.004; c 0.710±0.020` for several; with digits other than 3 (plan.csv) `id=phase±error; ...`. */
 export function phasesText(visit: PlannedVisit, digits = 3): string {
   if (visit.phases.length === 0) return digits === 3 ? '-' : '';
   const one = (p: { phase: number; phaseErr: number }) => `${p.phase.toFixed(digits)}±${p.phaseErr.toFixed(digits)}`;
   if (digits !== 3) return visit.phases.map((p) => `${p.targetId}=${one(p)}`).join('; ');
-  return visit.phases.length === 1 ? one(visit.phases[0]!) : visit.phases.map((p) => `${p.targetId} ${one(p)}`).join('; ');
+  // A planet named after its star (`SELVA-102 b`) is shown by its letter alone.
+  const name = (id: string) => (id.startsWith(`${visit.starId} `) ? id.slice(visit.starId.length + 1) : id);
+  return visit.phases.length === 1 ? one(visit.phases[0]!) : visit.phases.map((p) => `${name(p.targetId)} ${one(p)}`).join('; ');
 }
 
 export const VISIT_COLUMNS: Column[] = [
