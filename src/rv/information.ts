@@ -47,7 +47,7 @@ export class StarInformation {
   private readonly base: Float64Array;
   private readonly nights = new Map<number, NightSums>();
   /** Night sums no longer in use, kept to spare the allocator (the optimiser adds and removes visits by the million). */
-  private readonly spare: Float64Array[] = [];
+  private readonly spare: NightSums[] = [];
   private readonly tau2: number;
   private readonly correlated?: CorrelatedNights;
   private readonly work: Float64Array;
@@ -121,6 +121,8 @@ export class StarInformation {
     for (let s = 0; s < this.sampleCount; s++) if (!this.factorOk[s]) return false;
     const night = this.nights.get(v.night);
     const w = v.weight;
+    const rows = v.rows;
+    const offset = v.offset;
     const before = night?.weight ?? 0;
     const after = before + sign * w;
     const c0 = night ? this.coupling(before, w, false) : 0;
@@ -129,9 +131,9 @@ export class StarInformation {
     const m12 = night ? -sign * c1 * w : 0;
     const m22 = night ? c0 - c1 : 0;
     const { packed, paramCount: p, planetCount } = this;
-    const u = night?.u ?? v.rows;
+    const u = night?.u ?? rows;
     for (let s = 0; s < this.sampleCount; s++) {
-      const ok = addRankTwoVariances(this.factor, s * packed, p, planetCount, this.current, s * planetCount, v.rows, v.offset + s * p, u, night ? s * p : 0, m11, m12, m22, this.scratch, this.model.samples[s]!.weight, out);
+      const ok = addRankTwoVariances(this.factor, s * packed, p, planetCount, this.current, s * planetCount, rows, offset + s * p, u, night ? s * p : 0, m11, m12, m22, this.scratch, this.model.samples[s]!.weight, out);
       if (!ok) {
         out.fill(0);
         return false;
@@ -170,19 +172,23 @@ export class StarInformation {
     for (let i = 0; i < base.length; i++) base[i] += delta[i]!;
     const night = this.nights.get(v.night);
     const p = this.paramCount;
+    const w = v.weight;
+    const rows = v.rows;
+    const offset = v.offset;
     if (this.correlated) this.correlated.commit(v, sign, night?.weight ?? 0, night?.u);
     if (night) {
-      night.weight += sign * v.weight;
-      for (let i = 0; i < night.u.length; i++) night.u[i] += sign * v.weight * v.rows[v.offset + i]!;
-      if (night.weight <= 1e-9 * v.weight) {
+      night.weight += sign * w;
+      for (let i = 0; i < night.u.length; i++) night.u[i] += sign * w * rows[offset + i]!;
+      if (night.weight <= 1e-9 * w) {
         this.nights.delete(v.night);
-        this.spare.push(night.u);
+        this.spare.push(night);
       }
     } else {
       if (sign < 0) throw new Error('information: removing a visit from a night without visits');
-      const u = this.spare.pop() ?? new Float64Array(this.sampleCount * p);
-      for (let i = 0; i < u.length; i++) u[i] = v.weight * v.rows[v.offset + i]!;
-      this.nights.set(v.night, { weight: v.weight, u });
+      const sums = this.spare.pop() ?? { weight: 0, u: new Float64Array(this.sampleCount * p) };
+      sums.weight = w;
+      for (let i = 0; i < sums.u.length; i++) sums.u[i] = w * rows[offset + i]!;
+      this.nights.set(v.night, sums);
     }
     this.visitCount += sign;
     // No visits left: back to the prior exactly, free of the rounding residue of the removals.
@@ -200,7 +206,7 @@ export class StarInformation {
     this.visitCount = 0;
     this.stale = true;
     this.reset();
-    for (const night of this.nights.values()) this.spare.push(night.u);
+    for (const night of this.nights.values()) this.spare.push(night);
     this.nights.clear();
     this.correlated?.clear();
   }
@@ -214,23 +220,26 @@ export class StarInformation {
   private deltas(v: InformationVisit, sign: 1 | -1, withCorrelated: boolean): void {
     const { packed, paramCount: p, delta, uNew } = this;
     const night = this.nights.get(v.night);
+    // The visit's fields read once: a visit may compute them (the scheduler's SlotVisit).
     const w = v.weight;
+    const rows = v.rows;
+    const offset = v.offset;
     const before = night?.weight ?? 0;
     const after = before + sign * w;
     const cBefore = this.coupling(before, w, this.correlated !== undefined);
     const cAfter = this.coupling(after, w, this.correlated !== undefined);
     for (let s = 0; s < this.sampleCount; s++) {
       const j = s * p;
-      const row = v.offset + j;
+      const row = offset + j;
       const at = s * packed;
-      for (let r = 0; r < p; r++) uNew[r] = (night ? night.u[j + r]! : 0) + sign * w * v.rows[row + r]!;
+      for (let r = 0; r < p; r++) uNew[r] = (night ? night.u[j + r]! : 0) + sign * w * rows[row + r]!;
       let idx = at;
       for (let r = 0; r < p; r++) {
-        const jr = v.rows[row + r]!;
+        const jr = rows[row + r]!;
         const ur = night ? night.u[j + r]! : 0;
         for (let c = 0; c <= r; c++) {
           const uc = night ? night.u[j + c]! : 0;
-          delta[idx++] = sign * w * jr * v.rows[row + c]! - cAfter * uNew[r]! * uNew[c]! + cBefore * ur * uc;
+          delta[idx++] = sign * w * jr * rows[row + c]! - cAfter * uNew[r]! * uNew[c]! + cBefore * ur * uc;
         }
       }
     }

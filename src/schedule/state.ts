@@ -19,6 +19,31 @@ function lowerBound(list: number[], value: number): number {
   return lo;
 }
 
+/**
+ * Slot `slot` of a compiled problem as an InformationVisit. Its values are read from the compiled
+ * arrays, so pointing it at another slot writes one integer: writing doubles into a reused
+ * object's fields boxes them anew each time, millions of times in one optimisation.
+ */
+class SlotVisit implements InformationVisit {
+  slot = 0;
+  constructor(private readonly c: CompiledProblem) {}
+  get rows(): Float64Array {
+    return this.c.rows;
+  }
+  get offset(): number {
+    return this.c.rowOffset[this.slot]!;
+  }
+  get weight(): number {
+    return this.c.weight[this.slot]!;
+  }
+  get night(): number {
+    return this.c.slotNight[this.slot]!;
+  }
+  get nightBjd(): number {
+    return this.c.nightMidDays[this.c.slotNight[this.slot]!]!;
+  }
+}
+
 export class PlanState {
   readonly chosen: Uint8Array;
   readonly nightOpen: Uint8Array;
@@ -38,7 +63,7 @@ export class PlanState {
   utility = 0;
   hoursUsed = 0;
   openNights = 0;
-  private readonly visit: InformationVisit = { rows: new Float64Array(0), offset: 0, weight: 0, night: 0, nightBjd: 0 };
+  private readonly visit: SlotVisit;
   private readonly trialVariance: Float64Array;
 
   constructor(
@@ -47,6 +72,7 @@ export class PlanState {
     readonly hoursBudget: number,
     readonly overshootWeight: number,
   ) {
+    this.visit = new SlotVisit(c);
     this.chosen = new Uint8Array(c.slotCount);
     this.nightOpen = new Uint8Array(c.nightCount);
     this.nightVisits = Array.from({ length: c.nightCount }, () => []);
@@ -64,16 +90,10 @@ export class PlanState {
     }
   }
 
-  /** The information module's view of slot j (one reused object). */
+  /** The information module's view of slot j (one reused object whose only field is the slot). */
   private visitOf(j: number): InformationVisit {
-    const c = this.c;
-    const v = this.visit;
-    v.rows = c.rows;
-    v.offset = c.rowOffset[j]!;
-    v.weight = c.weight[j]!;
-    v.night = c.slotNight[j]!;
-    v.nightBjd = c.nightMidDays[c.slotNight[j]!]!;
-    return v;
+    this.visit.slot = j;
+    return this.visit;
   }
 
   /** (K/sigma_K)/goal of planet i (compiled order) for a K variance. */
