@@ -2,6 +2,7 @@
 // lists, each slot's design rows for its star's information model, and where each search keeps
 // its running sums. Built once per optimisation.
 import { designRow, type StarModel } from '../rv/information-model.js';
+import type { InformationVisit } from '../rv/information.js';
 import { searchGrid, searchStatsLength, type SearchGrid } from './objective-search.js';
 import type { ScheduleProblem, ScheduleTarget } from './types.js';
 
@@ -211,4 +212,29 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
   });
   c.statsLength = offset;
   return c;
+}
+
+/**
+ * Slot `slot` of a compiled problem as an InformationVisit. Its values are read from the compiled
+ * arrays, so pointing it at another slot writes one integer: writing doubles into a reused
+ * object's fields boxes them anew each time, millions of times in one optimisation.
+ */
+export class SlotVisit implements InformationVisit {
+  slot = 0;
+  constructor(private readonly c: CompiledProblem) {}
+  get rows(): Float64Array {
+    return this.c.rows;
+  }
+  get offset(): number {
+    return this.c.rowOffset[this.slot]!;
+  }
+  get weight(): number {
+    return this.c.weight[this.slot]!;
+  }
+  get night(): number {
+    return this.c.slotNight[this.slot]!;
+  }
+  get nightBjd(): number {
+    return this.c.nightMidDays[this.c.slotNight[this.slot]!]!;
+  }
 }

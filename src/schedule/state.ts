@@ -3,7 +3,7 @@
 // visit costs what that star's model costs (O(samples x parameters^2), or O(observed nights^2)
 // with correlated activity), plus O(period grid) for a search: never a recomputation of the plan.
 import { StarInformation, type InformationVisit } from '../rv/information.js';
-import type { CompiledProblem } from './compile.js';
+import { SlotVisit, type CompiledProblem } from './compile.js';
 import { searchLogScore, searchStatsLength, updateSearchStats } from './objective-search.js';
 import { goalValue } from './utility.js';
 
@@ -17,31 +17,6 @@ function lowerBound(list: number[], value: number): number {
     else hi = mid;
   }
   return lo;
-}
-
-/**
- * Slot `slot` of a compiled problem as an InformationVisit. Its values are read from the compiled
- * arrays, so pointing it at another slot writes one integer: writing doubles into a reused
- * object's fields boxes them anew each time, millions of times in one optimisation.
- */
-class SlotVisit implements InformationVisit {
-  slot = 0;
-  constructor(private readonly c: CompiledProblem) {}
-  get rows(): Float64Array {
-    return this.c.rows;
-  }
-  get offset(): number {
-    return this.c.rowOffset[this.slot]!;
-  }
-  get weight(): number {
-    return this.c.weight[this.slot]!;
-  }
-  get night(): number {
-    return this.c.slotNight[this.slot]!;
-  }
-  get nightBjd(): number {
-    return this.c.nightMidDays[this.c.slotNight[this.slot]!]!;
-  }
 }
 
 export class PlanState {

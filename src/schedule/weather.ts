@@ -4,8 +4,8 @@
 // probability of reaching K/sigma_K >= goal, and the mean of K/sigma_K and of the utility, per
 // planet and per search (each star's information rebuilt from its clear visits every trial).
 import { createRng } from '../rv/random.js';
-import { StarInformation, type InformationVisit } from '../rv/information.js';
-import { compileProblem, type CompiledProblem } from './compile.js';
+import { StarInformation } from '../rv/information.js';
+import { compileProblem, SlotVisit } from './compile.js';
 import { searchLogScore, searchStatsLength, updateSearchStats } from './objective-search.js';
 import type { ScheduleProblem, ScheduleResult } from './types.js';
 import { goalValue } from './utility.js';
@@ -53,6 +53,7 @@ export function simulateWeather(problem: ScheduleProblem, result: ScheduleResult
   const sumRatio = new Float64Array(ids.length);
   const stats = new Float64Array(Math.max(1, ...c.grids.map((g) => (g ? searchStatsLength(g) : 0))));
   const information = c.models.map((model) => (model ? new StarInformation(model) : null));
+  const visit = new SlotVisit(c);
   const variance = new Float64Array(Math.max(1, ...c.models.map((m) => m?.planetCount ?? 0)));
   let clearNights = 0;
   let utility = 0;
@@ -75,7 +76,10 @@ export function simulateWeather(problem: ScheduleProblem, result: ScheduleResult
       for (const j of perTarget[t]!) {
         if (!clear[c.slotNight[j]!]) continue;
         if (grid) updateSearchStats(stats, 0, grid, c.weight[j]!, c.midDays[j]!, 1);
-        if (info) info.apply(visitOf(c, j), 1);
+        if (info) {
+          visit.slot = j;
+          info.apply(visit, 1);
+        }
       }
       if (info) {
         info.variances(variance);
@@ -94,9 +98,4 @@ export function simulateWeather(problem: ScheduleProblem, result: ScheduleResult
     meanUtility: utility / trials,
     targets: ids.map((targetId, i) => ({ targetId, goalProbability: reached[i]! / trials, meanKOverSigmaK: sumRatio[i]! / trials })),
   };
-}
-
-/** Slot j as the information module sees it. */
-export function visitOf(c: CompiledProblem, j: number): InformationVisit {
-  return { rows: c.rows, offset: c.rowOffset[j]!, weight: c.weight[j]!, night: c.slotNight[j]!, nightBjd: c.nightMidDays[c.slotNight[j]!]! };
 }
