@@ -277,6 +277,34 @@ export interface PlannedVisit {
   sigmaWhiteMps: number;
   /** S/N per pixel at the instrument's reference wavelength. */
   snrPerPixel: number;
+  /** A visit before the re-planning time (`--now`), kept as it was planned; absent for visits ahead. */
+  kept?: true;
+}
+
+/** A visit already made, from the campaign's observed file. */
+export interface ObservedVisit {
+  /** The row's id as given (a star or a planet) and the star it observed. */
+  targetId: string;
+  starId: string;
+  /** Mid-exposure, BJD_TDB (converted from UTC when the file gave UTC) and ISO 8601 UTC. */
+  midBjdTdb: number;
+  midUtc: string;
+  /** The local date of the evening the visit belongs to (site zone), YYYY-MM-DD. */
+  localDate: string;
+  instrument: string;
+  /** Measured RV and its uncertainty (m/s), when the file gives them. */
+  rvMps?: number;
+  rvErrMps?: number;
+  /** The white noise the information model gives this visit: rvErrMps (or the instrument's σ) with the white jitter. */
+  sigmaWhiteMps: number;
+  /** `observed.csv row 3`. */
+  source: string;
+}
+
+/** The re-planning state: the instant before which nothing moves, and nights lost to weather or faults. */
+export interface Replan {
+  nowUtc: string;
+  lostDates: string[];
 }
 
 export interface TargetSummary {
@@ -300,6 +328,10 @@ export interface TargetSummary {
 }
 
 export interface Plan {
+  /** Present when the plan was made with `--now`: what was kept, and which nights were dropped. */
+  replan?: Replan;
+  /** Visits already made (the campaign's observed file), in time order. */
+  observed?: ObservedVisit[];
   schemaVersion: 1;
   generator: string;
   campaign: Campaign;
