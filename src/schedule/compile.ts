@@ -4,6 +4,7 @@
 import { designRow, type StarModel } from '../rv/information-model.js';
 import type { InformationVisit } from '../rv/information.js';
 import { searchGrid, searchStatsLength, type SearchGrid } from './objective-search.js';
+import { compilePrior, type CompiledPrior } from './prior.js';
 import type { ScheduleProblem, ScheduleTarget } from './types.js';
 
 /** Ridge of a search target's information matrix, as a fraction of its median visit weight (objective-search.ts). */
@@ -61,6 +62,8 @@ export interface CompiledProblem {
   nightTo: Int32Array;
   spacingMs: number;
   onePerNight: boolean;
+  /** Visits already made (prior.ts). */
+  prior: CompiledPrior;
 }
 
 function fail(message: string): never {
@@ -158,6 +161,7 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
     nightTo: new Int32Array(N),
     spacingMs: Math.max(0, problem.constraints.minSpacingHours) * 3_600_000,
     onePerNight: problem.constraints.onePerNight,
+    prior: { visits: [], stats: new Float64Array(0), count: new Int32Array(T), weightSum: new Float64Array(T) },
   };
   const perTarget: number[][] = problem.targets.map(() => []);
   c.nightFrom.fill(S);
@@ -211,6 +215,7 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
     offset += searchStatsLength(grid);
   });
   c.statsLength = offset;
+  c.prior = compilePrior(c);
   return c;
 }
 

@@ -47,11 +47,10 @@ function chooseNightsGreedy(state: PlanState, count: number, excluded: Set<numbe
 /** Per planet and per search: what the plan reaches (a star's visits serve all of them). */
 function outcomes(state: PlanState): TargetOutcome[] {
   const c = state.c;
-  const overshoot = state.overshootWeight;
   return c.problem.targets.flatMap((star, t) => {
     const visits = state.targetVisits[t]!;
-    const shared = { starId: star.id, visits: visits.length, hours: visits.reduce((sum, j) => sum + c.hours[j]!, 0) };
-    const weightSum = visits.reduce((sum, j) => sum + c.weight[j]!, 0);
+    const shared = { starId: star.id, visits: visits.length, priorVisits: c.prior.count[t]!, hours: visits.reduce((sum, j) => sum + c.hours[j]!, 0) };
+    const weightSum = visits.reduce((sum, j) => sum + c.weight[j]!, c.prior.weightSum[t]!);
     const out: TargetOutcome[] = star.planets.map((planet, i) => {
       const at = c.planetFrom[t]! + i;
       const variance = state.kVariance[at]!;
@@ -64,10 +63,10 @@ function outcomes(state: PlanState): TargetOutcome[] {
         sigmaKMps: Math.sqrt(variance),
         kOverSigmaK,
         goal: planet.goal,
-        utility: planet.priority * goalValue(kOverSigmaK / planet.goal, overshoot),
+        utility: planet.priority * goalValue(kOverSigmaK / planet.goal, state.planetOvershoot[at]!),
       };
       // Efficiency (sigma^2/N)/Var(K^) generalised to unequal weights: I / sum w (docs/references.md [Visits-needed]).
-      if (visits.length > 0) outcome.informationEfficiency = 1 / variance / weightSum;
+      if (visits.length + shared.priorVisits > 0) outcome.informationEfficiency = 1 / variance / weightSum;
       return outcome;
     });
     if (star.search) {
@@ -81,7 +80,7 @@ function outcomes(state: PlanState): TargetOutcome[] {
         sigmaKMps: info > 0 ? 1 / Math.sqrt(info) : Infinity,
         kOverSigmaK,
         goal: star.search.goal,
-        utility: star.search.priority * goalValue(kOverSigmaK / star.search.goal, overshoot),
+        utility: star.search.priority * goalValue(kOverSigmaK / star.search.goal, state.searchOvershoot[t]!),
       });
     }
     return out;

@@ -4,8 +4,8 @@
 import { compileProblem } from './compile.js';
 import type { SearchGrid } from './objective-search.js';
 import { informationVisits, kVariances } from '../rv/information.js';
-import type { CandidateSlot, ScheduleProblem } from './types.js';
-import { goalValue } from './utility.js';
+import type { CandidateSlot, PriorVisit, ScheduleProblem } from './types.js';
+import { goalValue, overshootAfterPrior } from './utility.js';
 
 export interface ReferenceSettings {
   searchGridSize: number;
@@ -46,15 +46,29 @@ interface Ratio {
 
 function kOverSigmaKOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], grids: (SearchGrid | null)[]): Ratio[] {
   const nightMid = nightMiddles(problem);
+  // A prior visit shares the night of a problem night with its date; other dates get keys below 0.
+  const priorKey = new Map<string, number>();
+  for (const v of problem.prior ?? []) {
+    const night = problem.nights.find((n) => n.localDate === v.localDate);
+    if (!priorKey.has(v.localDate)) priorKey.set(v.localDate, night ? night.index : -1 - priorKey.size);
+  }
+  const priorNightMid = (date: string) => {
+    const key = priorKey.get(date)!;
+    if (nightMid.has(key)) return nightMid.get(key)!;
+    const same = (problem.prior ?? []).filter((v) => v.localDate === date);
+    return same.reduce((sum, v) => sum + v.midDays, 0) / same.length;
+  };
   return problem.targets.flatMap((target, t) => {
-    const mine = visits.filter((v) => v.targetId === target.id);
+    const prior = (problem.prior ?? []).filter((v) => v.targetId === target.id);
+    const mine = [...visits.filter((v) => v.targetId === target.id), ...prior];
     const out: Ratio[] = [];
     if (target.model) {
       // A fresh accumulator over the visits: no running state from earlier moves.
-      const variance = kVariances(
-        target.model,
-        informationVisits(target.model, mine.map((v) => ({ bjd: v.midDays, sigmaMps: v.sigmaWhiteMps, night: v.nightIndex, nightBjd: nightMid.get(v.nightIndex)! }))),
-      );
+      const asVisit = (v: CandidateSlot | PriorVisit) =>
+        'nightIndex' in v
+          ? { bjd: v.midDays, sigmaMps: v.sigmaWhiteMps, night: v.nightIndex, nightBjd: nightMid.get(v.nightIndex)! }
+          : { bjd: v.midDays, sigmaMps: v.sigmaWhiteMps, night: priorKey.get(v.localDate)!, nightBjd: priorNightMid(v.localDate) };
+      const variance = kVariances(target.model, informationVisits(target.model, mine.map(asVisit)));
       target.planets.forEach((planet, i) => out.push({ ratio: variance[i] === Infinity ? 0 : planet.kMps / Math.sqrt(variance[i]!), goal: planet.goal, priority: planet.priority }));
     }
     const grid = grids[t];
@@ -91,7 +105,8 @@ export function referenceUtility(problem: ScheduleProblem, visits: CandidateSlot
 }
 
 function utilityOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], grids: (SearchGrid | null)[], overshootWeight: number): number {
-  return kOverSigmaKOnGrids(problem, visits, grids).reduce((sum, r) => sum + r.priority * goalValue(r.ratio / r.goal, overshootWeight), 0);
+  const prior = kOverSigmaKOnGrids(problem, [], grids);
+  return kOverSigmaKOnGrids(problem, visits, grids).reduce((sum, r, i) => sum + r.priority * goalValue(r.ratio / r.goal, overshootAfterPrior(prior[i]!.ratio / r.goal, overshootWeight)), 0);
 }
 
 /** Every constraint of the problem, checked pairwise: an empty list means feasible. */

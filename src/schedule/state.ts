@@ -4,8 +4,9 @@
 // with correlated activity), plus O(period grid) for a search: never a recomputation of the plan.
 import { StarInformation, type InformationVisit } from '../rv/information.js';
 import { SlotVisit, type CompiledProblem } from './compile.js';
-import { searchLogScore, searchStatsLength, updateSearchStats } from './objective-search.js';
-import { goalValue } from './utility.js';
+import { searchLogScore, updateSearchStats } from './objective-search.js';
+import { seedInformation, seedSearchStats } from './prior.js';
+import { goalValue, overshootAfterPrior } from './utility.js';
 
 /** Position of the first element of the sorted `list` greater than or equal to `value`. */
 function lowerBound(list: number[], value: number): number {
@@ -38,6 +39,9 @@ export class PlanState {
   utility = 0;
   hoursUsed = 0;
   openNights = 0;
+  /** Overshoot weight of each planet (compiled order) and of each star's search (utility.ts overshootAfterPrior). */
+  readonly planetOvershoot: Float64Array;
+  readonly searchOvershoot: Float64Array;
   private readonly visit: SlotVisit;
   private readonly trialVariance: Float64Array;
 
@@ -53,10 +57,17 @@ export class PlanState {
     this.nightVisits = Array.from({ length: c.nightCount }, () => []);
     this.targetVisits = Array.from({ length: c.targetCount }, () => []);
     this.nightUsedHours = new Float64Array(c.nightCount);
-    this.stats = new Float64Array(c.statsLength);
+    this.stats = c.prior.stats.slice();
     this.information = c.models.map((model) => (model ? new StarInformation(model) : null));
     this.kVariance = new Float64Array(c.planetK.length).fill(Infinity);
     this.trialVariance = new Float64Array(Math.max(1, ...c.models.map((m) => m?.planetCount ?? 0)));
+    this.information.forEach((info, t) => {
+      if (!info || c.prior.count[t] === 0) return;
+      seedInformation(info, c.prior, t);
+      this.storeVariances(t);
+    });
+    this.planetOvershoot = Float64Array.from(c.planetK, (_, i) => overshootAfterPrior(this.planetFractionOfGoal(i), overshootWeight));
+    this.searchOvershoot = Float64Array.from(c.grids, (grid, t) => (grid ? overshootAfterPrior(this.searchFractionOfGoal(t, 0, 0), overshootWeight) : overshootWeight));
     this.targetUtility = new Float64Array(c.targetCount);
     this.targetVersion = new Int32Array(c.targetCount);
     for (let t = 0; t < c.targetCount; t++) {
@@ -99,10 +110,10 @@ export class PlanState {
       if (sign !== 0) info.variances(this.trialVariance, this.visitOf(j), sign as 1 | -1);
       for (let i = 0; i < info.planetCount; i++) {
         const variance = sign === 0 ? this.kVariance[from + i]! : this.trialVariance[i]!;
-        value += c.planetPriority[from + i]! * goalValue(this.planetFraction(from + i, variance), this.overshootWeight);
+        value += c.planetPriority[from + i]! * goalValue(this.planetFraction(from + i, variance), this.planetOvershoot[from + i]!);
       }
     }
-    if (c.grids[t]) value += c.searchPriority[t]! * goalValue(this.searchFractionOfGoal(t, sign, j), this.overshootWeight);
+    if (c.grids[t]) value += c.searchPriority[t]! * goalValue(this.searchFractionOfGoal(t, sign, j), this.searchOvershoot[t]!);
     return value;
   }
 
@@ -133,11 +144,11 @@ export class PlanState {
   rankingGain(j: number): number {
     const c = this.c;
     const t = c.slotTarget[j]!;
-    const visits = this.targetVisits[t]!.length;
+    const visits = this.targetVisits[t]!.length + c.prior.count[t]!;
     const gain = this.gain(j);
     let credit = 0;
     const grid = c.grids[t];
-    if (grid && visits < 3) credit += (c.searchPriority[t]! * goalValue((Math.exp(grid.meanLogK) * Math.sqrt(1.5 * c.weight[j]!)) / c.searchGoal[t]!, this.overshootWeight)) / 3;
+    if (grid && visits < 3) credit += (c.searchPriority[t]! * goalValue((Math.exp(grid.meanLogK) * Math.sqrt(1.5 * c.weight[j]!)) / c.searchGoal[t]!, this.searchOvershoot[t]!)) / 3;
     // Until the star's visits determine its K's (one visit per planet beyond the offset), each is credited as half a pair.
     if (this.information[t] && this.kVariance[c.planetFrom[t]!] === Infinity) {
       const w = c.weight[j]!;
@@ -148,7 +159,7 @@ export class PlanState {
         const m = c.rows[c.rowOffset[j]! + model.kIndex[i]!]!;
         const partner = m >= 0 ? -c.planetMaxAbsSignal[at]! : c.planetMaxAbsSignal[at]!;
         const info = ((w * wp) / (w + wp)) * (m - partner) * (m - partner);
-        credit += 0.5 * c.planetPriority[at]! * goalValue((c.planetK[at]! * Math.sqrt(info)) / c.planetGoal[at]!, this.overshootWeight);
+        credit += 0.5 * c.planetPriority[at]! * goalValue((c.planetK[at]! * Math.sqrt(info)) / c.planetGoal[at]!, this.planetOvershoot[at]!);
       }
     }
     return Math.max(gain, credit);
@@ -204,20 +215,26 @@ export class PlanState {
     this.hoursUsed += sign * c.hours[j]!;
     const grid = c.grids[t];
     if (grid) {
-      // No visits left: clear the sums exactly rather than keep the rounding residue of the removals.
-      if (mine.length === 0) this.stats.fill(0, c.statsOffset[t]!, c.statsOffset[t]! + searchStatsLength(grid));
+      // No visits left: back to the prior's sums exactly rather than keep the rounding residue of the removals.
+      if (mine.length === 0) seedSearchStats(this.stats, c, c.prior, t);
       else updateSearchStats(this.stats, c.statsOffset[t]!, grid, c.weight[j]!, c.midDays[j]!, sign);
     }
     const info = this.information[t];
     if (info) {
       info.apply(this.visitOf(j), sign);
-      info.variances(this.trialVariance);
-      for (let i = 0; i < info.planetCount; i++) this.kVariance[c.planetFrom[t]! + i] = this.trialVariance[i]!;
+      this.storeVariances(t);
     }
     const value = this.targetValue(t, 0, 0);
     this.utility += value - this.targetUtility[t]!;
     this.targetUtility[t] = value;
     this.targetVersion[t]++;
+  }
+
+  /** kVariance of star t's planets from its information as it stands. */
+  private storeVariances(t: number): void {
+    const info = this.information[t]!;
+    info.variances(this.trialVariance);
+    for (let i = 0; i < info.planetCount; i++) this.kVariance[this.c.planetFrom[t]! + i] = this.trialVariance[i]!;
   }
 
   openNight(n: number): void {

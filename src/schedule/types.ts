@@ -66,6 +66,22 @@ export interface ScheduleTarget {
   search?: ScheduleSearch;
 }
 
+/**
+ * A visit already made (or kept before a re-planning time): it enters its star's information
+ * and search sums as given and is never moved or removed. It uses no budget of the problem: the
+ * caller gives the time model what is left.
+ */
+export interface PriorVisit {
+  /** The star (ScheduleTarget.id). */
+  targetId: string;
+  /** The evening's local date: a visit on a problem night's date shares that night's nightly noise. */
+  localDate: string;
+  /** Mid-exposure, BJD_TDB days (the slots' midDays scale). */
+  midDays: number;
+  /** White noise of the visit (m/s); its weight is 1/sigma^2. */
+  sigmaWhiteMps: number;
+}
+
 export type ScheduleTimeModel =
   /** Choose this many nights among the problem's nights. */
   | { mode: 'choose-nights'; nights: number }
@@ -87,6 +103,8 @@ export interface ScheduleProblem {
   slots: CandidateSlot[];
   time: ScheduleTimeModel;
   constraints: ScheduleConstraints;
+  /** Visits already made; they count as information only. */
+  prior?: PriorVisit[];
 }
 
 export interface ScheduleOptions {
@@ -112,8 +130,10 @@ export interface TargetOutcome {
   targetId: string;
   starId: string;
   kind: 'ephemeris' | 'search';
-  /** Visits and hours of the star. */
+  /** Visits and hours of the star chosen by the plan (prior visits not included). */
   visits: number;
+  /** The star's prior visits (ScheduleProblem.prior). */
+  priorVisits: number;
   hours: number;
   /**
    * Ephemeris: 1 / Var(K), every other parameter marginalised, in (m/s)^-2.

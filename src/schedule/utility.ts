@@ -18,3 +18,13 @@ export function goalValue(fractionOfGoal: number, overshootWeight: number): numb
   if (overshootWeight <= 0) return 1;
   return 1 + overshootWeight * (1 - Math.exp(-(x - 1) / overshootWeight));
 }
+
+/**
+ * The overshoot weight of a target given what its visits already made reach (fraction of the
+ * goal): those visits are certain, so a target they alone carry to its goal needs no margin for
+ * weather, and its value is flat past the goal (Crest's rule: no further visits unless another
+ * planet of the star asks for them).
+ */
+export function overshootAfterPrior(priorFractionOfGoal: number, overshootWeight: number): number {
+  return priorFractionOfGoal >= 1 ? 0 : overshootWeight;
+}

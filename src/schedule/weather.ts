@@ -7,6 +7,8 @@ import { createRng } from '../rv/random.js';
 import { StarInformation } from '../rv/information.js';
 import { compileProblem, SlotVisit } from './compile.js';
 import { searchLogScore, searchStatsLength, updateSearchStats } from './objective-search.js';
+import { seedInformation, seedSearchStats } from './prior.js';
+import { PlanState } from './state.js';
 import type { ScheduleProblem, ScheduleResult } from './types.js';
 import { goalValue } from './utility.js';
 
@@ -57,11 +59,13 @@ export function simulateWeather(problem: ScheduleProblem, result: ScheduleResult
   const variance = new Float64Array(Math.max(1, ...c.models.map((m) => m?.planetCount ?? 0)));
   let clearNights = 0;
   let utility = 0;
-  const count = (slot: number, ratio: number, goal: number, priority: number) => {
+  // The plan state with prior visits alone gives each target's overshoot weight (utility.ts).
+  const prior = new PlanState(c, Infinity, overshoot);
+  const count = (slot: number, ratio: number, goal: number, priority: number, weight: number) => {
     sumRatio[slot] += ratio;
     // A hair of tolerance so a plan that reaches the goal exactly counts as reaching it.
     if (ratio >= goal * (1 - 1e-9)) reached[slot]++;
-    utility += priority * goalValue(ratio / goal, overshoot);
+    utility += priority * goalValue(ratio / goal, weight);
   };
   for (let trial = 0; trial < trials; trial++) {
     usedNights.forEach((n, i) => {
@@ -71,8 +75,12 @@ export function simulateWeather(problem: ScheduleProblem, result: ScheduleResult
     for (let t = 0; t < c.targetCount; t++) {
       const grid = c.grids[t];
       const info = information[t];
-      stats.fill(0);
-      info?.clear();
+      // Prior visits were made whatever the weather ahead.
+      seedSearchStats(stats, c, c.prior, t, 0);
+      if (info) {
+        info.clear();
+        seedInformation(info, c.prior, t);
+      }
       for (const j of perTarget[t]!) {
         if (!clear[c.slotNight[j]!]) continue;
         if (grid) updateSearchStats(stats, 0, grid, c.weight[j]!, c.midDays[j]!, 1);
@@ -85,10 +93,10 @@ export function simulateWeather(problem: ScheduleProblem, result: ScheduleResult
         info.variances(variance);
         for (let i = 0; i < info.planetCount; i++) {
           const at = c.planetFrom[t]! + i;
-          count(at, variance[i] === Infinity ? 0 : c.planetK[at]! / Math.sqrt(variance[i]!), c.planetGoal[at]!, c.planetPriority[at]!);
+          count(at, variance[i] === Infinity ? 0 : c.planetK[at]! / Math.sqrt(variance[i]!), c.planetGoal[at]!, c.planetPriority[at]!, prior.planetOvershoot[at]!);
         }
       }
-      if (grid) count(searchSlot[t]!, Math.exp(searchLogScore(stats, 0, grid)), c.searchGoal[t]!, c.searchPriority[t]!);
+      if (grid) count(searchSlot[t]!, Math.exp(searchLogScore(stats, 0, grid)), c.searchGoal[t]!, c.searchPriority[t]!, prior.searchOvershoot[t]!);
     }
   }
   return {

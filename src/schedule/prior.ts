@@ -1,0 +1,73 @@
+// Visits already made (ScheduleProblem.prior) as the plan state and the weather replay see them:
+// per star, fixed information visits and the search sums they start from. A prior visit on the
+// date of a problem night shares that night's key (and so its nightly noise) with new visits of
+// the night; every other date gets a key of its own after the problem's nights.
+import { designRows } from '../rv/information-model.js';
+import type { InformationVisit, StarInformation } from '../rv/information.js';
+import type { CompiledProblem } from './compile.js';
+import { searchStatsLength, updateSearchStats } from './objective-search.js';
+
+export interface CompiledPrior {
+  /** Per star: its prior visits for the information model (empty without a model). */
+  visits: InformationVisit[][];
+  /** Search sums of the prior visits alone, laid out like the plan's (statsOffset per star). */
+  stats: Float64Array;
+  /** Per star: number of prior visits and the sum of their weights. */
+  count: Int32Array;
+  weightSum: Float64Array;
+}
+
+export function compilePrior(c: CompiledProblem): CompiledPrior {
+  const { problem } = c;
+  const prior = problem.prior ?? [];
+  const targetPos = new Map(problem.targets.map((t, i) => [t.id, i]));
+  // Night keys: the compiled position of a problem night with that date, else one past them.
+  const problemKey = new Map<string, number>();
+  c.nightOrder.forEach((n, position) => problemKey.set(problem.nights[n]!.localDate, position));
+  const otherNights = new Map<string, { key: number; sumDays: number; count: number }>();
+  for (const v of prior) {
+    if (problemKey.has(v.localDate)) continue;
+    const night = otherNights.get(v.localDate) ?? { key: c.nightCount + otherNights.size, sumDays: 0, count: 0 };
+    night.sumDays += v.midDays;
+    night.count++;
+    otherNights.set(v.localDate, night);
+  }
+  const out: CompiledPrior = {
+    visits: problem.targets.map(() => []),
+    stats: new Float64Array(c.statsLength),
+    count: new Int32Array(c.targetCount),
+    weightSum: new Float64Array(c.targetCount),
+  };
+  for (const v of prior) {
+    const t = targetPos.get(v.targetId);
+    if (t === undefined) throw new Error(`schedule problem: prior visit names unknown star ${v.targetId}`);
+    if (!(v.sigmaWhiteMps > 0 && Number.isFinite(v.midDays))) throw new Error(`schedule problem: prior visit of ${v.targetId} needs sigmaWhiteMps > 0 and a finite midDays`);
+    // Weighted least squares: a visit weighs 1/sigma^2 (common practice).
+    const weight = 1 / (v.sigmaWhiteMps * v.sigmaWhiteMps);
+    out.count[t]++;
+    out.weightSum[t] += weight;
+    const grid = c.grids[t];
+    if (grid) updateSearchStats(out.stats, c.statsOffset[t]!, grid, weight, v.midDays, 1);
+    const model = c.models[t];
+    if (!model) continue;
+    const position = problemKey.get(v.localDate);
+    const other = otherNights.get(v.localDate);
+    const night = position ?? other!.key;
+    const nightBjd = position !== undefined ? c.nightMidDays[position]! : other!.sumDays / other!.count;
+    out.visits[t]!.push({ rows: designRows(model, v.midDays), offset: 0, weight, night, nightBjd });
+  }
+  return out;
+}
+
+/** Star t's prior visits into a fresh (or cleared) information accumulator. */
+export function seedInformation(info: StarInformation, prior: CompiledPrior, t: number): void {
+  for (const v of prior.visits[t]!) info.apply(v, 1);
+}
+
+/** Star t's search sums reset to those of its prior visits alone. */
+export function seedSearchStats(stats: Float64Array, c: CompiledProblem, prior: CompiledPrior, t: number, at = c.statsOffset[t]!): void {
+  const grid = c.grids[t];
+  if (!grid) return;
+  const from = c.statsOffset[t]!;
+  stats.set(prior.stats.subarray(from, from + searchStatsLength(grid)), at);
+}

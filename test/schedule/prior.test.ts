@@ -1,0 +1,103 @@
+// Visits already made (ScheduleProblem.prior): they count as information, share a night's
+// noise with new visits of that night, and a target they alone carry to its goal gets no more.
+import { describe, expect, it } from 'vitest';
+import { buildStarModel } from '../../src/rv/information-model.js';
+import { createRng } from '../../src/rv/random.js';
+import { optimiseSchedule } from '../../src/schedule/optimise.js';
+import { referenceKOverSigmaK, referenceUtility } from '../../src/schedule/reference.js';
+import { syntheticProblem } from '../../src/schedule/synthetic.js';
+import type { CandidateSlot, PriorVisit, ScheduleProblem } from '../../src/schedule/types.js';
+import { simulateWeather } from '../../src/schedule/weather.js';
+
+const SETTINGS = { searchGridSize: 48, overshootWeight: 0.1 };
+
+/** A synthetic problem whose first nights are already observed: some of their slots become prior visits. */
+function withPrior(seed: number, sharedNight: boolean): ScheduleProblem {
+  const problem = syntheticProblem({
+    targets: 6, nights: 10, slotsPerNight: 4, searchFraction: 0.34, visibleFraction: 0.8,
+    time: { mode: 'choose-nights', nights: 3 }, minSpacingHours: 1, onePerNight: false, nightHours: 6, seed, phaseErrors: true,
+  });
+  const rng = createRng(seed + 100);
+  const past = new Set([0, 1, 2]);
+  const prior: PriorVisit[] = problem.slots
+    .filter((s) => past.has(s.nightIndex) && rng.uniform() < 0.3)
+    .map((s) => ({ targetId: s.targetId, localDate: problem.nights[s.nightIndex]!.localDate, midDays: s.midDays, sigmaWhiteMps: s.sigmaWhiteMps }));
+  // With `sharedNight`, night 3 stays in the problem and also holds a prior visit of every star.
+  const keep = (s: CandidateSlot) => !past.has(s.nightIndex);
+  if (sharedNight) {
+    for (const s of problem.slots.filter((x) => x.nightIndex === 3 && x.slotId.endsWith('/0'))) {
+      prior.push({ targetId: s.targetId, localDate: problem.nights[3]!.localDate, midDays: s.midDays - 0.01, sigmaWhiteMps: s.sigmaWhiteMps });
+    }
+  }
+  return { ...problem, nights: problem.nights.filter((n) => !past.has(n.index)), slots: problem.slots.filter(keep), prior };
+}
+
+function chosen(problem: ScheduleProblem, ids: string[]): CandidateSlot[] {
+  const byId = new Map(problem.slots.map((s) => [s.slotId, s]));
+  return ids.map((id) => byId.get(id)!);
+}
+
+describe('prior visits in the optimiser', () => {
+  it('the plan utility counts them exactly as a from-scratch recomputation does (slow reference)', () => {
+    for (const seed of [1, 2, 3, 4]) {
+      for (const sharedNight of [false, true]) {
+        const problem = withPrior(seed, sharedNight);
+        expect(problem.prior!.length).toBeGreaterThan(3);
+        const result = optimiseSchedule(problem, { seed, restarts: 2 });
+        expect(result.utility).toBeCloseTo(referenceUtility(problem, chosen(problem, result.slotIds), SETTINGS), 9);
+        // And they are worth something: without them the same visits reach less.
+        const without = { ...problem, prior: [] };
+        expect(referenceUtility(without, chosen(problem, result.slotIds), SETTINGS)).toBeLessThan(result.utility);
+      }
+    }
+  });
+
+  it('a clear-sky weather replay keeps them (each planet and search reaches what the plan says)', () => {
+    const problem = withPrior(5, true);
+    const clear = { ...problem, nights: problem.nights.map((n) => ({ ...n, clearProbability: 1 })) };
+    const result = optimiseSchedule(clear, { seed: 1, restarts: 1 });
+    const weather = simulateWeather(clear, result, 3, 1);
+    const reference = referenceKOverSigmaK(clear, chosen(clear, result.slotIds), SETTINGS);
+    weather.targets.forEach((t, i) => expect(t.meanKOverSigmaK).toBeCloseTo(reference[i]!, 9));
+    expect(weather.meanUtility).toBeCloseTo(result.utility, 9);
+  });
+
+  it('a planet whose past visits already reach its goal gets no further visits, even with nights to spare', () => {
+    const nights = Array.from({ length: 6 }, (_, n) => ({ index: n, localDate: `2027-03-0${n + 1}`, clearProbability: 1, hoursAvailable: 8, midDays: 100 + n + 0.25 }));
+    const star = (id: string, periodDays: number) => ({
+      id,
+      planets: [{ id: `${id} b`, priority: 1, kMps: 8, goal: 5 }],
+      model: buildStarModel({ planets: [{ id: `${id} b`, kMps: 8, periodDays, tcBjd: 99.3, periodErrDays: 0, tcErrDays: 0, ecc: 0, omegaDeg: 90 }], nightlyJitterMps: 0, spanBjd: [100, 106] }),
+    });
+    const slots: CandidateSlot[] = [];
+    for (const id of ['DONE', 'OPEN']) {
+      for (const n of nights) {
+        for (let k = 0; k < 8; k++) {
+          const midDays = n.midDays - 0.15 + k * 0.04;
+          slots.push({ slotId: `${id}/${n.index}/${k}`, targetId: id, nightIndex: n.index, startMs: (midDays - 2440587.5) * 86_400_000, durationSec: 900, sigmaWhiteMps: 2, midDays });
+        }
+      }
+    }
+    // Twelve past visits of DONE, six at each quadrature, σ = 1 m/s: K/σ_K = 8 √12 ≈ 28, far past 5.
+    const prior: PriorVisit[] = Array.from({ length: 12 }, (_, i) => ({
+      targetId: 'DONE',
+      localDate: `2027-02-${10 + i}`,
+      midDays: 99.3 - 3.1 * (10 - Math.floor(i / 2)) + 3.1 * (i % 2 ? 0.75 : 0.25),
+      sigmaWhiteMps: 1,
+    }));
+    const problem: ScheduleProblem = {
+      nights,
+      targets: [star('DONE', 3.1), star('OPEN', 4.3)],
+      slots,
+      time: { mode: 'given-nights' },
+      constraints: { minSpacingHours: 20, onePerNight: true },
+      prior,
+    };
+    const before = referenceKOverSigmaK({ ...problem, slots: [] }, [], SETTINGS);
+    expect(before[0]).toBeGreaterThan(5);
+    const result = optimiseSchedule(problem, { seed: 1 });
+    expect(result.targets[0]!.priorVisits).toBe(12);
+    expect(result.targets[0]!.visits).toBe(0);
+    expect(result.targets[1]!.visits).toBeGreaterThan(0);
+  });
+});
