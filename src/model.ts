@@ -195,6 +195,19 @@ export interface Goals {
   significance: number;
 }
 
+/** One row of a campaign's observed file (src/io/observed.ts), before its time is resolved. */
+export interface ObservedRow {
+  targetId: string;
+  midBjdTdb?: number;
+  midUtc?: string;
+  instrument: string;
+  rvMps?: number;
+  rvErrMps?: number;
+  /** 1-based data row and the line it ends on. */
+  row: number;
+  line: number;
+}
+
 export interface Campaign {
   name: string;
   file: string;
@@ -209,6 +222,10 @@ export interface Campaign {
   noise: NoiseSettings;
   transits: TransitAvoidance;
   seed: number;
+  /** Visits already made (the campaign's `observed` file), when it names one. */
+  observed?: { file: string; rows: ObservedRow[] };
+  /** Nights lost to weather or faults (local evening dates): never planned. */
+  lostDates: string[];
 }
 
 /** One night of the site (docs/design.md, "Data model"). Instants are UTC; null where the Sun never gets that low/high. */
@@ -324,7 +341,27 @@ export interface TargetSummary {
   informationEfficiency?: number;
   /** 1-sigma phase error at the window's end. */
   phaseErrAtEnd?: number;
+  /** Visits of the star already made (observed file) or kept (before `--now`); `visits` counts only those planned ahead. */
+  priorVisits?: number;
+  /** K/sigma_K the prior visits alone give (ephemeris targets). */
+  priorKOverSigmaK?: number;
+  /** The orbit fitted to the RVs so far, beside the catalogue values the plan started from. */
+  fit?: OrbitUpdate;
+  /** Blind search: the strongest periodogram peak of the RVs so far (offered, never adopted). */
+  peak?: { periodDays: number; kMps: number; fap: number; significant: boolean };
   warnings: string[];
+}
+
+/** What a fit of the RVs so far changed for one planet (1-sigma errors). */
+export interface OrbitUpdate {
+  points: number;
+  kMps: number;
+  kErrMps: number;
+  tcBjdTdb: number;
+  tcErrDays: number;
+  periodDays: number;
+  periodErrDays: number;
+  catalogue: { kMps?: number; tcBjdTdb: number; tcErrDays: number; periodDays: number; periodErrDays: number };
 }
 
 export interface Plan {

@@ -1,3 +1,4 @@
+import { DateTime } from 'luxon';
 import { inputError } from '../errors.js';
 import { parseDecimal } from '../io/decimal.js';
 import { jsonChunks } from '../report/json-chunks.js';
@@ -30,4 +31,31 @@ export function choiceFlag<T extends string>(flag: string, choices: readonly T[]
 export function printJson(value: unknown): void {
   for (const piece of jsonChunks(value)) process.stdout.write(piece);
   process.stdout.write('\n');
+}
+
+/**
+ * A commander parser for an instant: ISO 8601 with a zone (Z or an offset), or the word `now`
+ * for the current time, read here at the edge (the core never reads the clock).
+ */
+export function instantFlag(flag: string) {
+  return (text: string): Date => {
+    if (text === 'now') return new Date();
+    const date = DateTime.fromISO(text, { setZone: true });
+    if (!date.isValid || !/(Z|[+-]\d{2}(:?\d{2})?)$/.test(text)) {
+      throw inputError({ file: 'command line', field: flag, value: text, allowed: 'an ISO 8601 time with its zone, such as 2027-03-20T02:10:00Z or 2027-03-19T23:10:00-03:00, or now' });
+    }
+    return date.toJSDate();
+  };
+}
+
+/** A commander parser for a comma-separated list of dates (YYYY-MM-DD), each once. */
+export function datesFlag(flag: string) {
+  return (text: string): string[] => {
+    const dates = text.split(',').map((d) => d.trim());
+    dates.forEach((d, i) => {
+      if (!/^\d{4}-\d{2}-\d{2}$/.test(d) || !DateTime.fromISO(d).isValid) throw inputError({ file: 'command line', field: flag, value: d, allowed: 'dates as YYYY-MM-DD, separated by commas' });
+      if (dates.indexOf(d) !== i) throw inputError({ file: 'command line', field: flag, value: d, allowed: 'each date once' });
+    });
+    return dates;
+  };
 }

@@ -14,7 +14,8 @@ import { renderPlanIcs } from '../report/plan-ics.js';
 import { renderPlanJson } from '../report/plan-json.js';
 import { renderPlanMarkdown } from '../report/plan-markdown.js';
 import { renderPlanText } from '../report/plan-terminal.js';
-import { numberFlag } from './options.js';
+import { datesFlag, instantFlag, numberFlag } from './options.js';
+import { previousPlan } from './previous-plan.js';
 
 /** The files `crest plan` writes. */
 const PLAN_FILES = ['plan.md', 'plan.csv', 'plan.json', 'plan.ics', 'report.html'];
@@ -24,6 +25,14 @@ interface PlanFlags {
   nights?: number;
   json?: boolean;
   seed?: number;
+  now?: Date;
+  lost?: string[];
+}
+
+/** The campaign with the command line's lost nights added to its own. */
+function withLost(campaign: Campaign, lost: string[] | undefined): Campaign {
+  if (!lost) return campaign;
+  return { ...campaign, lostDates: [...new Set([...campaign.lostDates, ...lost])].sort() };
 }
 
 /** The campaign with its number of nights to choose replaced; only choose-nights campaigns choose nights. */
@@ -43,14 +52,17 @@ export function registerPlan(program: Command): Command {
     .option('--out <dir>', 'output folder (default: ./crest-out/<campaign name>/)')
     .option('--seed <n>', "override the campaign's seed", numberFlag('--seed', 'a whole number, 0 or more', 0, Number.MAX_SAFE_INTEGER, { integer: true }))
     .option('--nights <n>', 'choose this many nights instead of the campaign\'s number (choose-nights campaigns: how many nights to ask for?)', numberFlag('--nights', 'a whole number of nights from 1 to 366', 1, 366, { integer: true }))
+    .option('--now <time>', 're-plan from this instant (ISO 8601 with zone, or "now"): visits before it stay as planned in the --out folder\'s plan.json or as observed', instantFlag('--now'))
+    .option('--lost <dates>', 'nights lost to weather or faults, YYYY-MM-DD,... (added to the campaign\'s lost list)', datesFlag('--lost'))
     .option('--json', 'print plan.json on stdout instead of the summary')
     .action(async (file: string | undefined, opts: PlanFlags) => {
       const campaignFile = file ?? path.relative(process.cwd(), DEMO_CAMPAIGN);
-      const campaign = withNights(readCampaign(campaignFile), opts.nights);
+      const campaign = withLost(withNights(readCampaign(campaignFile), opts.nights), opts.lost);
       const outDir = opts.out ?? path.join('crest-out', slug(campaign.name));
-      const inputs = [campaignFile, campaign.targetsFile, campaign.site.file, campaign.instrument.file];
+      const inputs = [campaignFile, campaign.targetsFile, campaign.site.file, campaign.instrument.file, ...(campaign.observed ? [campaign.observed.file] : [])];
       checkOutFolder(outDir, PLAN_FILES, inputs);
-      const plan = buildPlan(campaign, { seed: opts.seed });
+      const previous = opts.now ? previousPlan(outDir, campaign.name, (line) => console.error(line)) : undefined;
+      const plan = buildPlan(campaign, { seed: opts.seed, ...(opts.now ? { now: opts.now } : {}), ...(previous ? { previous } : {}) });
       const json = renderPlanJson(plan);
       const written = writeOutputSet(
         outDir,

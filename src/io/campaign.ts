@@ -2,13 +2,14 @@ import path from 'node:path';
 import { z } from 'zod';
 import { DateTime } from 'luxon';
 import { inputError } from '../errors.js';
-import type { Campaign, Constraints } from '../model.js';
+import type { Campaign, Constraints, Target } from '../model.js';
 import { readInstrument } from './instrument.js';
 import { INSTRUMENTS_DIR, SITES_DIR } from './paths.js';
 import { readStructured } from './read-text.js';
 import { existingFile, resolveRef } from './resolve.js';
 import { readSite } from './site.js';
 import { semesterWindow } from './semester.js';
+import { readObserved } from './observed.js';
 import { readTargets } from './targets.js';
 import { issueToError } from './zod-issue.js';
 import { DEFAULT_NIGHTLY_JITTER_FRACTION } from '../rv/star-noise.js';
@@ -87,6 +88,8 @@ export const campaignSchema = z.strictObject({
     })
     .default({ confidence: 0.95, maxOrbitFraction: 0.2 }),
   seed: z.number().int('a whole number').min(0, 'a whole number, 0 or more').default(1),
+  observed: z.string({ error: 'a path to the observed-visits file (CSV)' }).min(1, 'a path to the observed-visits file (CSV)').optional(),
+  lost: z.array(isoDate).superRefine(eachDateOnce).default([]),
 });
 
 export function readCampaign(file: string): Campaign {
@@ -108,12 +111,14 @@ export function readCampaign(file: string): Campaign {
       }
     });
   }
+  const targets = readTargets(shown(targetsFile));
+  const observedFile = c.observed === undefined ? undefined : shown(existingFile(path.resolve(baseDir, c.observed), c.observed, 'observed-visits file', { file, field: 'observed' }));
   return {
     name: c.name,
     file,
     site,
     instrument: readInstrument(shown(instrumentPath)),
-    targets: readTargets(shown(targetsFile)),
+    targets,
     targetsFile: shown(targetsFile),
     window,
     time: c.time,
@@ -122,5 +127,12 @@ export function readCampaign(file: string): Campaign {
     noise: c.noise,
     transits: c.transits,
     seed: c.seed,
+    ...(observedFile ? { observed: { file: observedFile, rows: readObserved(observedFile, knownIds(targets)) } } : {}),
+    lostDates: [...c.lost].sort(),
   };
+}
+
+/** The ids an observed row may name: every star and every row of the target list. */
+function knownIds(targets: Target[]): Set<string> {
+  return new Set(targets.flatMap((t) => [t.id, t.starId]));
 }

@@ -79,6 +79,8 @@ const campaignSchema = z.object({
   noise: z.object({ nightlyJitterFraction: fraction }),
   transits: z.object({ confidence: fraction, maxOrbitFraction: fraction }),
   seed: num.int('a whole number').min(0, 'a whole number, 0 or more'),
+  observed: z.object({ file: z.string(), rows: z.array(z.looseObject({ targetId: z.string(), instrument: z.string() })) }).optional(),
+  lostDates: z.array(localDate).default([]),
 });
 
 const edges = z.object({ dusk: instantOrNull, dawn: instantOrNull });
@@ -111,6 +113,31 @@ const visitSchema = z.object({
   sigmaEffMps: positive,
   sigmaWhiteMps: positive,
   snrPerPixel: positive,
+  kept: z.literal(true).optional(),
+});
+
+const observedSchema = z.object({
+  targetId: z.string(),
+  starId: z.string(),
+  midBjdTdb: bjd,
+  midUtc: z.iso.datetime({ offset: true, error: 'an ISO 8601 instant' }),
+  localDate,
+  instrument: z.string(),
+  rvMps: optional(num),
+  rvErrMps: optional(positive),
+  sigmaWhiteMps: positive,
+  source: z.string(),
+});
+
+const orbitUpdateSchema = z.object({
+  points: nonNegative,
+  kMps: num,
+  kErrMps: nonNegative,
+  tcBjdTdb: bjd,
+  tcErrDays: nonNegative,
+  periodDays: positive,
+  periodErrDays: nonNegative,
+  catalogue: z.object({ kMps: optional(num), tcBjdTdb: bjd, tcErrDays: nonNegative, periodDays: positive, periodErrDays: nonNegative }),
 });
 
 const summarySchema = z.object({
@@ -127,6 +154,10 @@ const summarySchema = z.object({
   goalProbability: optional(fraction),
   informationEfficiency: optional(nonNegative),
   phaseErrAtEnd: optional(nonNegative),
+  priorVisits: optional(nonNegative),
+  priorKOverSigmaK: optional(nonNegative),
+  fit: orbitUpdateSchema.optional(),
+  peak: z.object({ periodDays: positive, kMps: nonNegative, fap: fraction, significant: z.boolean() }).optional(),
   warnings: z.array(z.string()),
 });
 
@@ -134,6 +165,8 @@ const planSchema = z
   .object({
     schemaVersion: z.literal(1, { error: NOT_A_PLAN }),
     generator: z.string(),
+    replan: z.object({ nowUtc: z.iso.datetime({ offset: true, error: 'an ISO 8601 instant' }), lostDates: z.array(localDate) }).optional(),
+    observed: z.array(observedSchema).optional(),
     campaign: campaignSchema,
     nights: z.array(nightSchema),
     plannedDates: z.array(localDate),

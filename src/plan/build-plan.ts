@@ -10,13 +10,15 @@ import { simulateWeather } from '../schedule/weather.js';
 import { computeNights } from '../sky/nights.js';
 import { computeWindows } from '../sky/visibility.js';
 import { candidateSlots, scheduleNights, setupStars, setupTargets, starTargets, transitRule, type SlotDetail, type TargetSetup } from './candidates.js';
+import { observedVisits } from './observed-visits.js';
+import { history, openSlot, priorVisits, remaining, type ReplanOptions } from './replan.js';
 import { planWarnings } from './warnings.js';
 
 export const GENERATOR = 'crest 0.1.0';
 /** Weather trials per plan (issue: 1,000). */
 export const WEATHER_TRIALS = 1000;
 
-export interface PlanOptions {
+export interface PlanOptions extends ReplanOptions {
   /** Overrides the campaign's seed. */
   seed?: number;
   weatherTrials?: number;
@@ -30,30 +32,40 @@ export function buildPlan(campaign: Campaign, options: PlanOptions = {}): Plan {
   const setups = setupTargets(campaign);
   const stars = setupStars(campaign, setups);
   const { windows } = computeWindows(site, starTargets(stars), nights, constraints);
-  const given = time.mode === 'given-nights' ? new Set(time.dates) : undefined;
-  const details = candidateSlots(campaign, nights, windows, stars).filter((d) => !given || given.has(d.localDate));
-  const allNights = scheduleNights(campaign, nights);
+  const observed = observedVisits(campaign, stars);
+  const past = history(campaign, observed, options);
+  const open = openSlot(campaign, past, options.now);
+  const left = remaining(campaign, past, options.previous, scheduleNights(campaign, nights));
+  const dates = new Set(left.nights.map((n) => n.localDate));
+  const details = candidateSlots(campaign, nights, windows, stars).filter((d) => dates.has(d.localDate) && open(d));
   const problem: ScheduleProblem = {
-    nights: given ? allNights.filter((n) => given.has(n.localDate)) : allNights,
+    nights: left.nights,
     targets: stars.flatMap((s) => (s.scheduleTarget ? [s.scheduleTarget] : [])),
     slots: details.map((d) => d.slot),
-    time: time.mode === 'choose-nights' ? time : time.mode === 'hours' ? time : { mode: 'given-nights' },
+    time: left.time,
     constraints: { minSpacingHours: constraints.minSpacingHours, onePerNight: constraints.minSpacingHours >= 12 },
+    prior: priorVisits(past),
   };
   const result = optimiseSchedule(problem, { seed });
   const weather = simulateWeather(problem, result, options.weatherTrials ?? WEATHER_TRIALS, seed);
   const bySlot = new Map(details.map((d) => [d.slot.slotId, d]));
-  const visits = result.slotIds.map((id) => plannedVisit(bySlot.get(id)!, campaign));
+  const ahead = result.slotIds.map((id) => plannedVisit(bySlot.get(id)!, campaign));
+  const visits = [...past.kept, ...ahead].sort((a, b) => a.startUtc.localeCompare(b.startUtc));
   const windowEndBjd = (t: TargetSetup) =>
     starBjdTdb(DateTime.fromISO(window.end, { zone: site.timeZone }).plus({ days: 1 }).toJSDate(), t.target);
   const targets = setups.map((setup) => targetSummary(setup, result, weather.targets, windowEndBjd(setup)));
+  const lost = new Set(campaign.lostDates);
   const plannedDates =
-    time.mode === 'given-nights' ? [...time.dates].sort() : result.nightIndices.map((i) => nights[i]!.localDate);
+    time.mode === 'given-nights'
+      ? time.dates.filter((d) => !lost.has(d)).sort()
+      : [...new Set([...left.spentDates, ...past.kept.map((v) => v.localDate), ...result.nightIndices.map((i) => nights[i]!.localDate)])].sort();
   const exposureHours = visits.reduce((sum, v) => sum + v.exposureSec, 0) / 3600;
   const totalHours = visits.reduce((sum, v) => sum + v.durationSec, 0) / 3600;
   const plan: Plan = {
     schemaVersion: 1,
     generator: GENERATOR,
+    ...(options.now ? { replan: { nowUtc: DateTime.fromJSDate(options.now, { zone: 'utc' }).toISO({ suppressMilliseconds: true })!, lostDates: campaign.lostDates } } : {}),
+    ...(observed.length > 0 ? { observed } : {}),
     campaign: { ...campaign, seed },
     nights,
     plannedDates,
@@ -111,6 +123,7 @@ function targetSummary(
     kMps: setup.kMps,
     visits: outcome.visits,
     hours: outcome.hours,
+    ...(outcome.priorVisits > 0 ? { priorVisits: outcome.priorVisits, priorKOverSigmaK: outcome.priorKOverSigmaK } : {}),
     sigmaKMps: outcome.sigmaKMps,
     kOverSigmaK: outcome.kOverSigmaK,
     goal: outcome.goal,

@@ -1,6 +1,6 @@
 import type { Plan } from '../model.js';
 import { markdownTable } from './markdown.js';
-import { ADVISORY, nightHeading, TARGET_COLUMNS, targetRows, totalsLine, VISIT_COLUMNS, visitRow, visitsByNight } from './plan-rows.js';
+import { ADVISORY, historyLine, nightHeading, OBSERVED_COLUMNS, observedRows, targetColumns, targetRows, totalsLine, VISIT_COLUMNS, visitRow, visitsByNight } from './plan-rows.js';
 
 /** plan.md: the plan for people. */
 export function renderPlanMarkdown(plan: Plan): string {
@@ -13,13 +13,15 @@ export function renderPlanMarkdown(plan: Plan): string {
     `- Instrument: ${c.instrument.name}`,
     `- Window: ${c.window.start} to ${c.window.end}; twilight ${c.constraints.twilight}, airmass ≤ ${c.constraints.maxAirmass}, Moon ≥ ${c.constraints.moonSeparationDeg}°`,
     `- ${totalsLine(plan)}`,
+    ...(historyLine(plan) ? [`- ${historyLine(plan)}`] : []),
     '',
     `> ${ADVISORY}`,
     '',
     '## Targets',
     '',
-    markdownTable(TARGET_COLUMNS, targetRows(plan)),
+    markdownTable(targetColumns(plan), targetRows(plan)),
     '',
+    ...(plan.observed?.length ? ['## Visits already made', '', markdownTable(OBSERVED_COLUMNS, observedRows(plan)), ''] : []),
     '## Nights',
     '',
   ];

@@ -33,7 +33,7 @@ export function visitRow(visit: PlannedVisit, zone: string): string[] {
   return [
     clock(visit.startUtc, zone),
     clock(visit.startUtc, 'UTC'),
-    visit.starId,
+    visit.kept ? `${visit.starId} (kept)` : visit.starId,
     fmt(visit.exposureSec, 0),
     fmt(visit.airmass, 2),
     phasesText(visit),
@@ -55,7 +55,7 @@ export function nightHeading(plan: Plan, localDate: string): string {
   return `${localDate} ${weekday}  ${dark}, ${moon}`;
 }
 
-export const TARGET_COLUMNS: Column[] = [
+const TARGET_COLUMNS: Column[] = [
   { header: 'target' },
   { header: 'kind' },
   { header: 'K (m/s)', align: 'right' },
@@ -68,19 +68,37 @@ export const TARGET_COLUMNS: Column[] = [
   { header: 'hours', align: 'right' },
 ];
 
+/** Columns for what was done before the plan: visits made or kept, and the K/sigma_K they give. */
+const DONE_COLUMNS: Column[] = [
+  { header: 'done', align: 'right' },
+  { header: 'K/sigma_K done', align: 'right' },
+];
+
+/** A plan made with visits already done (observed or kept) shows them beside the visits ahead. */
+const showsDone = (plan: Plan) => plan.replan !== undefined || plan.observed !== undefined;
+
+/** The target table's columns: `visits` counts the visits ahead; `done` those already made or kept. */
+export function targetColumns(plan: Plan): Column[] {
+  return showsDone(plan) ? [...TARGET_COLUMNS.slice(0, 3), ...DONE_COLUMNS, ...TARGET_COLUMNS.slice(3)] : TARGET_COLUMNS;
+}
+
 export function targetRows(plan: Plan): string[][] {
-  return plan.targets.map((t) => [
-    t.targetId,
-    t.kind,
-    fmt(t.kMps, 2),
-    String(t.visits),
-    fmt(t.sigmaKMps, 2),
-    fmt(t.kOverSigmaK, 1),
-    fmt(t.goal, 1),
-    percent(t.goalProbability),
-    fmt(t.informationEfficiency, 2),
-    fmt(t.hours, 1),
-  ]);
+  return plan.targets.map((t) => {
+    const row = [
+      t.targetId,
+      t.kind,
+      fmt(t.kMps, 2),
+      String(t.visits),
+      fmt(t.sigmaKMps, 2),
+      fmt(t.kOverSigmaK, 1),
+      fmt(t.goal, 1),
+      percent(t.goalProbability),
+      fmt(t.informationEfficiency, 2),
+      fmt(t.hours, 1),
+    ];
+    if (!showsDone(plan)) return row;
+    return [...row.slice(0, 3), String(t.priorVisits ?? 0), fmt(t.priorKOverSigmaK, 1), ...row.slice(3)];
+  });
 }
 
 /** Visits grouped by night, nights in date order, visits in time order. */
@@ -102,3 +120,28 @@ export function totalsLine(plan: Plan): string {
 
 export const ADVISORY =
   'This plan is advisory. The observatory\'s own safety rules (Sun avoidance, wind, humidity, dome and telescope limits) always take precedence.';
+
+/** What the plan started from, when it was re-planned or given visits already made; undefined otherwise. */
+export function historyLine(plan: Plan): string | undefined {
+  if (!showsDone(plan)) return undefined;
+  const kept = plan.visits.filter((v) => v.kept).length;
+  const parts = [
+    plan.replan ? `Re-planned from ${plan.replan.nowUtc}: ${kept} earlier visit${kept === 1 ? '' : 's'} kept as planned` : undefined,
+    plan.observed ? `${plan.observed.length} visit${plan.observed.length === 1 ? '' : 's'} already made (${plan.campaign.observed?.file ?? 'observed file'})` : undefined,
+    plan.campaign.lostDates.length ? `lost nights ${plan.campaign.lostDates.join(', ')}` : undefined,
+  ];
+  return `${parts.filter((p) => p !== undefined).join('; ')}.`;
+}
+
+export const OBSERVED_COLUMNS: Column[] = [
+  { header: 'night' },
+  { header: 'UTC' },
+  { header: 'target' },
+  { header: 'instrument' },
+  { header: 'RV (m/s)', align: 'right' },
+  { header: 'error (m/s)', align: 'right' },
+];
+
+export function observedRows(plan: Plan): string[][] {
+  return (plan.observed ?? []).map((v) => [v.localDate, v.midUtc.slice(11, 16), v.targetId, v.instrument, fmt(v.rvMps, 2), fmt(v.rvErrMps, 2)]);
+}

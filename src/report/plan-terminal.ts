@@ -1,6 +1,6 @@
 import type { Plan } from '../model.js';
 import { renderTable } from './table.js';
-import { ADVISORY, nightHeading, TARGET_COLUMNS, targetRows, totalsLine, VISIT_COLUMNS, visitRow, visitsByNight } from './plan-rows.js';
+import { ADVISORY, historyLine, nightHeading, OBSERVED_COLUMNS, observedRows, targetColumns, targetRows, totalsLine, VISIT_COLUMNS, visitRow, visitsByNight } from './plan-rows.js';
 
 /** The plain-text summary printed by `crest plan`. */
 export function renderPlanText(plan: Plan): string {
@@ -9,8 +9,10 @@ export function renderPlanText(plan: Plan): string {
   const out: string[] = [
     `${c.name}: ${c.site.name}, ${c.instrument.name}`,
     `Window ${c.window.start} to ${c.window.end}; times in ${zone} and UTC.`,
+    ...(historyLine(plan) ? [historyLine(plan)!] : []),
     '',
   ];
+  if (plan.observed?.length) out.push('Visits already made', renderTable(OBSERVED_COLUMNS, observedRows(plan)), '');
   for (const [date, visits] of visitsByNight(plan)) {
     out.push(nightHeading(plan, date));
     out.push(visits.length ? indent(renderTable(VISIT_COLUMNS, visits.map((v) => visitRow(v, zone)))) : '  (no visit)');
@@ -19,7 +21,7 @@ export function renderPlanText(plan: Plan): string {
   if (plan.backups.length) {
     out.push(`Backup nights, best first: ${plan.backups.map((b) => b.localDate).join(', ')}`, '');
   }
-  out.push('Targets', renderTable(TARGET_COLUMNS, targetRows(plan)), '');
+  out.push('Targets', renderTable(targetColumns(plan), targetRows(plan)), '');
   out.push(totalsLine(plan));
   const warnings = [...plan.warnings, ...plan.targets.flatMap((t) => t.warnings.map((w) => `${t.targetId}: ${w}`))];
   if (warnings.length) out.push('', 'Warnings', ...warnings.map((w) => `- ${w}`));

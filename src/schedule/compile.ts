@@ -55,6 +55,8 @@ export interface CompiledProblem {
   /** Problem nights sorted by their first slot's start (nights without slots last). */
   nightOrder: number[];
   nightHours: Float64Array;
+  /** Per night position: 1 for a granted night (types.ts ScheduleNight.granted). */
+  nightGranted: Uint8Array;
   /** Per night position: the night's middle (midDays scale), where nightly activity is evaluated. */
   nightMidDays: Float64Array;
   /** Sorted slots of night n are positions nightFrom[n] .. nightTo[n] - 1. */
@@ -156,6 +158,7 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
     nightCount: N,
     nightOrder,
     nightHours: Float64Array.from(nightOrder, (n) => problem.nights[n]!.hoursAvailable),
+    nightGranted: Uint8Array.from(nightOrder, (n) => (problem.nights[n]!.granted ? 1 : 0)),
     nightMidDays: Float64Array.from(nightOrder, (n) => problem.nights[n]!.midDays ?? (midCount[n]! > 0 ? midSum[n]! / midCount[n]! : 0)),
     nightFrom: new Int32Array(N),
     nightTo: new Int32Array(N),

@@ -13,7 +13,7 @@ export function shuffled(items: number[], rng: Rng): number[] {
 
 export function openNightList(state: PlanState): number[] {
   const out: number[] = [];
-  for (let n = 0; n < state.c.nightCount; n++) if (state.nightOpen[n]) out.push(n);
+  for (let n = 0; n < state.c.nightCount; n++) if (state.nightOpen[n] && !state.c.nightGranted[n]) out.push(n);
   return out;
 }
 

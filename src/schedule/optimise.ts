@@ -59,6 +59,7 @@ function outcomes(state: PlanState): TargetOutcome[] {
         targetId: planet.id,
         kind: 'ephemeris',
         ...shared,
+        priorKOverSigmaK: state.priorPlanetFraction[at]! * planet.goal,
         informationPerMps2: 1 / variance,
         sigmaKMps: Math.sqrt(variance),
         kOverSigmaK,
@@ -76,6 +77,7 @@ function outcomes(state: PlanState): TargetOutcome[] {
         targetId: star.search.id,
         kind: 'search',
         ...shared,
+        priorKOverSigmaK: state.priorSearchFraction[t]! * star.search.goal,
         informationPerMps2: info,
         sigmaKMps: info > 0 ? 1 / Math.sqrt(info) : Infinity,
         kOverSigmaK,
@@ -137,8 +139,10 @@ function perturb(state: PlanState, nights: number, rng: Rng): void {
 export function optimiseCompiled(c: CompiledProblem, options: ScheduleOptions): PlanState {
   const time = c.problem.time;
   const state = new PlanState(c, time.mode === 'hours' ? time.hours : Infinity, options.overshootWeight ?? 0.1);
-  const nights = time.mode === 'choose-nights' ? Math.min(time.nights, c.nightCount) : 0;
-  if (nights > 0) {
+  const nights = time.mode === 'choose-nights' ? Math.min(time.nights, c.nightCount - c.nightGranted.reduce((a, b) => a + b, 0)) : 0;
+  const choosing = time.mode === 'choose-nights';
+  if (choosing) {
+    for (let n = 0; n < c.nightCount; n++) if (c.nightGranted[n]) fillNight(state, n);
     chooseNightsGreedy(state, nights, new Set());
   } else {
     for (let n = 0; n < c.nightCount; n++) state.openNight(n);
@@ -147,7 +151,7 @@ export function optimiseCompiled(c: CompiledProblem, options: ScheduleOptions): 
   options.onProgress?.(state.utility, 'greedy');
   const rng = createRng(options.seed);
   const settings: LocalSearchSettings = {
-    chooseNights: nights > 0,
+    chooseNights: choosing,
     maxPasses: options.maxPasses ?? 30,
     nightCandidates: 10,
     shortlist: time.mode === 'hours' ? 64 : 0,

@@ -41,6 +41,9 @@ export class PlanState {
   openNights = 0;
   /** Overshoot weight of each planet (compiled order) and of each star's search (utility.ts overshootAfterPrior). */
   readonly planetOvershoot: Float64Array;
+  /** (K/sigma_K)/goal of each planet and search from the prior visits alone. */
+  readonly priorPlanetFraction: Float64Array;
+  readonly priorSearchFraction: Float64Array;
   readonly searchOvershoot: Float64Array;
   private readonly visit: SlotVisit;
   private readonly trialVariance: Float64Array;
@@ -66,8 +69,10 @@ export class PlanState {
       seedInformation(info, c.prior, t);
       this.storeVariances(t);
     });
-    this.planetOvershoot = Float64Array.from(c.planetK, (_, i) => overshootAfterPrior(this.planetFractionOfGoal(i), overshootWeight));
-    this.searchOvershoot = Float64Array.from(c.grids, (grid, t) => (grid ? overshootAfterPrior(this.searchFractionOfGoal(t, 0, 0), overshootWeight) : overshootWeight));
+    this.priorPlanetFraction = Float64Array.from(c.planetK, (_, i) => this.planetFractionOfGoal(i));
+    this.priorSearchFraction = Float64Array.from(c.grids, (grid, t) => (grid && c.prior.count[t]! > 0 ? this.searchFractionOfGoal(t, 0, 0) : 0));
+    this.planetOvershoot = this.priorPlanetFraction.map((x) => overshootAfterPrior(x, overshootWeight));
+    this.searchOvershoot = this.priorSearchFraction.map((x) => overshootAfterPrior(x, overshootWeight));
     this.targetUtility = new Float64Array(c.targetCount);
     this.targetVersion = new Int32Array(c.targetCount);
     for (let t = 0; t < c.targetCount; t++) {
@@ -237,13 +242,15 @@ export class PlanState {
     for (let i = 0; i < info.planetCount; i++) this.kVariance[this.c.planetFrom[t]! + i] = this.trialVariance[i]!;
   }
 
+  /** Opens night n; `openNights` counts the nights chosen, not the granted ones. */
   openNight(n: number): void {
-    if (!this.nightOpen[n]) this.openNights++;
+    if (!this.nightOpen[n] && !this.c.nightGranted[n]) this.openNights++;
     this.nightOpen[n] = 1;
   }
 
   /** Closes night n and removes its visits; returns them (to restore with openNight + add). */
   closeNight(n: number): number[] {
+    if (this.c.nightGranted[n]) throw new Error('schedule: a granted night cannot be closed');
     const removed = [...this.nightVisits[n]!];
     for (const j of removed) this.remove(j);
     if (this.nightOpen[n]) this.openNights--;

@@ -15,6 +15,11 @@ export interface ScheduleNight {
   hoursAvailable: number;
   /** The night's middle in the slots' midDays scale (where nightly activity is evaluated); default: the mean of its slots. */
   midDays?: number;
+  /**
+   * choose-nights: a night already granted (one in progress when re-planning): open from the
+   * start, never closed, and not counted in `time.nights`.
+   */
+  granted?: boolean;
 }
 
 /** One possible visit: a star observed from `startMs` for `durationSec` in one night. */
@@ -132,8 +137,9 @@ export interface TargetOutcome {
   kind: 'ephemeris' | 'search';
   /** Visits and hours of the star chosen by the plan (prior visits not included). */
   visits: number;
-  /** The star's prior visits (ScheduleProblem.prior). */
+  /** The star's prior visits (ScheduleProblem.prior), and the K/sigma_K they alone give. */
   priorVisits: number;
+  priorKOverSigmaK: number;
   hours: number;
   /**
    * Ephemeris: 1 / Var(K), every other parameter marginalised, in (m/s)^-2.

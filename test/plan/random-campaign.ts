@@ -117,5 +117,6 @@ export function randomCampaign(index: number): Campaign {
     noise: { nightlyJitterFraction: pick(rng, [0, 0.5, 0.8]) },
     transits: { confidence: 0.95, maxOrbitFraction: 0.2 },
     seed: index,
+    lostDates: [],
   };
 }

@@ -79,6 +79,7 @@ export const CAMPAIGN: Campaign = {
   noise: { nightlyJitterFraction: 0.5 },
   transits: { confidence: 0.95, maxOrbitFraction: 0.2 },
   seed: 7,
+  lostDates: [],
 };
 
 const at = (day: number, hh: number, mm: number) => new Date(Date.UTC(2027, 3, day, hh, mm));

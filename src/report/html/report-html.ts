@@ -1,5 +1,5 @@
 import type { Plan, SearchSpec, Target, TargetSummary } from '../../model.js';
-import { ADVISORY, TARGET_COLUMNS, targetRows, totalsLine, visitsByNight } from '../plan-rows.js';
+import { ADVISORY, targetColumns, targetRows, totalsLine, visitsByNight } from '../plan-rows.js';
 import { calendarFigure } from './chart-calendar.js';
 import { detectionMapFigure, type DetectionMapData } from './chart-detection-map.js';
 import { kGrowthFigure } from './chart-k-growth.js';
@@ -84,7 +84,7 @@ export async function renderReportHtml(plan: Plan, maps: ReadonlyMap<string, Det
   body.push(...(await targetSections(plan, maps)));
   body.push(
     '<h2 id="detectability">Detectability of every target</h2>',
-    `<div class="table-wrap">${htmlTable(TARGET_COLUMNS, targetRows(plan), 'Expected result per target')}</div>`,
+    `<div class="table-wrap">${htmlTable(targetColumns(plan), targetRows(plan), 'Expected result per target')}</div>`,
     warnings(plan),
     `<footer>Written by ${escapeHtml(plan.generator)} from plan schema version ${plan.schemaVersion}. ` +
       'Chart colours: the Okabe–Ito palette (Okabe & Ito 2008, Color Universal Design), safe for common colour-vision deficiencies.</footer>',
