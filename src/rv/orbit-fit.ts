@@ -258,6 +258,7 @@ function startsFor(planets: FitPlanetPrior[], points: FitPoint[], lay: Layout, m
     if (tc < 0 || phaseErrCycles <= SHIFT_ABOVE_CYCLES) return;
     for (const shift of SHIFTS) {
       const shifted = Float64Array.from(start);
+      // Beyond half a cycle of error every phase is allowed: ±1 and ±2 half-cycles then cover it.
       shifted[tc] = shift * Math.min(phaseErrCycles, 0.5) * pl.periodDays;
       starts.push(shifted);
     }
@@ -283,7 +284,7 @@ function summarise(planets: FitPlanetPrior[], points: FitPoint[], lay: Layout, f
     // The epoch n orbits from the catalogue Tc where Cov(Tc + nP, P) = Cov(Tc, P) + n Var(P) ≈ 0 (propagation of errors).
     const varP = cov(s.period, s.period);
     const epochs = s.tc >= 0 && varP > 0 && Number.isFinite(varP) ? Math.round(-cov(s.tc, s.period) / varP) : 0;
-    const varTc = cov(s.tc, s.tc) + 2 * epochs * cov(s.tc, s.period) + epochs * epochs * varP;
+    const varTc = epochs === 0 ? cov(s.tc, s.tc) : cov(s.tc, s.tc) + 2 * epochs * cov(s.tc, s.period) + epochs * epochs * varP;
     const out: PlanetFit = {
       id: pl.id,
       kMps: theta[s.k]!,

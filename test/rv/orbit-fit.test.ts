@@ -176,6 +176,8 @@ describe('fitOrbits', () => {
     // One point: γ absorbs it and K is free of the data.
     const single = fitOrbits([prior], [{ bjd: 2461010.1, rvMps: 2, rvErrMps: 1, instrument: 'echelle-a' }], 0);
     expect(single.planets[0]!.kErrMps).toBe(Infinity);
+    const loose = fitOrbits([{ ...prior, tcErrDays: 0.1, periodErrDays: 0.01 }], [{ bjd: 2461010.1, rvMps: 2, rvErrMps: 1, instrument: 'echelle-a' }], 0);
+    expect(loose.planets[0]).toMatchObject({ kErrMps: Infinity, tcErrDays: Infinity, periodErrDays: Infinity });
   });
 
   it('refuses impossible calls with a ValidationError', () => {
