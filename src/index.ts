@@ -10,6 +10,7 @@ export { readSite, parseSite } from './io/site.js';
 export { readInstrument, parseInstrument } from './io/instrument.js';
 export { readTargets, parseTargets } from './io/targets.js';
 export { readRvSeries, parseRvSeries } from './io/rv-series.js';
+export { readObserved, parseObserved, type ObservedRow } from './io/observed.js';
 export { readBundledSites } from './io/site-list.js';
 export { readPlan, planFromJson } from './io/plan-json.js';
 
@@ -44,6 +45,8 @@ export { searchPeriodogram } from './rv/periodogram-search.js';
 export { frequencyGrid } from './rv/frequency-grid.js';
 export { fapContext, falseAlarmProbability } from './rv/fap.js';
 export { injectionRecovery } from './rv/injection.js';
+export { fitOrbits, type FitPlanetPrior, type FitPoint, type OrbitFit, type PlanetFit } from './rv/orbit-fit.js';
+export { blindPeak, BLIND_PEAK_FAP, type BlindPeak } from './rv/blind-peak.js';
 export { createRng } from './rv/random.js';
 
 // Scheduling and plans

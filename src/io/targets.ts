@@ -7,22 +7,12 @@ import { defaultJitter } from '../rv/jitter.js';
 import { DEFAULT_VSINI_KMS, massFromTeffSun } from '../rv/star-defaults.js';
 import { parseCsvTable } from './csv-records.js';
 import { parseDecimal } from './decimal.js';
+import { numberField } from './number-cell.js';
 import { readText } from './read-text.js';
 import { parseDecDeg, parseRaDeg } from './sexagesimal.js';
 import { slug } from './slug.js';
 
 type Cell = string | undefined;
-
-/** A number cell; blank means "not given". The text is what the error line says is allowed. */
-function numberField(allowed: string, min: number, max: number, opts: { exclusiveMin?: boolean } = {}) {
-  return z.preprocess(
-    (cell: Cell) => (cell === undefined || cell.trim() === '' ? undefined : parseDecimal(cell)),
-    z
-      .number({ error: allowed })
-      .refine((v) => Number.isFinite(v) && (opts.exclusiveMin ? v > min : v >= min) && v <= max, allowed)
-      .optional(),
-  );
-}
 
 function angleField(parse: (text: string) => number, allowed: string, min: number, max: number) {
   return z.preprocess(

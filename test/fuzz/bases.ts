@@ -110,3 +110,13 @@ export const RV_CSV = [
 
 /** The report tests' invented plan, as plan.json. */
 export const PLAN_JSON = renderPlanJson(fixturePlan());
+
+/** Visits already made of the stars of TARGETS_CSV: BJD and UTC rows, with and without RVs. */
+export const OBSERVED_CSV = [
+  '# invented visits',
+  'target,midBjdTdb,midUtc,instrument,rvMps,rvErrMps',
+  'Orvel-2,2461000.6123,,fuzz-echelle,-3.2,1.6',
+  'Sanu,,2027-03-01T03:40:00Z,fuzz-echelle,,',
+  '"Tekla b",,2027-03-01T05:10:30-03:00,fuzz-echelle,12.5,2.1',
+  '',
+].join('\n');
