@@ -11,6 +11,7 @@ import { computeNights } from '../sky/nights.js';
 import { computeWindows } from '../sky/visibility.js';
 import { candidateSlots, scheduleNights, setupStars, setupTargets, starTargets, transitRule, type SlotDetail, type TargetSetup } from './candidates.js';
 import { observedVisits } from './observed-visits.js';
+import { updateFromRvs } from './orbit-update.js';
 import { history, openSlot, priorVisits, remaining, type ReplanOptions } from './replan.js';
 import { planWarnings } from './warnings.js';
 
@@ -25,14 +26,18 @@ export interface PlanOptions extends ReplanOptions {
 }
 
 /** Builds the observing plan for a campaign. Deterministic for a seed. */
-export function buildPlan(campaign: Campaign, options: PlanOptions = {}): Plan {
-  const seed = options.seed ?? campaign.seed;
-  const { site, constraints, window, time } = campaign;
+export function buildPlan(given: Campaign, options: PlanOptions = {}): Plan {
+  const seed = options.seed ?? given.seed;
+  const { site, constraints, window, time } = given;
   const nights = computeNights(site, window.start, window.end, constraints.twilight);
-  const setups = setupTargets(campaign);
+  const catalogueSetups = setupTargets(given);
+  const observed = observedVisits(given, setupStars(given, catalogueSetups));
+  // The RVs so far update the ephemerides and K's the rest is planned with (orbit-update.ts).
+  const rv = updateFromRvs(given, observed, catalogueSetups);
+  const campaign = rv.campaign;
+  const setups = rv.fits.size > 0 ? setupTargets(campaign) : catalogueSetups;
   const stars = setupStars(campaign, setups);
   const { windows } = computeWindows(site, starTargets(stars), nights, constraints);
-  const observed = observedVisits(campaign, stars);
   const past = history(campaign, observed, options);
   const open = openSlot(campaign, past, options.now);
   const left = remaining(campaign, past, options.previous, scheduleNights(campaign, nights));
@@ -44,7 +49,7 @@ export function buildPlan(campaign: Campaign, options: PlanOptions = {}): Plan {
     slots: details.map((d) => d.slot),
     time: left.time,
     constraints: { minSpacingHours: constraints.minSpacingHours, onePerNight: constraints.minSpacingHours >= 12 },
-    prior: priorVisits(past),
+    prior: priorVisits(past, rv.fittedStars),
   };
   const result = optimiseSchedule(problem, { seed });
   const weather = simulateWeather(problem, result, options.weatherTrials ?? WEATHER_TRIALS, seed);
@@ -53,7 +58,12 @@ export function buildPlan(campaign: Campaign, options: PlanOptions = {}): Plan {
   const visits = [...past.kept, ...ahead].sort((a, b) => a.startUtc.localeCompare(b.startUtc));
   const windowEndBjd = (t: TargetSetup) =>
     starBjdTdb(DateTime.fromISO(window.end, { zone: site.timeZone }).plus({ days: 1 }).toJSDate(), t.target);
-  const targets = setups.map((setup) => targetSummary(setup, result, weather.targets, windowEndBjd(setup)));
+  const targets = setups.map((setup) => {
+    const summary = targetSummary(setup, result, weather.targets, windowEndBjd(setup));
+    const fit = rv.fits.get(setup.target.id);
+    const peak = rv.peaks.get(setup.target.id);
+    return { ...summary, ...(fit ? { fit } : {}), ...(peak ? { peak } : {}) };
+  });
   const lost = new Set(campaign.lostDates);
   const plannedDates =
     time.mode === 'given-nights'
@@ -75,7 +85,7 @@ export function buildPlan(campaign: Campaign, options: PlanOptions = {}): Plan {
     totals: { nights: plannedDates.length, visits: visits.length, exposureHours, overheadHours: totalHours - exposureHours, totalHours, utility: result.utility },
     warnings: [],
   };
-  plan.warnings = planWarnings(plan, setups, windows, transitRule(campaign));
+  plan.warnings = [...rv.warnings, ...planWarnings(plan, setups, windows, transitRule(campaign))];
   return plan;
 }
 

@@ -39,8 +39,16 @@ export function history(campaign: Campaign, observed: ObservedVisit[], options: 
   return { kept, observed, nowDate: eveningDate(now, campaign.site.timeZone) };
 }
 
-export function priorVisits(h: History): PriorVisit[] {
-  return [...h.kept, ...h.observed].map((v) => ({ targetId: v.starId, localDate: v.localDate, midDays: v.midBjdTdb, sigmaWhiteMps: v.sigmaWhiteMps }));
+/** Kept and observed visits as the scheduler's prior visits; an RV of a star fitted so far informs only its offset and K's. */
+export function priorVisits(h: History, fittedStars: ReadonlySet<string>): PriorVisit[] {
+  const prior = (v: PlannedVisit | ObservedVisit, phaseInPrior: boolean): PriorVisit => ({
+    targetId: v.starId,
+    localDate: v.localDate,
+    midDays: v.midBjdTdb,
+    sigmaWhiteMps: v.sigmaWhiteMps,
+    ...(phaseInPrior ? { phaseInPrior } : {}),
+  });
+  return [...h.kept.map((v) => prior(v, false)), ...h.observed.map((v) => prior(v, v.rvMps !== undefined && fittedStars.has(v.starId)))];
 }
 
 /** Whether a candidate visit is still open: after `now`, not on a lost night, clear of the star's prior visits. */

@@ -1,6 +1,6 @@
 import type { Plan } from '../model.js';
 import { markdownTable } from './markdown.js';
-import { ADVISORY, historyLine, nightHeading, OBSERVED_COLUMNS, observedRows, targetColumns, targetRows, totalsLine, VISIT_COLUMNS, visitRow, visitsByNight } from './plan-rows.js';
+import { ADVISORY, historyLine, rvUpdateLines, nightHeading, OBSERVED_COLUMNS, observedRows, targetColumns, targetRows, totalsLine, VISIT_COLUMNS, visitRow, visitsByNight } from './plan-rows.js';
 
 /** plan.md: the plan for people. */
 export function renderPlanMarkdown(plan: Plan): string {
@@ -22,6 +22,7 @@ export function renderPlanMarkdown(plan: Plan): string {
     markdownTable(targetColumns(plan), targetRows(plan)),
     '',
     ...(plan.observed?.length ? ['## Visits already made', '', markdownTable(OBSERVED_COLUMNS, observedRows(plan)), ''] : []),
+    ...(rvUpdateLines(plan).length ? ['## What the RVs so far change', '', ...rvUpdateLines(plan).map((l) => `- ${l}`), ''] : []),
     '## Nights',
     '',
   ];

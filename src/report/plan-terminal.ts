@@ -1,6 +1,6 @@
 import type { Plan } from '../model.js';
 import { renderTable } from './table.js';
-import { ADVISORY, historyLine, nightHeading, OBSERVED_COLUMNS, observedRows, targetColumns, targetRows, totalsLine, VISIT_COLUMNS, visitRow, visitsByNight } from './plan-rows.js';
+import { ADVISORY, historyLine, rvUpdateLines, nightHeading, OBSERVED_COLUMNS, observedRows, targetColumns, targetRows, totalsLine, VISIT_COLUMNS, visitRow, visitsByNight } from './plan-rows.js';
 
 /** The plain-text summary printed by `crest plan`. */
 export function renderPlanText(plan: Plan): string {
@@ -13,6 +13,8 @@ export function renderPlanText(plan: Plan): string {
     '',
   ];
   if (plan.observed?.length) out.push('Visits already made', renderTable(OBSERVED_COLUMNS, observedRows(plan)), '');
+  const updates = rvUpdateLines(plan);
+  if (updates.length) out.push('What the RVs so far change', ...updates.map((l) => `- ${l}`), '');
   for (const [date, visits] of visitsByNight(plan)) {
     out.push(nightHeading(plan, date));
     out.push(visits.length ? indent(renderTable(VISIT_COLUMNS, visits.map((v) => visitRow(v, zone)))) : '  (no visit)');

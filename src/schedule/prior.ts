@@ -2,7 +2,7 @@
 // per star, fixed information visits and the search sums they start from. A prior visit on the
 // date of a problem night shares that night's key (and so its nightly noise) with new visits of
 // the night; every other date gets a key of its own after the problem's nights.
-import { designRows } from '../rv/information-model.js';
+import { designRows, type StarModel } from '../rv/information-model.js';
 import type { InformationVisit, StarInformation } from '../rv/information.js';
 import type { CompiledProblem } from './compile.js';
 import { searchStatsLength, updateSearchStats } from './objective-search.js';
@@ -54,9 +54,19 @@ export function compilePrior(c: CompiledProblem): CompiledPrior {
     const other = otherNights.get(v.localDate);
     const night = position ?? other!.key;
     const nightBjd = position !== undefined ? c.nightMidDays[position]! : other!.sumDays / other!.count;
-    out.visits[t]!.push({ rows: designRows(model, v.midDays), offset: 0, weight, night, nightBjd });
+    const rows = designRows(model, v.midDays);
+    if (v.phaseInPrior) keepOffsetAndK(rows, model);
+    out.visits[t]!.push({ rows, offset: 0, weight, night, nightBjd });
   }
   return out;
+}
+
+/** Zeroes every column of a visit's design rows but the offset's (column 0) and the K's. */
+function keepOffsetAndK(rows: Float64Array, model: StarModel): void {
+  const keep = new Set([0, ...model.kIndex]);
+  for (let at = 0; at < rows.length; at += model.paramCount) {
+    for (let col = 0; col < model.paramCount; col++) if (!keep.has(col)) rows[at + col] = 0;
+  }
 }
 
 /** Star t's prior visits into a fresh (or cleared) information accumulator. */

@@ -68,7 +68,18 @@ function kOverSigmaKOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], g
         'nightIndex' in v
           ? { bjd: v.midDays, sigmaMps: v.sigmaWhiteMps, night: v.nightIndex, nightBjd: nightMid.get(v.nightIndex)! }
           : { bjd: v.midDays, sigmaMps: v.sigmaWhiteMps, night: priorKey.get(v.localDate)!, nightBjd: priorNightMid(v.localDate) };
-      const variance = kVariances(target.model, informationVisits(target.model, mine.map(asVisit)));
+      const visits = informationVisits(target.model, mine.map(asVisit));
+      // A visit whose phase information is in the prior keeps only the offset and K columns.
+      const model = target.model;
+      mine.forEach((v, i) => {
+        if (!('phaseInPrior' in v && v.phaseInPrior)) return;
+        const rows = visits[i]!.rows;
+        for (let k = 0; k < rows.length; k++) {
+          const col = k % model.paramCount;
+          if (col !== 0 && !model.kIndex.includes(col)) rows[k] = 0;
+        }
+      });
+      const variance = kVariances(model, visits);
       target.planets.forEach((planet, i) => out.push({ ratio: variance[i] === Infinity ? 0 : planet.kMps / Math.sqrt(variance[i]!), goal: planet.goal, priority: planet.priority }));
     }
     const grid = grids[t];
