@@ -2,6 +2,7 @@ import { Command } from 'commander';
 import { registerAmplitude } from './amplitude.js';
 import { registerDetect } from './detect.js';
 import { registerMap } from './map.js';
+import { registerNext } from './next.js';
 import { registerNights } from './nights.js';
 import { registerPeriodogram } from './periodogram.js';
 import { registerPlan } from './plan.js';
@@ -23,6 +24,7 @@ export function buildProgram(): Command {
     registerAmplitude,
     registerDetect,
     registerMap,
+    registerNext,
     registerNights,
     registerPeriodogram,
     registerPlan,

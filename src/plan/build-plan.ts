@@ -1,18 +1,15 @@
-// The pipeline of `crest plan`: nights → windows → candidate visits → optimiser → weather → Plan.
+// The pipeline of `crest plan`: nights → windows → candidate visits (plan-inputs.ts) → optimiser → weather → Plan.
 // Pure: the campaign comes in already read and validated; nothing here reads or writes files.
 import { DateTime } from 'luxon';
 import { starBjdTdb } from '../astro/bjd.js';
 import type { Campaign, Plan, PlannedVisit, TargetSummary } from '../model.js';
 import { phaseErrCycles } from '../orbit/ephemeris.js';
 import { optimiseSchedule } from '../schedule/optimise.js';
-import type { ScheduleProblem, ScheduleResult } from '../schedule/types.js';
+import type { ScheduleResult } from '../schedule/types.js';
 import { simulateWeather } from '../schedule/weather.js';
-import { computeNights } from '../sky/nights.js';
-import { computeWindows } from '../sky/visibility.js';
-import { candidateSlots, scheduleNights, setupStars, setupTargets, starTargets, transitRule, type SlotDetail, type TargetSetup } from './candidates.js';
-import { observedVisits } from './observed-visits.js';
-import { updateFromRvs } from './orbit-update.js';
-import { history, openSlot, priorVisits, remaining, type ReplanOptions } from './replan.js';
+import { transitRule, type SlotDetail, type TargetSetup } from './candidates.js';
+import { planInputs } from './plan-inputs.js';
+import type { ReplanOptions } from './replan.js';
 import { planWarnings } from './warnings.js';
 
 export const GENERATOR = 'crest 0.1.0';
@@ -28,29 +25,8 @@ export interface PlanOptions extends ReplanOptions {
 /** Builds the observing plan for a campaign. Deterministic for a seed. */
 export function buildPlan(given: Campaign, options: PlanOptions = {}): Plan {
   const seed = options.seed ?? given.seed;
-  const { site, constraints, window, time } = given;
-  const nights = computeNights(site, window.start, window.end, constraints.twilight);
-  const catalogueSetups = setupTargets(given);
-  const observed = observedVisits(given, setupStars(given, catalogueSetups));
-  // The RVs so far update the ephemerides and K's the rest is planned with (orbit-update.ts).
-  const rv = updateFromRvs(given, observed, catalogueSetups);
-  const campaign = rv.campaign;
-  const setups = rv.fits.size > 0 ? setupTargets(campaign) : catalogueSetups;
-  const stars = setupStars(campaign, setups);
-  const { windows } = computeWindows(site, starTargets(stars), nights, constraints);
-  const past = history(campaign, observed, options);
-  const open = openSlot(campaign, past, options.now);
-  const left = remaining(campaign, past, options.previous, scheduleNights(campaign, nights));
-  const dates = new Set(left.nights.map((n) => n.localDate));
-  const details = candidateSlots(campaign, nights, windows, stars).filter((d) => dates.has(d.localDate) && open(d));
-  const problem: ScheduleProblem = {
-    nights: left.nights,
-    targets: stars.flatMap((s) => (s.scheduleTarget ? [s.scheduleTarget] : [])),
-    slots: details.map((d) => d.slot),
-    time: left.time,
-    constraints: { minSpacingHours: constraints.minSpacingHours, onePerNight: constraints.minSpacingHours >= 12 },
-    prior: priorVisits(past, rv.fittedStars),
-  };
+  const { site, window, time } = given;
+  const { campaign, rv, setups, windows, nights, observed, past, left, details, problem } = planInputs(given, options);
   const result = optimiseSchedule(problem, { seed });
   const weather = simulateWeather(problem, result, options.weatherTrials ?? WEATHER_TRIALS, seed);
   const bySlot = new Map(details.map((d) => [d.slot.slotId, d]));

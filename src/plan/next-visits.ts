@@ -1,0 +1,108 @@
+// What to observe now: for the observer at the telescope, the stars that can start at a given
+// instant ranked by what one visit adds (the exact utility gain of the plan's objective per hour,
+// given every visit already made), and the order of the rest of that night (the optimiser on the
+// night's remaining visits). Nothing before the instant is counted as planned.
+import type { Campaign } from '../model.js';
+import { compileProblem } from '../schedule/compile.js';
+import { optimiseSchedule } from '../schedule/optimise.js';
+import { PlanState } from '../schedule/state.js';
+import { SLOT_STEP_MIN, type SlotDetail } from './candidates.js';
+import { eveningDate } from './observed-visits.js';
+import { planInputs } from './plan-inputs.js';
+
+/** The search grid the plan's objective uses (optimise.ts default). */
+const SEARCH_GRID = 48;
+const OVERSHOOT = 0.1;
+/** Phases within this of a quadrature or a conjunction are called so (Crest's wording). */
+const NEAR_CYCLES = 0.08;
+
+export interface NextChoice {
+  starId: string;
+  /** Start of the visit block (UTC ms) and its length (s). */
+  startMs: number;
+  durationSec: number;
+  /** Exact utility gain of the visit, and per hour of telescope time. */
+  gain: number;
+  gainPerHour: number;
+  /** Per planet or search of the star: K/sigma_K before and after the visit, and its goal. */
+  effects: { targetId: string; before: number; after: number; goal: number }[];
+  airmass: number;
+  /** Minutes left in the star's window from the visit's start. */
+  windowLeftMin: number;
+  moonSeparationDeg: number;
+  /** Why, in words: phases, goal, Moon. */
+  why: string[];
+}
+
+export interface NextAnswer {
+  atMs: number;
+  localDate: string;
+  /** Stars that can start within SLOT_STEP_MIN of the instant, best first. */
+  now: NextChoice[];
+  /** The rest of the night as the optimiser orders it, from the instant on. */
+  tonight: { starId: string; startMs: number; durationSec: number }[];
+}
+
+function phaseWords(d: SlotDetail): string[] {
+  return d.phases.map((p) => {
+    const q = Math.min(Math.abs(p.phase - 0.25), Math.abs(p.phase - 0.75));
+    const c = Math.min(p.phase, 1 - p.phase);
+    const where = q <= NEAR_CYCLES ? 'near quadrature' : c <= NEAR_CYCLES ? 'near conjunction, little on K' : 'between quadrature and conjunction';
+    return `${p.targetId} phase ${p.phase.toFixed(2)}±${p.phaseErr.toFixed(2)} ${where}`;
+  });
+}
+
+/** The best stars to start at `at` and the order of the rest of that night, for the campaign as observed so far. */
+export function nextVisits(given: Campaign, at: Date): NextAnswer {
+  const localDate = eveningDate(at, given.site.timeZone);
+  // One night: the evening of `at`, granted; the RVs and visits so far as the campaign holds them.
+  const night: Campaign = { ...given, window: { start: localDate, end: localDate }, time: { mode: 'given-nights', dates: [localDate] }, lostDates: [] };
+  const inputs = planInputs(night, { now: at });
+  const { problem, details } = inputs;
+  const c = compileProblem(problem, SEARCH_GRID);
+  const state = new PlanState(c, Infinity, OVERSHOOT);
+  for (let n = 0; n < c.nightCount; n++) state.openNight(n);
+  const detailOf = new Map(details.map((d) => [d.slot.slotId, d]));
+  const firstOfStar = new Map<number, number>();
+  const latestStartMs = at.getTime() + SLOT_STEP_MIN * 60_000;
+  for (let j = 0; j < c.slotCount; j++) {
+    if (c.startMs[j]! >= latestStartMs) continue;
+    const t = c.slotTarget[j]!;
+    if (!firstOfStar.has(t)) firstOfStar.set(t, j);
+  }
+  const ratios = (t: number) => {
+    const star = problem.targets[t]!;
+    const out = star.planets.map((p, i) => ({ targetId: p.id, ratio: state.planetFractionOfGoal(c.planetFrom[t]! + i) * p.goal, goal: p.goal }));
+    if (star.search) out.push({ targetId: star.search.id, ratio: state.searchFractionOfGoal(t, 0, 0) * star.search.goal, goal: star.search.goal });
+    return out;
+  };
+  const choices: NextChoice[] = [];
+  for (const [t, j] of firstOfStar) {
+    const d = detailOf.get(problem.slots[c.slotSource[j]!]!.slotId)!;
+    const gain = state.gain(j);
+    const before = ratios(t);
+    state.add(j);
+    const after = ratios(t);
+    state.remove(j);
+    const window = inputs.windows.find((w) => w.targetId === d.slot.targetId && w.localDate === localDate && w.start.getTime() <= d.slot.startMs && w.end.getTime() >= d.slot.startMs)!;
+    const goalWords = before.map((b) => (b.ratio >= b.goal ? `${b.targetId} goal reached (K/sigma_K ${b.ratio.toFixed(1)})` : `${b.targetId} K/sigma_K ${b.ratio.toFixed(1)} of ${b.goal}`));
+    choices.push({
+      starId: d.slot.targetId,
+      startMs: d.slot.startMs,
+      durationSec: d.slot.durationSec,
+      gain,
+      gainPerHour: gain / c.hours[j]!,
+      effects: before.map((b, i) => ({ targetId: b.targetId, before: b.ratio, after: after[i]!.ratio, goal: b.goal })),
+      airmass: d.airmass,
+      windowLeftMin: (window.end.getTime() - d.slot.startMs) / 60_000,
+      moonSeparationDeg: d.moonSeparationDeg,
+      why: [...phaseWords(d), ...goalWords, `Moon ${d.moonSeparationDeg.toFixed(0)}° away`],
+    });
+  }
+  choices.sort((a, b) => b.gainPerHour - a.gainPerHour || a.starId.localeCompare(b.starId));
+  const bySlot = new Map(problem.slots.map((s) => [s.slotId, s]));
+  const tonight = optimiseSchedule(problem, { seed: given.seed })
+    .slotIds.map((id) => bySlot.get(id)!)
+    .map((s) => ({ starId: s.targetId, startMs: s.startMs, durationSec: s.durationSec }));
+  return { atMs: at.getTime(), localDate, now: choices, tonight };
+}

@@ -1,0 +1,54 @@
+// What the optimiser is given for a campaign: nights, windows, the RVs so far (fitted), the visits
+// already made or kept, the candidate visits still open and the time left, as one scheduling
+// problem. Shared by `crest plan` (build-plan.ts) and `crest next` (next-visits.ts).
+import type { Campaign, Night, ObservedVisit, Window } from '../model.js';
+import type { ScheduleProblem } from '../schedule/types.js';
+import { computeNights } from '../sky/nights.js';
+import { computeWindows } from '../sky/visibility.js';
+import { candidateSlots, scheduleNights, setupStars, setupTargets, starTargets, type SlotDetail, type StarSetup, type TargetSetup } from './candidates.js';
+import { observedVisits } from './observed-visits.js';
+import { updateFromRvs, type RvUpdate } from './orbit-update.js';
+import { history, openSlot, priorVisits, remaining, type History, type Remaining, type ReplanOptions } from './replan.js';
+
+export interface PlanInputs {
+  /** The campaign with its targets updated by the RVs so far. */
+  campaign: Campaign;
+  rv: RvUpdate;
+  setups: TargetSetup[];
+  stars: StarSetup[];
+  nights: Night[];
+  windows: Window[];
+  observed: ObservedVisit[];
+  past: History;
+  left: Remaining;
+  /** The candidate visits still open, and the problem made of them. */
+  details: SlotDetail[];
+  problem: ScheduleProblem;
+}
+
+export function planInputs(given: Campaign, options: ReplanOptions): PlanInputs {
+  const { site, constraints, window } = given;
+  const nights = computeNights(site, window.start, window.end, constraints.twilight);
+  const catalogueSetups = setupTargets(given);
+  const observed = observedVisits(given, setupStars(given, catalogueSetups));
+  // The RVs so far update the ephemerides and K's the rest is planned with (orbit-update.ts).
+  const rv = updateFromRvs(given, observed, catalogueSetups);
+  const campaign = rv.campaign;
+  const setups = rv.fits.size > 0 ? setupTargets(campaign) : catalogueSetups;
+  const stars = setupStars(campaign, setups);
+  const { windows } = computeWindows(site, starTargets(stars), nights, constraints);
+  const past = history(campaign, observed, options);
+  const open = openSlot(campaign, past, options.now);
+  const left = remaining(campaign, past, options.previous, scheduleNights(campaign, nights));
+  const dates = new Set(left.nights.map((n) => n.localDate));
+  const details = candidateSlots(campaign, nights, windows, stars).filter((d) => dates.has(d.localDate) && open(d));
+  const problem: ScheduleProblem = {
+    nights: left.nights,
+    targets: stars.flatMap((s) => (s.scheduleTarget ? [s.scheduleTarget] : [])),
+    slots: details.map((d) => d.slot),
+    time: left.time,
+    constraints: { minSpacingHours: constraints.minSpacingHours, onePerNight: constraints.minSpacingHours >= 12 },
+    prior: priorVisits(past, rv.fittedStars),
+  };
+  return { campaign, rv, setups, stars, nights, windows, observed, past, left, details, problem };
+}
