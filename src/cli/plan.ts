@@ -10,11 +10,14 @@ import { slug } from '../io/slug.js';
 import { buildPlan } from '../plan/build-plan.js';
 import { renderReportHtml } from '../report/html/report-html.js';
 import { renderPlanCsv } from '../report/plan-csv.js';
+import { withIcsSequences } from '../report/ics-sequence.js';
 import { renderPlanIcs } from '../report/plan-ics.js';
 import { renderPlanJson } from '../report/plan-json.js';
 import { renderPlanMarkdown } from '../report/plan-markdown.js';
 import { renderPlanText } from '../report/plan-terminal.js';
 import { numberFlag } from './options.js';
+import { readPreviousPlan } from './previous-plan.js';
+import { sourceDateEpochMs } from './source-date-epoch.js';
 
 /** The files `crest plan` writes. */
 const PLAN_FILES = ['plan.md', 'plan.csv', 'plan.json', 'plan.ics', 'report.html'];
@@ -50,11 +53,14 @@ export function registerPlan(program: Command): Command {
       const outDir = opts.out ?? path.join('crest-out', slug(campaign.name));
       const inputs = [campaignFile, campaign.targetsFile, campaign.site.file, campaign.instrument.file];
       checkOutFolder(outDir, PLAN_FILES, inputs);
-      const plan = buildPlan(campaign, { seed: opts.seed });
+      const stampMs = sourceDateEpochMs(process.env.SOURCE_DATE_EPOCH);
+      const previous = readPreviousPlan(outDir);
+      const plan = withIcsSequences(buildPlan(campaign, { seed: opts.seed }), previous);
       const json = renderPlanJson(plan);
+      const ics = renderPlanIcs(plan, { previous, stampMs });
       const written = writeOutputSet(
         outDir,
-        { 'plan.md': renderPlanMarkdown(plan), 'plan.csv': renderPlanCsv(plan), 'plan.json': json, 'plan.ics': renderPlanIcs(plan), 'report.html': await renderReportHtml(plan) },
+        { 'plan.md': renderPlanMarkdown(plan), 'plan.csv': renderPlanCsv(plan), 'plan.json': json, 'plan.ics': ics, 'report.html': await renderReportHtml(plan) },
         inputs,
       );
       if (opts.json) return void process.stdout.write(json);

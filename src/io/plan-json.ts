@@ -111,6 +111,7 @@ const visitSchema = z.object({
   sigmaEffMps: positive,
   sigmaWhiteMps: positive,
   snrPerPixel: positive,
+  icsSequence: num.int('a whole number').min(0, 'a whole number, 0 or more').optional(),
 });
 
 const summarySchema = z.object({
