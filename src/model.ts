@@ -296,6 +296,8 @@ export interface PlannedVisit {
   snrPerPixel: number;
   /** A visit before the re-planning time (`--now`), kept as it was planned; absent for visits ahead. */
   kept?: true;
+  /** plan.ics SEQUENCE (RFC 5545 3.8.7.4) of this visit's event, counted across re-plans; absent when 0. */
+  icsSequence?: number;
 }
 
 /** A visit already made, from the campaign's observed file. */

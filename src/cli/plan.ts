@@ -10,12 +10,14 @@ import { slug } from '../io/slug.js';
 import { buildPlan } from '../plan/build-plan.js';
 import { renderReportHtml } from '../report/html/report-html.js';
 import { renderPlanCsv } from '../report/plan-csv.js';
+import { withIcsSequences } from '../report/ics-sequence.js';
 import { renderPlanIcs } from '../report/plan-ics.js';
 import { renderPlanJson } from '../report/plan-json.js';
 import { renderPlanMarkdown } from '../report/plan-markdown.js';
 import { renderPlanText } from '../report/plan-terminal.js';
 import { datesFlag, instantFlag, numberFlag } from './options.js';
 import { previousPlan } from './previous-plan.js';
+import { sourceDateEpochMs } from './source-date-epoch.js';
 
 /** The files `crest plan` writes. */
 const PLAN_FILES = ['plan.md', 'plan.csv', 'plan.json', 'plan.ics', 'report.html'];
@@ -61,12 +63,16 @@ export function registerPlan(program: Command): Command {
       const outDir = opts.out ?? path.join('crest-out', slug(campaign.name));
       const inputs = [campaignFile, campaign.targetsFile, campaign.site.file, campaign.instrument.file, ...(campaign.observed ? [campaign.observed.file] : [])];
       checkOutFolder(outDir, PLAN_FILES, inputs);
-      const previous = opts.now ? previousPlan(outDir, campaign.name, (line) => console.error(line)) : undefined;
-      const plan = buildPlan(campaign, { seed: opts.seed, ...(opts.now ? { now: opts.now } : {}), ...(previous ? { previous } : {}) });
+      const stampMs = sourceDateEpochMs(process.env.SOURCE_DATE_EPOCH);
+      // The plan the folder holds: its visits before --now are kept, and plan.ics cancels what it no longer has.
+      const previous = previousPlan(outDir, campaign.name, (line) => console.error(line));
+      const replan = opts.now ? { now: opts.now, ...(previous ? { previous } : {}) } : {};
+      const plan = withIcsSequences(buildPlan(campaign, { seed: opts.seed, ...replan }), previous);
       const json = renderPlanJson(plan);
+      const ics = renderPlanIcs(plan, { previous, stampMs });
       const written = writeOutputSet(
         outDir,
-        { 'plan.md': renderPlanMarkdown(plan), 'plan.csv': renderPlanCsv(plan), 'plan.json': json, 'plan.ics': renderPlanIcs(plan), 'report.html': await renderReportHtml(plan) },
+        { 'plan.md': renderPlanMarkdown(plan), 'plan.csv': renderPlanCsv(plan), 'plan.json': json, 'plan.ics': ics, 'report.html': await renderReportHtml(plan) },
         inputs,
       );
       if (opts.json) return void process.stdout.write(json);

@@ -14,7 +14,7 @@ export function previousPlan(outDir: string, campaignName: string, warn: (line: 
     return plan.campaign.name === campaignName ? plan : undefined;
   } catch (err) {
     if (!(err instanceof CrestError)) throw err;
-    warn(`crest: note: the earlier plan in ${outDir} cannot be read (${err.message}); planning as if there were none`);
+    warn(`crest: note: the earlier plan.json in ${outDir} cannot be read (${err.message}): nothing is kept from it and plan.ics marks no visit cancelled`);
     return undefined;
   }
 }

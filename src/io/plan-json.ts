@@ -114,6 +114,7 @@ const visitSchema = z.object({
   sigmaWhiteMps: positive,
   snrPerPixel: positive,
   kept: z.literal(true).optional(),
+  icsSequence: num.int('a whole number').min(0, 'a whole number, 0 or more').optional(),
 });
 
 const observedSchema = z.object({

@@ -1,48 +1,90 @@
-import ical from 'ical-generator';
+import ical, { ICalEventStatus, type ICalCalendar } from 'ical-generator';
 import { DateTime } from 'luxon';
-import type { Plan } from '../model.js';
+import type { Plan, PlannedVisit } from '../model.js';
+import { sameCampaign, visitUids } from './ics-uid.js';
 import { vtimezone } from './plan-ics-zone.js';
 import { phasesText } from './plan-rows.js';
 
+export interface PlanIcsOptions {
+  /** The plan.json this plan replaces; its visits missing from this plan are written as cancelled. */
+  previous?: Plan;
+  /** DTSTAMP of every event (ms since 1970, UTC), e.g. from SOURCE_DATE_EPOCH. */
+  stampMs?: number;
+}
+
 /**
  * plan.ics (RFC 5545): one event per visit in the site's time zone, with its VTIMEZONE.
- * DTSTAMP is the window's first day (not the clock) so that the same inputs give the same bytes.
- * The VTIMEZONE lists the zone's actual offset changes from the day before the window to two days
+ * UIDs are `<star>-<localDate>-<k>@crest` (ics-uid.ts), so re-importing a re-plan updates events;
+ * SEQUENCE is the visit's icsSequence (ics-sequence.ts). Every visit of a previous plan of the
+ * same campaign whose UID this plan lacks is written at its old time with STATUS:CANCELLED
+ * (RFC 5545 3.8.1.11) and one more SEQUENCE, so an importing calendar app drops it.
+ * The VTIMEZONE lists the zone's actual offset changes from the day before each window to two days
  * after it (plan-ics-zone.ts), so every visit's start and end resolve to the right instant.
  */
-export function renderPlanIcs(plan: Plan): string {
-  const c = plan.campaign;
-  const zone = c.site.timeZone;
-  const fromMs = DateTime.fromISO(c.window.start, { zone }).minus({ days: 1 }).toMillis();
-  const toMs = DateTime.fromISO(c.window.end, { zone }).plus({ days: 2 }).toMillis();
+export function renderPlanIcs(plan: Plan, options: PlanIcsOptions = {}): string {
+  const previous = sameCampaign(plan, options.previous);
+  const plans = previous ? [plan, previous] : [plan];
+  const fromMs = Math.min(...plans.map((p) => DateTime.fromISO(p.campaign.window.start, { zone: p.campaign.site.timeZone }).minus({ days: 1 }).toMillis()));
+  const toMs = Math.max(...plans.map((p) => DateTime.fromISO(p.campaign.window.end, { zone: p.campaign.site.timeZone }).plus({ days: 2 }).toMillis()));
   const calendar = ical({
-    name: c.name,
+    name: plan.campaign.name,
     prodId: { company: 'crest', product: 'crest-plan', language: 'EN' },
     // No calendar-wide zone: with one, the library writes DTSTAMP in local time, and RFC 5545
     // (3.8.7.2) asks for UTC. Each event carries the site's TZID; the generator adds its VTIMEZONE.
     timezone: { name: null, generator: (tz) => vtimezone(tz, fromMs, toMs) },
   });
-  const stamp = DateTime.fromISO(c.window.start, { zone: 'utc' });
-  for (const visit of plan.visits) {
-    const start = DateTime.fromISO(visit.startUtc, { zone: 'utc' }).setZone(zone);
-    // RFC 5545 3.3.5: a repeated local time means its first occurrence, so a visit starting or
-    // ending in the second occurrence of a repeated hour can only be written in UTC.
-    const repeated = secondOccurrence(start) || secondOccurrence(start.plus({ seconds: visit.durationSec }));
-    const phase = visit.phases.length === 0 ? '' : `; predicted phase ${phasesText(visit)}`;
-    calendar.createEvent({
-      id: `${visit.starId}-${start.toUTC().toFormat("yyyyLLdd'T'HHmmss")}@crest`,
-      start: repeated ? start.toUTC() : start,
-      end: (repeated ? start.toUTC() : start).plus({ seconds: visit.durationSec }),
-      stamp,
-      timezone: repeated ? null : zone,
-      summary: `RV ${visit.starId}`,
-      location: c.site.name,
-      description:
-        `Star ${visit.starId}; exposure ${visit.exposureSec.toFixed(0)} s (block ${visit.durationSec.toFixed(0)} s with overheads); ` +
-        `airmass ${visit.airmass.toFixed(2)}${phase}; expected sigma ${visit.sigmaEffMps.toFixed(2)} m/s. Advisory: observatory safety rules take precedence.`,
+  const stamp = DateTime.fromMillis(stampMs(plan, options.stampMs), { zone: 'utc' });
+  const uids = visitUids(plan.visits);
+  plan.visits.forEach((visit, i) => addEvent(calendar, plan, visit, { uid: uids[i]!, stamp, sequence: visit.icsSequence ?? 0 }));
+  if (previous) {
+    const kept = new Set(uids);
+    visitUids(previous.visits).forEach((uid, i) => {
+      const visit = previous.visits[i]!;
+      if (!kept.has(uid)) addEvent(calendar, previous, visit, { uid, stamp, sequence: (visit.icsSequence ?? 0) + 1, cancelled: true });
     });
   }
   return calendar.toString();
+}
+
+/**
+ * DTSTAMP: the given instant; otherwise the re-planning time (`--now`); otherwise the window's
+ * first day. Never the clock, so that the same inputs give the same bytes.
+ */
+function stampMs(plan: Plan, given: number | undefined): number {
+  if (given !== undefined) return given;
+  if (plan.replan) return Date.parse(plan.replan.nowUtc);
+  return DateTime.fromISO(plan.campaign.window.start, { zone: 'utc' }).toMillis();
+}
+
+interface EventIdentity {
+  uid: string;
+  stamp: DateTime;
+  sequence: number;
+  cancelled?: boolean;
+}
+
+/** One visit of `plan` as an event in the site's zone. */
+function addEvent(calendar: ICalCalendar, plan: Plan, visit: PlannedVisit, id: EventIdentity): void {
+  const { site } = plan.campaign;
+  const start = DateTime.fromISO(visit.startUtc, { zone: 'utc' }).setZone(site.timeZone);
+  // RFC 5545 3.3.5: a repeated local time means its first occurrence, so a visit starting or
+  // ending in the second occurrence of a repeated hour can only be written in UTC.
+  const repeated = secondOccurrence(start) || secondOccurrence(start.plus({ seconds: visit.durationSec }));
+  const phase = visit.phases.length === 0 ? '' : `; predicted phase ${phasesText(visit)}`;
+  calendar.createEvent({
+    id: id.uid,
+    sequence: id.sequence,
+    status: id.cancelled ? ICalEventStatus.CANCELLED : null,
+    start: repeated ? start.toUTC() : start,
+    end: (repeated ? start.toUTC() : start).plus({ seconds: visit.durationSec }),
+    stamp: id.stamp,
+    timezone: repeated ? null : site.timeZone,
+    summary: `${id.cancelled ? 'Cancelled: ' : ''}RV ${visit.starId}`,
+    location: site.name,
+    description:
+      `Star ${visit.starId}; exposure ${visit.exposureSec.toFixed(0)} s (block ${visit.durationSec.toFixed(0)} s with overheads); ` +
+      `airmass ${visit.airmass.toFixed(2)}${phase}; expected sigma ${visit.sigmaEffMps.toFixed(2)} m/s. Advisory: observatory safety rules take precedence.`,
+  });
 }
 
 /** True when the same wall-clock time occurred 30 or 60 minutes earlier (after a backward change). */

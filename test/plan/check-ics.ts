@@ -2,7 +2,7 @@
 // event's TZID through the VTIMEZONE the file itself carries.
 import ICAL from 'ical.js';
 import { DateTime } from 'luxon';
-import type { Plan } from '../../src/model.js';
+import type { Plan, PlannedVisit } from '../../src/model.js';
 import { secondOccurrence } from '../../src/report/plan-ics.js';
 
 export interface IcsEvent {
@@ -13,6 +13,10 @@ export interface IcsEvent {
   description: string;
   /** DTSTAMP is in UTC form (RFC 5545 3.8.7.2 requires it). */
   stampIsUtc: boolean;
+  stampMs: number;
+  /** STATUS (RFC 5545 3.8.1.11) and SEQUENCE (3.8.7.4); null when absent. */
+  status: string | null;
+  sequence: number | null;
 }
 
 export interface ParsedIcs {
@@ -49,27 +53,55 @@ export function parseIcs(text: string): ParsedIcs {
       endMs: instant(end.getFirstValue() as ICAL.Time, (end.getParameter('tzid') as string | undefined) ?? null),
       description: String(event.getFirstPropertyValue('description')),
       stampIsUtc: stamp.zone === ICAL.Timezone.utcTimezone,
+      stampMs: stamp.toUnixTime() * 1000,
+      status: (event.getFirstPropertyValue('status') as string | null) ?? null,
+      sequence: (event.getFirstPropertyValue('sequence') as number | null) ?? null,
     };
   });
   return { timezoneIds: [...zones.keys()], events };
 }
 
-/** Mismatches between plan.ics and the plan's visits (empty when they agree). */
-export function icsMismatches(plan: Plan, text: string): string[] {
+/**
+ * The UIDs plan.ics documents (README, "plan.ics"): `<star>-<localDate>-<k>@crest`, k counting
+ * that star's visits of that night in start order from 1.
+ */
+export function documentedUids(plan: Plan): Map<string, PlannedVisit> {
+  const byNight = new Map<string, PlannedVisit[]>();
+  for (const v of plan.visits) byNight.set(`${v.starId}-${v.localDate}`, [...(byNight.get(`${v.starId}-${v.localDate}`) ?? []), v]);
+  const uids = new Map<string, PlannedVisit>();
+  for (const [night, visits] of byNight) {
+    const ordered = [...visits].sort((a, b) => Date.parse(a.startUtc) - Date.parse(b.startUtc));
+    ordered.forEach((v, k) => uids.set(`${night}-${k + 1}@crest`, v));
+  }
+  return uids;
+}
+
+/**
+ * Mismatches between plan.ics and the plan's visits (empty when they agree): one event per visit
+ * under its documented UID at its start and end; and, when `previous` is a plan of the same
+ * campaign, one STATUS:CANCELLED event (RFC 5545 3.8.1.11) at its old time for each of its
+ * visits whose UID the plan no longer has.
+ */
+export function icsMismatches(plan: Plan, text: string, previous?: Plan): string[] {
   const zone = plan.campaign.site.timeZone;
   const { timezoneIds, events } = parseIcs(text);
   const problems: string[] = [];
-  if (events.length !== plan.visits.length) problems.push(`${events.length} events for ${plan.visits.length} visits`);
+  const live = events.filter((e) => e.status !== 'CANCELLED');
+  const cancelled = events.filter((e) => e.status === 'CANCELLED');
+  if (live.length !== plan.visits.length) problems.push(`${live.length} events for ${plan.visits.length} visits`);
   if (plan.visits.length > 0 && !timezoneIds.includes(zone)) problems.push(`no VTIMEZONE for ${zone}`);
   if (new Set(events.map((e) => e.uid)).size !== events.length) problems.push('UIDs repeat');
-  const byStart = new Map(events.map((e) => [e.startMs, e]));
-  for (const v of plan.visits) {
-    const e = byStart.get(Date.parse(v.startUtc));
+  const uids = documentedUids(plan);
+  const byUid = new Map(events.map((e) => [e.uid, e]));
+  for (const [uid, v] of uids) {
+    const e = byUid.get(uid);
     const label = `${v.starId} ${v.startUtc}`;
-    if (!e) {
-      problems.push(`${label}: no event starts then`);
+    if (!e || e.status === 'CANCELLED') {
+      problems.push(`${label}: no event with UID ${uid}`);
       continue;
     }
+    if (e.startMs !== Date.parse(v.startUtc)) problems.push(`${label}: event ${uid} starts at ${new Date(e.startMs).toISOString()}`);
+    if (e.status !== null) problems.push(`${label}: STATUS ${e.status}`);
     // A visit in the second occurrence of a repeated hour is written in UTC (RFC 5545 3.3.5).
     const start = DateTime.fromISO(v.startUtc, { zone });
     const utcAllowed = e.tzid === null && (secondOccurrence(start) || secondOccurrence(start.plus({ seconds: v.durationSec })));
@@ -78,6 +110,13 @@ export function icsMismatches(plan: Plan, text: string): string[] {
     if (!e.description.includes(v.starId) || !e.description.includes(`${v.exposureSec.toFixed(0)} s`)) problems.push(`${label}: description lacks target or exposure`);
     if (v.phases.some((p) => !e.description.includes(p.phase.toFixed(3)))) problems.push(`${label}: description lacks the phase`);
     if (!e.stampIsUtc) problems.push(`${label}: DTSTAMP not in UTC form`);
+  }
+  const gone = previous?.campaign.name === plan.campaign.name ? [...documentedUids(previous)].filter(([uid]) => !uids.has(uid)) : [];
+  if (cancelled.length !== gone.length) problems.push(`${cancelled.length} cancelled events for ${gone.length} visits gone from the previous plan`);
+  for (const [uid, v] of gone) {
+    const e = byUid.get(uid);
+    if (e?.status !== 'CANCELLED') problems.push(`${uid}: gone from the plan but not cancelled`);
+    else if (e.startMs !== Date.parse(v.startUtc) || e.endMs - e.startMs !== v.durationSec * 1000) problems.push(`${uid}: cancelled event not at the old visit's time`);
   }
   return problems;
 }

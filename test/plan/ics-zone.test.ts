@@ -61,4 +61,12 @@ describe('plan.ics in the week after 1 April 2029 at a Chilean site', () => {
     expect(plan.visits.length).toBeGreaterThan(3);
     expect(icsMismatches(plan, renderPlanIcs(plan))).toEqual([]);
   });
+
+  it('re-planned without the nights of 7 and 8 April: their visits, either side of the change, are cancelled at their old instants', () => {
+    const plan = buildPlan(readCampaign(fixture('chile-2029')), { weatherTrials: 10 });
+    // The change is 2029-04-08T03:00Z, in the night of 7 April.
+    const next = { ...plan, visits: plan.visits.filter((v) => v.localDate < '2029-04-07') };
+    expect(plan.visits.length - next.visits.length).toBeGreaterThan(0);
+    expect(icsMismatches(next, renderPlanIcs(next, { previous: plan }), plan)).toEqual([]);
+  });
 });
