@@ -105,6 +105,8 @@ function snapshot(state: PlanState): { nights: number[]; slots: number[] } {
 }
 
 function restoreSnapshot(state: PlanState, saved: { nights: number[]; slots: number[] }): void {
+  // Every visit out first: granted nights stay open and keep theirs through closeNight.
+  for (const j of state.chosenSlots()) state.remove(j);
   for (const n of openNightList(state)) state.closeNight(n);
   for (const n of saved.nights) state.openNight(n);
   for (const j of saved.slots) state.add(j);

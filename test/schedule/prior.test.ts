@@ -52,6 +52,19 @@ describe('prior visits in the optimiser', () => {
     }
   });
 
+  it('a granted night stays open, is not counted, and the plan is what a from-scratch recomputation says (restarts included)', () => {
+    for (const seed of [6, 7, 8]) {
+      const base = withPrior(seed, true);
+      const granted = base.nights[0]!.index;
+      const problem = { ...base, nights: base.nights.map((n) => (n.index === granted ? { ...n, granted: true } : n)), time: { mode: 'choose-nights' as const, nights: 2 } };
+      const result = optimiseSchedule(problem, { seed, restarts: 12 });
+      expect(new Set(result.slotIds).size).toBe(result.slotIds.length);
+      expect(result.nightIndices).toContain(granted);
+      expect(result.nightIndices.filter((n) => n !== granted).length).toBeLessThanOrEqual(2);
+      expect(result.utility).toBeCloseTo(referenceUtility(problem, chosen(problem, result.slotIds), SETTINGS), 9);
+    }
+  });
+
   it('a clear-sky weather replay keeps them (each planet and search reaches what the plan says)', () => {
     const problem = withPrior(5, true);
     const clear = { ...problem, nights: problem.nights.map((n) => ({ ...n, clearProbability: 1 })) };
