@@ -4,8 +4,9 @@ import type { BenchModule } from './types.js';
 import { visibilityBench } from './visibility.js';
 import { scheduleBenches } from './schedule.js';
 import { injectionBench } from './injection.js';
+import { nextBench } from './next.js';
 
-const BENCHES: BenchModule[] = [visibilityBench, ...scheduleBenches, injectionBench];
+const BENCHES: BenchModule[] = [visibilityBench, ...scheduleBenches, injectionBench, nextBench];
 
 /** Runs the benches named on the command line (all when none), one JSON line each on stdout. */
 async function main(names: string[]): Promise<void> {

@@ -44,11 +44,12 @@ export interface NextAnswer {
 }
 
 function phaseWords(d: SlotDetail): string[] {
+  const name = (id: string) => (d.phases.length > 1 ? `${id} ` : '');
   return d.phases.map((p) => {
     const q = Math.min(Math.abs(p.phase - 0.25), Math.abs(p.phase - 0.75));
     const c = Math.min(p.phase, 1 - p.phase);
     const where = q <= NEAR_CYCLES ? 'near quadrature' : c <= NEAR_CYCLES ? 'near conjunction, little on K' : 'between quadrature and conjunction';
-    return `${p.targetId} phase ${p.phase.toFixed(2)}±${p.phaseErr.toFixed(2)} ${where}`;
+    return `${name(p.targetId)}phase ${p.phase.toFixed(2)}±${p.phaseErr.toFixed(2)} ${where}`;
   });
 }
 
@@ -85,7 +86,9 @@ export function nextVisits(given: Campaign, at: Date): NextAnswer {
     const after = ratios(t);
     state.remove(j);
     const window = inputs.windows.find((w) => w.targetId === d.slot.targetId && w.localDate === localDate && w.start.getTime() <= d.slot.startMs && w.end.getTime() >= d.slot.startMs)!;
-    const goalWords = before.map((b) => (b.ratio >= b.goal ? `${b.targetId} goal reached (K/sigma_K ${b.ratio.toFixed(1)})` : `${b.targetId} K/sigma_K ${b.ratio.toFixed(1)} of ${b.goal}`));
+    // A star with one planet or search is named once, by its line.
+    const name = (id: string) => (before.length > 1 ? `${id} ` : '');
+    const goalWords = before.map((b) => (b.ratio >= b.goal ? `${name(b.targetId)}goal reached (K/sigma_K ${b.ratio.toFixed(1)})` : `${name(b.targetId)}K/sigma_K ${b.ratio.toFixed(1)} of ${b.goal}`));
     choices.push({
       starId: d.slot.targetId,
       startMs: d.slot.startMs,

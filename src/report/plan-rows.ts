@@ -151,21 +151,33 @@ function inSigma(change: number, sigma: number): string {
   return sigma > 0 ? `${change >= 0 ? '+' : ''}${(change / sigma).toFixed(1)}σ` : '';
 }
 
-/** One line per fitted planet and per search peak: what the RVs so far changed, with 1σ errors. */
+/** A BJD_TDB of an instant given as ms since 1970 (to the day: what a transit epoch needs). */
+const bjdOfMs = (ms: number) => ms / 86_400_000 + 2_440_587.5;
+
+/** The transit nearest `bjd` and its 1σ error: Tc + nP, σ² = σ_Tc² + n² σ_P² (linear propagation, common practice). */
+function transitNear(e: { tcBjdTdb: number; tcErrDays: number; periodDays: number; periodErrDays: number }, bjd: number): { at: number; errDays: number } {
+  const n = Math.round((bjd - e.tcBjdTdb) / e.periodDays);
+  return { at: e.tcBjdTdb + n * e.periodDays, errDays: Math.hypot(e.tcErrDays, n * e.periodErrDays) };
+}
+
+/**
+ * One line per fitted planet and per search peak: what the RVs so far changed, with 1σ errors.
+ * The ephemeris is compared where it matters, at the transit nearest the window's middle.
+ */
 export function rvUpdateLines(plan: Plan): string[] {
+  const { start, end } = plan.campaign.window;
+  const middle = bjdOfMs((Date.parse(start) + Date.parse(end)) / 2);
   return plan.targets.flatMap((t) => {
     const out: string[] = [];
     const f = t.fit;
     if (f) {
-      const c = f.catalogue;
-      // Tc compared at the fitted epoch: the catalogue Tc moved by whole catalogue periods.
-      const cycles = Math.round((f.tcBjdTdb - c.tcBjdTdb) / c.periodDays);
-      const tcCatalogue = c.tcBjdTdb + cycles * c.periodDays;
-      const tcShiftMin = (f.tcBjdTdb - tcCatalogue) * 1440;
+      const fitted = transitNear(f, middle);
+      const catalogue = transitNear(f.catalogue, fitted.at);
+      const shiftMin = (fitted.at - catalogue.at) * 1440;
       out.push(
-        `${t.targetId} (${f.points} RVs): K ${fmt(c.kMps, 2)} -> ${fmt(f.kMps, 2)} ± ${fmt(f.kErrMps, 2)} m/s; ` +
-          `Tc ${tcShiftMin >= 0 ? '+' : ''}${fmt(tcShiftMin, 1)} min (${inSigma(tcShiftMin, f.tcErrDays * 1440)}) to ${f.tcBjdTdb.toFixed(5)} ± ${fmt(f.tcErrDays * 1440, 1)} min; ` +
-          `P ${c.periodDays.toFixed(6)} -> ${f.periodDays.toFixed(6)} ± ${f.periodErrDays.toExponential(1)} d`,
+        `${t.targetId} (${f.points} RVs): K ${fmt(f.catalogue.kMps, 2)} -> ${fmt(f.kMps, 2)} ± ${fmt(f.kErrMps, 2)} m/s; ` +
+          `transit near the window's middle ${shiftMin >= 0 ? '+' : ''}${fmt(shiftMin, 0)} min (${inSigma(shiftMin, catalogue.errDays * 1440)} of the catalogue), ` +
+          `now ± ${fmt(fitted.errDays * 1440, 0)} min (was ± ${fmt(catalogue.errDays * 1440, 0)}); P ${f.catalogue.periodDays.toFixed(6)} -> ${f.periodDays.toFixed(6)} ± ${f.periodErrDays.toExponential(1)} d`,
       );
     }
     const p = t.peak;
