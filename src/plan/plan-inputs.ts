@@ -39,7 +39,8 @@ export function planInputs(given: Campaign, options: ReplanOptions): PlanInputs 
   const { windows } = computeWindows(site, starTargets(stars), nights, constraints);
   const past = history(campaign, observed, options);
   const open = openSlot(campaign, past, options.now);
-  const left = remaining(campaign, past, options.previous, scheduleNights(campaign, nights));
+  const allNights = scheduleNights(campaign, nights);
+  const left = remaining(campaign, past, options.previous, allNights);
   const dates = new Set(left.nights.map((n) => n.localDate));
   const details = candidateSlots(campaign, nights, windows, stars).filter((d) => dates.has(d.localDate) && open(d));
   const problem: ScheduleProblem = {
@@ -48,7 +49,7 @@ export function planInputs(given: Campaign, options: ReplanOptions): PlanInputs 
     slots: details.map((d) => d.slot),
     time: left.time,
     constraints: { minSpacingHours: constraints.minSpacingHours, onePerNight: constraints.minSpacingHours >= 12 },
-    prior: priorVisits(past, rv.fittedStars),
+    prior: priorVisits(past, rv.fittedStars, allNights),
   };
   return { campaign, rv, setups, stars, nights, windows, observed, past, left, details, problem };
 }

@@ -40,12 +40,14 @@ export function history(campaign: Campaign, observed: ObservedVisit[], options: 
 }
 
 /** Kept and observed visits as the scheduler's prior visits; an RV of a star fitted so far informs only its offset and K's. */
-export function priorVisits(h: History, fittedStars: ReadonlySet<string>): PriorVisit[] {
+export function priorVisits(h: History, fittedStars: ReadonlySet<string>, nights: ScheduleNight[]): PriorVisit[] {
+  const middle = new Map(nights.flatMap((n) => (n.midDays === undefined ? [] : [[n.localDate, n.midDays] as const])));
   const prior = (v: PlannedVisit | ObservedVisit, phaseInPrior: boolean): PriorVisit => ({
     targetId: v.starId,
     localDate: v.localDate,
     midDays: v.midBjdTdb,
     sigmaWhiteMps: v.sigmaWhiteMps,
+    ...(middle.has(v.localDate) ? { nightMidDays: middle.get(v.localDate)! } : {}),
     ...(phaseInPrior ? { phaseInPrior } : {}),
   });
   return [...h.kept.map((v) => prior(v, false)), ...h.observed.map((v) => prior(v, v.rvMps !== undefined && fittedStars.has(v.starId)))];

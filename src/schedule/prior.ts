@@ -28,7 +28,7 @@ export function compilePrior(c: CompiledProblem): CompiledPrior {
   for (const v of prior) {
     if (problemKey.has(v.localDate)) continue;
     const night = otherNights.get(v.localDate) ?? { key: c.nightCount + otherNights.size, sumDays: 0, count: 0 };
-    night.sumDays += v.midDays;
+    night.sumDays += v.nightMidDays ?? v.midDays;
     night.count++;
     otherNights.set(v.localDate, night);
   }

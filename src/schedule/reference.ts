@@ -56,7 +56,7 @@ function kOverSigmaKOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], g
     const key = priorKey.get(date)!;
     if (nightMid.has(key)) return nightMid.get(key)!;
     const same = (problem.prior ?? []).filter((v) => v.localDate === date);
-    return same.reduce((sum, v) => sum + v.midDays, 0) / same.length;
+    return same.reduce((sum, v) => sum + (v.nightMidDays ?? v.midDays), 0) / same.length;
   };
   return problem.targets.flatMap((target, t) => {
     const prior = (problem.prior ?? []).filter((v) => v.targetId === target.id);

@@ -85,6 +85,8 @@ export interface PriorVisit {
   midDays: number;
   /** White noise of the visit (m/s); its weight is 1/sigma^2. */
   sigmaWhiteMps: number;
+  /** The middle of its night (midDays scale), where nightly activity is evaluated; default: the mean of that date's prior visits. */
+  nightMidDays?: number;
   /**
    * The star's ephemeris prior already holds what this visit says about phases, periods and
    * eccentricity (an orbit fit of its RV): it then informs only the offset and the K's.
