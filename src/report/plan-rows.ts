@@ -1,5 +1,5 @@
 import { DateTime } from 'luxon';
-import type { Plan, PlannedVisit } from '../model.js';
+import type { Plan, PlannedVisit, TargetSummary } from '../model.js';
 import { clockTime } from '../sky/local-time.js';
 import { fmt, percent, type Column } from './table.js';
 
@@ -153,29 +153,32 @@ function inSigma(change: number, sigma: number): string {
 
 /** One line per fitted planet and per search peak: what the RVs so far changed, with 1σ errors. */
 export function rvUpdateLines(plan: Plan): string[] {
-  return plan.targets.flatMap((t) => {
-    const out: string[] = [];
-    const f = t.fit;
-    if (f) {
-      const c = f.catalogue;
-      // Tc compared at the fitted epoch: the catalogue Tc moved by whole catalogue periods.
-      const cycles = Math.round((f.tcBjdTdb - c.tcBjdTdb) / c.periodDays);
-      const tcCatalogue = c.tcBjdTdb + cycles * c.periodDays;
-      const tcShiftMin = (f.tcBjdTdb - tcCatalogue) * 1440;
-      out.push(
-        `${t.targetId} (${f.points} RVs): K ${fmt(c.kMps, 2)} -> ${fmt(f.kMps, 2)} ± ${fmt(f.kErrMps, 2)} m/s; ` +
-          `Tc ${tcShiftMin >= 0 ? '+' : ''}${fmt(tcShiftMin, 1)} min (${inSigma(tcShiftMin, f.tcErrDays * 1440)}) to ${f.tcBjdTdb.toFixed(5)} ± ${fmt(f.tcErrDays * 1440, 1)} min; ` +
-          `P ${c.periodDays.toFixed(6)} -> ${f.periodDays.toFixed(6)} ± ${f.periodErrDays.toExponential(1)} d`,
-      );
-    }
-    const p = t.peak;
-    if (p) {
-      out.push(
-        p.significant
-          ? `${t.targetId}: candidate signal in the RVs so far, P = ${fmt(p.periodDays, 3)} d, K = ${fmt(p.kMps, 2)} m/s, false-alarm probability ${p.fap.toExponential(1)}: offered, not adopted (add it as a planet row to plan for it)`
-          : `${t.targetId}: no significant peak in the RVs so far (best P = ${fmt(p.periodDays, 3)} d, false-alarm probability ${fmt(p.fap, 2)})`,
-      );
-    }
-    return out;
-  });
+  return plan.targets.flatMap(targetRvUpdateLines);
+}
+
+/** The lines of rvUpdateLines for one target: its fit, its search peak, or nothing. */
+export function targetRvUpdateLines(t: TargetSummary): string[] {
+  const out: string[] = [];
+  const f = t.fit;
+  if (f) {
+    const c = f.catalogue;
+    // Tc compared at the fitted epoch: the catalogue Tc moved by whole catalogue periods.
+    const cycles = Math.round((f.tcBjdTdb - c.tcBjdTdb) / c.periodDays);
+    const tcCatalogue = c.tcBjdTdb + cycles * c.periodDays;
+    const tcShiftMin = (f.tcBjdTdb - tcCatalogue) * 1440;
+    out.push(
+      `${t.targetId} (${f.points} RVs): K ${fmt(c.kMps, 2)} -> ${fmt(f.kMps, 2)} ± ${fmt(f.kErrMps, 2)} m/s; ` +
+        `Tc ${tcShiftMin >= 0 ? '+' : ''}${fmt(tcShiftMin, 1)} min (${inSigma(tcShiftMin, f.tcErrDays * 1440)}) to ${f.tcBjdTdb.toFixed(5)} ± ${fmt(f.tcErrDays * 1440, 1)} min; ` +
+        `P ${c.periodDays.toFixed(6)} -> ${f.periodDays.toFixed(6)} ± ${f.periodErrDays.toExponential(1)} d`,
+    );
+  }
+  const p = t.peak;
+  if (p) {
+    out.push(
+      p.significant
+        ? `${t.targetId}: candidate signal in the RVs so far, P = ${fmt(p.periodDays, 3)} d, K = ${fmt(p.kMps, 2)} m/s, false-alarm probability ${p.fap.toExponential(1)}: offered, not adopted (add it as a planet row to plan for it)`
+        : `${t.targetId}: no significant peak in the RVs so far (best P = ${fmt(p.periodDays, 3)} d, false-alarm probability ${fmt(p.fap, 2)})`,
+    );
+  }
+  return out;
 }
