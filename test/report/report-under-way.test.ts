@@ -1,7 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { renderReportHtml } from '../../src/report/html/report-html.js';
-import { fixturePlan } from './fixture.js';
-import { TEYU_FIT, TEYU_RVS, underWayPlan } from './fixture-under-way.js';
+import { MIRADOR_B_K, MIRADOR_RVS, TEYU_FIT, TEYU_RVS, underWayPlan } from './fixture-under-way.js';
+import { fixturePlan, TARGETS } from './fixture.js';
 import { figures, markCount, tableRows } from './svg-marks.js';
 
 let page: string;
@@ -14,26 +14,36 @@ beforeAll(async () => {
 
 const rvChart = (html: string, id: string) => figures(html, 'rv-phase').find((f) => f.id === id)!;
 
-// The phase of each RV by hand: (t − Tc)/P mod 1 on the fitted ephemeris.
-const handPhase = (bjd: number) => {
-  const x = (bjd - TEYU_FIT.tcBjdTdb) / TEYU_FIT.periodDays;
+// The phase of an RV by hand: (t − Tc)/P mod 1, on Teyu-3's fitted ephemeris unless another is given.
+const handPhase = (bjd: number, eph: { tcBjdTdb: number; periodDays: number } = TEYU_FIT) => {
+  const x = (bjd - eph.tcBjdTdb) / eph.periodDays;
   return x - Math.floor(x);
 };
 
 describe('measured RVs on the folded curve', () => {
-  it('draws one hollow point and one error bar per RV of the star, and the K ± σ_K band', () => {
+  it('draws one diamond and one error bar per RV of the star, and the K ± σ_K band', () => {
     const chart = rvChart(page, 'rv-teyu-3');
     expect(markCount(chart.html, 'measured_points')).toBe(TEYU_RVS.length);
     expect(markCount(chart.html, 'measured_error_bars')).toBe(TEYU_RVS.length);
     expect(markCount(chart.html, 'fit_band')).toBe(1);
     // Named in words: a key entry and the caption.
     expect(chart.html).toMatch(/<text[^>]*>measured RV<\/text>/);
-    expect(chart.html).toContain('open diamonds is an RV already measured');
+    expect(chart.html).toContain('diamonds is an RV already measured');
     // The key's and band's extra SVG ids stay unique in the page.
     const ids = [...page.matchAll(/\bid="([^"]+)"/g)].map((m) => m[1]);
     expect(new Set(ids).size).toBe(ids.length);
-    // A star without RVs (Mirador-7) gets none.
-    expect(markCount(rvChart(page, 'rv-mirador-7').html, 'measured_points')).toBe(0);
+    expect(markCount(rvChart(page, 'rv-mirador-7').html, 'measured_points')).toBe(MIRADOR_RVS.length);
+  });
+
+  it("removes the star's other planet: Mirador-7's RVs (b + c + offset) fall on b's curve", () => {
+    const eph = TARGETS.find((t) => t.id === 'Mirador-7')!.ephemeris!;
+    const rows = tableRows(rvChart(page, 'rv-mirador-7').html).filter((r) => r[0]!.startsWith('measured'));
+    expect(rows).toHaveLength(MIRADOR_RVS.length);
+    MIRADOR_RVS.forEach(([bjd], i) => {
+      const phase = handPhase(bjd, eph);
+      expect(rows[i]![2]).toBe(phase.toFixed(3));
+      expect(Number(rows[i]![4])).toBeCloseTo(-MIRADOR_B_K * Math.sin(2 * Math.PI * phase), 2);
+    });
   });
 
   it('places each RV at its phase, offset and error derived by hand', () => {

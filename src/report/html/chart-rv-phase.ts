@@ -78,13 +78,13 @@ export function rvPhaseFigure(plan: Plan, summary: TargetSummary & { kMps: numbe
             encoding: { x, y: { ...y, field: 'rvLo' }, y2: { field: 'rvHi' } },
           },
           {
-            name: 'measured_points', mark: { type: 'point', filled: false, size: 70, strokeWidth: 1.8, opacity: 1 },
+            name: 'measured_points', mark: { type: 'point', filled: true, size: 70, opacity: 1 },
             encoding: { x, y, ...key(KEY.measured) },
           },
         ],
       }] : []),
     ],
-    ...(keyed ? { config: { legend: { orient: 'bottom', direction: 'horizontal', symbolStrokeWidth: 1.8, labelLimit: 300 } } } : {}),
+    ...(keyed ? { config: { legend: { orient: 'bottom', direction: 'horizontal', labelLimit: 300 } } } : {}),
   } as unknown as TopLevelSpec;
   return {
     id: `rv-${summary.targetId}`,
@@ -95,7 +95,7 @@ export function rvPhaseFigure(plan: Plan, summary: TargetSummary & { kMps: numbe
       'predicted phase; vertical bars are the per-visit RV uncertainty (±σ with jitter), horizontal bars the 1σ phase uncertainty of the ephemeris.' +
       (fit ? ` The curve is the orbit fitted to ${fit.points} RVs so far; the shaded band spans the curves for K ± σ_K = ${fmt(k, 2)} ± ${fmt(fit.kErrMps, 2)} m/s.` : '') +
       (keyed
-        ? ` Each of the ${measured.length} open diamonds is an RV already measured, folded on the ${fit ? 'fitted ' : ''}ephemeris, less its instrument's offset ` +
+        ? ` Each of the ${measured.length} diamonds is an RV already measured, folded on the ${fit ? 'fitted ' : ''}ephemeris, less its instrument's offset ` +
           "(the weighted mean of RV − model for that instrument) and the star's other planets; its bar is ±√(σ_RV² + jitter²)."
         : ''),
     spec,
