@@ -37,7 +37,9 @@ describe('measured RVs on the folded curve', () => {
 
   it("removes the star's other planet: Mirador-7's RVs (b + c + offset) fall on b's curve", () => {
     const eph = TARGETS.find((t) => t.id === 'Mirador-7')!.ephemeris!;
-    const rows = tableRows(rvChart(page, 'rv-mirador-7').html).filter((r) => r[0]!.startsWith('measured'));
+    const chart = rvChart(page, 'rv-mirador-7');
+    expect(chart.html).toContain('and the signal of Mirador-7 c;');
+    const rows = tableRows(chart.html).filter((r) => r[0]!.startsWith('measured'));
     expect(rows).toHaveLength(MIRADOR_RVS.length);
     MIRADOR_RVS.forEach(([bjd], i) => {
       const phase = handPhase(bjd, eph);

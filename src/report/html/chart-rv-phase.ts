@@ -31,9 +31,17 @@ export function rvPhaseFigure(plan: Plan, summary: TargetSummary & { kMps: numbe
     const ends = [(k - fit.kErrMps) * shape.at(c.phase), (k + fit.kErrMps) * shape.at(c.phase)];
     return { phase: c.phase, lo: Math.min(...ends), hi: Math.max(...ends) };
   });
-  const measured = foldedRvs(plan, summary);
+  const { points: measured, othersRemoved } = foldedRvs(plan, summary);
   const keyed = measured.length > 0;
-  const key = (name: string) => (keyed ? { shape: { datum: name, type: 'nominal', title: null, scale: { domain: Object.values(KEY), range: ['circle', 'diamond'] } }, color: { datum: name, type: 'nominal', scale: { domain: Object.values(KEY), range: [OKABE_ITO.vermillion, OKABE_ITO.blue] } } } : {});
+  // A layer's entry in the key, shown only beside measured RVs (the chart without them is unchanged).
+  const domain = Object.values(KEY);
+  const key = (name: string) =>
+    keyed
+      ? {
+          shape: { datum: name, type: 'nominal', title: null, scale: { domain, range: ['circle', 'diamond'] } },
+          color: { datum: name, type: 'nominal', scale: { domain, range: [OKABE_ITO.vermillion, OKABE_ITO.blue] } },
+        }
+      : {};
   const visits = visitsOf(plan, summary.starId).map((v, i) => {
     const { phase, phaseErr } = v.phases.find((p) => p.targetId === summary.targetId) ?? { phase: 0, phaseErr: 0 };
     const rv = rvAt(phase);
@@ -51,7 +59,7 @@ export function rvPhaseFigure(plan: Plan, summary: TargetSummary & { kMps: numbe
     width: 380,
     height: 220,
     layer: [
-      ...(band ? [{ data: { values: band }, name: 'fit_band', mark: { type: 'area', color: OKABE_ITO.skyBlue, opacity: 0.3 }, encoding: { x, y: { ...y, field: 'lo' }, y2: { field: 'hi' } } }] : []),
+      ...(band ? [{ data: { values: band }, name: 'fit_band', mark: { type: 'area', color: OKABE_ITO.skyBlue, opacity: 0.3, clip: true }, encoding: { x, y: { ...y, field: 'lo' }, y2: { field: 'hi' } } }] : []),
       { data: { values: curve }, name: 'model_curve', mark: { type: 'line', color: INK, strokeWidth: 1.5 }, encoding: { x, y } },
       {
         data: { values: visits },
@@ -96,7 +104,7 @@ export function rvPhaseFigure(plan: Plan, summary: TargetSummary & { kMps: numbe
       (fit ? ` The curve is the orbit fitted to ${fit.points} RVs so far; the shaded band spans the curves for K ± σ_K = ${fmt(k, 2)} ± ${fmt(fit.kErrMps, 2)} m/s.` : '') +
       (keyed
         ? ` Each of the ${measured.length} diamonds is an RV already measured, folded on the ${fit ? 'fitted ' : ''}ephemeris, less its instrument's offset ` +
-          "(the weighted mean of RV − model for that instrument) and the star's other planets; its bar is ±√(σ_RV² + jitter²)."
+          `(the weighted mean of RV − model for that instrument)${othersRemoved.length ? ` and the signal of ${othersRemoved.join(', ')}` : ''}; its bar is ±√(σ_RV² + jitter²).`
         : ''),
     spec,
     columns: [

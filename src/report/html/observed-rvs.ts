@@ -31,16 +31,16 @@ function planetSignals(plan: Plan, rows: Target[]): { id: string; at: (bjd: numb
 }
 
 /**
- * The star's measured RVs for one planet, folded on its ephemeris: each RV minus the other planets'
+ * The star's measured RVs for one planet, folded on its ephemeris (and the other planets removed): each RV minus the other planets'
  * signals and minus its instrument's offset γ. The plan keeps no offsets, so γ is found here as the
  * weighted mean of RV − model over the instrument's points, weights 1/(rvErr² + jitter²): the
  * least-squares offset with the orbits held fixed (common practice). The jitter is the star's
  * first row's, as the orbit fit (src/plan/orbit-update.ts) takes it.
  */
-export function foldedRvs(plan: Plan, summary: TargetSummary): FoldedRv[] {
+export function foldedRvs(plan: Plan, summary: TargetSummary): { points: FoldedRv[]; othersRemoved: string[] } {
   const rows = starsOf(plan.campaign.targets).get(summary.starId) ?? [];
   const self = rows.find((r) => r.id === summary.targetId);
-  if (!self?.ephemeris) return [];
+  if (!self?.ephemeris) return { points: [], othersRemoved: [] };
   const jitter = rows[0]!.jitterMps;
   const signals = planetSignals(plan, rows);
   const model = (bjd: number) => signals.reduce((sum, p) => sum + p.at(bjd), 0);
@@ -54,9 +54,10 @@ export function foldedRvs(plan: Plan, summary: TargetSummary): FoldedRv[] {
     const w = mine.map((p) => 1 / (p.err * p.err));
     gamma.set(instrument, mine.reduce((sum, p, i) => sum + w[i]! * (p.rv - model(p.v.midBjdTdb)), 0) / w.reduce((a, b) => a + b, 0));
   }
-  return points.map(({ v, rv, err }) => {
+  const folded = points.map(({ v, rv, err }) => {
     const g = gamma.get(v.instrument)!;
     const y = rv - g - others(v.midBjdTdb);
     return { date: v.localDate, instrument: v.instrument, bjd: v.midBjdTdb, phase: phaseAt(self.ephemeris!, v.midBjdTdb), rv: y, rvLo: y - err, rvHi: y + err, errMps: err, gammaMps: g };
   });
+  return { points: folded, othersRemoved: signals.map((p) => p.id).filter((id) => id !== summary.targetId) };
 }
