@@ -1,5 +1,5 @@
 import { DateTime } from 'luxon';
-import type { Plan, PlannedVisit } from '../model.js';
+import type { Plan, PlannedVisit, TargetSummary } from '../model.js';
 import { clockTime } from '../sky/local-time.js';
 import { fmt, percent, type Column } from './table.js';
 
@@ -165,29 +165,32 @@ function transitNear(e: { tcBjdTdb: number; tcErrDays: number; periodDays: numbe
  * The ephemeris is compared where it matters, at the transit nearest the window's middle.
  */
 export function rvUpdateLines(plan: Plan): string[] {
+  return plan.targets.flatMap((t) => targetRvUpdateLines(plan, t));
+}
+
+/** The lines of rvUpdateLines for one target: its fit, its search peak, or nothing. */
+export function targetRvUpdateLines(plan: Plan, t: TargetSummary): string[] {
   const { start, end } = plan.campaign.window;
   const middle = bjdOfMs((Date.parse(start) + Date.parse(end)) / 2);
-  return plan.targets.flatMap((t) => {
-    const out: string[] = [];
-    const f = t.fit;
-    if (f) {
-      const fitted = transitNear(f, middle);
-      const catalogue = transitNear(f.catalogue, fitted.at);
-      const shiftMin = (fitted.at - catalogue.at) * 1440;
-      out.push(
-        `${t.targetId} (${f.points} RVs): K ${fmt(f.catalogue.kMps, 2)} -> ${fmt(f.kMps, 2)} ± ${fmt(f.kErrMps, 2)} m/s; ` +
-          `transit near the window's middle ${shiftMin >= 0 ? '+' : ''}${fmt(shiftMin, 0)} min (${inSigma(shiftMin, catalogue.errDays * 1440)} of the catalogue), ` +
-          `now ± ${fmt(fitted.errDays * 1440, 0)} min (was ± ${fmt(catalogue.errDays * 1440, 0)}); P ${f.catalogue.periodDays.toFixed(6)} -> ${f.periodDays.toFixed(6)} ± ${f.periodErrDays.toExponential(1)} d`,
-      );
-    }
-    const p = t.peak;
-    if (p) {
-      out.push(
-        p.significant
-          ? `${t.targetId}: candidate signal in the RVs so far, P = ${fmt(p.periodDays, 3)} d, K = ${fmt(p.kMps, 2)} m/s, false-alarm probability ${p.fap.toExponential(1)}: offered, not adopted (add it as a planet row to plan for it)`
-          : `${t.targetId}: no significant peak in the RVs so far (best P = ${fmt(p.periodDays, 3)} d, false-alarm probability ${fmt(p.fap, 2)})`,
-      );
-    }
-    return out;
-  });
+  const out: string[] = [];
+  const f = t.fit;
+  if (f) {
+    const fitted = transitNear(f, middle);
+    const catalogue = transitNear(f.catalogue, fitted.at);
+    const shiftMin = (fitted.at - catalogue.at) * 1440;
+    out.push(
+      `${t.targetId} (${f.points} RVs): K ${fmt(f.catalogue.kMps, 2)} -> ${fmt(f.kMps, 2)} ± ${fmt(f.kErrMps, 2)} m/s; ` +
+        `transit near the window's middle ${shiftMin >= 0 ? '+' : ''}${fmt(shiftMin, 0)} min (${inSigma(shiftMin, catalogue.errDays * 1440)} of the catalogue), ` +
+        `now ± ${fmt(fitted.errDays * 1440, 0)} min (was ± ${fmt(catalogue.errDays * 1440, 0)}); P ${f.catalogue.periodDays.toFixed(6)} -> ${f.periodDays.toFixed(6)} ± ${f.periodErrDays.toExponential(1)} d`,
+    );
+  }
+  const p = t.peak;
+  if (p) {
+    out.push(
+      p.significant
+        ? `${t.targetId}: candidate signal in the RVs so far, P = ${fmt(p.periodDays, 3)} d, K = ${fmt(p.kMps, 2)} m/s, false-alarm probability ${p.fap.toExponential(1)}: offered, not adopted (add it as a planet row to plan for it)`
+        : `${t.targetId}: no significant peak in the RVs so far (best P = ${fmt(p.periodDays, 3)} d, false-alarm probability ${fmt(p.fap, 2)})`,
+    );
+  }
+  return out;
 }

@@ -62,7 +62,7 @@ export function compilePrior(c: CompiledProblem): CompiledPrior {
 }
 
 /** Zeroes every column of a visit's design rows but the offset's (column 0) and the K's. */
-function keepOffsetAndK(rows: Float64Array, model: StarModel): void {
+export function keepOffsetAndK(rows: Float64Array, model: StarModel): void {
   const keep = new Set([0, ...model.kIndex]);
   for (let at = 0; at < rows.length; at += model.paramCount) {
     for (let col = 0; col < model.paramCount; col++) if (!keep.has(col)) rows[at + col] = 0;

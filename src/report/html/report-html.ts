@@ -1,5 +1,5 @@
 import type { Plan, SearchSpec, Target, TargetSummary } from '../../model.js';
-import { ADVISORY, targetColumns, targetRows, totalsLine, visitsByNight } from '../plan-rows.js';
+import { ADVISORY, targetColumns, targetRows, targetRvUpdateLines, totalsLine, visitsByNight } from '../plan-rows.js';
 import { calendarFigure } from './chart-calendar.js';
 import { detectionMapFigure, type DetectionMapData } from './chart-detection-map.js';
 import { kGrowthFigure } from './chart-k-growth.js';
@@ -32,27 +32,36 @@ function head(plan: Plan): string {
   ].join('\n');
 }
 
+/** What the RVs so far changed for one target (its fit or its search peak), as a paragraph; '' without RVs. */
+function rvUpdateParagraph(plan: Plan, s: TargetSummary): string {
+  const lines = targetRvUpdateLines(plan, s);
+  return lines.length ? `<p class="rv-update"><strong>RVs so far:</strong> ${lines.map(escapeHtml).join('<br>')}</p>` : '';
+}
+
 async function targetSections(plan: Plan, maps: ReadonlyMap<string, DetectionMapData>): Promise<string[]> {
   const out: string[] = [];
   const ephemeris = plan.targets.filter((s) => s.kind === 'ephemeris' && s.visits > 0 && hasK(s)) as (TargetSummary & { kMps: number })[];
   if (ephemeris.length) {
     out.push('<h2 id="orbits">Orbital phase coverage</h2>');
     for (const s of ephemeris) {
-      out.push(`<h3>${escapeHtml(s.targetId)}</h3>`, '<div class="pair">', await renderFigure(rvPhaseFigure(plan, s)), await renderFigure(kGrowthFigure(plan, s)), '</div>');
+      out.push(`<h3>${escapeHtml(s.targetId)}</h3>`, ...[rvUpdateParagraph(plan, s)].filter(Boolean), '<div class="pair">', await renderFigure(rvPhaseFigure(plan, s)), await renderFigure(kGrowthFigure(plan, s)), '</div>');
     }
   }
   const search = plan.targets.flatMap((s) => {
     const target = targetOf(plan, s.targetId);
     return s.kind === 'search' && target?.search ? [{ s, target: target as Target & { search: SearchSpec } }] : [];
   });
-  const figures = search.flatMap(({ s, target }) => {
+  const parts = search.map(({ s, target }) => {
     const figure = massLimitFigure(plan, s, target);
     const map = maps.get(s.targetId);
-    return [...(figure ? [figure] : []), ...(map ? [detectionMapFigure(map)] : [])];
+    return { text: rvUpdateParagraph(plan, s), figures: [...(figure ? [figure] : []), ...(map ? [detectionMapFigure(map)] : [])] };
   });
-  if (figures.length) {
+  if (parts.some((p) => p.text || p.figures.length)) {
     out.push('<h2 id="search">Blind-search sensitivity</h2>');
-    for (const figure of figures) out.push(await renderFigure(figure));
+    for (const part of parts) {
+      if (part.text) out.push(part.text);
+      for (const figure of part.figures) out.push(await renderFigure(figure));
+    }
   }
   return out;
 }
