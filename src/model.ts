@@ -354,15 +354,19 @@ export interface TargetSummary {
   warnings: string[];
 }
 
-/** What a fit of the RVs so far changed for one planet (1-sigma errors). */
-export interface OrbitUpdate {
-  points: number;
+/** A planet's K and ephemeris as fitted to RVs, with 1-sigma errors. */
+export interface FittedOrbit {
   kMps: number;
   kErrMps: number;
   tcBjdTdb: number;
   tcErrDays: number;
   periodDays: number;
   periodErrDays: number;
+}
+
+/** What a fit of the RVs so far changed for one planet (1-sigma errors). */
+export interface OrbitUpdate extends FittedOrbit {
+  points: number;
   catalogue: { kMps?: number; tcBjdTdb: number; tcErrDays: number; periodDays: number; periodErrDays: number };
 }
 

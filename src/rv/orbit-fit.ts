@@ -1,6 +1,7 @@
 // A star's RVs fitted jointly for all its planets: Keplerian curves, one offset γ per instrument,
 // Gaussian priors from the catalogue ephemeris, by Levenberg–Marquardt on whitened residuals.
 import { validationError } from '../errors.js';
+import type { FittedOrbit } from '../model.js';
 import { periastronFromConjunctionBjd } from '../orbit/periastron-time.js';
 import { radialVelocityMps } from '../orbit/rv-curve.js';
 import { packedIndex } from './information-model.js';
@@ -30,15 +31,9 @@ export interface FitPoint {
   instrument: string;
 }
 
-export interface PlanetFit {
+/** One planet's fit; its Tc is at the epoch (catalogue Tc + n P) where it is uncorrelated with P. */
+export interface PlanetFit extends FittedOrbit {
   id: string;
-  kMps: number;
-  kErrMps: number;
-  /** Tc at the epoch (catalogue Tc + n P) where it is uncorrelated with P, and its error. */
-  tcBjdTdb: number;
-  tcErrDays: number;
-  periodDays: number;
-  periodErrDays: number;
   ecc: number;
   omegaDeg: number;
   /** Error of e, when e is fitted. */
