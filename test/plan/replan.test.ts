@@ -8,7 +8,7 @@ import { demoPlan } from '../support/demo-plan.js';
 import { describePlanProperties, WEATHER_TRIALS } from './plan-properties.js';
 import { randomCampaign } from './random-campaign.js';
 
-const CAMPAIGNS = 12;
+const CAMPAIGNS = 8;
 const key = (v: { starId: string; startUtc: string }) => `${v.starId} ${v.startUtc}`;
 
 interface Case {
