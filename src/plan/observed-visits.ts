@@ -36,11 +36,18 @@ export function observedVisits(campaign: Campaign, stars: StarSetup[]): Observed
     starOf.set(s.starId, s);
     for (const row of s.rows) starOf.set(row.target.id, s);
   }
+  // The instrument's σ for a star, once per star (it does not depend on the row).
+  const starMps = new Map<string, number>();
+  const instrumentMpsOf = (setup: StarSetup) => {
+    if (!starMps.has(setup.starId)) {
+      starMps.set(setup.starId, visitPrecision(campaign.instrument, setup.star, setup.exposure.exposureSec, TYPICAL_AIRMASS, { seeingArcsec: campaign.site.medianSeeingArcsec }).visitMps);
+    }
+    return starMps.get(setup.starId)!;
+  };
   const visits = observed.rows.map((row): ObservedVisit => {
     const setup = starOf.get(row.targetId)!;
     const at = row.midUtc !== undefined ? new Date(row.midUtc) : utcOfBjd(row.midBjdTdb!, setup.star);
-    const instrumentMps =
-      row.rvErrMps ?? visitPrecision(campaign.instrument, setup.star, setup.exposure.exposureSec, TYPICAL_AIRMASS, { seeingArcsec: campaign.site.medianSeeingArcsec }).visitMps;
+    const instrumentMps = row.rvErrMps ?? instrumentMpsOf(setup);
     const visit: ObservedVisit = {
       targetId: row.targetId,
       starId: setup.starId,

@@ -59,7 +59,11 @@ export function openSlot(campaign: Campaign, h: History, now: Date | undefined):
   const spacingDays = campaign.constraints.minSpacingHours / 24;
   const onePerNight = campaign.constraints.minSpacingHours >= 12;
   const byStar = new Map<string, { bjd: number; date: string }[]>();
-  for (const v of [...h.kept, ...h.observed]) byStar.set(v.starId, [...(byStar.get(v.starId) ?? []), { bjd: v.midBjdTdb, date: v.localDate }]);
+  for (const v of [...h.kept, ...h.observed]) {
+    const mine = byStar.get(v.starId) ?? [];
+    mine.push({ bjd: v.midBjdTdb, date: v.localDate });
+    byStar.set(v.starId, mine);
+  }
   return (d) => {
     if (lost.has(d.localDate) || (now && d.slot.startMs < now.getTime())) return false;
     const prior = byStar.get(d.slot.targetId) ?? [];
