@@ -26,6 +26,7 @@ export function registerSites(program: Command): Command {
         fmt(s.elevationM, 0),
         s.timeZone,
         clearText(s.clearFraction),
+        fmt(s.medianSeeingArcsec, 2),
       ]);
       console.log(
         renderTable(
@@ -37,6 +38,7 @@ export function registerSites(program: Command): Command {
             { header: 'elev (m)', align: 'right' },
             { header: 'time zone' },
             { header: 'clear nights' },
+            { header: 'seeing (arcsec)', align: 'right' },
           ],
           rows,
         ),

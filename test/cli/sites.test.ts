@@ -22,5 +22,8 @@ describe('crest sites', () => {
     expect(lines[0]).toMatch(/^id\s+name\s+lat \(deg\)/);
     expect(lines.length).toBe(ids.length + 2); // header and rule
     for (const id of ids) expect(r.stdout).toContain(id);
+    // Each row ends in the site's median zenith seeing (Paranal's 0.66 arcsec: ESO's DIMM survey, [INGSites]).
+    expect(lines.find((l) => l.startsWith('paranal '))).toMatch(/ 0\.66$/);
+    expect(lines[0]).toMatch(/seeing \(arcsec\)$/);
   });
 });

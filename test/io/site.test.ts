@@ -1,4 +1,4 @@
-import { readdirSync } from 'node:fs';
+import { readFileSync, readdirSync } from 'node:fs';
 import path from 'node:path';
 import { DateTime } from 'luxon';
 import { describe, expect, it } from 'vitest';
@@ -34,6 +34,21 @@ describe('site files', () => {
     // (longitude / 15 h, east positive); a sign error in the longitude would miss by many hours.
     const offsetHours = DateTime.fromISO('2027-01-15T12:00:00Z').setZone(site.timeZone).offset / 60;
     expect(Math.abs(offsetHours - site.longitudeDeg / 15)).toBeLessThan(2);
+  });
+
+  it('gives every bundled site a median seeing in the schema range, with its source in the note', () => {
+    const references = readFileSync('docs/references.md', 'utf8');
+    for (const s of sites) {
+      expect(s.medianSeeingArcsec, s.id).toBeGreaterThanOrEqual(0.2);
+      expect(s.medianSeeingArcsec, s.id).toBeLessThanOrEqual(5);
+      // The note states the same value, then says what was measured and where it was read.
+      const stated = /Median seeing (\d+(?:\.\d+)?) arcsec/.exec(s.sourceNote);
+      expect(Number(stated?.[1]), s.id).toBe(s.medianSeeingArcsec);
+      // The note names a source entry of docs/references.md, or says the value is from memory.
+      const keys = [...s.sourceNote.matchAll(/\[([A-Za-z0-9-]+)\]/g)].map((m) => m[1]!);
+      expect(keys.length > 0 || s.sourceNote.includes('from memory'), s.id).toBe(true);
+      for (const key of keys) expect(references, `${s.id} cites [${key}]`).toContain(`- [${key}]`);
+    }
   });
 
   it('defaults the minimum altitude to 20 degrees and sorts the horizon by azimuth', () => {
