@@ -1,4 +1,4 @@
-// The RVs so far as crest plan takes them (src/plan/orbit-update.ts), on the demo two weeks in
+// The RVs so far as crest plan takes them (src/plan/orbit-update.ts), on the demo 18 days in
 // (examples/under-way: invented RVs): which stars are fitted, which keep the catalogue, and the
 // warning for visits from another instrument than the campaign's.
 import path from 'node:path';
