@@ -82,9 +82,11 @@ function replacePass(state: PlanState, settings: LocalSearchSettings, maxDuratio
 function splitPass(state: PlanState, settings: LocalSearchSettings): boolean {
   const c = state.c;
   let improved = false;
+  // Without such a star the pass draws nothing from the seeded order, so plans stay as they were.
+  if (!c.onePerNight || c.visitsPerNight.every((cap) => cap < 2)) return false;
   for (const a of shuffled(state.chosenSlots(), settings.rng)) {
     const t = c.slotTarget[a]!;
-    if (!state.chosen[a] || !c.onePerNight || c.visitsPerNight[t]! < 2) continue;
+    if (!state.chosen[a] || c.visitsPerNight[t]! < 2) continue;
     const n = c.slotNight[a]!;
     const mine = Array.from(c.targetSlots[t]!).filter((j) => c.slotNight[j] === n);
     const before = state.utility;
