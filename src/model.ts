@@ -152,6 +152,8 @@ export interface Target {
   /** The target's own exposure (s) or σ per visit (m/s, photon + floor); either wins over the chosen exposure. */
   exposureSec?: number;
   sigmaMps?: number;
+  /** Visits of the star allowed in one night (default 1), spaced by the campaign's sameNightSpacingHours. */
+  visitsPerNight?: number;
   /** How the jitter was found: "as given", or the relations behind the default. */
   jitterSource?: string;
   /** Names of fields filled with documented defaults rather than given. */
@@ -173,6 +175,8 @@ export interface Constraints {
   moonSeparationDeg: number;
   /** Minimum spacing between two visits of one target (hours). */
   minSpacingHours: number;
+  /** When visits are one a night (minSpacingHours >= 12): least spacing of a star's visits within one night, start to start, for stars with visitsPerNight > 1 (hours). */
+  sameNightSpacingHours: number;
   /** Windows shorter than this are dropped (minutes). */
   minWindowMinutes: number;
 }

@@ -44,7 +44,7 @@ export function registerVisibility(program: Command): Command {
       const site = siteFromFlag(opts.site);
       const targets = readTargets(opts.targets);
       checkRange(opts.from, opts.to);
-      const constraints: Constraints = { twilight: opts.twilight, maxAirmass: opts.maxAirmass, moonSeparationDeg: opts.moonSep, minSpacingHours: 0, minWindowMinutes: opts.minWindow };
+      const constraints: Constraints = { twilight: opts.twilight, maxAirmass: opts.maxAirmass, moonSeparationDeg: opts.moonSep, minSpacingHours: 0, sameNightSpacingHours: 0, minWindowMinutes: opts.minWindow };
       const nights = computeNights(site, opts.from, opts.to, opts.twilight);
       const { windows, dropped } = computeWindows(site, targets, nights, constraints);
       const utc = Boolean(opts.utc);

@@ -33,6 +33,7 @@ export const constraintsSchema = z.strictObject({
   maxAirmass: z.number({ error: 'an airmass from 1 to 5' }).min(1, 'an airmass from 1 to 5').max(5, 'an airmass from 1 to 5').default(2),
   moonSeparationDeg: z.number({ error: 'degrees from 0 to 180' }).min(0, 'degrees from 0 to 180').max(180, 'degrees from 0 to 180').default(30),
   minSpacingHours: z.number({ error: 'hours, 0 or more' }).min(0, 'hours, 0 or more').max(24 * 365, 'hours, at most a year').default(20),
+  sameNightSpacingHours: z.number({ error: 'hours from 0 to 12' }).min(0, 'hours from 0 to 12').max(12, 'hours from 0 to 12').default(2),
   minWindowMinutes: z.number({ error: 'minutes, 0 or more' }).min(0, 'minutes, 0 or more').max(600, 'minutes, at most 600').default(20),
 });
 

@@ -48,6 +48,7 @@ const rowSchema = z.strictObject({
   rotationdays: numberField('stellar rotation period in days, more than 0.1 and at most 1000', 0.1, 1000, { exclusiveMin: true }),
   activitymps: numberField('activity amplitude in m/s, 0 to 1000', 0, 1000),
   activitycoherencedays: numberField('activity coherence time in days, more than 0.1 and at most 10000', 0.1, 1e4, { exclusiveMin: true }),
+  visitspernight: numberField('visits of the star in one night, a whole number from 1 to 12', 1, 12),
   priority: numberField('a priority weight, more than 0 and at most 100', 0, 100, { exclusiveMin: true }),
   goalsignificance: numberField('K/sigma_K to reach, more than 0 and at most 100', 0, 100, { exclusiveMin: true }),
   perioddays: numberField('orbital period in days, more than 0 and at most 100000', 0, 1e5, { exclusiveMin: true }),
@@ -78,7 +79,7 @@ const CANONICAL: Record<string, string> = {
   searchmassearth: 'searchMassEarth', nightlyjitterfraction: 'nightlyJitterFraction', rotationdays: 'rotationDays', activitymps: 'activityMps',
   activitycoherencedays: 'activityCoherenceDays', eccsigma: 'eccSigma',
   rmag: 'rmag', imag: 'imag', jmag: 'jmag', hmag: 'hmag', gmag: 'gmag', logrhk: 'logRhk',
-  exposuresec: 'exposureSec', sigmamps: 'sigmaMps',
+  exposuresec: 'exposureSec', sigmamps: 'sigmaMps', visitspernight: 'visitsPerNight',
 };
 /** Magnitude columns other than V, by band. */
 const BAND_COLUMNS: [BandId, 'rmag' | 'imag' | 'jmag' | 'hmag' | 'gmag'][] = [['R', 'rmag'], ['I', 'imag'], ['J', 'jmag'], ['H', 'hmag'], ['G', 'gmag']];
@@ -88,7 +89,7 @@ const REQUIRED = ['id', 'ra', 'dec', 'vmag', 'teffk'];
 const STAR_COLUMNS = [
   'ra', 'dec', 'pmramasyr', 'pmdecmasyr', 'epochyear', 'vmag', 'teffk', 'masssun', 'vsinikms', 'jittermps',
   'nightlyjitterfraction', 'rotationdays', 'activitymps', 'activitycoherencedays', 'rmag', 'imag', 'jmag', 'hmag', 'gmag',
-  'logrhk', 'logg', 'exposuresec', 'sigmamps',
+  'logrhk', 'logg', 'exposuresec', 'sigmamps', 'visitspernight',
 ] as const;
 
 interface Place {
@@ -115,6 +116,7 @@ function buildTarget(row: Row, place: Place): Target {
   for (const [band, column] of BAND_COLUMNS) if (row[column] !== undefined) mags[band] = row[column];
   const firstBand = BAND_COLUMNS.find(([band]) => mags[band] !== undefined)?.[0];
   if (row.vmag === undefined && firstBand === undefined) fail(place, 'vmag', 'required: V magnitude from -2 to 20, or a magnitude in another band (rmag, imag, jmag, hmag, gmag)');
+  if (row.visitspernight !== undefined && !Number.isInteger(row.visitspernight)) fail(place, 'visitspernight', 'visits of the star in one night, a whole number from 1 to 12');
   if (row.exposuresec !== undefined && row.sigmamps !== undefined) fail(place, 'sigmamps', 'give exposureSec or sigmaMps, not both');
   const withDefault = <T>(value: T | undefined, name: string, fallback: T): T => {
     if (value !== undefined) return value;
@@ -167,7 +169,7 @@ function buildTarget(row: Row, place: Place): Target {
   const optional = { nightlyJitterFraction: row.nightlyjitterfraction, rotationDays: row.rotationdays, activityMps: row.activitymps, activityCoherenceDays: row.activitycoherencedays };
   for (const [key, value] of Object.entries(optional)) if (value !== undefined) Object.assign(target, { [key]: value });
   if (Object.keys(mags).length > 0) target.mags = mags;
-  for (const [key, value] of [['logRhk', row.logrhk], ['logg', row.logg], ['exposureSec', row.exposuresec], ['sigmaMps', row.sigmamps]] as const) {
+  for (const [key, value] of [['logRhk', row.logrhk], ['logg', row.logg], ['exposureSec', row.exposuresec], ['sigmaMps', row.sigmamps], ['visitsPerNight', row.visitspernight]] as const) {
     if (value !== undefined) target[key] = value;
   }
   if (hasPeriod) {

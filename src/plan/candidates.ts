@@ -68,7 +68,7 @@ export function setupTargets(campaign: Campaign): TargetSetup[] {
     const goal = target.goalSignificance ?? goals.significance;
     // The target's own exposure or sigma wins; otherwise the fewest hours for its K within the
     // visits the campaign can give (src/rv/exposure.ts).
-    const options = { seeingArcsec: campaign.site.medianSeeingArcsec, kMps, significance: goal, maxVisits: visitCap(campaign) };
+    const options = { seeingArcsec: campaign.site.medianSeeingArcsec, kMps, significance: goal, maxVisits: visitCap(campaign, target) };
     const exposure =
       target.exposureSec === undefined
         ? chooseExposureSec(instrument, target, TYPICAL_AIRMASS, target.sigmaMps, options)
@@ -103,6 +103,7 @@ export function setupStars(campaign: Campaign, setups: TargetSetup[]): StarSetup
     const searchRow = rowSetups.find((s) => s.role === 'search');
     if (planets.length === 0 && !searchRow) return star;
     const target: ScheduleTarget = { id: starId, planets };
+    if (lead.target.visitsPerNight !== undefined && lead.target.visitsPerNight > 1) target.visitsPerNight = lead.target.visitsPerNight;
     const model = starModel(rows, campaign);
     if (model) target.model = model;
     if (searchRow) {
@@ -120,13 +121,15 @@ export function starTargets(stars: StarSetup[]): Target[] {
 }
 
 /**
- * The most visits one target can get: one a night when visits are at least 12 h apart (the
- * scheduler's onePerNight), over the campaign's nights; no cap in hours mode or with closer spacing.
+ * The most visits one target can get: its visitsPerNight a night when visits are at least 12 h
+ * apart (the scheduler's onePerNight), over the campaign's nights; no cap in hours mode or with
+ * closer spacing.
  */
-function visitCap(campaign: Campaign): number {
+function visitCap(campaign: Campaign, target: Target): number {
   if (campaign.constraints.minSpacingHours < 12) return Infinity;
   const time = campaign.time;
-  return time.mode === 'choose-nights' ? time.nights : time.mode === 'given-nights' ? time.dates.length : Infinity;
+  const nights = time.mode === 'choose-nights' ? time.nights : time.mode === 'given-nights' ? time.dates.length : Infinity;
+  return nights * (target.visitsPerNight ?? 1);
 }
 
 /** Clear-night probability of a night: the site's fraction, per month when given (common practice). */

@@ -69,7 +69,8 @@ export function nextVisits(given: Campaign, at: Date): NextAnswer {
   for (let j = 0; j < c.slotCount; j++) {
     if (c.startMs[j]! >= latestStartMs) continue;
     const t = c.slotTarget[j]!;
-    if (!firstOfStar.has(t)) firstOfStar.set(t, j);
+    // canAdd: a star with visitsPerNight > 1 may already have them all tonight (prior visits).
+    if (!firstOfStar.has(t) && state.canAdd(j)) firstOfStar.set(t, j);
   }
   const ratios = (t: number) => {
     const star = problem.targets[t]!;

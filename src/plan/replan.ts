@@ -5,7 +5,8 @@
 //   lost or the observed file holds a visit of the same star that evening (which replaces it);
 // - kept and observed visits enter each star's information as prior visits;
 // - candidate visits start at or after `now`, on nights not lost, clear of prior visits by the
-//   campaign's spacing (and on another evening when visits are one a night);
+//   campaign's spacing (and on another evening when visits are one a night, unless the star
+//   allows several a night: then sameNightSpacingHours from those of the evening);
 // - choose-nights: nights before `now` that the previous plan chose or that hold prior visits
 //   inside the window are spent; the night in progress, when spent, stays granted for free;
 //   hours: the kept visits' hours are spent; given nights: the lost ones are dropped.
@@ -53,11 +54,17 @@ export function priorVisits(h: History, fittedStars: ReadonlySet<string>, nights
   return [...h.kept.map((v) => prior(v, false)), ...h.observed.map((v) => prior(v, v.rvMps !== undefined && fittedStars.has(v.starId)))];
 }
 
-/** Whether a candidate visit is still open: after `now`, not on a lost night, clear of the star's prior visits. */
+/**
+ * Whether a candidate visit is still open: after `now`, not on a lost night, clear of the star's
+ * prior visits (when visits go by nights: on their evening by sameNightSpacingHours, and only for
+ * a star with visitsPerNight > 1, whose count the scheduler holds to the cap; on other evenings by
+ * minSpacingHours).
+ */
 export function openSlot(campaign: Campaign, h: History, now: Date | undefined): (d: SlotDetail) => boolean {
   const lost = new Set(campaign.lostDates);
-  const spacingDays = campaign.constraints.minSpacingHours / 24;
-  const onePerNight = campaign.constraints.minSpacingHours >= 12;
+  const { minSpacingHours, sameNightSpacingHours } = campaign.constraints;
+  const onePerNight = minSpacingHours >= 12;
+  const perNight = new Map(campaign.targets.map((t) => [t.starId, t.visitsPerNight ?? 1]));
   const byStar = new Map<string, { bjd: number; date: string }[]>();
   for (const v of [...h.kept, ...h.observed]) {
     const mine = byStar.get(v.starId) ?? [];
@@ -67,7 +74,12 @@ export function openSlot(campaign: Campaign, h: History, now: Date | undefined):
   return (d) => {
     if (lost.has(d.localDate) || (now && d.slot.startMs < now.getTime())) return false;
     const prior = byStar.get(d.slot.targetId) ?? [];
-    return !prior.some((p) => Math.abs(p.bjd - d.midBjdTdb) < spacingDays || (onePerNight && p.date === d.localDate));
+    const several = (perNight.get(d.slot.targetId) ?? 1) > 1;
+    return !prior.some((p) => {
+      const apartDays = Math.abs(p.bjd - d.midBjdTdb);
+      if (onePerNight && p.date === d.localDate) return !several || apartDays < sameNightSpacingHours / 24;
+      return apartDays < minSpacingHours / 24;
+    });
   };
 }
 

@@ -64,6 +64,9 @@ export interface CompiledProblem {
   nightTo: Int32Array;
   spacingMs: number;
   onePerNight: boolean;
+  /** With onePerNight: spacing of one star's visits within a night, and per star how many one night holds (prior visits on that date included). */
+  sameNightSpacingMs: number;
+  visitsPerNight: Int32Array;
   /** Visits already made (prior.ts). */
   prior: CompiledPrior;
 }
@@ -164,7 +167,9 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
     nightTo: new Int32Array(N),
     spacingMs: Math.max(0, problem.constraints.minSpacingHours) * 3_600_000,
     onePerNight: problem.constraints.onePerNight,
-    prior: { visits: [], stats: new Float64Array(0), count: new Int32Array(T), weightSum: new Float64Array(T) },
+    sameNightSpacingMs: Math.max(0, problem.constraints.sameNightSpacingHours ?? 0) * 3_600_000,
+    visitsPerNight: Int32Array.from(problem.targets, (t) => t.visitsPerNight ?? 1),
+    prior: { visits: [], stats: new Float64Array(0), count: new Int32Array(T), weightSum: new Float64Array(T), inNight: new Map() },
   };
   const perTarget: number[][] = problem.targets.map(() => []);
   c.nightFrom.fill(S);

@@ -4,6 +4,9 @@
 //  - pair insert: start an ephemeris target with two visits at once (pair-insert.ts);
 //  - replace: take one visit out and put the best other slot in (covers "move", the same target
 //             at another time, and "swap", another target in the freed time);
+//  - split: for a star allowed several visits a night, take one visit out and put the best pair of
+//             that star's slots of the same night in (a replace cannot reach a pair that the one
+//             visit's start blocks by the same-night spacing);
 //  - night swap (choose-nights): close one or two chosen nights, open others instead (night-swap.ts).
 // A move is kept only if it raises the utility by more than rounding (moves.ts), so the utility
 // never decreases and the search ends.
@@ -75,6 +78,43 @@ function replacePass(state: PlanState, settings: LocalSearchSettings, maxDuratio
   return improved;
 }
 
+/** The split move of the file comment, for every chosen visit of a star with visitsPerNight > 1. */
+function splitPass(state: PlanState, settings: LocalSearchSettings): boolean {
+  const c = state.c;
+  let improved = false;
+  // Without such a star the pass draws nothing from the seeded order, so plans stay as they were.
+  if (!c.onePerNight || c.visitsPerNight.every((cap) => cap < 2)) return false;
+  for (const a of shuffled(state.chosenSlots(), settings.rng)) {
+    const t = c.slotTarget[a]!;
+    if (!state.chosen[a] || c.visitsPerNight[t]! < 2) continue;
+    const n = c.slotNight[a]!;
+    const mine = Array.from(c.targetSlots[t]!).filter((j) => c.slotNight[j] === n);
+    const before = state.utility;
+    state.remove(a);
+    let best: [number, number] | undefined;
+    let bestUtility = before;
+    for (const b of mine) {
+      if (!state.canAdd(b)) continue;
+      state.add(b);
+      for (const b2 of mine) {
+        if (b2 === b || !state.canAdd(b2)) continue;
+        const u = state.utility + state.gain(b2);
+        if (improves(bestUtility, u)) {
+          best = [b, b2];
+          bestUtility = u;
+        }
+      }
+      state.remove(b);
+    }
+    for (const j of best ?? [a]) state.add(j);
+    if (best) {
+      improved = true;
+      settings.onProgress?.(state.utility, 'split');
+    }
+  }
+  return improved;
+}
+
 /** Top unchosen slots by gain per hour (hours mode: candidates that need budget freed first). */
 function bestUnchosen(state: PlanState, count: number): number[] {
   if (count <= 0) return [];
@@ -97,6 +137,7 @@ export function localSearch(state: PlanState, settings: LocalSearchSettings): nu
     let improved = improves(before, state.utility);
     if (pairInsertPass(state, settings.rng, settings.onProgress)) improved = true;
     if (replacePass(state, settings, maxDurationMs, bestUnchosen(state, settings.shortlist))) improved = true;
+    if (splitPass(state, settings)) improved = true;
     if (settings.chooseNights && nightSwapPass(state, settings.nightCandidates, settings.rng, settings.onProgress)) improved = true;
     if (!improved) break;
   }

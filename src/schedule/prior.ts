@@ -15,6 +15,8 @@ export interface CompiledPrior {
   /** Per star: number of prior visits and the sum of their weights. */
   count: Int32Array;
   weightSum: Float64Array;
+  /** Prior visits of star t on the date of problem night position n, keyed t * nightCount + n (counted against visitsPerNight). */
+  inNight: Map<number, number>;
 }
 
 export function compilePrior(c: CompiledProblem): CompiledPrior {
@@ -37,6 +39,7 @@ export function compilePrior(c: CompiledProblem): CompiledPrior {
     stats: new Float64Array(c.statsLength),
     count: new Int32Array(c.targetCount),
     weightSum: new Float64Array(c.targetCount),
+    inNight: new Map(),
   };
   for (const v of prior) {
     const t = targetPos.get(v.targetId);
@@ -46,11 +49,12 @@ export function compilePrior(c: CompiledProblem): CompiledPrior {
     const weight = 1 / (v.sigmaWhiteMps * v.sigmaWhiteMps);
     out.count[t]++;
     out.weightSum[t] += weight;
+    const position = problemKey.get(v.localDate);
+    if (position !== undefined) out.inNight.set(t * c.nightCount + position, (out.inNight.get(t * c.nightCount + position) ?? 0) + 1);
     const grid = c.grids[t];
     if (grid) updateSearchStats(out.stats, c.statsOffset[t]!, grid, weight, v.midDays, 1);
     const model = c.models[t];
     if (!model) continue;
-    const position = problemKey.get(v.localDate);
     const other = otherNights.get(v.localDate);
     const night = position ?? other!.key;
     const nightBjd = position !== undefined ? c.nightMidDays[position]! : other!.sumDays / other!.count;

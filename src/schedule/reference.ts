@@ -131,15 +131,30 @@ export function scheduleViolations(problem: ScheduleProblem, visits: CandidateSl
     if (ids.has(v.slotId)) problems.push(`${v.slotId} chosen twice`);
     ids.add(v.slotId);
   }
-  const spacingMs = problem.constraints.minSpacingHours * 3_600_000;
+  const { onePerNight } = problem.constraints;
+  const spacingHours = (a: CandidateSlot, b: CandidateSlot) =>
+    onePerNight && a.nightIndex === b.nightIndex ? (problem.constraints.sameNightSpacingHours ?? 0) : problem.constraints.minSpacingHours;
   for (let i = 0; i < visits.length; i++) {
     for (let k = i + 1; k < visits.length; k++) {
       const a = visits[i]!;
       const b = visits[k]!;
       const sameNight = a.nightIndex === b.nightIndex;
       if (sameNight && a.startMs < b.startMs + b.durationSec * 1000 && b.startMs < a.startMs + a.durationSec * 1000) problems.push(`${a.slotId} overlaps ${b.slotId}`);
-      if (a.targetId === b.targetId && Math.abs(a.startMs - b.startMs) < spacingMs) problems.push(`${a.slotId} and ${b.slotId} closer than the spacing`);
-      if (a.targetId === b.targetId && sameNight && problem.constraints.onePerNight) problems.push(`${a.slotId} and ${b.slotId}: two visits in one night`);
+      if (a.targetId === b.targetId && Math.abs(a.startMs - b.startMs) < spacingHours(a, b) * 3_600_000) problems.push(`${a.slotId} and ${b.slotId} closer than the spacing`);
+    }
+  }
+  if (onePerNight) {
+    // A star's visits of one night, prior visits on that night's date included, against its cap.
+    const cap = new Map(problem.targets.map((t) => [t.id, t.visitsPerNight ?? 1]));
+    const dateOf = new Map(problem.nights.map((n) => [n.index, n.localDate]));
+    const count = new Map<string, number>();
+    const bump = (targetId: string, date: string) => count.set(`${targetId} ${date}`, (count.get(`${targetId} ${date}`) ?? 0) + 1);
+    for (const v of visits) bump(v.targetId, dateOf.get(v.nightIndex)!);
+    const planned = new Set(count.keys());
+    for (const p of problem.prior ?? []) bump(p.targetId, p.localDate);
+    for (const [key, n] of count) {
+      const [targetId, date] = key.split(' ') as [string, string];
+      if (planned.has(key) && n > cap.get(targetId)!) problems.push(`${targetId} has ${n} visits on ${date}, ${cap.get(targetId)!} allowed`);
     }
   }
   const hoursByNight = new Map<number, number>();

@@ -170,7 +170,7 @@ export class PlanState {
     return Math.max(gain, credit);
   }
 
-  /** Whether slot j can be added: open night, budgets, no overlap in its night, spacing for its target. */
+  /** Whether slot j can be added: open night, budgets, no overlap in its night, spacing and visits a night for its target. */
   canAdd(j: number): boolean {
     const c = this.c;
     if (this.chosen[j]) return false;
@@ -183,14 +183,23 @@ export class PlanState {
     const at = lowerBound(inNight, j);
     if (at > 0 && c.endMs[inNight[at - 1]!]! > c.startMs[j]!) return false;
     if (at < inNight.length && c.startMs[inNight[at]!]! < c.endMs[j]!) return false;
-    const mine = this.targetVisits[c.slotTarget[j]!]!;
+    const t = c.slotTarget[j]!;
+    const mine = this.targetVisits[t]!;
     const k = lowerBound(mine, j);
-    for (const other of [mine[k - 1], mine[k]]) {
-      if (other === undefined) continue;
-      if (Math.abs(c.startMs[other]! - c.startMs[j]!) < c.spacingMs) return false;
-      if (c.onePerNight && c.slotNight[other] === n) return false;
+    // With onePerNight the star's visits of night n are contiguous around k (slots sorted by night,
+    // then start): each is held to the same-night spacing and counted; the nearest visit of
+    // another night on either side to minSpacing (the next ones are further still).
+    let sameNight = c.onePerNight ? (c.prior.inNight.get(t * c.nightCount + n) ?? 0) : 0;
+    for (const step of [-1, 1]) {
+      let at = step < 0 ? k - 1 : k;
+      for (; c.onePerNight && at >= 0 && at < mine.length && c.slotNight[mine[at]!] === n; at += step) {
+        if (Math.abs(c.startMs[mine[at]!]! - c.startMs[j]!) < c.sameNightSpacingMs) return false;
+        sameNight++;
+      }
+      const other = mine[at];
+      if (other !== undefined && Math.abs(c.startMs[other]! - c.startMs[j]!) < c.spacingMs) return false;
     }
-    return true;
+    return !c.onePerNight || sameNight < c.visitsPerNight[t]!;
   }
 
   add(j: number): void {

@@ -19,6 +19,9 @@ export interface SyntheticSpec {
   time: ScheduleTimeModel;
   minSpacingHours: number;
   onePerNight: boolean;
+  /** With onePerNight: visits a night allowed to every other target (the first, third, ...), and their spacing; default 1 and 0. */
+  visitsPerNight?: number;
+  sameNightSpacingHours?: number;
   /** Hours of dark time per night. */
   nightHours: number;
   seed: number;
@@ -80,6 +83,7 @@ export function syntheticProblem(spec: SyntheticSpec): ScheduleProblem {
       periodErrDays: spec.phaseErrors ? between(rng, 0, 0.002) : 0,
     };
     const target = syntheticTarget(rng, i, search, orbit, [0, spec.nights]);
+    if (spec.visitsPerNight !== undefined && i % 2 === 0) target.visitsPerNight = spec.visitsPerNight;
     targets.push(target);
     const durationSec = Math.round(between(rng, 600, 2400));
     const sigmaMps = between(rng, 1, 4);
@@ -99,5 +103,5 @@ export function syntheticProblem(spec: SyntheticSpec): ScheduleProblem {
       }
     }
   });
-  return { nights, targets, slots, time: spec.time, constraints: { minSpacingHours: spec.minSpacingHours, onePerNight: spec.onePerNight } };
+  return { nights, targets, slots, time: spec.time, constraints: { minSpacingHours: spec.minSpacingHours, onePerNight: spec.onePerNight, sameNightSpacingHours: spec.sameNightSpacingHours ?? 0 } };
 }

@@ -69,6 +69,8 @@ export interface ScheduleTarget {
   /** The star's information model; required when it has planets. */
   model?: StarModel;
   search?: ScheduleSearch;
+  /** With constraints.onePerNight: how many visits of the star one night may hold (default 1). */
+  visitsPerNight?: number;
 }
 
 /**
@@ -105,8 +107,13 @@ export type ScheduleTimeModel =
 export interface ScheduleConstraints {
   /** Minimum time between the starts of two visits of one target (hours); 0 for none. */
   minSpacingHours: number;
-  /** At most one visit per target per night. */
+  /**
+   * Nights govern a target's visits: at most its visitsPerNight (default 1) in one night, their
+   * starts at least sameNightSpacingHours apart; minSpacingHours then holds between nights.
+   */
   onePerNight: boolean;
+  /** Least time between the starts of two visits of one target in one night (hours); default 0. */
+  sameNightSpacingHours?: number;
 }
 
 export interface ScheduleProblem {

@@ -42,7 +42,7 @@ describe('campaign files', () => {
 
   it('fills documented defaults for constraints, goals and seed', () => {
     const c = readCampaign(campaignFile(`${BASE}time: { mode: hours, hours: 12 }\n`));
-    expect(c.constraints).toEqual({ twilight: 'nautical', maxAirmass: 2, moonSeparationDeg: 30, minSpacingHours: 20, minWindowMinutes: 20 });
+    expect(c.constraints).toEqual({ twilight: 'nautical', maxAirmass: 2, moonSeparationDeg: 30, minSpacingHours: 20, sameNightSpacingHours: 2, minWindowMinutes: 20 });
     expect(c.goals).toEqual({ significance: 5 });
     expect(c.seed).toBe(1);
   });
@@ -60,6 +60,7 @@ describe('campaign files', () => {
     ['an unknown time mode', `${BASE}time: { mode: every-night }\n`, /campaign\.yaml: time(\.mode)? = .*choose-nights, given-nights, hours/],
     ['a misspelt constraint', `${BASE}time: { mode: hours, hours: 5 }\nconstraints: { maxAirmas: 2 }\n`, /campaign\.yaml: constraints\.maxAirmas = 2: unknown key/],
     ['an airmass limit below 1', `${BASE}time: { mode: hours, hours: 5 }\nconstraints: { maxAirmass: 0.5 }\n`, /campaign\.yaml: constraints\.maxAirmass = 0\.5: an airmass from 1 to 5/],
+    ['a same-night spacing above 12 h', `${BASE}time: { mode: hours, hours: 5 }\nconstraints: { sameNightSpacingHours: 13 }\n`, /campaign\.yaml: constraints\.sameNightSpacingHours = 13: hours from 0 to 12$/],
     ['a bad date', `${BASE.replace('2027-03-31', '2027-02-30')}time: { mode: hours, hours: 5 }\n`, /campaign\.yaml: window\.end = "2027-02-30": a date as YYYY-MM-DD/],
     ['no time model', BASE, /campaign\.yaml: time = \(missing\)/],
     ['hours mode without hours', `${BASE}time: { mode: hours }\n`, /campaign\.yaml: time\.hours = \(missing\): required: a positive number of hours, at most 5000$/],

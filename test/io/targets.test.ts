@@ -32,6 +32,18 @@ describe('target list', () => {
     expect(() => parseTargets(`${header}\n${row}\n`, 't.csv')).toThrow(pattern);
   });
 
+  it.each([
+    ['0', /row 1 \(line 2\): visitsPerNight = "0": visits of the star in one night, a whole number from 1 to 12$/],
+    ['2.5', /row 1 \(line 2\): visitsPerNight = "2.5": visits of the star in one night, a whole number from 1 to 12$/],
+  ])('refuses visitsPerNight %s with one line', (value, pattern) => {
+    expect(() => parseTargets(`id,ra,dec,vmag,teffK,visitsPerNight\nA,10:00:00,-10:00:00,9,5000,${value}\n`, 't.csv')).toThrow(pattern);
+  });
+
+  it('reads visitsPerNight as a star field, absent when not given', () => {
+    const [a, b] = parseTargets('id,ra,dec,vmag,teffK,visitsPerNight\nA,10:00:00,-10:00:00,9,5000,3\nB,11:00:00,-10:00:00,9,5000,\n', 't.csv');
+    expect([a!.visitsPerNight, b!.visitsPerNight]).toEqual([3, undefined]);
+  });
+
   it('rejects sexagesimal with minutes of 60 or more', () => {
     expect(parseRaDeg('10:60:00')).toBeNaN();
     expect(parseDecDeg('-10:00:61')).toBeNaN();

@@ -1,7 +1,7 @@
 // Properties every plan must have, checked against the slow one-minute reference sampler rather
 // than the windows the plan was built from: each visit block (acquisition + exposure + readout)
 // inside a reference window of its target and inside the night's dark span; no two blocks of a
-// night overlapping; spacing between visits of one target; the time model's budget.
+// night overlapping; spacing between visits of one target and its visits a night; the time model's budget.
 //
 // Tolerance: the reference's one-minute grid plus the fast engine's measured 1.06 min give 2 min in
 // time; and the reference runs with every angular limit relaxed by ANGLE_SLACK_DEG, for edges where
@@ -110,11 +110,18 @@ export function checkVisits(plan: Plan): VisitCheck {
     }
   }
 
-  for (const [targetId, visits] of groupBy(plan.visits, (v) => v.starId)) {
-    const starts = visits.map(startMs).sort((a, b) => a - b);
-    for (let i = 1; i < starts.length; i++) {
-      if (starts[i]! - starts[i - 1]! < constraints.minSpacingHours * 3_600_000) violations.push(`${targetId}: two visits closer than ${constraints.minSpacingHours} h`);
+  // Spacing of every pair of one star's visits: sameNightSpacingHours on one evening when visits go
+  // by nights (minSpacingHours >= 12), minSpacingHours otherwise; and at most visitsPerNight an evening.
+  const byNights = constraints.minSpacingHours >= 12;
+  for (const [starId, visits] of groupBy(plan.visits, (v) => v.starId)) {
+    for (const [i, a] of visits.entries()) {
+      for (const b of visits.slice(i + 1)) {
+        const hours = byNights && a.localDate === b.localDate ? constraints.sameNightSpacingHours : constraints.minSpacingHours;
+        if (Math.abs(startMs(a) - startMs(b)) < hours * 3_600_000) violations.push(`${starId}: visits ${a.startUtc} and ${b.startUtc} closer than ${hours} h`);
+      }
     }
+    const cap = plan.campaign.targets.find((t) => t.starId === starId)?.visitsPerNight ?? 1;
+    if (byNights) for (const [date, evening] of groupBy(visits, (v) => v.localDate)) if (evening.length > cap) violations.push(`${starId}: ${evening.length} visits on ${date}, at most ${cap}`);
   }
 
   const dates = new Set(plan.visits.map((v) => v.localDate));

@@ -111,6 +111,7 @@ export function randomCampaign(index: number): Campaign {
       maxAirmass: between(rng, 1.5, 2.5),
       moonSeparationDeg: pick(rng, [0, 30, 45]),
       minSpacingHours: pick(rng, [0, 1, 3, 20]),
+      sameNightSpacingHours: 2,
       minWindowMinutes: 20,
     },
     goals: { significance: pick(rng, [3, 5, 8]) },

@@ -61,6 +61,33 @@ describe('optimiseSchedule on random problems', () => {
   }
 });
 
+describe('several visits a night', () => {
+  let several = 0;
+  for (let seed = 1; seed <= 6; seed++) {
+    it(`case ${seed}: every other star up to 3 a night, 1.5 h apart; the rest one a night`, () => {
+      const problem = syntheticProblem({
+        targets: 4, nights: 15, slotsPerNight: 8, searchFraction: seed % 3 === 0 ? 0.25 : 0, visibleFraction: 0.8, time: times[seed % 3]!,
+        minSpacingHours: 20, onePerNight: true, visitsPerNight: 3, sameNightSpacingHours: 1.5, nightHours: 8, seed, phaseErrors: seed % 2 === 0,
+      });
+      const visits = visitsOf(problem, optimiseSchedule(problem, { seed, searchGridSize: 16 }));
+      expect(scheduleViolations(problem, visits)).toEqual([]);
+      // The rules restated on the chosen visits: per star and night, the count and each pair's spacing.
+      for (const target of problem.targets) {
+        const cap = target.visitsPerNight ?? 1;
+        for (const night of problem.nights) {
+          const mine = visits.filter((v) => v.targetId === target.id && v.nightIndex === night.index).map((v) => v.startMs).sort((a, b) => a - b);
+          expect(mine.length).toBeLessThanOrEqual(cap);
+          for (let i = 1; i < mine.length; i++) expect(mine[i]! - mine[i - 1]!).toBeGreaterThanOrEqual(1.5 * 3_600_000);
+          if (mine.length > 1) several++;
+        }
+      }
+    });
+  }
+  it('uses the option in some of those plans', () => {
+    expect(several).toBeGreaterThan(0);
+  });
+});
+
 /** One ephemeris target, slots every 20 minutes for `hoursPerNight` each night, equal sigma, exact phases. */
 function singleTarget(periodDays: number, nights: number, hoursPerNight: number): ScheduleProblem {
   const slots: CandidateSlot[] = [];

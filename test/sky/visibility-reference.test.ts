@@ -54,7 +54,7 @@ describe('computeWindows against the one-minute reference sampler', () => {
       const site = randomSite(g);
       const day = new Date(Date.UTC(2024, 0, 1) + Math.floor(between(0, 365 * 6)) * 86_400_000).toISOString().slice(0, 10);
       const twilight = pick<TwilightLevel>(['civil', 'nautical', 'astronomical']);
-      const constraints: Constraints = { twilight, maxAirmass: between(1.3, 3), moonSeparationDeg: pick([0, 30, 60]), minSpacingHours: 0, minWindowMinutes: 0 };
+      const constraints: Constraints = { twilight, maxAirmass: between(1.3, 3), moonSeparationDeg: pick([0, 30, 60]), minSpacingHours: 0, sameNightSpacingHours: 0, minWindowMinutes: 0 };
       const hemisphere = Math.sign(site.latitudeDeg);
       const targets = [
         star(`g${g}-circumpolar`, hemisphere * between(75, 89.5)),
