@@ -212,6 +212,7 @@ export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, opti
   const nightNoise = new Float64Array(m);
   const actNoise = new Float64Array(m);
   const velocities = new Float64Array(planets.length * n);
+  const shapes = new Float64Array(planets.length * n);
   // The planet each parameter belongs to (γ, index 0, to none).
   const planetOfParam = new Int32Array(p).fill(-1);
   planets.forEach((_, i) => {
@@ -295,9 +296,14 @@ export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, opti
     for (let iter = 0; iter < 60 && !converged; iter++) {
       // Whitened Jacobian: the γ column exact, the others central differences (exact to rounding
       // for K, which enters linearly). A parameter moves one planet's orbit only, so the other
-      // planets' velocities at the current theta are computed once and reused.
+      // planets' velocities at the current theta are computed once and reused. K multiplies the
+      // curve of K = 1 m/s (radialVelocityMps forms the same product), so K ± h needs no new curve.
       const orbits = planetOrbits(planets, lay, theta);
-      for (let q = 0; q < planets.length; q++) for (let i = 0; i < n; i++) velocities[q * n + i] = radialVelocityMps(orbits[q]!, tRel[i]!);
+      for (let q = 0; q < planets.length; q++)
+        for (let i = 0; i < n; i++) {
+          shapes[q * n + i] = radialVelocityMps({ ...orbits[q]!, kMps: 1 }, tRel[i]!);
+          velocities[q * n + i] = orbits[q]!.kMps * shapes[q * n + i]!;
+        }
       for (let j = 0; j < p; j++) {
         if (j === 0) for (let i = 0; i < n; i++) jac[i * p] = 1;
         else {
@@ -309,13 +315,22 @@ export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, opti
           theta[j] = saved - h;
           const down = planetOrbit(planets[q]!, q, lay, theta);
           theta[j] = saved;
+          const isK = j === lay.k[q];
           for (let i = 0; i < n; i++) {
             // The sum in modelVelocity's order (γ, then planet by planet), the moved planet recomputed.
             let vUp = theta[0]!;
             let vDown = theta[0]!;
             for (let r = 0; r < planets.length; r++) {
-              vUp += r === q ? radialVelocityMps(up, tRel[i]!) : velocities[r * n + i]!;
-              vDown += r === q ? radialVelocityMps(down, tRel[i]!) : velocities[r * n + i]!;
+              if (r !== q) {
+                vUp += velocities[r * n + i]!;
+                vDown += velocities[r * n + i]!;
+              } else if (isK) {
+                vUp += up.kMps * shapes[q * n + i]!;
+                vDown += down.kMps * shapes[q * n + i]!;
+              } else {
+                vUp += radialVelocityMps(up, tRel[i]!);
+                vDown += radialVelocityMps(down, tRel[i]!);
+              }
             }
             jac[i * p + j] = (vUp - vDown) / (2 * h);
           }
