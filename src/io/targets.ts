@@ -247,10 +247,11 @@ export function parseTargets(text: string, file: string): Target[] {
  */
 function groupStars(parsed: { row: Row; place: Place }[], ids: Map<string, Place>): Map<string, { row: Row; place: Place }[]> {
   const stars = new Map<string, { row: Row; place: Place }[]>();
+  const rowAt = new Map(parsed.map(({ row, place }) => [place, row]));
   for (const entry of parsed) {
     const starId = entry.row.star ?? entry.row.id;
     const rowOfId = ids.get(starId);
-    if (rowOfId && (parsed.find((p) => p.place === rowOfId)!.row.star ?? starId) !== starId) fail(entry.place, 'star', `a star name that is not the id of a row of another star (${rowOfId.where})`);
+    if (rowOfId && (rowAt.get(rowOfId)!.star ?? starId) !== starId) fail(entry.place, 'star', `a star name that is not the id of a row of another star (${rowOfId.where})`);
     stars.set(starId, [...(stars.get(starId) ?? []), entry]);
   }
   for (const [starId, group] of stars) {

@@ -1,12 +1,13 @@
-// `crest map --plan plan.json`: the built CLI as a subprocess, on the report's invented fixture plan
-// with four more visits of its blind-search target.
+// `crest map --plan plan.json` on the report's invented fixture plan with four more visits of its
+// blind-search target: the first case as subprocesses (the built CLI and its worker threads in a
+// fresh process), the others in-process.
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Plan } from '../../src/model.js';
 import { renderPlanJson } from '../../src/report/plan-json.js';
 import { fixturePlan } from '../report/fixture.js';
-import { runCliAsync, tempFiles } from './run-cli.js';
+import { runCliAsync, runCliInProcess, tempFiles } from './run-cli.js';
 
 /** The fixture plan with Alba observed on four more nights (7 visits in all), days apart. */
 function planWithSearchVisits(): Plan {
@@ -53,7 +54,7 @@ describe('crest map', () => {
 
   it('prints tables for every mappable target, writes SVG maps and map data, re-renders a report.html beside them', async () => {
     const seeded = tempFiles({ 'report.html': 'old' });
-    const r = await runCliAsync(['map', '--plan', planFile, ...small, '--out', seeded]);
+    const r = await runCliInProcess(['map', '--plan', planFile, ...small, '--out', seeded]);
     expect(r.stderr).toBe('');
     expect(r.status).toBe(0);
     expect(r.stdout).toMatch(/Alba: 7 visits over .* blind search, detection probability/);
@@ -66,13 +67,13 @@ describe('crest map', () => {
     expect(readFileSync(path.join(seeded, 'report.html'), 'utf8')).toContain('chart-detection-map');
     expect(JSON.parse(readFileSync(path.join(seeded, 'map-alba.json'), 'utf8')).targetId).toBe('Alba');
     // Mapping another target later keeps Alba's saved map in the report.
-    const again = await runCliAsync(['map', '--plan', planFile, ...small, '--target', 'Teyu-3', '--out', seeded]);
+    const again = await runCliInProcess(['map', '--plan', planFile, ...small, '--target', 'Teyu-3', '--out', seeded]);
     expect(again.status).toBe(0);
     expect(readFileSync(path.join(seeded, 'report.html'), 'utf8').match(/<figure class="chart chart-detection-map"/g)).toHaveLength(1);
   });
 
   it('writes CSV with one row per cell and method', async () => {
-    const r = await runCliAsync(['map', '--plan', planFile, '--target', 'Teyu-3', ...small, '--csv', '--out', path.join(dir, 'csv')]);
+    const r = await runCliInProcess(['map', '--plan', planFile, '--target', 'Teyu-3', ...small, '--csv', '--out', path.join(dir, 'csv')]);
     expect(r.status).toBe(0);
     const lines = r.stdout.trim().split('\r\n');
     expect(lines[0]).toBe('target,kind,method,periodDays,massEarth,detectionProbability');
@@ -81,7 +82,7 @@ describe('crest map', () => {
   });
 
   it('injects eccentric orbits with --ecc-max (0 is the circular map, a wider range changes it)', async () => {
-    const run = (extra: string[], out: string) => runCliAsync(['map', '--plan', planFile, '--target', 'Alba', ...small, '--json', '--out', path.join(dir, out), ...extra]);
+    const run = (extra: string[], out: string) => runCliInProcess(['map', '--plan', planFile, '--target', 'Alba', ...small, '--json', '--out', path.join(dir, out), ...extra]);
     const [circular, zero, eccentric] = await Promise.all([run([], 'c'), run(['--ecc-max', '0'], 'z'), run(['--ecc-max', '0.6'], 'e')]);
     const [c, z, e] = [circular, zero, eccentric].map((r) => JSON.parse(r.stdout));
     expect(z.targets[0].simulated).toEqual(c.targets[0].simulated);
@@ -101,7 +102,7 @@ describe('crest map', () => {
       ['--ecc-max', '0.95'],
       ['--target', 'Alba', '--periods', '0.001:100000'],
     ];
-    const results = await Promise.all(cases.map((flags) => runCliAsync(['map', '--plan', planFile, ...flags])));
+    const results = await Promise.all(cases.map((flags) => runCliInProcess(['map', '--plan', planFile, ...flags])));
     for (const r of results) {
       expect(r.status).toBe(2);
       expect(r.stderr.trim().split('\n')).toHaveLength(1);
@@ -109,7 +110,7 @@ describe('crest map', () => {
     expect(results[6]!.stderr).toContain('Teyu-3, Mirador-7, Alba');
     // A period range whose periodogram grid would take hours is refused before any work.
     expect(results[8]!.stderr).toMatch(/^crest: command line: --periods = "0\.001:100000": a map of at most 1e\+9 frequency-trials/);
-    const missing = await runCliAsync(['map', '--plan', path.join(dir, 'none.json')]);
+    const missing = await runCliInProcess(['map', '--plan', path.join(dir, 'none.json')]);
     expect(missing.status).toBe(2);
   });
 });

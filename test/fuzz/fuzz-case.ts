@@ -20,10 +20,39 @@ export interface CaseRun extends MainResult {
   outputs: Record<string, string>;
 }
 
+/** Per case folder: the input files the last case left there unchanged (name → text). */
+const leftInPlace = new Map<string, Map<string, string>>();
+
+/**
+ * Makes `dir` hold exactly `files`, as a fresh folder would. A folder used by an earlier case keeps
+ * the inputs it still holds unchanged and loses everything else: on this machine's disk, removing
+ * and writing a folder of six files costs about 3 ms, and a fuzz test runs some 5,600 cases.
+ */
+function prepareFolder(dir: string, files: Record<string, string>): void {
+  const kept = leftInPlace.get(dir);
+  leftInPlace.delete(dir);
+  if (!kept) {
+    rmSync(dir, { recursive: true, force: true });
+    mkdirSync(dir, { recursive: true });
+  } else for (const name of readdirSync(dir)) if (!Object.hasOwn(files, name) || kept.get(name) !== files[name]) rmSync(path.join(dir, name), { recursive: true, force: true });
+  for (const [name, text] of Object.entries(files)) if (kept?.get(name) !== text) writeFileSync(path.join(dir, name), text);
+}
+
+/** Records the inputs a run left unchanged in `dir`, for the next case's prepareFolder. */
+function noteInputs(dir: string, files: Record<string, string>): void {
+  const kept = new Map<string, string>();
+  for (const [name, text] of Object.entries(files)) {
+    try {
+      if (readFileSync(path.join(dir, name), 'utf8') === text) kept.set(name, text);
+    } catch {
+      // Gone or no longer a file: the next case writes it again.
+    }
+  }
+  leftInPlace.set(dir, kept);
+}
+
 export async function runCase(c: FuzzCase, dir: string): Promise<CaseRun> {
-  rmSync(dir, { recursive: true, force: true });
-  mkdirSync(dir, { recursive: true });
-  for (const [name, text] of Object.entries(c.files)) writeFileSync(path.join(dir, name), text);
+  prepareFolder(dir, c.files);
   const args = c.args.map((a) => a.replaceAll('{dir}', dir));
   // A mutated command line may name any relative path: run from the case folder.
   const cwd = process.cwd();
@@ -34,6 +63,7 @@ export async function runCase(c: FuzzCase, dir: string): Promise<CaseRun> {
   } finally {
     process.chdir(cwd);
   }
+  noteInputs(dir, c.files);
   const outputs: Record<string, string> = {};
   const out = path.join(dir, 'out');
   if (existsSync(out) && statSync(out).isDirectory()) {

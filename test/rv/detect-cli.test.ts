@@ -1,6 +1,7 @@
+// `crest detect`: the first case as a subprocess (the built command line end to end), the others in-process.
 import { describe, expect, it } from 'vitest';
 import { parse } from 'csv-parse/sync';
-import { runCli } from '../cli/run-cli.js';
+import { runCli, runCliInProcess } from '../cli/run-cli.js';
 
 const DEMO = 'examples/demo/targets.csv';
 
@@ -12,8 +13,8 @@ describe('crest detect', () => {
     expect(r.stdout).toMatch(/logarithmic middle of 2-60 d/);
   });
 
-  it('--csv: one row per target; visits at random phases are twice those at quadratures, plus one ((N - 1)/2)', () => {
-    const r = runCli(['detect', '--targets', DEMO, '--instrument', 'stable-2m', '--csv']);
+  it('--csv: one row per target; visits at random phases are twice those at quadratures, plus one ((N - 1)/2)', async () => {
+    const r = await runCliInProcess(['detect', '--targets', DEMO, '--instrument', 'stable-2m', '--csv']);
     expect(r.status).toBe(0);
     const rows = parse(r.stdout, { columns: true }) as Record<string, string>[];
     expect(rows).toHaveLength(13);
@@ -24,8 +25,8 @@ describe('crest detect', () => {
     }
   });
 
-  it('a hypothetical planet around one star, with mass limits at a planned N (--json)', () => {
-    const r = runCli(['detect', '--instrument', 'stable-4m', '--vmag', '9', '--teff', '4800', '--planet-mass', '10', '--period', '20', '--visits', '40', '--json']);
+  it('a hypothetical planet around one star, with mass limits at a planned N (--json)', async () => {
+    const r = await runCliInProcess(['detect', '--instrument', 'stable-4m', '--vmag', '9', '--teff', '4800', '--planet-mass', '10', '--period', '20', '--visits', '40', '--json']);
     expect(r.status).toBe(0);
     const [row] = JSON.parse(r.stdout).targets;
     expect(row.planet.source).toBe('hypothetical');
@@ -38,8 +39,8 @@ describe('crest detect', () => {
     [['--planet-mass', '10', '--vmag', '9', '--teff', '5000'], /--period = \(missing\): --planet-mass and --period go together/],
     [['--vmag', '9', '--teff', '5000', '--targets', DEMO], /not both/],
     [[], /--targets = \(missing\)/],
-  ])('bad input: one line, exit 2 (%s)', (args, pattern) => {
-    const r = runCli(['detect', '--instrument', 'stable-4m', ...(args as string[])]);
+  ])('bad input: one line, exit 2 (%s)', async (args, pattern) => {
+    const r = await runCliInProcess(['detect', '--instrument', 'stable-4m', ...(args as string[])]);
     expect(r.status).toBe(2);
     expect(r.stderr).toMatch(pattern);
     expect(r.stderr.trim().split('\n')).toHaveLength(1);

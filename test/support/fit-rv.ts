@@ -16,7 +16,7 @@
 // Truth per data set: Tc and P of each planet drawn from their catalogue Gaussians, K and the
 // eccentricity vector at the catalogue values, γ = 0.
 import { periastronFromConjunctionBjd } from '../../src/orbit/periastron-time.js';
-import { radialVelocityMps } from '../../src/orbit/rv-curve.js';
+import { type RvOrbit, radialVelocityMps } from '../../src/orbit/rv-curve.js';
 import { activityCovariance } from '../../src/rv/activity-kernel.js';
 import type { ActivityInput, PlanetInput } from '../../src/rv/information-model.js';
 import type { Rng } from '../../src/rv/random.js';
@@ -128,21 +128,29 @@ function layout(planets: PlanetInput[], origin: number): ParamLayout {
   return lay;
 }
 
-/** The Keplerian model at time tRel (days from the origin) for parameters theta. */
-function modelVelocity(planets: PlanetInput[], lay: ParamLayout, theta: Float64Array, tRel: number): number {
-  let v = theta[0]!;
-  planets.forEach((pl, i) => {
-    let ecc = pl.ecc;
-    let omegaDeg = pl.omegaDeg;
-    const e = lay.ecc[i]!;
-    if (e >= 0) {
-      ecc = Math.min(Math.hypot(theta[e]!, theta[e + 1]!), 0.95);
-      omegaDeg = ecc > 0 ? (Math.atan2(theta[e + 1]!, theta[e]!) * 180) / Math.PI : 90;
-    }
-    const periodDays = theta[lay.period[i]!]!;
-    const periastronBjd = periastronFromConjunctionBjd({ tcBjd: theta[lay.tc[i]!]!, periodDays, ecc, omegaDeg });
-    v += radialVelocityMps({ kMps: theta[lay.k[i]!]!, periodDays, ecc, omegaDeg, periastronBjd }, tRel);
-  });
+/** Planet i's orbit for parameters theta (periastron in days from the origin). */
+function planetOrbit(pl: PlanetInput, i: number, lay: ParamLayout, theta: Float64Array): RvOrbit {
+  let ecc = pl.ecc;
+  let omegaDeg = pl.omegaDeg;
+  const e = lay.ecc[i]!;
+  if (e >= 0) {
+    ecc = Math.min(Math.hypot(theta[e]!, theta[e + 1]!), 0.95);
+    omegaDeg = ecc > 0 ? (Math.atan2(theta[e + 1]!, theta[e]!) * 180) / Math.PI : 90;
+  }
+  const periodDays = theta[lay.period[i]!]!;
+  const periastronBjd = periastronFromConjunctionBjd({ tcBjd: theta[lay.tc[i]!]!, periodDays, ecc, omegaDeg });
+  return { kMps: theta[lay.k[i]!]!, periodDays, ecc, omegaDeg, periastronBjd };
+}
+
+/** Every planet's orbit for parameters theta. */
+function planetOrbits(planets: PlanetInput[], lay: ParamLayout, theta: Float64Array): RvOrbit[] {
+  return planets.map((pl, i) => planetOrbit(pl, i, lay, theta));
+}
+
+/** The Keplerian model at time tRel (days from the origin): γ plus each orbit's velocity, in planet order. */
+function modelVelocity(gammaMps: number, orbits: RvOrbit[], tRel: number): number {
+  let v = gammaMps;
+  for (const orbit of orbits) v += radialVelocityMps(orbit, tRel);
   return v;
 }
 
@@ -203,10 +211,19 @@ export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, opti
   const g = new Float64Array(p);
   const nightNoise = new Float64Array(m);
   const actNoise = new Float64Array(m);
+  const velocities = new Float64Array(planets.length * n);
+  const shapes = new Float64Array(planets.length * n);
+  // The planet each parameter belongs to (γ, index 0, to none).
+  const planetOfParam = new Int32Array(p).fill(-1);
+  planets.forEach((_, i) => {
+    for (const j of [lay.k[i]!, lay.tc[i]!, lay.period[i]!]) planetOfParam[j] = i;
+    if (lay.ecc[i]! >= 0) planetOfParam[lay.ecc[i]!] = planetOfParam[lay.ecc[i]! + 1] = i;
+  });
 
   /** Whitened residual vector at theta into resid; returns the penalised χ². */
   const chi2 = (theta: Float64Array, out: Float64Array): number => {
-    for (let i = 0; i < n; i++) out[i] = y[i]! - modelVelocity(planets, lay, theta, tRel[i]!);
+    const orbits = planetOrbits(planets, lay, theta);
+    for (let i = 0; i < n; i++) out[i] = y[i]! - modelVelocity(theta[0]!, orbits, tRel[i]!);
     forward(whiten, n, out);
     let c = 0;
     for (let i = 0; i < n; i++) c += out[i]! * out[i]!;
@@ -229,7 +246,8 @@ export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, opti
       const z = Array.from({ length: m }, () => rng.normal());
       for (let q = 0; q < m; q++) for (let r = 0; r <= q; r++) actNoise[q] += activityFactor[q * m + r]! * z[r]!;
     }
-    for (let i = 0; i < n; i++) y[i] = modelVelocity(planets, lay, truth, tRel[i]!) + visits[i]!.sigmaMps * rng.normal() + nightNoise[nightOf[i]!]! + actNoise[nightOf[i]!]!;
+    const truthOrbits = planetOrbits(planets, lay, truth);
+    for (let i = 0; i < n; i++) y[i] = modelVelocity(truth[0]!, truthOrbits, tRel[i]!) + visits[i]!.sigmaMps * rng.normal() + nightNoise[nightOf[i]!]! + actNoise[nightOf[i]!]!;
 
     const fromCatalogue = Float64Array.from(lay.centre);
     fromCatalogue[0] = y.reduce((s, v) => s + v, 0) / n;
@@ -277,22 +295,45 @@ export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, opti
     let converged = false;
     for (let iter = 0; iter < 60 && !converged; iter++) {
       // Whitened Jacobian: the γ column exact, the others central differences (exact to rounding
-      // for K, which enters linearly).
-      for (let j = 0; j < p; j++) {
+      // for K, which enters linearly). A parameter moves one planet's orbit only, so the other
+      // planets' velocities at the current theta are computed once and reused. K multiplies the
+      // curve of K = 1 m/s (radialVelocityMps forms the same product), so K ± h needs no new curve.
+      const orbits = planetOrbits(planets, lay, theta);
+      for (let q = 0; q < planets.length; q++)
         for (let i = 0; i < n; i++) {
-          let d: number;
-          if (j === 0) d = 1;
-          else {
-            const h = step[j]! || 1e-4 * Math.max(1, Math.abs(theta[j]!));
-            const saved = theta[j]!;
-            theta[j] = saved + h;
-            const up = modelVelocity(planets, lay, theta, tRel[i]!);
-            theta[j] = saved - h;
-            const down = modelVelocity(planets, lay, theta, tRel[i]!);
-            theta[j] = saved;
-            d = (up - down) / (2 * h);
+          shapes[q * n + i] = radialVelocityMps({ ...orbits[q]!, kMps: 1 }, tRel[i]!);
+          velocities[q * n + i] = orbits[q]!.kMps * shapes[q * n + i]!;
+        }
+      for (let j = 0; j < p; j++) {
+        if (j === 0) for (let i = 0; i < n; i++) jac[i * p] = 1;
+        else {
+          const q = planetOfParam[j]!;
+          const h = step[j]! || 1e-4 * Math.max(1, Math.abs(theta[j]!));
+          const saved = theta[j]!;
+          theta[j] = saved + h;
+          const up = planetOrbit(planets[q]!, q, lay, theta);
+          theta[j] = saved - h;
+          const down = planetOrbit(planets[q]!, q, lay, theta);
+          theta[j] = saved;
+          const isK = j === lay.k[q];
+          for (let i = 0; i < n; i++) {
+            // The sum in modelVelocity's order (γ, then planet by planet), the moved planet recomputed.
+            let vUp = theta[0]!;
+            let vDown = theta[0]!;
+            for (let r = 0; r < planets.length; r++) {
+              if (r !== q) {
+                vUp += velocities[r * n + i]!;
+                vDown += velocities[r * n + i]!;
+              } else if (isK) {
+                vUp += up.kMps * shapes[q * n + i]!;
+                vDown += down.kMps * shapes[q * n + i]!;
+              } else {
+                vUp += radialVelocityMps(up, tRel[i]!);
+                vDown += radialVelocityMps(down, tRel[i]!);
+              }
+            }
+            jac[i * p + j] = (vUp - vDown) / (2 * h);
           }
-          jac[i * p + j] = d;
         }
         forward(whiten, n, jac, p, j);
       }
