@@ -10,7 +10,7 @@
 import { DateTime } from 'luxon';
 import { altitudeForAirmassDeg, kastenYoungAirmass } from '../../src/astro/airmass.js';
 import type { Constraints, Plan, PlannedVisit, Site, Window } from '../../src/model.js';
-import { referenceWindows } from '../../src/sky/reference-sampler.js';
+import { referenceWindows } from '../../reference/sky-sampler.js';
 import { computeWindows } from '../../src/sky/visibility.js';
 
 /** The reference's tolerance: its one-minute grid (up to 1 min) plus the fast engine's measured 1.06 min (DEVELOPERS.md, sky engine). */

@@ -3,10 +3,10 @@
 // and once on the default count; trials per second of each, the speedup, and the machine's load
 // average before the runs (other processes on the machine lower the speedup).
 import { availableParallelism, loadavg } from 'node:os';
-import type { InjectionInput } from '../rv/injection.js';
-import { logSpaced } from '../rv/injection-map.js';
-import { defaultThreadCount, injectionRecoveryParallel } from '../rv/injection-worker-pool.js';
-import { createRng } from '../rv/random.js';
+import type { InjectionInput } from '../src/rv/injection.js';
+import { logSpaced } from '../src/rv/injection-map.js';
+import { defaultThreadCount, injectionRecoveryParallel } from '../src/rv/injection-worker-pool.js';
+import { createRng } from '../src/rv/random.js';
 import type { BenchModule } from './types.js';
 
 function benchInput(): InjectionInput {
