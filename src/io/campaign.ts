@@ -1,6 +1,7 @@
 import path from 'node:path';
 import { z } from 'zod';
 import { DateTime } from 'luxon';
+import { FIRST_YEAR, isoDate, LAST_YEAR } from '../field-schemas.js';
 import { inputError } from '../errors.js';
 import type { Campaign, Constraints, Target } from '../model.js';
 import { readInstrument } from './instrument.js';
@@ -13,20 +14,6 @@ import { readObserved } from './observed.js';
 import { readTargets } from './targets.js';
 import { issueToError } from './zod-issue.js';
 import { DEFAULT_NIGHTLY_JITTER_FRACTION } from '../rv/star-noise.js';
-
-/** Years a campaign may lie in: the command-line dates' range (src/cli/nights.ts). */
-const FIRST_YEAR = 1900;
-const LAST_YEAR = 2100;
-const DATE_ALLOWED = `a date as YYYY-MM-DD, years ${FIRST_YEAR} to ${LAST_YEAR}`;
-
-/** A calendar date, ISO 8601 (YAML may hand us a Date for an unquoted date). */
-export const isoDate = z.preprocess(
-  (v) => (v instanceof Date && !Number.isNaN(v.getTime()) ? v.toISOString().slice(0, 10) : v),
-  z.string({ error: DATE_ALLOWED }).refine((s) => {
-    const date = DateTime.fromISO(s);
-    return /^\d{4}-\d{2}-\d{2}$/.test(s) && date.isValid && date.year >= FIRST_YEAR && date.year <= LAST_YEAR;
-  }, DATE_ALLOWED),
-);
 
 export const constraintsSchema = z.strictObject({
   twilight: z.enum(['civil', 'nautical', 'astronomical'], { error: 'one of civil, nautical, astronomical' }).default('nautical'),
