@@ -4,7 +4,7 @@
 import path from 'node:path';
 import { readCampaign } from '../src/io/campaign.js';
 import { DEMO_CAMPAIGN, PACKAGE_ROOT } from '../src/io/paths.js';
-import type { Campaign } from '../src/model.js';
+import type { Campaign } from '../src/plan/campaign.js';
 import { nextVisits } from '../src/plan/next-visits.js';
 import { planInputs } from '../src/plan/plan-inputs.js';
 import { referenceUtility } from '../reference/schedule.js';

@@ -1,8 +1,10 @@
-// The shared data model (docs/design.md, "Data model"). Units are in the names.
+// The input data model below every layer (docs/design.md, "Data model"): site, targets,
+// constraints, and the sky's products (nights, windows). The instrument is in src/rv/instrument.ts,
+// the campaign in src/plan/campaign.ts, the plan's output in src/plan/plan-schema.ts. Units are in the names.
 
-import type { BandId } from './rv/bands.js';
-import type { Entrance } from './rv/seeing.js';
-import type { SpectralRegion } from './rv/teff-information.js';
+/** Photometric bands Crest knows (src/rv/bands.ts): Johnson V, Cousins R and I, 2MASS-like J and H, Gaia G. */
+export const BANDS = ['V', 'R', 'I', 'J', 'H', 'G'] as const;
+export type BandId = (typeof BANDS)[number];
 
 export interface HorizonPoint {
   azimuthDeg: number;
@@ -31,59 +33,6 @@ export interface Site {
   semesters?: { A: { start: string; end: string }; B: { start: string; end: string } };
   sourceNote: string;
   /** Path of the file it was read from. */
-  file: string;
-}
-
-/** The measured point every other star's photon noise is scaled from (src/rv/precision.ts). */
-export interface InstrumentReference {
-  /** Photon-noise σ (m/s) at this point. */
-  sigmaMps: number;
-  /** The reference star's magnitude in the instrument's band. */
-  mag: number;
-  exposureSec: number;
-  airmass: number;
-  /** Seeing FWHM (arcsec) at that airmass. */
-  seeingArcsec: number;
-  /** S/N per pixel at the instrument's wavelengthNm. */
-  snrPerPixel: number;
-  teffK: number;
-  vsiniKms: number;
-}
-
-export interface Instrument {
-  id: string;
-  name: string;
-  apertureM: number;
-  resolvingPower: number;
-  /** Photometric band the profile's magnitudes are in. */
-  band: BandId;
-  /** Wavelength (nm) of the reference S/N and of the extinction coefficient. */
-  wavelengthNm: number;
-  /** Wavelength coverage [min, max] (nm). */
-  coverageNm: [number, number];
-  /** Which RV-information table applies (src/rv/teff-information.ts). */
-  spectralRegion: SpectralRegion;
-  /** Photon-noise precision at one reference point; all other stars scale from it. */
-  reference: InstrumentReference;
-  readNoiseE: number;
-  pixelsPerResolutionElement: number;
-  /** Detector pixels summed across the order into one spectral pixel. */
-  spatialPixels: number;
-  entrance: Entrance;
-  /** Dark-sky surface brightness in the band (mag/arcsec²). */
-  skyMagPerArcsec2: number;
-  floorMps: number;
-  readoutSec: number;
-  acquisitionSec: number;
-  minExposureSec: number;
-  maxExposureSec: number;
-  /** Extinction at wavelengthNm (mag per airmass). */
-  extinctionMagPerAirmass: number;
-  /** Optional override of the spectral-type factor: [teffK, factor] pairs, interpolated. */
-  teffFactors?: [number, number][];
-  /** Where each number comes from, by field name. */
-  sources: Record<string, string>;
-  sourceNote: string;
   file: string;
 }
 
@@ -175,57 +124,6 @@ export interface Constraints {
   minSpacingHours: number;
   /** Windows shorter than this are dropped (minutes). */
   minWindowMinutes: number;
-}
-
-/** How the star's jitter is split and how transits are kept out of visits. */
-export interface NoiseSettings {
-  /** Default fraction of the jitter variance shared by all visits of one night. */
-  nightlyJitterFraction: number;
-}
-
-export interface TransitAvoidance {
-  /** Keep visits out of the predicted transit with this probability (two-sided Gaussian). */
-  confidence: number;
-  /** Never remove more than this fraction of the orbit; beyond it, warn and keep the phases. */
-  maxOrbitFraction: number;
-}
-
-export interface Goals {
-  /** K / sigma_K to reach for targets with an ephemeris. */
-  significance: number;
-}
-
-/** One row of a campaign's observed file (src/io/observed.ts), before its time is resolved. */
-export interface ObservedRow {
-  targetId: string;
-  midBjdTdb?: number;
-  midUtc?: string;
-  instrument: string;
-  rvMps?: number;
-  rvErrMps?: number;
-  /** 1-based data row and the line it ends on. */
-  row: number;
-  line: number;
-}
-
-export interface Campaign {
-  name: string;
-  file: string;
-  site: Site;
-  instrument: Instrument;
-  targets: Target[];
-  targetsFile: string;
-  window: { start: string; end: string };
-  time: TimeModel;
-  constraints: Constraints;
-  goals: Goals;
-  noise: NoiseSettings;
-  transits: TransitAvoidance;
-  seed: number;
-  /** Visits already made (the campaign's `observed` file), when it names one. */
-  observed?: { file: string; rows: ObservedRow[] };
-  /** Nights lost to weather or faults (local evening dates): never planned. */
-  lostDates: string[];
 }
 
 /** One night of the site (docs/design.md, "Data model"). Instants are UTC; null where the Sun never gets that low/high. */

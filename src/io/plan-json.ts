@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { inputError } from '../errors.js';
 import { bjd, fraction, isoDate, isoInstant, nonNegative, num, positive } from '../field-schemas.js';
-import type { Campaign } from '../model.js';
+import type { Campaign } from '../plan/campaign.js';
 import {
   backupNightSchema,
   observedVisitSchema,

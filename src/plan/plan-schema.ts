@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { bjd, fraction, isoDate, isoInstant, nonNegative, num, positive, wholeNonNegative } from '../field-schemas.js';
-import type { Campaign, Night } from '../model.js';
+import type { Night } from '../model.js';
+import type { Campaign } from './campaign.js';
 import { fittedOrbitSchema } from '../rv/fitted-orbit.js';
 
 // The plan's output parts (plan.json, docs/design.md "Data model"): each shape is written once,

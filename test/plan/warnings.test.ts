@@ -8,7 +8,7 @@ import { DateTime } from 'luxon';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { readCampaign } from '../../src/io/campaign.js';
 import { visitPrecision } from '../../src/rv/precision.js';
-import type { Campaign } from '../../src/model.js';
+import type { Campaign } from '../../src/plan/campaign.js';
 import type { Plan } from '../../src/plan/plan-schema.js';
 import { buildPlan } from '../../src/plan/build-plan.js';
 import { referenceWindows } from '../../reference/sky-sampler.js';
