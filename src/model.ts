@@ -6,35 +6,7 @@
 export const BANDS = ['V', 'R', 'I', 'J', 'H', 'G'] as const;
 export type BandId = (typeof BANDS)[number];
 
-export interface HorizonPoint {
-  azimuthDeg: number;
-  altitudeDeg: number;
-}
-
-export interface Site {
-  id: string;
-  name: string;
-  latitudeDeg: number;
-  /** East positive. */
-  longitudeDeg: number;
-  elevationM: number;
-  /** IANA time-zone name. */
-  timeZone: string;
-  minAltitudeDeg: number;
-  /** Local horizon; altitude interpolated linearly in azimuth (north = 0, east = 90). */
-  horizon?: HorizonPoint[];
-  /** Telescope hour-angle limits in hours: east is negative, west positive. */
-  hourAngleLimitsHours?: { east: number; west: number };
-  /** Fraction of clear nights: one number, or twelve monthly values (January first). */
-  clearFraction: number | number[];
-  /** Median seeing FWHM at the zenith (arcsec); omitted: each instrument's reference seeing. */
-  medianSeeingArcsec?: number;
-  /** Semester boundaries as month-day (`MM-DD`) pairs; B may end in the next year. */
-  semesters?: { A: { start: string; end: string }; B: { start: string; end: string } };
-  sourceNote: string;
-  /** Path of the file it was read from. */
-  file: string;
-}
+export type { HorizonPoint, Site } from './site.js';
 
 export interface Ephemeris {
   periodDays: number;
@@ -109,22 +81,7 @@ export interface Target {
   source: string;
 }
 
-export type TwilightLevel = 'civil' | 'nautical' | 'astronomical';
-
-export type TimeModel =
-  | { mode: 'choose-nights'; nights: number }
-  | { mode: 'given-nights'; dates: string[] }
-  | { mode: 'hours'; hours: number };
-
-export interface Constraints {
-  twilight: TwilightLevel;
-  maxAirmass: number;
-  moonSeparationDeg: number;
-  /** Minimum spacing between two visits of one target (hours). */
-  minSpacingHours: number;
-  /** Windows shorter than this are dropped (minutes). */
-  minWindowMinutes: number;
-}
+export type { Constraints, TimeModel, TwilightLevel } from './constraints.js';
 
 /** One night of the site (docs/design.md, "Data model"). Instants are UTC; null where the Sun never gets that low/high. */
 export interface Night {

@@ -11,10 +11,10 @@ import {
   targetSummarySchema,
   type Plan,
 } from '../plan/plan-schema.js';
-import { constraintsSchema, timeSchema } from './campaign.js';
+import { constraintsSchema, timeSchema } from '../constraints.js';
 import { recoverBeforeReading } from './output-set.js';
 import { readJson } from './read-text.js';
-import { siteSchema } from './site.js';
+import { siteSchema } from '../site.js';
 import { slug } from './slug.js';
 import { issueToError } from './zod-issue.js';
 
