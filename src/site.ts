@@ -1,12 +1,12 @@
 import { DateTime, IANAZone } from 'luxon';
 import { z } from 'zod';
+import { fraction } from './field-schemas.js';
 
 // An observing site: the site file's schema (sites/*.json, read by src/io/site.ts) and the type
 // inferred from it. Units are in the names.
 
 /** An IANA zone name; luxon would also take fixed offsets such as `UTC+25`, which are no zone. */
 const isZone = (name: string) => IANAZone.isValidZone(name);
-const fraction = z.number().min(0, 'a fraction from 0 to 1').max(1, 'a fraction from 0 to 1');
 
 const monthDay = z
   .string({ error: 'a month and day as MM-DD' })
