@@ -2,6 +2,10 @@
 // the readers (io) and the writers, which touch files only where their names say so.
 
 export type * from './model.js';
+export type { Instrument, InstrumentReference } from './rv/instrument.js';
+export type { Campaign, Goals, NoiseSettings, TransitAvoidance } from './plan/campaign.js';
+export type { FittedOrbit } from './rv/fitted-orbit.js';
+export type { ObservedVisit, OrbitUpdate, Plan, PlannedVisit, PlanTotals, Replan, TargetSummary, VisitPhase } from './plan/plan-schema.js';
 export { CrestError, InputError, OutputError, ValidationError } from './errors.js';
 
 // Input files

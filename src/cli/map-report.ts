@@ -4,7 +4,7 @@
 import { existsSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { slug } from '../io/slug.js';
-import type { Plan } from '../model.js';
+import type { Plan } from '../plan/plan-schema.js';
 import type { DetectionMapData } from '../report/html/chart-detection-map.js';
 import { renderReportHtml } from '../report/html/report-html.js';
 

@@ -2,7 +2,8 @@
 // mid-exposure BJD_TDB and σ_eff (jitter included), the star's mass, and log-spaced axes.
 import { inputError } from '../errors.js';
 import { extent } from '../extent.js';
-import type { Ephemeris, Plan, PlannedVisit, Target } from '../model.js';
+import type { Ephemeris, Target } from '../model.js';
+import type { Plan, PlannedVisit } from '../plan/plan-schema.js';
 import { planetMassFromKEarth } from '../orbit/minimum-mass.js';
 import { visitsOf } from '../report/html/target-visits.js';
 import type { InjectionInput } from '../rv/injection.js';

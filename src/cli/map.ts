@@ -1,4 +1,5 @@
 import path from 'node:path';
+import { availableParallelism } from 'node:os';
 import type { Command } from 'commander';
 import { inputError } from '../errors.js';
 import { extent } from '../extent.js';
@@ -72,7 +73,7 @@ interface MapResult {
 }
 
 
-async function runJob(job: MapJob, settings: MapSettings, threads: number | undefined, progress: Progress): Promise<Omit<MapResult, 'svg'>> {
+async function runJob(job: MapJob, settings: MapSettings, threads: number, progress: Progress): Promise<Omit<MapResult, 'svg'>> {
   const { periodsDays, massesEarth } = job.input;
   if (job.kind === 'search') {
     const map = await injectionRecoveryParallel(job.input, { threads, onProgress: (done, total) => progress.update(job.targetId, done, total) });
@@ -173,9 +174,11 @@ async function runMap(opts: MapFlags): Promise<void> {
   const names = jobs.flatMap((j) => (j.kind === 'search' ? [svgName(j.targetId), mapDataFile(j.targetId)] : [svgName(j.targetId)]));
   checkOutFolder(outDir, [...names, 'report.html'], [opts.plan]);
   const progress = stderrProgress();
+  // The core count is read here, at the edge; the pool takes at most one thread per cell.
+  const threads = opts.threads ?? availableParallelism();
   const results: MapResult[] = [];
   for (const job of jobs) {
-    const result = await runJob(job, settings, opts.threads, progress);
+    const result = await runJob(job, settings, threads, progress);
     results.push({ ...result, svg: svgName(job.targetId) });
   }
   const files: Record<string, string> = {};

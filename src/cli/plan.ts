@@ -1,7 +1,7 @@
 import path from 'node:path';
 import type { Command } from 'commander';
 import { inputError } from '../errors.js';
-import type { Campaign } from '../model.js';
+import type { Campaign } from '../plan/campaign.js';
 import { readCampaign } from '../io/campaign.js';
 import { DEMO_CAMPAIGN } from '../io/paths.js';
 import { checkOutFolder } from '../io/out-folder.js';

@@ -1,7 +1,7 @@
 import type { Command } from 'commander';
 import { inputError } from '../errors.js';
 import { instrumentFromFlag } from '../io/site-list.js';
-import type { Instrument } from '../model.js';
+import type { Instrument } from '../rv/instrument.js';
 import { fmt, renderTable } from '../report/table.js';
 import { chooseExposureSec, fixedExposure, visitCostSec, type ExposureChoice } from '../rv/exposure.js';
 import type { PrecisionBudget } from '../rv/precision.js';

@@ -4,7 +4,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { CrestError } from '../errors.js';
 import { readPlan } from '../io/plan-json.js';
-import type { Plan } from '../model.js';
+import type { Plan } from '../plan/plan-schema.js';
 
 export function previousPlan(outDir: string, campaignName: string, warn: (line: string) => void): Plan | undefined {
   const file = path.join(outDir, 'plan.json');

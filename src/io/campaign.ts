@@ -1,8 +1,11 @@
 import path from 'node:path';
 import { z } from 'zod';
 import { DateTime } from 'luxon';
+import { constraintsSchema, eachDateOnce, timeSchema } from '../constraints.js';
+import { FIRST_YEAR, isoDate, LAST_YEAR } from '../field-schemas.js';
 import { inputError } from '../errors.js';
-import type { Campaign, Constraints, Target } from '../model.js';
+import type { Constraints, Target } from '../model.js';
+import type { Campaign } from '../plan/campaign.js';
 import { readInstrument } from './instrument.js';
 import { INSTRUMENTS_DIR, SITES_DIR } from './paths.js';
 import { readStructured } from './read-text.js';
@@ -14,49 +17,8 @@ import { readTargets } from './targets.js';
 import { issueToError } from './zod-issue.js';
 import { DEFAULT_NIGHTLY_JITTER_FRACTION } from '../rv/star-noise.js';
 
-/** Years a campaign may lie in: the command-line dates' range (src/cli/nights.ts). */
-const FIRST_YEAR = 1900;
-const LAST_YEAR = 2100;
-const DATE_ALLOWED = `a date as YYYY-MM-DD, years ${FIRST_YEAR} to ${LAST_YEAR}`;
-
-/** A calendar date, ISO 8601 (YAML may hand us a Date for an unquoted date). */
-export const isoDate = z.preprocess(
-  (v) => (v instanceof Date && !Number.isNaN(v.getTime()) ? v.toISOString().slice(0, 10) : v),
-  z.string({ error: DATE_ALLOWED }).refine((s) => {
-    const date = DateTime.fromISO(s);
-    return /^\d{4}-\d{2}-\d{2}$/.test(s) && date.isValid && date.year >= FIRST_YEAR && date.year <= LAST_YEAR;
-  }, DATE_ALLOWED),
-);
-
-export const constraintsSchema = z.strictObject({
-  twilight: z.enum(['civil', 'nautical', 'astronomical'], { error: 'one of civil, nautical, astronomical' }).default('nautical'),
-  maxAirmass: z.number({ error: 'an airmass from 1 to 5' }).min(1, 'an airmass from 1 to 5').max(5, 'an airmass from 1 to 5').default(2),
-  moonSeparationDeg: z.number({ error: 'degrees from 0 to 180' }).min(0, 'degrees from 0 to 180').max(180, 'degrees from 0 to 180').default(30),
-  minSpacingHours: z.number({ error: 'hours, 0 or more' }).min(0, 'hours, 0 or more').max(24 * 365, 'hours, at most a year').default(20),
-  sameNightSpacingHours: z.number({ error: 'hours from 0 to 12' }).min(0, 'hours from 0 to 12').max(12, 'hours from 0 to 12').default(2),
-  minWindowMinutes: z.number({ error: 'minutes, 0 or more' }).min(0, 'minutes, 0 or more').max(600, 'minutes, at most 600').default(20),
-});
-
 /** The constraints a campaign gets when it gives none; commands that take them as flags share these. */
 export const DEFAULT_CONSTRAINTS: Constraints = constraintsSchema.parse({});
-
-export const timeSchema = z.discriminatedUnion(
-  'mode',
-  [
-    z.strictObject({ mode: z.literal('choose-nights'), nights: z.number({ error: 'a whole number of nights, 1 to 366' }).int('a whole number of nights').min(1, 'at least 1 night').max(366, 'at most 366 nights') }),
-    z.strictObject({ mode: z.literal('given-nights'), dates: z.array(isoDate).min(1, 'at least one date').superRefine(eachDateOnce) }),
-    z.strictObject({ mode: z.literal('hours'), hours: z.number({ error: 'a positive number of hours, at most 5000' }).positive('a positive number of hours').max(5000, 'at most 5000 hours') }),
-  ],
-  { error: 'mode is one of choose-nights, given-nights, hours' },
-);
-
-/** Given nights are a set: a date listed twice would be counted twice. */
-function eachDateOnce(dates: string[], ctx: z.RefinementCtx): void {
-  dates.forEach((date, i) => {
-    const first = dates.indexOf(date);
-    if (first !== i) ctx.addIssue({ code: 'custom', path: [i], message: `each date once (already given as dates[${first}])` });
-  });
-}
 
 /** Campaign file schema (docs/design.md, "Input files"). Paths are relative to the campaign file. */
 export const campaignSchema = z.strictObject({

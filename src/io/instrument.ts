@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import type { Instrument } from '../model.js';
+import type { Instrument } from '../rv/instrument.js';
 import { BANDS } from '../rv/bands.js';
 import { readStructured } from './read-text.js';
 import { issueToError } from './zod-issue.js';

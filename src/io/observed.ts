@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { inputError } from '../errors.js';
-import type { ObservedRow } from '../model.js';
+import type { ObservedRow } from '../plan/campaign.js';
 import { parseCsvTable } from './csv-records.js';
 import { isoInstantMs } from './iso-instant.js';
 import { numberField } from './number-cell.js';

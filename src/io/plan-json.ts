@@ -1,10 +1,20 @@
 import { z } from 'zod';
 import { inputError } from '../errors.js';
-import type { Plan } from '../model.js';
-import { constraintsSchema, isoDate, timeSchema } from './campaign.js';
+import { bjd, fraction, isoDate, isoInstant, nonNegative, num, positive } from '../field-schemas.js';
+import type { Campaign } from '../plan/campaign.js';
+import {
+  backupNightSchema,
+  observedVisitSchema,
+  plannedVisitSchema,
+  planTotalsSchema,
+  replanSchema,
+  targetSummarySchema,
+  type Plan,
+} from '../plan/plan-schema.js';
+import { constraintsSchema, timeSchema } from '../constraints.js';
 import { recoverBeforeReading } from './output-set.js';
 import { readJson } from './read-text.js';
-import { siteSchema } from './site.js';
+import { siteSchema } from '../site.js';
 import { slug } from './slug.js';
 import { issueToError } from './zod-issue.js';
 
@@ -13,17 +23,11 @@ import { issueToError } from './zod-issue.js';
 // Keys the model does not have are dropped, so a newer plan.json with added fields still reads.
 
 const NOT_A_PLAN = 'a Crest plan (the plan.json written by crest plan, schemaVersion 1)';
-const MIN_BJD = 2.4e6;
-const MAX_BJD = 2.6e6;
-
-const num = z.number();
-const nonNegative = num.min(0, 'zero or more');
-const positive = num.positive('more than zero');
-const fraction = num.min(0, 'a fraction from 0 to 1').max(1, 'a fraction from 0 to 1');
-const bjd = num.min(MIN_BJD, 'a full BJD_TDB, 2400000 to 2600000').max(MAX_BJD, 'a full BJD_TDB, 2400000 to 2600000');
 /** Optional numbers: JSON writes a missing value as an absent key, a non-finite one as null. */
 const optional = <T extends z.ZodType<number>>(schema: T) => schema.nullish().transform((v) => v ?? undefined);
-const instant = z.iso.datetime({ offset: true, error: 'an ISO 8601 instant' }).transform((s) => new Date(s));
+/** The plan's output parts (src/plan/plan-schema.ts) have no null field: a null there is a number JSON could not write. */
+const withoutNulls = <T extends z.ZodType>(schema: T) => z.preprocess(dropNullKeys, schema);
+const instant = isoInstant.transform((s) => new Date(s));
 const instantOrNull = instant.nullable();
 const localDate = isoDate;
 
@@ -98,83 +102,19 @@ const nightSchema = z.object({
   moon: z.object({ illumination: fraction, rise: instantOrNull, set: instantOrNull, upDuringDark: z.boolean() }),
 });
 
-const visitSchema = z.object({
-  starId: z.string(),
-  localDate,
-  startUtc: z.iso.datetime({ offset: true, error: 'an ISO 8601 instant' }),
-  startLocal: z.string(),
-  midBjdTdb: bjd,
-  exposureSec: positive,
-  durationSec: positive,
-  airmass: num.min(1, 'an airmass of 1 or more'),
-  moonSeparationDeg: num.min(0, 'degrees from 0 to 180').max(180, 'degrees from 0 to 180'),
-  phases: z.array(z.object({ targetId: z.string(), phase: num, phaseErr: nonNegative })),
-  sigmaMps: positive,
-  sigmaEffMps: positive,
-  sigmaWhiteMps: positive,
-  snrPerPixel: positive,
-  kept: z.literal(true).optional(),
-  icsSequence: num.int('a whole number').min(0, 'a whole number, 0 or more').optional(),
-});
-
-const observedSchema = z.object({
-  targetId: z.string(),
-  starId: z.string(),
-  midBjdTdb: bjd,
-  midUtc: z.iso.datetime({ offset: true, error: 'an ISO 8601 instant' }),
-  localDate,
-  instrument: z.string(),
-  rvMps: optional(num),
-  rvErrMps: optional(positive),
-  sigmaWhiteMps: positive,
-  source: z.string(),
-});
-
-const orbitUpdateSchema = z.object({
-  points: nonNegative,
-  kMps: num,
-  kErrMps: nonNegative,
-  tcBjdTdb: bjd,
-  tcErrDays: nonNegative,
-  periodDays: positive,
-  periodErrDays: nonNegative,
-  catalogue: z.object({ kMps: optional(num), tcBjdTdb: bjd, tcErrDays: nonNegative, periodDays: positive, periodErrDays: nonNegative }),
-});
-
-const summarySchema = z.object({
-  targetId: z.string(),
-  starId: z.string(),
-  kind: z.enum(['ephemeris', 'search', 'monitor']),
-  priority: positive,
-  kMps: optional(nonNegative),
-  visits: num.int('a whole number').min(0, 'zero or more'),
-  hours: nonNegative,
-  sigmaKMps: optional(nonNegative),
-  kOverSigmaK: optional(nonNegative),
-  goal: optional(positive),
-  goalProbability: optional(fraction),
-  informationEfficiency: optional(nonNegative),
-  phaseErrAtEnd: optional(nonNegative),
-  priorVisits: optional(nonNegative),
-  priorKOverSigmaK: optional(nonNegative),
-  fit: orbitUpdateSchema.optional(),
-  peak: z.object({ periodDays: positive, kMps: nonNegative, fap: fraction, significant: z.boolean() }).optional(),
-  warnings: z.array(z.string()),
-});
-
 const planSchema = z
   .object({
     schemaVersion: z.literal(1, { error: NOT_A_PLAN }),
     generator: z.string(),
-    replan: z.object({ nowUtc: z.iso.datetime({ offset: true, error: 'an ISO 8601 instant' }), lostDates: z.array(localDate) }).optional(),
-    observed: z.array(observedSchema).optional(),
+    replan: replanSchema.optional(),
+    observed: z.array(withoutNulls(observedVisitSchema)).optional(),
     campaign: campaignSchema,
     nights: z.array(nightSchema),
     plannedDates: z.array(localDate),
-    backups: z.array(z.object({ localDate, rank: num, utilityGain: num })),
-    visits: z.array(visitSchema),
-    targets: z.array(summarySchema),
-    totals: z.object({ nights: nonNegative, visits: nonNegative, exposureHours: nonNegative, overheadHours: nonNegative, totalHours: nonNegative, utility: num }),
+    backups: z.array(backupNightSchema),
+    visits: z.array(withoutNulls(plannedVisitSchema)),
+    targets: z.array(withoutNulls(targetSummarySchema)),
+    totals: planTotalsSchema,
     warnings: z.array(z.string()),
   })
   .superRefine((plan, ctx) => {
@@ -210,7 +150,19 @@ export function planFromJson(data: unknown, file: string): Plan {
   }
   const result = planSchema.safeParse(data);
   if (!result.success) throw issueToError(file, data, result.error);
-  return result.data as unknown as Plan;
+  // Every part is typed by its schema but the campaign, whose instrument and observed rows are
+  // checked only for what names them (the report and map read no other field): the one cast.
+  const { campaign, ...rest } = result.data;
+  return { ...rest, campaign: campaign as unknown as Campaign };
+}
+
+/** A copy of `value` with every null-valued key removed, at every depth (arrays kept as they are, their items cleaned). */
+function dropNullKeys(value: unknown): unknown {
+  if (Array.isArray(value)) return value.map(dropNullKeys);
+  if (value === null || typeof value !== 'object') return value;
+  const out: Record<string, unknown> = {};
+  for (const [key, v] of Object.entries(value)) if (v !== null) out[key] = dropNullKeys(v);
+  return out;
 }
 
 /** Reads and checks a plan.json written by `crest plan`. */

@@ -1,5 +1,6 @@
 import path from 'node:path';
-import type { Instrument, Site } from '../model.js';
+import type { Site } from '../model.js';
+import type { Instrument } from '../rv/instrument.js';
 import { readInstrument } from './instrument.js';
 import { INSTRUMENTS_DIR, SITES_DIR } from './paths.js';
 import { listIds, resolveRef } from './resolve.js';

@@ -2,7 +2,8 @@
 // Pure: the campaign comes in already read and validated; nothing here reads or writes files.
 import { DateTime } from 'luxon';
 import { starBjdTdb } from '../astro/bjd.js';
-import type { Campaign, Plan, PlannedVisit, TargetSummary } from '../model.js';
+import type { Campaign } from './campaign.js';
+import type { Plan, PlannedVisit, TargetSummary } from './plan-schema.js';
 import { phaseErrCycles } from '../orbit/ephemeris.js';
 import { optimiseSchedule } from '../schedule/optimise.js';
 import type { ScheduleResult } from '../schedule/types.js';

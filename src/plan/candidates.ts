@@ -3,7 +3,9 @@
 // each with its airmass, precision and the predicted phase of each planet.
 import { DateTime } from 'luxon';
 import { starBjdTdb } from '../astro/bjd.js';
-import type { Campaign, Night, Target, VisitPhase, Window } from '../model.js';
+import type { Night, Target, Window } from '../model.js';
+import type { Campaign } from './campaign.js';
+import type { VisitPhase } from './plan-schema.js';
 import { overlapsTransit, phaseAt, phaseErrCycles, type TransitRule } from '../orbit/ephemeris.js';
 import { semiAmplitudeMps } from '../orbit/semi-amplitude.js';
 import { targetKMps } from '../orbit/target-k.js';

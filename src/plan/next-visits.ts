@@ -2,7 +2,7 @@
 // instant ranked by what one visit adds (the exact utility gain of the plan's objective per hour,
 // given every visit already made), and the order of the rest of that night (the optimiser on the
 // night's remaining visits). Nothing before the instant is counted as planned.
-import type { Campaign } from '../model.js';
+import type { Campaign } from './campaign.js';
 import { compileProblem } from '../schedule/compile.js';
 import { optimiseSchedule } from '../schedule/optimise.js';
 import { PlanState } from '../schedule/state.js';

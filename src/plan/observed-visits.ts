@@ -2,7 +2,9 @@
 // they belong to, and the white noise the information model gives them.
 import { DateTime } from 'luxon';
 import { starBjdTdb } from '../astro/bjd.js';
-import type { Campaign, ObservedVisit, Target } from '../model.js';
+import type { Target } from '../model.js';
+import type { Campaign } from './campaign.js';
+import type { ObservedVisit } from './plan-schema.js';
 import { visitPrecision } from '../rv/precision.js';
 import { whiteSigmaMps } from '../rv/star-noise.js';
 import { TYPICAL_AIRMASS } from '../rv/target-detect.js';

@@ -1,7 +1,8 @@
 // What the RVs taken so far change: each star's planets fitted jointly (src/rv/orbit-fit.ts) and
 // the campaign's targets updated to the fitted ephemeris and K, which the rest is planned with; a
 // blind-search star's periodogram peak is reported beside it (offered as a candidate, never adopted).
-import type { Campaign, ObservedVisit, OrbitUpdate, TargetSummary } from '../model.js';
+import type { Campaign } from './campaign.js';
+import type { ObservedVisit, OrbitUpdate, TargetSummary } from './plan-schema.js';
 import { blindPeak } from '../rv/blind-peak.js';
 import { fitOrbits, type FitPlanetPrior, type FitPoint } from '../rv/orbit-fit.js';
 import type { TargetSetup } from './candidates.js';

@@ -1,7 +1,9 @@
 // What the optimiser is given for a campaign: nights, windows, the RVs so far (fitted), the visits
 // already made or kept, the candidate visits still open and the time left, as one scheduling
 // problem. Shared by `crest plan` (build-plan.ts) and `crest next` (next-visits.ts).
-import type { Campaign, Night, ObservedVisit, Window } from '../model.js';
+import type { Night, Window } from '../model.js';
+import type { Campaign } from './campaign.js';
+import type { ObservedVisit } from './plan-schema.js';
 import type { ScheduleProblem } from '../schedule/types.js';
 import { computeNights } from '../sky/nights.js';
 import { computeWindows } from '../sky/visibility.js';

@@ -10,7 +10,8 @@
 // - choose-nights: nights before `now` that the previous plan chose or that hold prior visits
 //   inside the window are spent; the night in progress, when spent, stays granted for free;
 //   hours: the kept visits' hours are spent; given nights: the lost ones are dropped.
-import type { Campaign, ObservedVisit, Plan, PlannedVisit } from '../model.js';
+import type { Campaign } from './campaign.js';
+import type { ObservedVisit, Plan, PlannedVisit } from './plan-schema.js';
 import type { PriorVisit, ScheduleNight, ScheduleTimeModel } from '../schedule/types.js';
 import type { SlotDetail } from './candidates.js';
 import { eveningDate } from './observed-visits.js';

@@ -3,7 +3,8 @@
 // when it has a rotation period), and the span of the campaign. Used by the planner, the report
 // and the commands that read plans, so all of them judge visits by one model.
 import { DateTime } from 'luxon';
-import type { Campaign, Target } from '../model.js';
+import type { Target } from '../model.js';
+import type { Campaign } from './campaign.js';
 import { targetKMps } from '../orbit/target-k.js';
 import { buildStarModel, type StarModel } from '../rv/information-model.js';
 import { starNoise } from '../rv/star-noise.js';

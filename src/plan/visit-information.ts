@@ -1,7 +1,9 @@
 // The visits of a plan as the information model sees them: each visit's design rows, white
 // noise and night, for the star's model. Shared by the report's charts and the commands that
 // read a plan, so they judge the visits exactly as the planner did.
-import type { Campaign, Night, PlannedVisit } from '../model.js';
+import type { Night } from '../model.js';
+import type { Campaign } from './campaign.js';
+import type { PlannedVisit } from './plan-schema.js';
 import type { StarModel } from '../rv/information-model.js';
 import { informationVisits, type InformationVisit } from '../rv/information.js';
 import { starModel, starsOf } from './star-model.js';

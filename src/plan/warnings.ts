@@ -1,7 +1,8 @@
 // Warnings an observer must see: targets never observable, goals out of reach, ephemerides that
 // must be recovered before quadratures can be aimed at, transits too uncertain to avoid,
 // exposures the instrument cannot make.
-import type { Plan, TargetSummary, Window } from '../model.js';
+import type { Window } from '../model.js';
+import type { Plan, TargetSummary } from './plan-schema.js';
 import { nearestEpoch, type TransitRule, transitHalfWidthDays } from '../orbit/ephemeris.js';
 import { visitsNeeded } from '../rv/detect.js';
 import type { TargetSetup } from './candidates.js';

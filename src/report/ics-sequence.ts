@@ -1,4 +1,4 @@
-import type { Plan } from '../model.js';
+import type { Plan } from '../plan/plan-schema.js';
 import { sameCampaign, visitUids } from './ics-uid.js';
 
 /**

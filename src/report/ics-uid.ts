@@ -1,4 +1,4 @@
-import type { Plan, PlannedVisit } from '../model.js';
+import type { Plan, PlannedVisit } from '../plan/plan-schema.js';
 
 /**
  * Calendar UIDs (RFC 5545 3.8.4.7) that stay the same across re-plans: `<star>-<localDate>-<k>@crest`,

@@ -1,6 +1,6 @@
 import ical, { ICalEventStatus, type ICalCalendar } from 'ical-generator';
 import { DateTime } from 'luxon';
-import type { Plan, PlannedVisit } from '../model.js';
+import type { Plan, PlannedVisit } from '../plan/plan-schema.js';
 import { sameCampaign, visitUids } from './ics-uid.js';
 import { vtimezone } from './plan-ics-zone.js';
 import { phasesText } from './plan-rows.js';

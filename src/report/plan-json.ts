@@ -1,4 +1,4 @@
-import type { Plan } from '../model.js';
+import type { Plan } from '../plan/plan-schema.js';
 
 /** plan.json: the whole plan with every input resolved; Dates become ISO 8601 UTC strings. */
 export function renderPlanJson(plan: Plan): string {

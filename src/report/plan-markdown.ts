@@ -1,4 +1,4 @@
-import type { Plan } from '../model.js';
+import type { Plan } from '../plan/plan-schema.js';
 import { markdownTable } from './markdown.js';
 import { ADVISORY, historyLine, rvUpdateLines, nightHeading, OBSERVED_COLUMNS, observedRows, targetColumns, targetRows, totalsLine, VISIT_COLUMNS, visitRow, visitsByNight } from './plan-rows.js';
 

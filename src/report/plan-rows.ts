@@ -1,5 +1,5 @@
 import { DateTime } from 'luxon';
-import type { Plan, PlannedVisit, TargetSummary } from '../model.js';
+import type { Plan, PlannedVisit, TargetSummary } from '../plan/plan-schema.js';
 import { clockTime } from '../sky/local-time.js';
 import { fmt, percent, type Column } from './table.js';
 

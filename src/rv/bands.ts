@@ -1,9 +1,9 @@
 // Photometric bands a target list or an instrument profile may use, with the effective
 // wavelength and the photon flux of a zero-magnitude star ([Bessell1998]; Gaia G [Jordi2010]).
 
-/** Bands Crest knows: Johnson V, Cousins R and I, 2MASS-like J and H, Gaia G. */
-export const BANDS = ['V', 'R', 'I', 'J', 'H', 'G'] as const;
-export type BandId = (typeof BANDS)[number];
+import type { BandId } from '../model.js';
+
+export { BANDS, type BandId } from '../model.js';
 
 export interface Band {
   id: BandId;

@@ -1,6 +1,6 @@
 // Exposure choice and the cost of one visit.
 
-import type { Instrument } from '../model.js';
+import type { Instrument } from './instrument.js';
 import { visitsExact, type PhaseLayout } from './detect.js';
 import { oscillationMinExposureSec } from './oscillations.js';
 import { photonNoise, quadratureSum, visitPrecision, type PrecisionBudget, type PrecisionOptions, type PrecisionStar } from './precision.js';

@@ -2,7 +2,6 @@
 // pulls cells one at a time (a worker that finishes early takes the next cell), so the load
 // balances itself; since each cell has its own seeded stream, the map is identical for any number
 // of threads and equal to `injectionRecovery(input)` computed in one thread.
-import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
 import { semiAmplitudeMps } from '../orbit/semi-amplitude.js';
 import { prepareInjection, type InjectionInput, type InjectionMap } from './injection.js';
@@ -12,24 +11,19 @@ import type { CellResult } from './injection-worker.js';
 const WORKER_URL = new URL('./injection-worker.js', import.meta.url);
 
 export interface ParallelOptions {
-  /** Worker threads; default `defaultThreadCount(cells)`. */
-  threads?: number;
+  /** Worker threads (at most one per cell); the CLI passes the machine's core count (the core never reads it). */
+  threads: number;
   /** Called after every finished cell with (cells done, cells in all). */
   onProgress?: (done: number, total: number) => void;
 }
 
-/** os.availableParallelism(), never more than the number of cells, at least 1. */
-export function defaultThreadCount(cells: number): number {
-  return Math.max(1, Math.min(availableParallelism(), cells));
-}
-
 /** The injection–recovery map of `input`, computed by worker threads (see the file comment). */
-export async function injectionRecoveryParallel(input: InjectionInput, options: ParallelOptions = {}): Promise<InjectionMap> {
+export async function injectionRecoveryParallel(input: InjectionInput, options: ParallelOptions): Promise<InjectionMap> {
   // Validates the input and gives the grid and threshold before any thread starts.
   const setup = prepareInjection(input);
   const { periodsDays, massesEarth, starMassSun } = input;
   const total = periodsDays.length * massesEarth.length;
-  const threads = Math.max(1, Math.min(options.threads ?? defaultThreadCount(total), total));
+  const threads = Math.max(1, Math.min(options.threads, total));
   const flat = new Array<number>(total);
   let next = 0;
   let done = 0;

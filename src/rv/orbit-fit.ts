@@ -1,7 +1,7 @@
 // A star's RVs fitted jointly for all its planets: Keplerian curves, one offset γ per instrument,
 // Gaussian priors from the catalogue ephemeris, by Levenberg–Marquardt on whitened residuals.
 import { validationError } from '../errors.js';
-import type { FittedOrbit } from '../model.js';
+import type { FittedOrbit } from './fitted-orbit.js';
 import { periastronFromConjunctionBjd } from '../orbit/periastron-time.js';
 import { radialVelocityMps } from '../orbit/rv-curve.js';
 import { packedIndex } from './information-model.js';

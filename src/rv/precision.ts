@@ -4,7 +4,7 @@
 // factor is kept so a user can see where the budget goes.
 
 import { inputError } from '../errors.js';
-import type { Instrument } from '../model.js';
+import type { Instrument } from './instrument.js';
 import type { BandId } from './bands.js';
 import { magnitudeIn } from './dwarf-colours.js';
 import { referenceObservation, signalToNoise, instrumentEfficiency, type SignalToNoise } from './signal-to-noise.js';

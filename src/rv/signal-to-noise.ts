@@ -2,7 +2,7 @@
 // photons through the atmosphere, the entrance and the spectrograph; sky in the entrance;
 // detector read noise over the pixels summed across the order.
 
-import type { Instrument } from '../model.js';
+import type { Instrument } from './instrument.js';
 import { zeroPointPhotonFlux } from './bands.js';
 import { entranceCoupling, entranceSkyAreaArcsec2, seeingAtAirmassArcsec } from './seeing.js';
 

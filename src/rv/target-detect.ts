@@ -1,7 +1,8 @@
 // One target's detectability on one instrument: its planet (given, searched for, or
 // hypothetical), the exposure and σ per visit, visits and hours needed, and a plain verdict.
 
-import type { Instrument, Target } from '../model.js';
+import type { Target } from '../model.js';
+import type { Instrument } from './instrument.js';
 import { semiAmplitudeMps } from '../orbit/semi-amplitude.js';
 import {
   detectionProbability,

@@ -4,7 +4,7 @@
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
-import type { Plan } from '../../src/model.js';
+import type { Plan } from '../../src/plan/plan-schema.js';
 import { renderPlanJson } from '../../src/report/plan-json.js';
 import { fixturePlan } from '../report/fixture.js';
 import { runCliAsync, runCliInProcess, tempFiles } from './run-cli.js';

@@ -3,7 +3,7 @@ import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { parseInstrument, readInstrument, SOURCED_FIELDS } from '../../src/io/instrument.js';
 import { INSTRUMENTS_DIR } from '../../src/io/paths.js';
-import type { Instrument } from '../../src/model.js';
+import type { Instrument } from '../../src/rv/instrument.js';
 import { visitPrecision } from '../../src/rv/precision.js';
 
 const GOOD = {

@@ -2,7 +2,7 @@
 // event's TZID through the VTIMEZONE the file itself carries.
 import ICAL from 'ical.js';
 import { DateTime } from 'luxon';
-import type { Plan, PlannedVisit } from '../../src/model.js';
+import type { Plan, PlannedVisit } from '../../src/plan/plan-schema.js';
 import { secondOccurrence } from '../../src/report/plan-ics.js';
 
 export interface IcsEvent {

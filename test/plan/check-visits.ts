@@ -9,8 +9,9 @@
 // the altitude floor), where a few arcseconds of unmodelled aberration move the edge by minutes.
 import { DateTime } from 'luxon';
 import { altitudeForAirmassDeg, kastenYoungAirmass } from '../../src/astro/airmass.js';
-import type { Constraints, Plan, PlannedVisit, Site, Window } from '../../src/model.js';
-import { referenceWindows } from '../../src/sky/reference-sampler.js';
+import type { Constraints, Site, Window } from '../../src/model.js';
+import type { Plan, PlannedVisit } from '../../src/plan/plan-schema.js';
+import { referenceWindows } from '../../reference/sky-sampler.js';
 import { computeWindows } from '../../src/sky/visibility.js';
 
 /** The reference's tolerance: its one-minute grid (up to 1 min) plus the fast engine's measured 1.06 min (DEVELOPERS.md, sky engine). */

@@ -1,7 +1,7 @@
 // crest plan's properties on the bundled demo campaign (plan-properties.ts), on the plan.json
 // that `crest plan` wrote in the global setup (test/support/demo-plan.ts).
 import { beforeAll, describe, expect, it } from 'vitest';
-import type { Plan } from '../../src/model.js';
+import type { Plan } from '../../src/plan/plan-schema.js';
 import { photonNoise } from '../../src/rv/precision.js';
 import { demoPlan } from '../support/demo-plan.js';
 import { describePlanProperties } from './plan-properties.js';

@@ -3,7 +3,7 @@
 // (3.8.1.11), SEQUENCE (3.8.7.4) and a deterministic DTSTAMP (3.8.7.2).
 import { beforeAll, describe, expect, it } from 'vitest';
 import { planFromJson } from '../../src/io/plan-json.js';
-import type { Plan, PlannedVisit } from '../../src/model.js';
+import type { Plan, PlannedVisit } from '../../src/plan/plan-schema.js';
 import { withIcsSequences } from '../../src/report/ics-sequence.js';
 import { renderPlanIcs } from '../../src/report/plan-ics.js';
 import { renderPlanJson } from '../../src/report/plan-json.js';

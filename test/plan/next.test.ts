@@ -1,7 +1,7 @@
 // crest next against a brute-force choice: at a set of instants, the stars it offers are those the
 // one-minute reference sampler finds inside their windows for the whole visit, and its first star
 // has the largest utility gain per hour over every one of them, each gain recomputed from scratch
-// with the slow reference (src/schedule/reference.ts: fresh information accumulators, the visits
+// with the slow reference (reference/schedule.ts: fresh information accumulators, the visits
 // already made included). Invented campaign: the demo 18 days in (examples/under-way).
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -9,11 +9,11 @@ import { describe, expect, it } from 'vitest';
 import { readCampaign } from '../../src/io/campaign.js';
 import { nextVisits } from '../../src/plan/next-visits.js';
 import { planInputs } from '../../src/plan/plan-inputs.js';
-import { referenceUtility } from '../../src/schedule/reference.js';
+import { referenceUtility } from '../../reference/schedule.js';
 import { starBjdTdb } from '../../src/astro/bjd.js';
 import { overlapsTransit } from '../../src/orbit/ephemeris.js';
 import { starTargets, transitRule } from '../../src/plan/candidates.js';
-import { referenceWindows } from '../../src/sky/reference-sampler.js';
+import { referenceWindows } from '../../reference/sky-sampler.js';
 
 const CAMPAIGN = path.join(path.dirname(fileURLToPath(import.meta.url)), '../../examples/under-way/campaign.yaml');
 const SETTINGS = { searchGridSize: 48, overshootWeight: 0.1 };

@@ -5,7 +5,7 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { readCampaign } from '../../src/io/campaign.js';
-import type { Campaign } from '../../src/model.js';
+import type { Campaign } from '../../src/plan/campaign.js';
 import { planInputs } from '../../src/plan/plan-inputs.js';
 
 const CAMPAIGN = path.join(path.dirname(fileURLToPath(import.meta.url)), '../../examples/under-way/campaign.yaml');

@@ -2,7 +2,7 @@
 // inside the slow reference sampler's windows and the dark span, no overlaps, spacing and budgets;
 // K/sigma_K recomputed from plan.csv; plan.ics read back with ical.js.
 import { describe, expect, it } from 'vitest';
-import type { Plan } from '../../src/model.js';
+import type { Plan } from '../../src/plan/plan-schema.js';
 import { phaseAt } from '../../src/orbit/ephemeris.js';
 import { PLAN_CSV_HEADER, renderPlanCsv } from '../../src/report/plan-csv.js';
 import { renderPlanIcs } from '../../src/report/plan-ics.js';

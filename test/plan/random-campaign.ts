@@ -8,7 +8,8 @@ import { DateTime } from 'luxon';
 import { readInstrument } from '../../src/io/instrument.js';
 import { INSTRUMENTS_DIR, SITES_DIR } from '../../src/io/paths.js';
 import { readSite } from '../../src/io/site.js';
-import type { Campaign, Site, Target, TimeModel, TwilightLevel } from '../../src/model.js';
+import type { Site, Target, TimeModel, TwilightLevel } from '../../src/model.js';
+import type { Campaign } from '../../src/plan/campaign.js';
 import { createRng, type Rng } from '../../src/rv/random.js';
 
 const SOUTH = ['la-silla', 'paranal', 'cerro-tololo', 'siding-spring', 'sutherland'];

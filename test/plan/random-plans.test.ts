@@ -1,6 +1,6 @@
 // crest plan's properties (plan-properties.ts) on 50 random small campaigns (random-campaign.ts).
 import { beforeAll, describe, expect, it } from 'vitest';
-import type { Plan } from '../../src/model.js';
+import type { Plan } from '../../src/plan/plan-schema.js';
 import { buildPlan } from '../../src/plan/build-plan.js';
 import { describePlanProperties, WEATHER_TRIALS } from './plan-properties.js';
 import { randomCampaign } from './random-campaign.js';

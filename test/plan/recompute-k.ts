@@ -4,7 +4,7 @@
 // alone. Only the star's linearisation point (reference epoch and sample ephemerides) comes from
 // the plan's own model builder, src/plan/star-model.ts.
 import { parse } from 'csv-parse/sync';
-import type { Plan, TargetSummary } from '../../src/model.js';
+import type { Plan, TargetSummary } from '../../src/plan/plan-schema.js';
 import { starModel, starsOf } from '../../src/plan/star-model.js';
 import { nightMiddleJd } from '../../src/plan/visit-information.js';
 import { denseKVariances } from '../support/dense-information.js';

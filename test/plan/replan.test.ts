@@ -2,7 +2,7 @@
 // lost nights hold no visit, the time model's budget still holds, and the re-planned plans keep
 // every property of a plan (plan-properties.ts). On random small campaigns and on the demo.
 import { beforeAll, describe, expect, it } from 'vitest';
-import type { Plan } from '../../src/model.js';
+import type { Plan } from '../../src/plan/plan-schema.js';
 import { buildPlan } from '../../src/plan/build-plan.js';
 import { demoPlan } from '../support/demo-plan.js';
 import { describePlanProperties, WEATHER_TRIALS } from './plan-properties.js';

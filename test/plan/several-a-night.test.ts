@@ -3,7 +3,8 @@
 // itself catching a broken plan, and the option taken where it pays.
 import { beforeAll, describe, expect, it } from 'vitest';
 import { readCampaign } from '../../src/io/campaign.js';
-import type { Campaign, Plan } from '../../src/model.js';
+import type { Campaign } from '../../src/plan/campaign.js';
+import type { Plan } from '../../src/plan/plan-schema.js';
 import { buildPlan } from '../../src/plan/build-plan.js';
 import { checkVisits } from './check-visits.js';
 import { describePlanProperties, WEATHER_TRIALS } from './plan-properties.js';

@@ -8,9 +8,10 @@ import { DateTime } from 'luxon';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { readCampaign } from '../../src/io/campaign.js';
 import { visitPrecision } from '../../src/rv/precision.js';
-import type { Campaign, Plan } from '../../src/model.js';
+import type { Campaign } from '../../src/plan/campaign.js';
+import type { Plan } from '../../src/plan/plan-schema.js';
 import { buildPlan } from '../../src/plan/build-plan.js';
-import { referenceWindows } from '../../src/sky/reference-sampler.js';
+import { referenceWindows } from '../../reference/sky-sampler.js';
 import { DEMO_CAMPAIGN } from '../../src/io/paths.js';
 import { fixture } from './fixtures.js';
 

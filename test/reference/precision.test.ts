@@ -2,7 +2,7 @@ import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { readInstrument } from '../../src/io/instrument.js';
 import { INSTRUMENTS_DIR } from '../../src/io/paths.js';
-import type { Instrument } from '../../src/model.js';
+import type { Instrument } from '../../src/rv/instrument.js';
 import { photonNoise, visitPrecision } from '../../src/rv/precision.js';
 import { entranceCoupling, seeingAtAirmassArcsec } from '../../src/rv/seeing.js';
 import { instrumentEfficiency, referenceObservation, signalToNoise } from '../../src/rv/signal-to-noise.js';

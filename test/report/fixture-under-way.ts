@@ -3,7 +3,8 @@
 // three of Mirador-7 with a second planet, c, added, so a test can derive every folded point by
 // hand; a fitted orbit for Teyu-3 and a peak for Alba. Invented.
 
-import type { ObservedVisit, OrbitUpdate, Plan, Target } from '../../src/model.js';
+import type { Target } from '../../src/model.js';
+import type { ObservedVisit, OrbitUpdate, Plan } from '../../src/plan/plan-schema.js';
 import { fixturePlan, TARGETS } from './fixture.js';
 
 /** The fitted ephemeris and K of Teyu-3 (the catalogue: P 3.2174, Tc 2461480.3121, K 5.9). */

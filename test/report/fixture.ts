@@ -2,7 +2,10 @@
 // depend on the scheduler. Every star, site and value is made up. Night times are plausible for a
 // site at 30° S in April (UTC−4), written as rounded clock times, not computed.
 
-import type { Campaign, Instrument, Night, Plan, PlannedVisit, Site, Target, TargetSummary } from '../../src/model.js';
+import type { Night, Site, Target } from '../../src/model.js';
+import type { Campaign } from '../../src/plan/campaign.js';
+import type { Instrument } from '../../src/rv/instrument.js';
+import type { Plan, PlannedVisit, TargetSummary } from '../../src/plan/plan-schema.js';
 import { phaseAt, phaseErrCycles } from '../../src/orbit/ephemeris.js';
 
 const site: Site = {

@@ -1,6 +1,6 @@
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { beforeAll, describe, expect, it } from 'vitest';
-import type { Plan } from '../../src/model.js';
+import type { Plan } from '../../src/plan/plan-schema.js';
 import { renderReportHtml } from '../../src/report/html/report-html.js';
 import { ADVISORY } from '../../src/report/plan-rows.js';
 import { fixturePlan } from './fixture.js';

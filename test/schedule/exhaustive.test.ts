@@ -1,8 +1,8 @@
 // The optimiser against exhaustive search on small problems: within 2% of the best utility.
 import { describe, expect, it } from 'vitest';
 import { optimiseSchedule } from '../../src/schedule/optimise.js';
-import { exhaustiveOptimum, referenceUtility, scheduleViolations } from '../../src/schedule/reference.js';
-import { syntheticProblem, type SyntheticSpec } from '../../src/schedule/synthetic.js';
+import { exhaustiveOptimum, referenceUtility, scheduleViolations } from '../../reference/schedule.js';
+import { syntheticProblem, type SyntheticSpec } from '../../reference/synthetic.js';
 
 const settings = { searchGridSize: 12, overshootWeight: 0.1 };
 

@@ -2,9 +2,9 @@ import { describe, expect, it } from 'vitest';
 import { createRng } from '../../src/rv/random.js';
 import { compileProblem } from '../../src/schedule/compile.js';
 import { searchLogScore, searchStatsLength, updateSearchStats } from '../../src/schedule/objective-search.js';
-import { referenceKOverSigmaK } from '../../src/schedule/reference.js';
+import { referenceKOverSigmaK } from '../../reference/schedule.js';
 import { PlanState } from '../../src/schedule/state.js';
-import { syntheticProblem } from '../../src/schedule/synthetic.js';
+import { syntheticProblem } from '../../reference/synthetic.js';
 import { goalValue } from '../../src/schedule/utility.js';
 
 describe('the plan state against a recomputation from scratch', () => {

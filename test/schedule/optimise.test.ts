@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { optimiseSchedule } from '../../src/schedule/optimise.js';
-import { referenceKOverSigmaK, referenceUtility, scheduleViolations } from '../../src/schedule/reference.js';
-import { syntheticProblem, type SyntheticSpec } from '../../src/schedule/synthetic.js';
+import { referenceKOverSigmaK, referenceUtility, scheduleViolations } from '../../reference/schedule.js';
+import { syntheticProblem, type SyntheticSpec } from '../../reference/synthetic.js';
 import type { CandidateSlot, ScheduleProblem, ScheduleResult, ScheduleTimeModel } from '../../src/schedule/types.js';
 import { onePlanetStar } from '../support/one-planet.js';
 

@@ -4,8 +4,8 @@ import { describe, expect, it } from 'vitest';
 import { buildStarModel } from '../../src/rv/information-model.js';
 import { createRng } from '../../src/rv/random.js';
 import { optimiseSchedule } from '../../src/schedule/optimise.js';
-import { referenceKOverSigmaK, referenceUtility } from '../../src/schedule/reference.js';
-import { syntheticProblem } from '../../src/schedule/synthetic.js';
+import { referenceKOverSigmaK, referenceUtility } from '../../reference/schedule.js';
+import { syntheticProblem } from '../../reference/synthetic.js';
 import type { CandidateSlot, PriorVisit, ScheduleProblem } from '../../src/schedule/types.js';
 import { simulateWeather } from '../../src/schedule/weather.js';
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { referenceGreedy, referenceUtility, scheduleViolations } from '../../src/schedule/reference.js';
-import { syntheticProblem } from '../../src/schedule/synthetic.js';
+import { referenceGreedy, referenceUtility, scheduleViolations } from '../../reference/schedule.js';
+import { syntheticProblem } from '../../reference/synthetic.js';
 
 describe('the from-scratch greedy of the bench', () => {
   it('returns a feasible schedule whose utility it reports honestly, and stops when nothing adds', () => {

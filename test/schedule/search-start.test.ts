@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { optimiseSchedule } from '../../src/schedule/optimise.js';
-import { referenceUtility, scheduleViolations } from '../../src/schedule/reference.js';
+import { referenceUtility, scheduleViolations } from '../../reference/schedule.js';
 import { onePlanetStar } from '../support/one-planet.js';
 import type { CandidateSlot, ScheduleProblem } from '../../src/schedule/types.js';
 

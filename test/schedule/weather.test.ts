@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { optimiseSchedule } from '../../src/schedule/optimise.js';
-import { referenceKOverSigmaK } from '../../src/schedule/reference.js';
-import { syntheticProblem } from '../../src/schedule/synthetic.js';
+import { referenceKOverSigmaK } from '../../reference/schedule.js';
+import { syntheticProblem } from '../../reference/synthetic.js';
 import type { ScheduleProblem } from '../../src/schedule/types.js';
 import { simulateWeather } from '../../src/schedule/weather.js';
 

@@ -6,7 +6,7 @@ import { describe, expect, it } from 'vitest';
 import type { Constraints, Site, Target, TwilightLevel } from '../../src/model.js';
 import { createRng } from '../../src/rv/random.js';
 import { computeNight } from '../../src/sky/nights.js';
-import { compareWithReference, referenceWindows, type ReferenceWindow } from '../../src/sky/reference-sampler.js';
+import { compareWithReference, referenceWindows, type ReferenceWindow } from '../../reference/sky-sampler.js';
 import { computeWindows } from '../../src/sky/visibility.js';
 import type { Window } from '../../src/model.js';
 

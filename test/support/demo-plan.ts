@@ -3,7 +3,7 @@
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { inject } from 'vitest';
-import type { Plan } from '../../src/model.js';
+import type { Plan } from '../../src/plan/plan-schema.js';
 import { planFromJson } from '../../src/io/plan-json.js';
 import type { CliResult } from '../cli/run-cli.js';
 

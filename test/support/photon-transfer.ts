@@ -5,7 +5,7 @@
 // (S/N² per pixel over the pixel's velocity width) and a number of lines proportional to the
 // logarithmic wavelength coverage, σ ∝ Θ^(3/2) √(Δv_pixel / ln(λmax/λmin)) / (S/N per pixel).
 
-import type { Instrument } from '../../src/model.js';
+import type { Instrument } from '../../src/rv/instrument.js';
 
 const C_KMS = 299792.458;
 

@@ -1,5 +1,5 @@
 import type { TopLevelSpec } from 'vega-lite';
-import type { Plan } from '../../model.js';
+import type { Plan } from '../../plan/plan-schema.js';
 import { OKABE_ITO, ACCENT_PALE, CAUTION_PALE, MUTED } from './palette.js';
 import type { ChartFigure } from './figure.js';
 

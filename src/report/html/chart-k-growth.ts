@@ -1,5 +1,5 @@
 import type { TopLevelSpec } from 'vega-lite';
-import type { Plan, TargetSummary } from '../../model.js';
+import type { Plan, TargetSummary } from '../../plan/plan-schema.js';
 import { starVisitInformation } from '../../plan/visit-information.js';
 import { StarInformation } from '../../rv/information.js';
 import { fmt } from '../table.js';

@@ -1,5 +1,6 @@
 import type { TopLevelSpec } from 'vega-lite';
-import type { Plan, SearchSpec, Target, TargetSummary } from '../../model.js';
+import type { SearchSpec, Target } from '../../model.js';
+import type { Plan, TargetSummary } from '../../plan/plan-schema.js';
 import { massLimitTable, MIN_VISITS, type MassLimitRow } from '../../rv/detect.js';
 import { fmt } from '../table.js';
 import type { ChartFigure } from './figure.js';

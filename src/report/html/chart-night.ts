@@ -1,6 +1,7 @@
 import type { TopLevelSpec } from 'vega-lite';
 import { altitudeForAirmassDeg } from '../../astro/airmass.js';
-import type { Night, Plan, PlannedVisit } from '../../model.js';
+import type { Night } from '../../model.js';
+import type { Plan, PlannedVisit } from '../../plan/plan-schema.js';
 import { localNoon } from '../../sky/local-time.js';
 import { altitudeDeg, preparePosition, siteClock } from '../../sky/target-position.js';
 import { fmt } from '../table.js';

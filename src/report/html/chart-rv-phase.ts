@@ -1,5 +1,5 @@
 import type { TopLevelSpec } from 'vega-lite';
-import type { Plan, TargetSummary } from '../../model.js';
+import type { Plan, TargetSummary } from '../../plan/plan-schema.js';
 import { planetSignalShape } from '../../orbit/signal-shape.js';
 import { fmt } from '../table.js';
 import type { ChartFigure } from './figure.js';

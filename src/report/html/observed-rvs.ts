@@ -1,4 +1,5 @@
-import type { Plan, Target, TargetSummary } from '../../model.js';
+import type { Target } from '../../model.js';
+import type { Plan, TargetSummary } from '../../plan/plan-schema.js';
 import { phaseAt } from '../../orbit/ephemeris.js';
 import { planetSignalShape } from '../../orbit/signal-shape.js';
 import { starsOf } from '../../plan/star-model.js';

@@ -1,4 +1,4 @@
-import type { Plan } from '../../model.js';
+import type { Plan } from '../../plan/plan-schema.js';
 import { scheduleNights } from '../../plan/candidates.js';
 import { priorVisits } from '../../plan/replan.js';
 import type { StarModel } from '../../rv/information-model.js';

@@ -1,5 +1,5 @@
 import { extent } from '../../extent.js';
-import type { Plan, TargetSummary } from '../../model.js';
+import type { Plan, TargetSummary } from '../../plan/plan-schema.js';
 import { fmt, percent, type Column } from '../table.js';
 import { searchMassLimit } from './chart-mass-limit.js';
 import { equivalentSigmaMps, targetOf, visitsOf } from './target-visits.js';

@@ -1,4 +1,5 @@
-import type { Plan, SearchSpec, Target, TargetSummary } from '../../model.js';
+import type { SearchSpec, Target } from '../../model.js';
+import type { Plan, TargetSummary } from '../../plan/plan-schema.js';
 import { ADVISORY, targetColumns, targetRows, targetRvUpdateLines, totalsLine, visitsByNight } from '../plan-rows.js';
 import { calendarFigure } from './chart-calendar.js';
 import { detectionMapFigure, type DetectionMapData } from './chart-detection-map.js';

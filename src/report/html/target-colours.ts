@@ -1,4 +1,4 @@
-import type { Plan } from '../../model.js';
+import type { Plan } from '../../plan/plan-schema.js';
 import { CATEGORY_COLOURS } from './palette.js';
 
 const DASHES: readonly number[][] = [[1, 0], [6, 3], [2, 2]];

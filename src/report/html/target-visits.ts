@@ -1,4 +1,5 @@
-import type { Plan, PlannedVisit, Target } from '../../model.js';
+import type { Target } from '../../model.js';
+import type { Plan, PlannedVisit } from '../../plan/plan-schema.js';
 
 /** A star's planned visits in time order. */
 export function visitsOf(plan: Plan, starId: string): PlannedVisit[] {

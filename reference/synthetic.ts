@@ -3,9 +3,9 @@
 // day is shorter than a solar one, common practice), evenly spaced candidate slots in that window,
 // one circular planet per ephemeris star, with catalogue errors on Tc and P that the star's
 // information model carries as priors (src/rv/information-model.ts). All values are made up.
-import { buildStarModel } from '../rv/information-model.js';
-import { createRng, type Rng } from '../rv/random.js';
-import type { CandidateSlot, ScheduleNight, ScheduleProblem, ScheduleTarget, ScheduleTimeModel } from './types.js';
+import { buildStarModel } from '../src/rv/information-model.js';
+import { createRng, type Rng } from '../src/rv/random.js';
+import type { CandidateSlot, ScheduleNight, ScheduleProblem, ScheduleTarget, ScheduleTimeModel } from '../src/schedule/types.js';
 
 export interface SyntheticSpec {
   targets: number;

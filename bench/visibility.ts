@@ -1,12 +1,12 @@
 // Visibility windows for 200 targets over 180 nights: fast engine against the one-minute reference.
-import { readSite } from '../io/site.js';
-import { SITES_DIR } from '../io/paths.js';
-import type { Constraints, Target } from '../model.js';
-import { createRng } from '../rv/random.js';
-import { computeNights } from '../sky/nights.js';
-import { compareWithReference, referenceWindows } from '../sky/reference-sampler.js';
-import { localDateRange } from '../sky/local-time.js';
-import { computeWindows } from '../sky/visibility.js';
+import { readSite } from '../src/io/site.js';
+import { SITES_DIR } from '../src/io/paths.js';
+import type { Constraints, Target } from '../src/model.js';
+import { createRng } from '../src/rv/random.js';
+import { computeNights } from '../src/sky/nights.js';
+import { compareWithReference, referenceWindows } from '../reference/sky-sampler.js';
+import { localDateRange } from '../src/sky/local-time.js';
+import { computeWindows } from '../src/sky/visibility.js';
 import { timeSec, type BenchModule } from './types.js';
 
 const TARGETS = 200;

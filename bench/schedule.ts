@@ -1,10 +1,10 @@
 // Scheduler bench: a 100-target, 180-night choose-20 problem (time, utility); the ratio of the
 // optimiser's utility to the exhaustive optimum on small problems; and a 1,000-target, 365-night
 // scale line with its time and the process's peak resident memory. All problems are synthetic.
-import { optimiseSchedule } from '../schedule/optimise.js';
-import { exhaustiveOptimum, referenceGreedy } from '../schedule/reference.js';
-import { syntheticProblem, type SyntheticSpec } from '../schedule/synthetic.js';
-import { simulateWeather } from '../schedule/weather.js';
+import { optimiseSchedule } from '../src/schedule/optimise.js';
+import { exhaustiveOptimum, referenceGreedy } from '../reference/schedule.js';
+import { syntheticProblem, type SyntheticSpec } from '../reference/synthetic.js';
+import { simulateWeather } from '../src/schedule/weather.js';
 import { timeSec, type BenchModule } from './types.js';
 
 function campaign(targets: number, nights: number, seed: number): SyntheticSpec {

@@ -1,13 +1,13 @@
 // `crest next` bench: the answer for the demo campaign and for the demo 18 days in (observed
 // visits and RVs), at a few instants of one night (median time), beside the brute-force ranking
-// of the same candidates with every gain recomputed from scratch (schedule/reference.ts).
+// of the same candidates with every gain recomputed from scratch (reference/schedule.ts).
 import path from 'node:path';
-import { readCampaign } from '../io/campaign.js';
-import { DEMO_CAMPAIGN, PACKAGE_ROOT } from '../io/paths.js';
-import type { Campaign } from '../model.js';
-import { nextVisits } from '../plan/next-visits.js';
-import { planInputs } from '../plan/plan-inputs.js';
-import { referenceUtility } from '../schedule/reference.js';
+import { readCampaign } from '../src/io/campaign.js';
+import { DEMO_CAMPAIGN, PACKAGE_ROOT } from '../src/io/paths.js';
+import type { Campaign } from '../src/plan/campaign.js';
+import { nextVisits } from '../src/plan/next-visits.js';
+import { planInputs } from '../src/plan/plan-inputs.js';
+import { referenceUtility } from '../reference/schedule.js';
 import { timeSec, type BenchModule } from './types.js';
 
 const INSTANTS = ['2027-03-21T00:30:00Z', '2027-03-21T03:40:00Z', '2027-03-21T06:10:00Z', '2027-03-21T08:50:00Z', '2027-03-22T02:00:00Z'];

@@ -1,11 +1,11 @@
 // Slow reference implementations for tests and the bench: the utility of a set of slots computed
 // from scratch (each star's information from a fresh accumulator, 3x3 determinants by elimination), a feasibility check written
 // straight from the constraints, and exhaustive search for the best schedule of a small problem.
-import { compileProblem } from './compile.js';
-import type { SearchGrid } from './objective-search.js';
-import { informationVisits, kVariances } from '../rv/information.js';
-import type { CandidateSlot, PriorVisit, ScheduleProblem } from './types.js';
-import { goalValue, overshootAfterPrior } from './utility.js';
+import { compileProblem } from '../src/schedule/compile.js';
+import type { SearchGrid } from '../src/schedule/objective-search.js';
+import { informationVisits, kVariances } from '../src/rv/information.js';
+import type { CandidateSlot, PriorVisit, ScheduleProblem } from '../src/schedule/types.js';
+import { goalValue, overshootAfterPrior } from '../src/schedule/utility.js';
 
 export interface ReferenceSettings {
   searchGridSize: number;

@@ -1,16 +1,16 @@
 // The slow reference for visibility windows (tests and bench only): astronomy-engine's Horizon every minute.
 import { Body, DefineStar, Equator, Horizon, MakeTime, SiderealTime } from 'astronomy-engine';
-import { kastenYoungAirmass } from '../astro/airmass.js';
-import { observerOf } from '../astro/bodies.js';
-import { properMotionJ2000 } from '../astro/position.js';
-import { pressureHpaAtElevation } from '../astro/pressure.js';
-import { apparentAltitudeDeg } from '../astro/refraction.js';
-import { julianYearsSinceJ2000 } from '../astro/time-scales.js';
-import { angleBetweenDeg, type Vec3 } from '../astro/vectors.js';
-import type { Constraints, Night, Site, Target, Window } from '../model.js';
-import { maskAltitudeDeg } from './horizon-mask.js';
-import { requiredMoonSeparationDeg } from './moon-track.js';
-import { MOON_UP_ALTITUDE_DEG } from './nights.js';
+import { kastenYoungAirmass } from '../src/astro/airmass.js';
+import { observerOf } from '../src/astro/bodies.js';
+import { properMotionJ2000 } from '../src/astro/position.js';
+import { pressureHpaAtElevation } from '../src/astro/pressure.js';
+import { apparentAltitudeDeg } from '../src/astro/refraction.js';
+import { julianYearsSinceJ2000 } from '../src/astro/time-scales.js';
+import { angleBetweenDeg, type Vec3 } from '../src/astro/vectors.js';
+import type { Constraints, Night, Site, Target, Window } from '../src/model.js';
+import { maskAltitudeDeg } from '../src/sky/horizon-mask.js';
+import { requiredMoonSeparationDeg } from '../src/sky/moon-track.js';
+import { MOON_UP_ALTITUDE_DEG } from '../src/sky/nights.js';
 
 export interface ReferenceWindow {
   targetId: string;

@@ -1,5 +1,5 @@
 // `npm run bench`: runs every bench module and prints one JSON line for each.
-// To add a bench, write src/bench/<name>.ts exporting a BenchModule and list it below.
+// To add a bench, write bench/<name>.ts exporting a BenchModule and list it below.
 import type { BenchModule } from './types.js';
 import { visibilityBench } from './visibility.js';
 import { scheduleBenches } from './schedule.js';

@@ -3,10 +3,10 @@
 // and once on the default count; trials per second of each, the speedup, and the machine's load
 // average before the runs (other processes on the machine lower the speedup).
 import { availableParallelism, loadavg } from 'node:os';
-import type { InjectionInput } from '../rv/injection.js';
-import { logSpaced } from '../rv/injection-map.js';
-import { defaultThreadCount, injectionRecoveryParallel } from '../rv/injection-worker-pool.js';
-import { createRng } from '../rv/random.js';
+import type { InjectionInput } from '../src/rv/injection.js';
+import { logSpaced } from '../src/rv/injection-map.js';
+import { injectionRecoveryParallel } from '../src/rv/injection-worker-pool.js';
+import { createRng } from '../src/rv/random.js';
 import type { BenchModule } from './types.js';
 
 function benchInput(): InjectionInput {
@@ -34,7 +34,7 @@ async function timedMap(input: InjectionInput, threads: number): Promise<number>
 async function run(): Promise<Record<string, unknown>> {
   const input = benchInput();
   const trials = input.periodsDays.length * input.massesEarth.length * input.trialsPerCell;
-  const threads = defaultThreadCount(input.periodsDays.length * input.massesEarth.length);
+  const threads = Math.min(availableParallelism(), input.periodsDays.length * input.massesEarth.length);
   const loadAvg1 = loadavg()[0]!;
   const sec1 = await timedMap(input, 1);
   const secN = await timedMap(input, threads);

@@ -1,0 +1,138 @@
+import { z } from 'zod';
+import { bjd, fraction, isoDate, isoInstant, nonNegative, num, positive, wholeNonNegative } from '../field-schemas.js';
+import type { Night } from '../model.js';
+import type { Campaign } from './campaign.js';
+import { fittedOrbitSchema } from '../rv/fitted-orbit.js';
+
+// The plan's output parts (plan.json, docs/design.md "Data model"): each shape is written once,
+// here, as a zod schema; the types are inferred from it and io/plan-json.ts reads a saved plan
+// with the same schemas. Units are in the names.
+
+/** Predicted orbital phase of one planet at a visit (0 = mid-transit) and its 1-sigma error. */
+export const visitPhaseSchema = z.object({ targetId: z.string(), phase: num, phaseErr: nonNegative });
+export type VisitPhase = z.output<typeof visitPhaseSchema>;
+
+/** One planned observation: a visit observes a star (and so every planet of it). */
+export const plannedVisitSchema = z.object({
+  starId: z.string(),
+  localDate: isoDate,
+  /** Start of the visit block, acquisition included (the exposure starts acquisitionSec later), ISO 8601 UTC. */
+  startUtc: isoInstant,
+  /** The same instant (start of the block, acquisition included) in the site's zone, ISO 8601 with offset. */
+  startLocal: z.string(),
+  /** Mid-exposure time as BJD_TDB. */
+  midBjdTdb: bjd,
+  exposureSec: positive,
+  /** Exposure plus readout plus acquisition. */
+  durationSec: positive,
+  airmass: num.min(1, 'an airmass of 1 or more'),
+  moonSeparationDeg: num.min(0, 'degrees from 0 to 180').max(180, 'degrees from 0 to 180'),
+  /** Predicted phase of each planet of the star that has an ephemeris. */
+  phases: z.array(visitPhaseSchema),
+  /** Per-visit precision (photon + floor), with all the jitter, and its white part (without the nightly share). */
+  sigmaMps: positive,
+  sigmaEffMps: positive,
+  sigmaWhiteMps: positive,
+  /** S/N per pixel at the instrument's reference wavelength. */
+  snrPerPixel: positive,
+  /** A visit before the re-planning time (`--now`), kept as it was planned; absent for visits ahead. */
+  kept: z.literal(true).optional(),
+  /** plan.ics SEQUENCE (RFC 5545 3.8.7.4) of this visit's event, counted across re-plans; absent when 0. */
+  icsSequence: wholeNonNegative.optional(),
+});
+export type PlannedVisit = z.output<typeof plannedVisitSchema>;
+
+/** A visit already made, from the campaign's observed file. */
+export const observedVisitSchema = z.object({
+  /** The row's id as given (a star or a planet) and the star it observed. */
+  targetId: z.string(),
+  starId: z.string(),
+  /** Mid-exposure, BJD_TDB (converted from UTC when the file gave UTC) and ISO 8601 UTC. */
+  midBjdTdb: bjd,
+  midUtc: isoInstant,
+  /** The local date of the evening the visit belongs to (site zone), YYYY-MM-DD. */
+  localDate: isoDate,
+  instrument: z.string(),
+  /** Measured RV and its uncertainty (m/s), when the file gives them. */
+  rvMps: num.optional(),
+  rvErrMps: positive.optional(),
+  /** The white noise the information model gives this visit: rvErrMps (or the instrument's σ) with the white jitter. */
+  sigmaWhiteMps: positive,
+  /** `observed.csv row 3`. */
+  source: z.string(),
+});
+export type ObservedVisit = z.output<typeof observedVisitSchema>;
+
+/** The re-planning state: the instant before which nothing moves, and nights lost to weather or faults. */
+export const replanSchema = z.object({ nowUtc: isoInstant, lostDates: z.array(isoDate) });
+export type Replan = z.output<typeof replanSchema>;
+
+/** What a fit of the RVs so far changed for one planet (1-sigma errors). */
+export const orbitUpdateSchema = fittedOrbitSchema.extend({
+  points: nonNegative,
+  catalogue: z.object({ kMps: num.optional(), tcBjdTdb: bjd, tcErrDays: nonNegative, periodDays: positive, periodErrDays: nonNegative }),
+});
+export type OrbitUpdate = z.output<typeof orbitUpdateSchema>;
+
+export const targetSummarySchema = z.object({
+  targetId: z.string(),
+  starId: z.string(),
+  kind: z.enum(['ephemeris', 'search', 'monitor']),
+  priority: positive,
+  kMps: nonNegative.optional(),
+  visits: wholeNonNegative,
+  hours: nonNegative,
+  sigmaKMps: nonNegative.optional(),
+  kOverSigmaK: nonNegative.optional(),
+  goal: positive.optional(),
+  /** Probability of reaching the goal under the site's weather (simulated). */
+  goalProbability: fraction.optional(),
+  /** (sigma^2/N) / Var(K): 1 is the best any schedule can do. */
+  informationEfficiency: nonNegative.optional(),
+  /** 1-sigma phase error at the window's end. */
+  phaseErrAtEnd: nonNegative.optional(),
+  /** Visits of the star already made (observed file) or kept (before `--now`); `visits` counts only those planned ahead. */
+  priorVisits: nonNegative.optional(),
+  /** K/sigma_K the prior visits alone give (ephemeris targets). */
+  priorKOverSigmaK: nonNegative.optional(),
+  /** The orbit fitted to the RVs so far, beside the catalogue values the plan started from. */
+  fit: orbitUpdateSchema.optional(),
+  /** Blind search: the strongest periodogram peak of the RVs so far (offered, never adopted). */
+  peak: z.object({ periodDays: positive, kMps: nonNegative, fap: fraction, significant: z.boolean() }).optional(),
+  warnings: z.array(z.string()),
+});
+export type TargetSummary = z.output<typeof targetSummarySchema>;
+
+/** A next-best night in choose-nights mode (rank 1 is the best). */
+export const backupNightSchema = z.object({ localDate: isoDate, rank: num, utilityGain: num });
+
+/** The plan's sums over all visits. */
+export const planTotalsSchema = z.object({
+  nights: nonNegative,
+  visits: nonNegative,
+  exposureHours: nonNegative,
+  overheadHours: nonNegative,
+  totalHours: nonNegative,
+  utility: num,
+});
+export type PlanTotals = z.output<typeof planTotalsSchema>;
+
+/** The whole plan (plan.json). The campaign and nights are the inputs and sky products as used. */
+export interface Plan {
+  /** Present when the plan was made with `--now`: what was kept, and which nights were dropped. */
+  replan?: Replan;
+  /** Visits already made (the campaign's observed file), in time order. */
+  observed?: ObservedVisit[];
+  schemaVersion: 1;
+  generator: string;
+  campaign: Campaign;
+  nights: Night[];
+  /** Nights chosen (choose-nights), given, or used (hours). */
+  plannedDates: string[];
+  /** Next-best nights in choose-nights mode, best first. */
+  backups: z.output<typeof backupNightSchema>[];
+  visits: PlannedVisit[];
+  targets: TargetSummary[];
+  totals: PlanTotals;
+  warnings: string[];
+}
