@@ -13,10 +13,10 @@ function benchInput(): InjectionInput {
   const rng = createRng(2027);
   const nights = new Set<number>();
   while (nights.size < 40) nights.add(Math.floor(180 * rng.uniform()));
-  const timesBjd = [...nights].sort((a, b) => a - b).map((n) => 2_461_400.6 + n + 0.25 * rng.uniform());
+  const timesBjdTdb = [...nights].sort((a, b) => a - b).map((n) => 2_461_400.6 + n + 0.25 * rng.uniform());
   return {
-    timesBjd,
-    sigmaMps: timesBjd.map(() => 1.5 + 1.5 * rng.uniform()),
+    timesBjdTdb,
+    sigmaMps: timesBjdTdb.map(() => 1.5 + 1.5 * rng.uniform()),
     periodsDays: logSpaced(2, 100, 20),
     massesEarth: logSpaced(2, 60, 20),
     starMassSun: 0.9,

@@ -56,7 +56,7 @@ function kOverSigmaKOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], g
     const key = priorKey.get(date)!;
     if (nightMid.has(key)) return nightMid.get(key)!;
     const same = (problem.prior ?? []).filter((v) => v.localDate === date);
-    return same.reduce((sum, v) => sum + (v.nightMidDays ?? v.midDays), 0) / same.length;
+    return same.reduce((sum, v) => sum + (v.nightMidBjdTdb ?? v.midBjdTdb), 0) / same.length;
   };
   return problem.targets.flatMap((target, t) => {
     const prior = (problem.prior ?? []).filter((v) => v.targetId === target.id);
@@ -66,8 +66,8 @@ function kOverSigmaKOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], g
       // A fresh accumulator over the visits: no running state from earlier moves.
       const asVisit = (v: CandidateSlot | PriorVisit) =>
         'nightIndex' in v
-          ? { bjd: v.midDays, sigmaMps: v.sigmaWhiteMps, night: v.nightIndex, nightBjd: nightMid.get(v.nightIndex)! }
-          : { bjd: v.midDays, sigmaMps: v.sigmaWhiteMps, night: priorKey.get(v.localDate)!, nightBjd: priorNightMid(v.localDate) };
+          ? { bjdTdb: v.midBjdTdb, sigmaMps: v.sigmaWhiteMps, night: v.nightIndex, nightBjdTdb: nightMid.get(v.nightIndex)! }
+          : { bjdTdb: v.midBjdTdb, sigmaMps: v.sigmaWhiteMps, night: priorKey.get(v.localDate)!, nightBjdTdb: priorNightMid(v.localDate) };
       const visits = informationVisits(target.model, mine.map(asVisit));
       // A visit whose phase information is in the prior keeps only the offset and K columns.
       const model = target.model;
@@ -89,7 +89,7 @@ function kOverSigmaKOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], g
       for (let p = 0; p < grid.angularFreq.length; p++) {
         const m = [0, 1, 2].map((r) => [0, 1, 2].map((k) => (r === k ? grid.eps : 0)));
         mine.forEach((v, i) => {
-          const x = [1, Math.sin(grid.angularFreq[p]! * v.midDays), Math.cos(grid.angularFreq[p]! * v.midDays)];
+          const x = [1, Math.sin(grid.angularFreq[p]! * v.midBjdTdb), Math.cos(grid.angularFreq[p]! * v.midBjdTdb)];
           for (let r = 0; r < 3; r++) for (let k = 0; k < 3; k++) m[r]![k]! += w[i]! * x[r]! * x[k]!;
         });
         total += grid.logK[p]! + 0.25 * Math.log(determinant(m) / m[0]![0]!);
@@ -105,7 +105,7 @@ function nightMiddles(problem: ScheduleProblem): Map<number, number> {
   const out = new Map<number, number>();
   for (const night of problem.nights) {
     const mine = problem.slots.filter((s) => s.nightIndex === night.index);
-    out.set(night.index, night.midDays ?? (mine.length ? mine.reduce((sum, s) => sum + s.midDays, 0) / mine.length : 0));
+    out.set(night.index, night.midBjdTdb ?? (mine.length ? mine.reduce((sum, s) => sum + s.midBjdTdb, 0) / mine.length : 0));
   }
   return out;
 }

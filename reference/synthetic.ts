@@ -54,9 +54,9 @@ function syntheticTarget(rng: Rng, i: number, search: boolean, orbit: SyntheticO
   }
   const kMps = between(rng, 2, 12);
   const model = buildStarModel({
-    planets: [{ id, kMps, periodDays: orbit.periodDays, tcBjd: orbit.tcDays, periodErrDays: orbit.periodErrDays, tcErrDays: orbit.tcErrDays, ecc: 0, omegaDeg: 90 }],
+    planets: [{ id, kMps, periodDays: orbit.periodDays, tcBjdTdb: orbit.tcDays, periodErrDays: orbit.periodErrDays, tcErrDays: orbit.tcErrDays, ecc: 0, omegaDeg: 90 }],
     nightlyJitterMps: 0,
-    spanBjd: spanDays,
+    spanBjdTdb: spanDays,
   });
   return { id, planets: [{ id, priority, goal: 5, kMps }], model };
 }
@@ -68,7 +68,7 @@ export function syntheticProblem(spec: SyntheticSpec): ScheduleProblem {
     localDate: new Date(FIRST_NIGHT_MS + i * DAY_MS).toISOString().slice(0, 10),
     clearProbability: between(rng, 0.5, 0.9),
     hoursAvailable: spec.nightHours,
-    midDays: i + spec.nightHours / 48,
+    midBjdTdb: i + spec.nightHours / 48,
   }));
   const searchCount = Math.round(spec.targets * spec.searchFraction);
   const kinds = Array.from({ length: spec.targets }, (_, i) => i >= spec.targets - searchCount);
@@ -98,8 +98,8 @@ export function syntheticProblem(spec: SyntheticSpec): ScheduleProblem {
       if (usable < 0) continue;
       for (let k = 0; k < spec.slotsPerNight; k++) {
         const startMs = FIRST_NIGHT_MS + night.index * DAY_MS + (opens + (spec.slotsPerNight === 1 ? usable / 2 : (usable * k) / (spec.slotsPerNight - 1))) * HOUR_MS;
-        const midDays = (startMs + (durationSec * 1000) / 2 - FIRST_NIGHT_MS) / DAY_MS;
-        slots.push({ slotId: `${target.id}/${night.index}/${k}`, targetId: target.id, nightIndex: night.index, startMs, durationSec, sigmaWhiteMps: sigmaMps * between(rng, 1, 1.3), midDays });
+        const midBjdTdb = (startMs + (durationSec * 1000) / 2 - FIRST_NIGHT_MS) / DAY_MS;
+        slots.push({ slotId: `${target.id}/${night.index}/${k}`, targetId: target.id, nightIndex: night.index, startMs, durationSec, sigmaWhiteMps: sigmaMps * between(rng, 1, 1.3), midBjdTdb });
       }
     }
   });

@@ -6,7 +6,7 @@
 // examples/under-way/make-observed.mjs` rewrites the same bytes (it plans the demo first, ~20 s).
 import { writeFileSync } from 'node:fs';
 import { buildPlan, createRng, radialVelocityMps, readCampaign } from '../../dist/index.js';
-import { periastronFromConjunctionBjd } from '../../dist/orbit/periastron-time.js';
+import { periastronFromConjunctionBjdTdb } from '../../dist/orbit/periastron-time.js';
 import { targetKMps } from '../../dist/orbit/target-k.js';
 
 const LAST_NIGHT = '2027-03-18';
@@ -20,11 +20,11 @@ const plan = buildPlan(campaign, { weatherTrials: 50 });
 function truth(target) {
   const eph = target.ephemeris;
   const shifted = target.id === 'SELVA-140';
-  const tcBjd = eph.tcBjdTdb + (shifted ? 2 * eph.tcErrDays : 0);
+  const tcBjdTdb = eph.tcBjdTdb + (shifted ? 2 * eph.tcErrDays : 0);
   const periodDays = eph.periodDays + (shifted ? 2 * eph.periodErrDays : 0);
   const ecc = target.planet?.ecc ?? 0;
   const omegaDeg = target.planet?.omegaDeg ?? 90;
-  return { kMps: targetKMps(target), periodDays, ecc, omegaDeg, periastronBjd: periastronFromConjunctionBjd({ tcBjd, periodDays, ecc, omegaDeg }) };
+  return { kMps: targetKMps(target), periodDays, ecc, omegaDeg, periastronBjdTdb: periastronFromConjunctionBjdTdb({ tcBjdTdb, periodDays, ecc, omegaDeg }) };
 }
 
 const lines = [

@@ -150,7 +150,7 @@ export function scheduleNights(campaign: Campaign, nights: Night[]): ScheduleNig
       clearProbability: clearProbability(campaign.site.clearFraction, night.localDate),
       hoursAvailable: night.darkHours,
     };
-    if (night.darkStart && night.darkEnd) out.midDays = julianDate((night.darkStart.getTime() + night.darkEnd.getTime()) / 2);
+    if (night.darkStart && night.darkEnd) out.midBjdTdb = julianDate((night.darkStart.getTime() + night.darkEnd.getTime()) / 2);
     return out;
   });
 }
@@ -207,7 +207,7 @@ export function candidateSlots(campaign: Campaign, nights: Night[], windows: Win
           startMs,
           durationSec: setup.durationSec,
           sigmaWhiteMps: whiteSigmaMps(budget.visitMps, setup.noise),
-          midDays: midBjdTdb,
+          midBjdTdb,
         };
         details.push({
           slot,

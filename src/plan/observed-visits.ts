@@ -14,7 +14,7 @@ const DAY_MS = 86_400_000;
 const JD_UNIX_EPOCH = 2_440_587.5;
 
 /** UTC of a BJD_TDB towards a star: the barycentric correction inverted by two fixed-point steps (it changes by < 1 ms over its own size). */
-function utcOfBjd(bjd: number, star: Target): Date {
+function utcOfBjdTdb(bjd: number, star: Target): Date {
   let ms = (bjd - JD_UNIX_EPOCH) * DAY_MS;
   for (let i = 0; i < 2; i++) ms -= (starBjdTdb(new Date(ms), star) - bjd) * DAY_MS;
   return new Date(Math.round(ms));
@@ -48,7 +48,7 @@ export function observedVisits(campaign: Campaign, stars: StarSetup[]): Observed
   };
   const visits = observed.rows.map((row): ObservedVisit => {
     const setup = starOf.get(row.targetId)!;
-    const at = row.midUtc !== undefined ? new Date(row.midUtc) : utcOfBjd(row.midBjdTdb!, setup.star);
+    const at = row.midUtc !== undefined ? new Date(row.midUtc) : utcOfBjdTdb(row.midBjdTdb!, setup.star);
     const instrumentMps = row.rvErrMps ?? instrumentMpsOf(setup);
     const visit: ObservedVisit = {
       targetId: row.targetId,

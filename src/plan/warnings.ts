@@ -39,7 +39,7 @@ export function recoveryVisits(kMps: number, sigmaMps: number): number {
 /** Fills each target's warnings in place and returns the plan-wide ones. */
 export function planWarnings(plan: Plan, setups: TargetSetup[], windows: Window[], rule: TransitRule): string[] {
   const observable = new Set(windows.map((w) => w.targetId));
-  const windowEndBjd = Math.max(...plan.nights.map((n) => (n.darkEnd ? n.darkEnd.getTime() / 86_400_000 + 2_440_587.5 : -Infinity)));
+  const windowEndBjdTdb = Math.max(...plan.nights.map((n) => (n.darkEnd ? n.darkEnd.getTime() / 86_400_000 + 2_440_587.5 : -Infinity)));
   for (const summary of plan.targets) {
     const setup = setups.find((s) => s.target.id === summary.targetId)!;
     const w = summary.warnings;
@@ -57,7 +57,7 @@ export function planWarnings(plan: Plan, setups: TargetSetup[], windows: Window[
       );
     }
     const eph = setup.target.ephemeris;
-    if (eph?.transitDurationHours !== undefined && Number.isFinite(windowEndBjd) && transitHalfWidthDays(eph, nearestEpoch(eph, windowEndBjd), rule) === 0) {
+    if (eph?.transitDurationHours !== undefined && Number.isFinite(windowEndBjdTdb) && transitHalfWidthDays(eph, nearestEpoch(eph, windowEndBjdTdb), rule) === 0) {
       w.push(`transit time too uncertain to avoid by the window's end (keeping out of it would remove more than ${Math.round(rule.maxOrbitFraction * 100)}% of the orbit): visits may fall in transit`);
     }
   }

@@ -12,7 +12,7 @@ export interface RankedPeak {
   /** Semi-amplitude of the sinusoid fitted at this period, m/s. */
   amplitudeMps: number;
   /** A time (BJD_TDB) of maximum fitted velocity. */
-  timeOfMaxBjd: number;
+  timeOfMaxBjdTdb: number;
   /** Over the band, Baluev 2008. */
   fapBaluev: number;
   /** Over the band, from the number of independent frequencies. */
@@ -57,7 +57,7 @@ export function searchPeriodogram(
       freqPerDay: fit.freqPerDay,
       power: fit.power,
       amplitudeMps: fit.amplitudeMps,
-      timeOfMaxBjd: fit.timeOfMaxBjd,
+      timeOfMaxBjdTdb: fit.timeOfMaxBjdTdb,
       fapBaluev: fapBaluev(fit.power, fap),
       fapIndependent: fapIndependent(fit.power, fap),
       fapSingle: fapSingle(fit.power, fap.n),

@@ -158,7 +158,7 @@ export interface SinusoidFit {
   /** Fitted constant c, m/s. */
   offsetMps: number;
   /** A time (BJD, days) of maximum fitted velocity. */
-  timeOfMaxBjd: number;
+  timeOfMaxBjdTdb: number;
 }
 
 /**
@@ -196,6 +196,6 @@ export function glsAt(
     power: Number.isFinite(p) && D > 0 ? Math.min(1, Math.max(0, p)) : 0,
     amplitudeMps: Math.hypot(a, b),
     offsetMps: Y - a * C - b * S,
-    timeOfMaxBjd: timeOfMax,
+    timeOfMaxBjdTdb: timeOfMax,
   };
 }

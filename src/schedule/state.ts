@@ -101,7 +101,7 @@ export class PlanState {
   searchFractionOfGoal(t: number, sign: number, j: number): number {
     const c = this.c;
     const w = sign === 0 ? 0 : c.weight[j]!;
-    const a = sign === 0 ? 0 : c.midDays[j]!;
+    const a = sign === 0 ? 0 : c.midBjdTdb[j]!;
     return Math.exp(searchLogScore(this.stats, c.statsOffset[t]!, c.grids[t]!, sign, w, a)) / c.searchGoal[t]!;
   }
 
@@ -231,7 +231,7 @@ export class PlanState {
     if (grid) {
       // No visits left: back to the prior's sums exactly rather than keep the rounding residue of the removals.
       if (mine.length === 0) seedSearchStats(this.stats, c, c.prior, t);
-      else updateSearchStats(this.stats, c.statsOffset[t]!, grid, c.weight[j]!, c.midDays[j]!, sign);
+      else updateSearchStats(this.stats, c.statsOffset[t]!, grid, c.weight[j]!, c.midBjdTdb[j]!, sign);
     }
     const info = this.information[t];
     if (info) {

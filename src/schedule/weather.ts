@@ -83,7 +83,7 @@ export function simulateWeather(problem: ScheduleProblem, result: ScheduleResult
       }
       for (const j of perTarget[t]!) {
         if (!clear[c.slotNight[j]!]) continue;
-        if (grid) updateSearchStats(stats, 0, grid, c.weight[j]!, c.midDays[j]!, 1);
+        if (grid) updateSearchStats(stats, 0, grid, c.weight[j]!, c.midBjdTdb[j]!, 1);
         if (info) {
           visit.slot = j;
           info.apply(visit, 1);

@@ -103,7 +103,7 @@ export const INSTRUMENT_JSON = `${JSON.stringify(
 )}\n`;
 
 export const RV_CSV = [
-  'bjd,rvMps,sigmaMps',
+  'bjdTdb,rvMps,sigmaMps',
   ...[0, 1.1, 2.3, 4.0, 5.2, 7.9, 9.1, 12.6, 15.0, 18.4].map((d, i) => `${(2461000.5 + d).toFixed(4)},${(3 * Math.sin(d)).toFixed(2)},${(1.5 + (i % 3) * 0.2).toFixed(1)}`),
   '',
 ].join('\n');

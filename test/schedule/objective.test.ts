@@ -39,11 +39,11 @@ describe('search coverage', () => {
     const stats = new Float64Array(searchStatsLength(grid));
     let score = searchLogScore(stats, 0, grid);
     for (let j = 0; j < c.slotCount; j += 3) {
-      const next = searchLogScore(stats, 0, grid, 1, c.weight[j]!, c.midDays[j]!);
+      const next = searchLogScore(stats, 0, grid, 1, c.weight[j]!, c.midBjdTdb[j]!);
       expect(next).toBeGreaterThanOrEqual(score - 1e-12);
-      updateSearchStats(stats, 0, grid, c.weight[j]!, c.midDays[j]!, 1);
+      updateSearchStats(stats, 0, grid, c.weight[j]!, c.midBjdTdb[j]!, 1);
       expect(searchLogScore(stats, 0, grid)).toBeCloseTo(next, 10);
-      expect(searchLogScore(stats, 0, grid, -1, c.weight[j]!, c.midDays[j]!)).toBeCloseTo(score, 9);
+      expect(searchLogScore(stats, 0, grid, -1, c.weight[j]!, c.midBjdTdb[j]!)).toBeCloseTo(score, 9);
       score = next;
     }
   });

@@ -95,7 +95,7 @@ function singleTarget(periodDays: number, nights: number, hoursPerNight: number)
   for (let n = 0; n < nights; n++) {
     for (let k = 0; k < hoursPerNight * 3; k++) {
       const startMs = t0 + n * 86_400_000 + k * 1_200_000;
-      slots.push({ slotId: `n${n}k${k}`, targetId: 'LONE-1', nightIndex: n, startMs, durationSec: 1200, sigmaWhiteMps: 2, midDays: (startMs + 600_000 - t0) / 86_400_000 });
+      slots.push({ slotId: `n${n}k${k}`, targetId: 'LONE-1', nightIndex: n, startMs, durationSec: 1200, sigmaWhiteMps: 2, midBjdTdb: (startMs + 600_000 - t0) / 86_400_000 });
     }
   }
   return {
@@ -148,7 +148,7 @@ describe('what the utility asks of a plan', () => {
     // |sin 2 pi phi| below 0.7: more than 0.125 cycles from both quadratures (common practice).
     const offQuadrature = (problem: ScheduleProblem) => {
       const visits = visitsOf(problem, optimiseSchedule(problem, { seed: 2 }));
-      return visits.filter((v) => Math.abs(Math.sin((2 * Math.PI * v.midDays) / 3.3)) < 0.7).length / visits.length;
+      return visits.filter((v) => Math.abs(Math.sin((2 * Math.PI * v.midBjdTdb) / 3.3)) < 0.7).length / visits.length;
     };
     expect(offQuadrature(fresh)).toBe(0);
     expect(offQuadrature(stale)).toBeGreaterThan(0.1);

@@ -1,5 +1,5 @@
 // A star with one circular planet for scheduler tests: its information model from the given
-// ephemeris (times in the slots' midDays scale).
+// ephemeris (times in the slots' midBjdTdb scale).
 import { buildStarModel } from '../../src/rv/information-model.js';
 import type { ScheduleTarget } from '../../src/schedule/types.js';
 
@@ -10,9 +10,9 @@ export function onePlanetStar(
   nightlyJitterMps = 0,
 ): ScheduleTarget {
   const model = buildStarModel({
-    planets: [{ id, kMps: planet.kMps, periodDays: planet.periodDays, tcBjd: planet.tcDays, tcErrDays: planet.tcErrDays ?? 0, periodErrDays: planet.periodErrDays ?? 0, ecc: 0, omegaDeg: 90 }],
+    planets: [{ id, kMps: planet.kMps, periodDays: planet.periodDays, tcBjdTdb: planet.tcDays, tcErrDays: planet.tcErrDays ?? 0, periodErrDays: planet.periodErrDays ?? 0, ecc: 0, omegaDeg: 90 }],
     nightlyJitterMps,
-    spanBjd: spanDays,
+    spanBjdTdb: spanDays,
   });
   return { id, planets: [{ id, priority: planet.priority ?? 1, kMps: planet.kMps, goal: planet.goal ?? 5 }], model };
 }
