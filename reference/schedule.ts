@@ -40,7 +40,7 @@ export function referenceKOverSigmaK(problem: ScheduleProblem, visits: Candidate
 
 interface Ratio {
   ratio: number;
-  goal: number;
+  goalSignificance: number;
   priority: number;
 }
 
@@ -80,7 +80,7 @@ function kOverSigmaKOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], g
         }
       });
       const variance = kVariances(model, visits);
-      target.planets.forEach((planet, i) => out.push({ ratio: variance[i] === Infinity ? 0 : planet.kMps / Math.sqrt(variance[i]!), goal: planet.goal, priority: planet.priority }));
+      target.planets.forEach((planet, i) => out.push({ ratio: variance[i] === Infinity ? 0 : planet.kMps / Math.sqrt(variance[i]!), goalSignificance: planet.goalSignificance, priority: planet.priority }));
     }
     const grid = grids[t];
     if (grid && target.search) {
@@ -94,7 +94,7 @@ function kOverSigmaKOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], g
         });
         total += grid.logK[p]! + 0.25 * Math.log(determinant(m) / m[0]![0]!);
       }
-      out.push({ ratio: Math.exp(total / grid.angularFreq.length), goal: target.search.goal, priority: target.search.priority });
+      out.push({ ratio: Math.exp(total / grid.angularFreq.length), goalSignificance: target.search.goalSignificance, priority: target.search.priority });
     }
     return out;
   });
@@ -117,7 +117,7 @@ export function referenceUtility(problem: ScheduleProblem, visits: CandidateSlot
 
 function utilityOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], grids: (SearchGrid | null)[], overshootWeight: number): number {
   const prior = kOverSigmaKOnGrids(problem, [], grids);
-  return kOverSigmaKOnGrids(problem, visits, grids).reduce((sum, r, i) => sum + r.priority * goalValue(r.ratio / r.goal, overshootAfterPrior(prior[i]!.ratio / r.goal, overshootWeight)), 0);
+  return kOverSigmaKOnGrids(problem, visits, grids).reduce((sum, r, i) => sum + r.priority * goalValue(r.ratio / r.goalSignificance, overshootAfterPrior(prior[i]!.ratio / r.goalSignificance, overshootWeight)), 0);
 }
 
 /** Every constraint of the problem, checked pairwise: an empty list means feasible. */

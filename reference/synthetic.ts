@@ -50,7 +50,7 @@ function syntheticTarget(rng: Rng, i: number, search: boolean, orbit: SyntheticO
   const priority = Math.ceil(between(rng, 0, 3));
   if (search) {
     const periodMinDays = Math.exp(between(rng, Math.log(2), Math.log(20)));
-    return { id, planets: [], search: { id, priority, goal: 5, kMps: between(rng, 2, 8), periodMinDays, periodMaxDays: periodMinDays * between(rng, 2, 8) } };
+    return { id, planets: [], search: { id, priority, goalSignificance: 5, kMps: between(rng, 2, 8), periodMinDays, periodMaxDays: periodMinDays * between(rng, 2, 8) } };
   }
   const kMps = between(rng, 2, 12);
   const model = buildStarModel({
@@ -58,7 +58,7 @@ function syntheticTarget(rng: Rng, i: number, search: boolean, orbit: SyntheticO
     nightlyJitterMps: 0,
     spanBjdTdb: spanDays,
   });
-  return { id, planets: [{ id, priority, goal: 5, kMps }], model };
+  return { id, planets: [{ id, priority, goalSignificance: 5, kMps }], model };
 }
 
 export function syntheticProblem(spec: SyntheticSpec): ScheduleProblem {

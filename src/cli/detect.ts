@@ -49,7 +49,7 @@ function detectOptions(opts: DetectFlags): DetectOptions {
   }
   checkExposureFlags(opts);
   return {
-    significance: opts.significance,
+    goalSignificance: opts.significance,
     airmass: opts.airmass,
     exposureSec: opts.exposure,
     targetSigmaMps: opts.targetSigma,
@@ -63,7 +63,7 @@ function detectOptions(opts: DetectFlags): DetectOptions {
 const pair = (a: number | undefined, b: number | undefined, decimals: number) => (a === undefined ? '-' : `${fmt(a, decimals)}/${fmt(b, decimals)}`);
 
 function printTable(rows: TargetDetectability[], options: DetectOptions): void {
-  const n = options.significance;
+  const n = options.goalSignificance;
   const levels = [...new Set([3, 5, n])].sort((a, b) => a - b);
   const columns: Column[] = [
     { header: 'target' },
@@ -81,7 +81,7 @@ function printTable(rows: TargetDetectability[], options: DetectOptions): void {
   }
   columns.push({ header: 'verdict' });
   const body = rows.map((r) => {
-    const need = (level: number) => r.needed.find((v) => v.significance === level);
+    const need = (level: number) => r.needed.find((v) => v.goalSignificance === level);
     const goal = need(n);
     const cells = [
       r.targetId,
@@ -120,13 +120,13 @@ function printNotes(rows: TargetDetectability[]): void {
 function printLimits(rows: TargetDetectability[], options: DetectOptions): void {
   const first = rows[0]?.atPlannedVisits?.massLimits;
   if (!first) return;
-  console.log(`\nSmallest detectable m sin i (Earth masses) for K/sigma_K = ${options.significance} with ${options.visits} visits at random phases:`);
+  console.log(`\nSmallest detectable m sin i (Earth masses) for K/sigma_K = ${options.goalSignificance} with ${options.visits} visits at random phases:`);
   const body = first.map((limit, i) => [fmt(limit.periodDays, 0), ...rows.map((r) => fmt(r.atPlannedVisits!.massLimits![i]!.massMinRandomEarth, 1))]);
   console.log(renderTable([{ header: 'P (d)', align: 'right' }, ...rows.map((r) => ({ header: r.targetId, align: 'right' as const }))], body));
 }
 
 function csvRows(rows: TargetDetectability[], options: DetectOptions): string {
-  const levels = [...new Set([3, 5, options.significance])].sort((a, b) => a - b);
+  const levels = [...new Set([3, 5, options.goalSignificance])].sort((a, b) => a - b);
   const header = [
     'target', 'vmag', 'teffK', 'massSun', 'planetSource', 'planetMassEarth', 'periodDays', 'ecc', 'kMps', 'exposureSec', 'tooFaint',
     'sigmaPhotonMps', 'sigmaVisitMps', 'sigmaEffMps', 'visitCostSec',
@@ -142,7 +142,7 @@ function csvRows(rows: TargetDetectability[], options: DetectOptions): string {
       r.targetId, r.vmag, r.teffK, r.massSun, r.planet?.source, r.planet?.massEarth, r.planet?.periodDays, r.planet?.ecc, r.planet?.kMps, r.exposure.exposureSec, String(r.exposure.tooFaint),
       b.photonMps, b.visitMps, b.effMps, r.visitCostSec,
       ...levels.flatMap((n) => {
-        const v = r.needed.find((x) => x.significance === n);
+        const v = r.needed.find((x) => x.goalSignificance === n);
         return [v?.random, v?.quadrature, v?.hoursRandom, v?.hoursQuadrature];
       }),
       p?.visits, p?.sigmaKRandomMps, p?.probabilityRandom, p?.probabilityQuadrature, p?.massMinRandomEarth, p?.massMinQuadratureEarth, p?.mass50RandomEarth, p?.mass90RandomEarth,
@@ -179,7 +179,7 @@ export function registerDetect(program: Command): Command {
         return printJson({ instrument: profile, options, targets: rows });
       }
       if (opts.csv) return void process.stdout.write(csvRows(rows, options));
-      console.log(`Instrument: ${instrument.id} (${instrument.name}); airmass ${options.airmass}; goal K/sigma_K = ${options.significance}`);
+      console.log(`Instrument: ${instrument.id} (${instrument.name}); airmass ${options.airmass}; goal K/sigma_K = ${options.goalSignificance}`);
       console.log('');
       printTable(rows, options);
       printNotes(rows);

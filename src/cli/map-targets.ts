@@ -79,8 +79,8 @@ function jobOf(plan: Plan, target: Target, settings: MapSettings): MapJob | unde
   const mass = planetMassEarth(plan, target, eph);
   const centre = mass ?? 10;
   const { periodsDays, massesEarth } = axes(settings, [eph.periodDays / PERIOD_FACTOR, eph.periodDays * PERIOD_FACTOR], [centre / MASS_FACTOR, centre * MASS_FACTOR]);
-  const significance = plan.targets.find((s) => s.targetId === target.id)?.goal ?? plan.campaign.goals.significance;
-  const input: KnownPhaseInput = { timesBjdTdb, sigmaMps, ephemeris: eph, periodsDays, massesEarth, starMassSun: target.massSun, significance };
+  const goalSignificance = plan.targets.find((s) => s.targetId === target.id)?.goalSignificance ?? plan.campaign.goals.significance;
+  const input: KnownPhaseInput = { timesBjdTdb, sigmaMps, ephemeris: eph, periodsDays, massesEarth, starMassSun: target.massSun, goalSignificance };
   return { ...base(target, visits), kind: 'ephemeris', ephemeris: eph, planetMassEarth: mass, input };
 }
 

@@ -98,7 +98,7 @@ async function runJob(job: MapJob, settings: MapSettings, threads: number, progr
   const maxDifference = extent(analytic.detection.flatMap((row, i) => row.map((p, j) => Math.abs(p - simulated.detection[i]![j]!)))).max;
   const method =
     `Known phase from the ephemeris (Tc fixed; rows other than P = ${fmt(job.ephemeris.periodDays, 4)} d ask "had the period been P"), ` +
-    `${job.visits} planned visits, circular orbits; detected when K̂/σ_K > ${job.input.significance}. ` +
+    `${job.visits} planned visits, circular orbits; detected when K̂/σ_K > ${job.input.goalSignificance}. ` +
     `Left: Φ(K/σ_K − n) with the scheduler's expected information; right: ${settings.trialsPerCell} simulated least-squares fits a cell.`;
   const chart: DetectionMapData = {
     targetId: job.targetId, method, periodsDays, massesEarth,
@@ -214,7 +214,7 @@ async function runMap(opts: MapFlags): Promise<void> {
       ...(r.job.kind === 'ephemeris'
         ? {
             ephemerisPeriodDays: r.job.ephemeris.periodDays,
-            significance: r.job.input.significance,
+            goalSignificance: r.job.input.goalSignificance,
             planetMassEarth: r.job.planetMassEarth,
             maxDifference: r.maxDifference,
             atEphemerisPeriod: { analytic: jsonLevels([r.atEphemeris!.analytic])[0], simulated: jsonLevels([r.atEphemeris!.simulated])[0], planetDetection: r.atEphemeris!.planet },

@@ -113,7 +113,7 @@ function targetSummary(
     ...(outcome.priorVisits > 0 ? { priorVisits: outcome.priorVisits, priorKOverSigmaK: outcome.priorKOverSigmaK } : {}),
     sigmaKMps: outcome.sigmaKMps,
     kOverSigmaK: outcome.kOverSigmaK,
-    goal: outcome.goal,
+    goalSignificance: outcome.goalSignificance,
     goalProbability: weather.find((w) => w.targetId === target.id)?.goalProbability,
     informationEfficiency: outcome.informationEfficiency,
   };

@@ -67,10 +67,10 @@ export function setupTargets(campaign: Campaign): TargetSetup[] {
   const { instrument, goals } = campaign;
   return campaign.targets.map((target) => {
     const kMps = targetKMps(target);
-    const goal = target.goalSignificance ?? goals.significance;
+    const goalSignificance = target.goalSignificance ?? goals.significance;
     // The target's own exposure or sigma wins; otherwise the fewest hours for its K within the
     // visits the campaign can give (src/rv/exposure.ts).
-    const options = { seeingArcsec: campaign.site.medianSeeingArcsec, kMps, significance: goal, maxVisits: visitCap(campaign, target) };
+    const options = { seeingArcsec: campaign.site.medianSeeingArcsec, kMps, goalSignificance, maxVisits: visitCap(campaign, target) };
     const exposure =
       target.exposureSec === undefined
         ? chooseExposureSec(instrument, target, TYPICAL_AIRMASS, target.sigmaMps, options)
@@ -101,7 +101,7 @@ export function setupStars(campaign: Campaign, setups: TargetSetup[]): StarSetup
     for (const row of rowSetups) Object.assign(row, { exposure: lead.exposure, durationSec: lead.durationSec });
     const star: StarSetup = { starId, star: lead.target, rows: rowSetups, exposure: lead.exposure, durationSec: lead.durationSec, noise: starNoise(lead.target, campaign.noise.nightlyJitterFraction) };
     const goalOf = (t: Target) => t.goalSignificance ?? campaign.goals.significance;
-    const planets = planetRows(rows).map((t) => ({ id: t.id, priority: t.priority, kMps: byId.get(t.id)!.kMps!, goal: goalOf(t) }));
+    const planets = planetRows(rows).map((t) => ({ id: t.id, priority: t.priority, kMps: byId.get(t.id)!.kMps!, goalSignificance: goalOf(t) }));
     const searchRow = rowSetups.find((s) => s.role === 'search');
     if (planets.length === 0 && !searchRow) return star;
     const target: ScheduleTarget = { id: starId, planets };
@@ -110,7 +110,7 @@ export function setupStars(campaign: Campaign, setups: TargetSetup[]): StarSetup
     if (model) target.model = model;
     if (searchRow) {
       const { periodMinDays, periodMaxDays } = searchRow.target.search!;
-      target.search = { id: searchRow.target.id, priority: searchRow.target.priority, kMps: searchRow.kMps!, goal: goalOf(searchRow.target), periodMinDays, periodMaxDays };
+      target.search = { id: searchRow.target.id, priority: searchRow.target.priority, kMps: searchRow.kMps!, goalSignificance: goalOf(searchRow.target), periodMinDays, periodMaxDays };
     }
     star.scheduleTarget = target;
     return star;

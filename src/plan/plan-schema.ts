@@ -84,7 +84,7 @@ export const targetSummarySchema = z.object({
   hours: nonNegative,
   sigmaKMps: nonNegative.optional(),
   kOverSigmaK: nonNegative.optional(),
-  goal: positive.optional(),
+  goalSignificance: positive.optional(),
   /** Probability of reaching the goal under the site's weather (simulated). */
   goalProbability: fraction.optional(),
   /** (sigma^2/N) / Var(K): 1 is the best any schedule can do. */

@@ -22,8 +22,8 @@ const RECOVERED_PHASE_ERR_CYCLES = 0.05;
  * More nights, or several visits a night (a shorter minSpacingHours), are the usual ways there.
  */
 function visitsHint(summary: TargetSummary, setup: TargetSetup): string {
-  if (summary.kind !== 'ephemeris' || summary.kMps === undefined || summary.goal === undefined) return '';
-  const n = visitsNeeded(summary.kMps, setup.exposure.budget.effMps, summary.goal, 'quadrature');
+  if (summary.kind !== 'ephemeris' || summary.kMps === undefined || summary.goalSignificance === undefined) return '';
+  const n = visitsNeeded(summary.kMps, setup.exposure.budget.effMps, summary.goalSignificance, 'quadrature');
   return `; about ${n} visits at quadratures would reach it`;
 }
 
@@ -47,8 +47,8 @@ export function planWarnings(plan: Plan, setups: TargetSetup[], windows: Window[
     const neverObservable = !observable.has(summary.starId);
     if (neverObservable) w.push('never observable in the window under the constraints (altitude, airmass, Moon, dark time)');
     if (setup.exposure.warning) w.push(setup.exposure.warning);
-    if (!neverObservable && summary.goal !== undefined && summary.kOverSigmaK !== undefined && summary.kOverSigmaK < summary.goal) {
-      w.push(`goal K/sigma_K = ${summary.goal} not reached: ${summary.kOverSigmaK.toFixed(1)} with ${summary.visits} visits${visitsHint(summary, setup)}`);
+    if (!neverObservable && summary.goalSignificance !== undefined && summary.kOverSigmaK !== undefined && summary.kOverSigmaK < summary.goalSignificance) {
+      w.push(`goal K/sigma_K = ${summary.goalSignificance} not reached: ${summary.kOverSigmaK.toFixed(1)} with ${summary.visits} visits${visitsHint(summary, setup)}`);
     }
     if (summary.phaseErrAtEnd !== undefined && summary.phaseErrAtEnd > LOST_PHASE_ERR_CYCLES && summary.kMps !== undefined) {
       const n = recoveryVisits(summary.kMps, setup.exposure.budget.effMps);

@@ -91,7 +91,7 @@ export function targetRows(plan: Plan): string[][] {
       String(t.visits),
       fmt(t.sigmaKMps, 2),
       fmt(t.kOverSigmaK, 1),
-      fmt(t.goal, 1),
+      fmt(t.goalSignificance, 1),
       percent(t.goalProbability),
       fmt(t.informationEfficiency, 2),
       fmt(t.hours, 1),

@@ -10,9 +10,9 @@ import { dwarfLoggFromTeff } from './star-defaults.js';
 export type ExposureStar = PrecisionStar & { logg?: number };
 
 export interface ExposureOptions extends PrecisionOptions {
-  /** The planet's K (m/s): with it the exposure minimises the hours to K/σ_K = significance. */
+  /** The planet's K (m/s): with it the exposure minimises the hours to K/σ_K = goalSignificance. */
   kMps?: number;
-  significance?: number;
+  goalSignificance?: number;
   /** Phase layout for the visits count (default random). */
   layout?: PhaseLayout;
   /** The most visits the campaign can give the target (e.g. one a night): exposures needing more are passed over. */
@@ -88,7 +88,7 @@ const HOURS_GRID_POINTS = 400;
  * fewest. Undefined when no exposure reaches the goal (K at or below the floor).
  */
 function fewestHoursSec(instrument: Instrument, star: ExposureStar, airmass: number, minSec: number, options: ExposureOptions): number | undefined {
-  const { kMps, significance = 5, layout = 'random', maxVisits = Infinity } = options;
+  const { kMps, goalSignificance = 5, layout = 'random', maxVisits = Infinity } = options;
   const overhead = instrument.readoutSec + instrument.acquisitionSec;
   let best: { sec: number; cost: number } | undefined;
   let fewest: { sec: number; visits: number } | undefined;
@@ -96,7 +96,7 @@ function fewestHoursSec(instrument: Instrument, star: ExposureStar, airmass: num
   for (let i = 0; i < HOURS_GRID_POINTS; i++) {
     const sec = Math.round(minSec * ratio ** (i / (HOURS_GRID_POINTS - 1)));
     const white = quadratureSum(photonNoise(instrument, star, sec, airmass, options).photonMps, star.jitterMps);
-    const visits = visitsExact(kMps!, white, significance, layout, instrument.floorMps);
+    const visits = visitsExact(kMps!, white, goalSignificance, layout, instrument.floorMps);
     const cost = visits * (sec + overhead);
     if (Number.isFinite(cost) && visits <= maxVisits && (!best || cost < best.cost)) best = { sec, cost };
     if (Number.isFinite(visits) && (!fewest || visits < fewest.visits)) fewest = { sec, visits };

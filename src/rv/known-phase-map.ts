@@ -25,13 +25,13 @@ export interface KnownPhaseInput {
   massesEarth: number[];
   starMassSun: number;
   /** The detection threshold n on K̂/σ_K. */
-  significance: number;
+  goalSignificance: number;
 }
 
 export interface KnownPhaseMap {
   periodsDays: number[];
   massesEarth: number[];
-  significance: number;
+  goalSignificance: number;
   /** detection[i][j] at periodsDays[i], massesEarth[j]. */
   detection: number[][];
   /** Expected σ_K of each period's row, m/s (infinite when the visits carry no information on K). */
@@ -72,9 +72,9 @@ export function knownPhaseMapAnalytic(input: KnownPhaseInput): KnownPhaseMap {
   checkInput(input);
   const sigmaKMps = input.periodsDays.map((p) => expectedSigmaKMps(input.timesBjdTdb, input.sigmaMps, atPeriod(input.ephemeris, p)));
   const detection = input.periodsDays.map((p, i) =>
-    input.massesEarth.map((m) => (Number.isFinite(sigmaKMps[i]!) ? detectionProbabilityKnownPhase(kOf(input, p, m), sigmaKMps[i]!, input.significance) : 0)),
+    input.massesEarth.map((m) => (Number.isFinite(sigmaKMps[i]!) ? detectionProbabilityKnownPhase(kOf(input, p, m), sigmaKMps[i]!, input.goalSignificance) : 0)),
   );
-  return { periodsDays: input.periodsDays, massesEarth: input.massesEarth, significance: input.significance, detection, sigmaKMps };
+  return { periodsDays: input.periodsDays, massesEarth: input.massesEarth, goalSignificance: input.goalSignificance, detection, sigmaKMps };
 }
 
 /**
@@ -111,10 +111,10 @@ export function knownPhaseMapSimulated(input: KnownPhaseInput & { trialsPerCell:
         // Σ w (s − s̄)(v − v̄) = Σ w (s − s̄) v, since Σ w (s − s̄) = 0.
         let cross = 0;
         for (let n = 0; n < count; n++) cross += w[n]! * centred[n]! * truth[n]!;
-        if (cross / info / sigmaK > input.significance) detected++;
+        if (cross / info / sigmaK > input.goalSignificance) detected++;
       }
       return detected / trialsPerCell;
     });
   });
-  return { periodsDays: input.periodsDays, massesEarth, significance: input.significance, detection, sigmaKMps };
+  return { periodsDays: input.periodsDays, massesEarth, goalSignificance: input.goalSignificance, detection, sigmaKMps };
 }

@@ -79,7 +79,7 @@ export function planetOfTarget(target: DetectStar, hypothetical?: HypotheticalPl
 
 export interface DetectOptions {
   /** K/σ_K to reach (the goal); visits are also reported for 3 and 5. */
-  significance: number;
+  goalSignificance: number;
   airmass: number;
   /** Fixed exposure (s); otherwise chooseExposureSec picks one. A target's own exposureSec wins. */
   exposureSec?: number;
@@ -95,7 +95,7 @@ export interface DetectOptions {
 }
 
 export interface VisitsAt {
-  significance: number;
+  goalSignificance: number;
   random: number;
   quadrature: number;
   hoursRandom: number;
@@ -148,7 +148,7 @@ export interface TargetDetectability {
 export function targetDetectability(target: DetectStar, instrument: Instrument, options: DetectOptions): TargetDetectability {
   const planet = planetOfTarget(target, options.hypothetical);
   const exposureSec = target.exposureSec ?? options.exposureSec;
-  const precisionOptions = { seeingArcsec: options.seeingArcsec, kMps: planet?.kMps, significance: options.significance };
+  const precisionOptions = { seeingArcsec: options.seeingArcsec, kMps: planet?.kMps, goalSignificance: options.goalSignificance };
   const exposure =
     exposureSec === undefined
       ? chooseExposureSec(instrument, target, options.airmass, target.sigmaMps ?? options.targetSigmaMps, precisionOptions)
@@ -157,11 +157,11 @@ export function targetDetectability(target: DetectStar, instrument: Instrument, 
   const sigmaMps = budget.effMps;
   const costSec = visitCostSec(instrument, exposure.exposureSec);
   const hours = (visits: number) => (visits * costSec) / 3600;
-  const levels = [...new Set([3, 5, options.significance])].sort((a, b) => a - b);
+  const levels = [...new Set([3, 5, options.goalSignificance])].sort((a, b) => a - b);
   const needed: VisitsAt[] = planet
     ? levels.map((n) => {
         const [random, quadrature] = PHASE_LAYOUTS.map((layout) => visitsNeeded(planet.kMps, budget.whiteMps, n, layout, budget.floorMps)) as [number, number];
-        return { significance: n, random, quadrature, hoursRandom: hours(random), hoursQuadrature: hours(quadrature) };
+        return { goalSignificance: n, random, quadrature, hoursRandom: hours(random), hoursQuadrature: hours(quadrature) };
       })
     : [];
   const terms = { photon: budget.photonMps, floor: budget.floorMps, jitter: budget.jitterMps };
@@ -184,19 +184,19 @@ export function targetDetectability(target: DetectStar, instrument: Instrument, 
     verdict: { level: 'no planet', text: '' },
   };
   if (options.visits !== undefined) result.atPlannedVisits = atPlannedVisits(result, options);
-  result.verdict = verdict(result, instrument, options.significance, target.ephemeris !== undefined && planet?.source === 'given');
+  result.verdict = verdict(result, instrument, options.goalSignificance, target.ephemeris !== undefined && planet?.source === 'given');
   return result;
 }
 
 function atPlannedVisits(row: TargetDetectability, options: DetectOptions): AtPlannedVisits {
   const visits = options.visits!;
-  const n = options.significance;
+  const n = options.goalSignificance;
   const { whiteMps, floorMps } = row;
   const sigmaK = (layout: PhaseLayout) => sigmaKMps(whiteMps, visits, layout, floorOnKMps(floorMps, n));
   const at: AtPlannedVisits = { visits, sigmaKRandomMps: sigmaK('random'), sigmaKQuadratureMps: sigmaK('quadrature') };
   const planet = row.planet;
   const limits = (periodsDays: readonly number[], ecc: number) =>
-    massLimitTable({ starMassSun: row.massSun, sigmaMps: whiteMps, floorMps, visits, significance: n, periodsDays, ecc });
+    massLimitTable({ starMassSun: row.massSun, sigmaMps: whiteMps, floorMps, visits, goalSignificance: n, periodsDays, ecc });
   if (planet) {
     at.probabilityRandom = detectionProbability(planet.kMps, whiteMps, visits, n, 'random', floorMps);
     at.probabilityQuadrature = detectionProbability(planet.kMps, whiteMps, visits, n, 'quadrature', floorMps);
@@ -210,7 +210,7 @@ function atPlannedVisits(row: TargetDetectability, options: DetectOptions): AtPl
   return at;
 }
 
-function verdict(row: TargetDetectability, instrument: Instrument, significance: number, phaseKnown: boolean): { level: VerdictLevel; text: string } {
+function verdict(row: TargetDetectability, instrument: Instrument, goalSignificance: number, phaseKnown: boolean): { level: VerdictLevel; text: string } {
   const notes = [row.exposure.warning, row.dominantNoise === 'jitter' ? 'jitter-limited: longer exposures barely help' : undefined].filter((x) => x);
   const withNotes = (level: VerdictLevel, text: string) => ({ level, text: [text, ...notes].join('; ') });
   const planet = row.planet;
@@ -219,8 +219,8 @@ function verdict(row: TargetDetectability, instrument: Instrument, significance:
   if (planet.kMps <= instrument.floorMps) {
     return withNotes('out of reach', `K = ${k} m/s is below the instrument floor of ${instrument.floorMps} m/s, which does not average down over visits`);
   }
-  const goal = row.needed.find((v) => v.significance === significance)!;
-  const n = `${significance} sigma`;
+  const goal = row.needed.find((v) => v.goalSignificance === goalSignificance)!;
+  const n = `${goalSignificance} sigma`;
   const quad = `${goal.quadrature} (${goal.hoursQuadrature.toFixed(1)} h) at quadratures`;
   if (goal.random > OUT_OF_REACH_VISITS) {
     if (goal.quadrature <= OUT_OF_REACH_VISITS && phaseKnown) {

@@ -19,14 +19,14 @@ export interface CompiledProblem {
   planetFrom: Int32Array;
   planetPriority: Float64Array;
   planetK: Float64Array;
-  planetGoal: Float64Array;
+  planetGoalSignificance: Float64Array;
   /** Per planet, for the greedy's first-visit estimate: the largest |s| among its star's slots. */
   planetMaxAbsSignal: Float64Array;
   /** Per star: search grid, or null. */
   grids: (SearchGrid | null)[];
   searchPriority: Float64Array;
   searchK: Float64Array;
-  searchGoal: Float64Array;
+  searchGoalSignificance: Float64Array;
   statsOffset: Int32Array;
   statsLength: number;
   /** Per star: largest visit weight among its slots. */
@@ -76,7 +76,7 @@ function fail(message: string): never {
 }
 
 function checkTarget(t: ScheduleTarget): void {
-  const positive = (x: { priority: number; kMps: number; goal: number }) => x.priority > 0 && x.kMps > 0 && x.goal > 0;
+  const positive = (x: { priority: number; kMps: number; goalSignificance: number }) => x.priority > 0 && x.kMps > 0 && x.goalSignificance > 0;
   if (t.planets.length === 0 && !t.search) fail(`star ${t.id} has neither planets nor a search`);
   if (t.planets.length > 0 && t.model?.planetCount !== t.planets.length) fail(`star ${t.id} needs a model with one planet per planet`);
   for (const planet of t.planets) if (!positive(planet)) fail(`planet ${planet.id} needs priority, kMps and goal > 0`);
@@ -136,12 +136,12 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
     planetFrom,
     planetPriority: Float64Array.from(planets, (p) => p.priority),
     planetK: Float64Array.from(planets, (p) => p.kMps),
-    planetGoal: Float64Array.from(planets, (p) => p.goal),
+    planetGoalSignificance: Float64Array.from(planets, (p) => p.goalSignificance),
     planetMaxAbsSignal: new Float64Array(planets.length),
     grids: [],
     searchPriority: Float64Array.from(problem.targets, (t) => t.search?.priority ?? 0),
     searchK: Float64Array.from(problem.targets, (t) => t.search?.kMps ?? 0),
-    searchGoal: Float64Array.from(problem.targets, (t) => t.search?.goal ?? 1),
+    searchGoalSignificance: Float64Array.from(problem.targets, (t) => t.search?.goalSignificance ?? 1),
     statsOffset: new Int32Array(T),
     statsLength: 0,
     maxWeight: new Float64Array(T),

@@ -45,7 +45,7 @@ export interface SchedulePlanet {
   priority: number;
   kMps: number;
   /** K / sigma_K to reach. */
-  goal: number;
+  goalSignificance: number;
 }
 
 /** A blind search: phase coverage over a period range; K scales as P^(-1/3) from periodMinDays. */
@@ -54,7 +54,7 @@ export interface ScheduleSearch {
   priority: number;
   /** Semi-amplitude at periodMinDays. */
   kMps: number;
-  goal: number;
+  goalSignificance: number;
   periodMinDays: number;
   periodMaxDays: number;
 }
@@ -162,7 +162,7 @@ export interface TargetOutcome {
   informationPerMps2: number;
   sigmaKMps: number;
   kOverSigmaK: number;
-  goal: number;
+  goalSignificance: number;
   /** This target's term of the total utility. */
   utility: number;
   /** Ephemeris targets: information / sum w; 1 is the best a white-noise, known-phase schedule can do. */

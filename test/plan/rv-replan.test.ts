@@ -58,7 +58,7 @@ function trial(rng: Rng, fitted: boolean): number {
   const prior: PriorVisit[] = points.map((p, n) => ({ targetId: 'S', localDate: `week1-${n}`, midBjdTdb: p.bjdTdb, sigmaWhiteMps: SIGMA_MPS, ...(fitted ? { phaseInPrior: true } : {}) }));
   const problem: ScheduleProblem = {
     nights: Array.from({ length: NIGHTS - FIRST_WEEK }, (_, i) => ({ index: FIRST_WEEK + i, localDate: `n${FIRST_WEEK + i}`, clearProbability: 1, hoursAvailable: 8, midBjdTdb: BJD0 + FIRST_WEEK + i + 0.2 })),
-    targets: [{ id: 'S', planets: [{ id: 'b', priority: 1, kMps: eph.kMps, goal: 50 }], model }],
+    targets: [{ id: 'S', planets: [{ id: 'b', priority: 1, kMps: eph.kMps, goalSignificance: 50 }], model }],
     slots,
     time: { mode: 'hours', hours: (PLANNED_VISITS * 900) / 3600 + 1e-6 },
     constraints: { minSpacingHours: 20, onePerNight: true },

@@ -75,13 +75,13 @@ describe('goal not reached on the demo cut to 7 nights', () => {
   it('names the visits at quadratures that would reach it: N = ceil((n sigma / K)^2) (docs/references.md [Visits-needed])', () => {
     const demo = { ...readCampaign(DEMO_CAMPAIGN), time: { mode: 'choose-nights', nights: 7 } as const };
     const demoPlan = buildPlan(demo, { weatherTrials: 10 });
-    const short = demoPlan.targets.filter((t) => t.kind === 'ephemeris' && t.kOverSigmaK! < t.goal!);
+    const short = demoPlan.targets.filter((t) => t.kind === 'ephemeris' && t.kOverSigmaK! < t.goalSignificance!);
     expect(short.length).toBeGreaterThan(0);
     for (const t of short) {
       const target = demo.targets.find((x) => x.id === t.targetId)!;
       const exposureSec = demoPlan.visits.find((v) => v.starId === t.starId)!.exposureSec;
       const sigma = visitPrecision(demo.instrument, target, exposureSec, 1.2).effMps;
-      const n = Math.ceil((t.goal! * sigma / t.kMps!) ** 2);
+      const n = Math.ceil((t.goalSignificance! * sigma / t.kMps!) ** 2);
       expect(t.warnings.join(' ')).toContain(`about ${n} visits at quadratures`);
     }
   });

@@ -145,9 +145,9 @@ const hours = (id: string) => VISITS.filter((v) => v.starId === id).reduce((s, v
 const count = (id: string) => VISITS.filter((v) => v.starId === id).length;
 
 export const SUMMARIES: TargetSummary[] = [
-  { targetId: 'Teyu-3', starId: 'Teyu-3', kind: 'ephemeris', priority: 1, kMps: 5.9, visits: count('Teyu-3'), hours: hours('Teyu-3'), sigmaKMps: 4.5, kOverSigmaK: 1.3, goal: 5, goalProbability: 0.0, informationEfficiency: 0.1, phaseErrAtEnd: 0.0009, warnings: [] },
-  { targetId: 'Mirador-7', starId: 'Mirador-7', kind: 'ephemeris', priority: 1, kMps: 8.5, visits: count('Mirador-7'), hours: hours('Mirador-7'), sigmaKMps: 2.0, kOverSigmaK: 4.2, goal: 5, goalProbability: 0.2, informationEfficiency: 0.55, phaseErrAtEnd: 0.002, warnings: [] },
-  { targetId: 'Alba', starId: 'Alba', kind: 'search', priority: 1, kMps: 3.1, visits: count('Alba'), hours: hours('Alba'), sigmaKMps: 1.2, kOverSigmaK: 2.6, goal: 5, goalProbability: 0.05, warnings: [] },
+  { targetId: 'Teyu-3', starId: 'Teyu-3', kind: 'ephemeris', priority: 1, kMps: 5.9, visits: count('Teyu-3'), hours: hours('Teyu-3'), sigmaKMps: 4.5, kOverSigmaK: 1.3, goalSignificance: 5, goalProbability: 0.0, informationEfficiency: 0.1, phaseErrAtEnd: 0.0009, warnings: [] },
+  { targetId: 'Mirador-7', starId: 'Mirador-7', kind: 'ephemeris', priority: 1, kMps: 8.5, visits: count('Mirador-7'), hours: hours('Mirador-7'), sigmaKMps: 2.0, kOverSigmaK: 4.2, goalSignificance: 5, goalProbability: 0.2, informationEfficiency: 0.55, phaseErrAtEnd: 0.002, warnings: [] },
+  { targetId: 'Alba', starId: 'Alba', kind: 'search', priority: 1, kMps: 3.1, visits: count('Alba'), hours: hours('Alba'), sigmaKMps: 1.2, kOverSigmaK: 2.6, goalSignificance: 5, goalProbability: 0.05, warnings: [] },
   { targetId: 'Quena-2', starId: 'Quena-2', kind: 'monitor', priority: 0.5, visits: 0, hours: 0, warnings: ['never observable in the window'] },
 ];
 

@@ -48,14 +48,14 @@ describe('planetOfTarget', () => {
 
 describe('targetDetectability', () => {
   it('reports visits for 3σ, 5σ and the goal, and hours from the visit cost', () => {
-    const d = targetDetectability(given, stable4m, { significance: 4, airmass: 1.2 });
-    expect(d.needed.map((v) => v.significance)).toEqual([3, 4, 5]);
+    const d = targetDetectability(given, stable4m, { goalSignificance: 4, airmass: 1.2 });
+    expect(d.needed.map((v) => v.goalSignificance)).toEqual([3, 4, 5]);
     for (const v of d.needed) expect(v.hoursRandom).toBeCloseTo((v.random * d.visitCostSec) / 3600, 12);
     expect(d.sigmaMps).toBe(d.exposure.budget.effMps);
   });
 
   it('at a planned N: Φ(K/σ_K − n) and the smallest detectable mass at the planet\'s period', () => {
-    const d = targetDetectability(given, stable4m, { significance: 5, airmass: 1.2, visits: 30, periodsDays: [1, 10] });
+    const d = targetDetectability(given, stable4m, { goalSignificance: 5, airmass: 1.2, visits: 30, periodsDays: [1, 10] });
     const at = d.atPlannedVisits!;
     // σ_K² = σ_white² / E[S] + (floor/n)², E[S] = (N − 1)/2 at random phases.
     expect(at.sigmaKRandomMps).toBeCloseTo(Math.sqrt((2 * d.whiteMps ** 2) / 29 + (stable4m.floorMps / 5) ** 2), 12);
@@ -66,7 +66,7 @@ describe('targetDetectability', () => {
   });
 
   it('says plainly when K is below the instrument floor', () => {
-    const d = targetDetectability(tiny, stable4m, { significance: 5, airmass: 1.2 });
+    const d = targetDetectability(tiny, stable4m, { goalSignificance: 5, airmass: 1.2 });
     expect(d.planet!.kMps).toBeLessThan(stable4m.floorMps);
     expect(d.verdict.level).toBe('out of reach');
     expect(d.verdict.text).toMatch(/below the instrument floor of 0.44 m\/s, which does not average down/);
@@ -74,7 +74,7 @@ describe('targetDetectability', () => {
 
   it('the floor one way everywhere: no out-of-reach verdict beside a mass limit below the planet (issue 11)', () => {
     for (const visits of [10, 100, 10_000]) {
-      const d = targetDetectability(tiny, stable4m, { significance: 5, airmass: 1.2, visits });
+      const d = targetDetectability(tiny, stable4m, { goalSignificance: 5, airmass: 1.2, visits });
       expect(d.verdict.level).toBe('out of reach');
       expect(d.atPlannedVisits!.massMinRandomEarth!).toBeGreaterThan(d.planet!.massEarth!);
       expect(d.atPlannedVisits!.mass50RandomEarth!).toBeGreaterThan(d.planet!.massEarth!);
@@ -85,15 +85,15 @@ describe('targetDetectability', () => {
   });
 
   it(`says plainly when more than ${OUT_OF_REACH_VISITS} visits are needed`, () => {
-    const d = targetDetectability(bare, stable4m, { significance: 5, airmass: 1.2, hypothetical: { massEarth: 2.5, periodDays: 30 } });
+    const d = targetDetectability(bare, stable4m, { goalSignificance: 5, airmass: 1.2, hypothetical: { massEarth: 2.5, periodDays: 30 } });
     expect(d.planet!.kMps).toBeGreaterThan(stable4m.floorMps);
-    expect(d.needed.find((v) => v.significance === 5)!.random).toBeGreaterThan(OUT_OF_REACH_VISITS);
+    expect(d.needed.find((v) => v.goalSignificance === 5)!.random).toBeGreaterThan(OUT_OF_REACH_VISITS);
     expect(d.verdict.level).toBe('out of reach');
     expect(d.verdict.text).toMatch(/more than 200/);
   });
 
   it('without a planet: precision only', () => {
-    const d = targetDetectability(bare, stable4m, { significance: 5, airmass: 1.2 });
+    const d = targetDetectability(bare, stable4m, { goalSignificance: 5, airmass: 1.2 });
     expect(d.needed).toEqual([]);
     expect(d.verdict.level).toBe('no planet');
   });

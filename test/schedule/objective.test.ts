@@ -23,8 +23,8 @@ describe('the plan state against a recomputation from scratch', () => {
     const expected = referenceKOverSigmaK(problem, kept, { searchGridSize: 16, overshootWeight: 0.1 });
     let k = 0;
     problem.targets.forEach((target, t) => {
-      target.planets.forEach((planet, i) => expect(state.planetFractionOfGoal(c.planetFrom[t]! + i) * planet.goal).toBeCloseTo(expected[k++]!, 8));
-      if (target.search) expect(state.searchFractionOfGoal(t, 0, 0) * target.search.goal).toBeCloseTo(expected[k++]!, 8);
+      target.planets.forEach((planet, i) => expect(state.planetFractionOfGoal(c.planetFrom[t]! + i) * planet.goalSignificance).toBeCloseTo(expected[k++]!, 8));
+      if (target.search) expect(state.searchFractionOfGoal(t, 0, 0) * target.search.goalSignificance).toBeCloseTo(expected[k++]!, 8);
     });
     expect(k).toBe(expected.length);
   });

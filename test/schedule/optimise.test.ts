@@ -100,7 +100,7 @@ function singleTarget(periodDays: number, nights: number, hoursPerNight: number)
   }
   return {
     nights: Array.from({ length: nights }, (_, n) => ({ index: n, localDate: `2027-04-${String(n + 1).padStart(2, '0')}`, clearProbability: 0.8, hoursAvailable: hoursPerNight })),
-    targets: [onePlanetStar('LONE-1', { kMps: 3, periodDays, tcDays: 0, goal: 100 }, [0, nights])],
+    targets: [onePlanetStar('LONE-1', { kMps: 3, periodDays, tcDays: 0, goalSignificance: 100 }, [0, nights])],
     slots,
     time: { mode: 'given-nights' },
     constraints: { minSpacingHours: 0, onePerNight: true },
@@ -131,7 +131,7 @@ describe('what the utility asks of a plan', () => {
     const busiest = relaxed.targets.filter((t) => t.kind === 'ephemeris').sort((a, b) => b.visits - a.visits)[0]!;
     const easy = problem.targets.find((t) => t.id === busiest.starId)!;
     // Make the first target's goal tiny: it should keep few visits and give the rest away.
-    const lowered = { ...problem, targets: problem.targets.map((t) => (t === easy ? { ...t, planets: t.planets.map((p) => ({ ...p, goal: 0.5 })) } : t)) };
+    const lowered = { ...problem, targets: problem.targets.map((t) => (t === easy ? { ...t, planets: t.planets.map((p) => ({ ...p, goalSignificance: 0.5 })) } : t)) };
     const capped = optimiseSchedule(lowered, { seed: 1 });
     const before = relaxed.targets.find((t) => t.starId === easy.id)!;
     const after = capped.targets.find((t) => t.starId === easy.id)!;
@@ -144,7 +144,7 @@ describe('what the utility asks of a plan', () => {
   it('spends visits away from the quadratures when the ephemeris is stale, and none when it is fresh', () => {
     // The same slots; a catalogue Tc and P whose phase error reaches 0.15 cycles by the window's end.
     const fresh = { ...singleTarget(3.3, 40, 9), time: { mode: 'choose-nights' as const, nights: 12 } };
-    const stale = { ...fresh, targets: [onePlanetStar('LONE-1', { kMps: 3, periodDays: 3.3, tcDays: -300, tcErrDays: 0.05, periodErrDays: 0.0015, goal: 100 }, [0, 40])] };
+    const stale = { ...fresh, targets: [onePlanetStar('LONE-1', { kMps: 3, periodDays: 3.3, tcDays: -300, tcErrDays: 0.05, periodErrDays: 0.0015, goalSignificance: 100 }, [0, 40])] };
     // |sin 2 pi phi| below 0.7: more than 0.125 cycles from both quadratures (common practice).
     const offQuadrature = (problem: ScheduleProblem) => {
       const visits = visitsOf(problem, optimiseSchedule(problem, { seed: 2 }));

@@ -33,11 +33,11 @@ function slots(starId: string): CandidateSlot[] {
   return out;
 }
 
-function problemOf(star: StarInput, visits: number, onePerNight: boolean, goal: number): ScheduleProblem {
+function problemOf(star: StarInput, visits: number, onePerNight: boolean, goalSignificance: number): ScheduleProblem {
   const model = buildStarModel(star);
   return {
     nights: Array.from({ length: NIGHTS }, (_, n) => ({ index: n, localDate: `n${n}`, clearProbability: 1, hoursAvailable: 8, midBjdTdb: BJD0 + n + 0.25 })),
-    targets: [{ id: 'S', planets: star.planets.map((p) => ({ id: p.id, priority: 1, kMps: p.kMps, goal })), model }],
+    targets: [{ id: 'S', planets: star.planets.map((p) => ({ id: p.id, priority: 1, kMps: p.kMps, goalSignificance })), model }],
     slots: slots('S'),
     time: { mode: 'hours', hours: (visits * SLOT_SEC) / 3600 + 1e-6 },
     constraints: { minSpacingHours: onePerNight ? 0 : 1, onePerNight },

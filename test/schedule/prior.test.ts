@@ -79,7 +79,7 @@ describe('prior visits in the optimiser', () => {
     const nights = Array.from({ length: 6 }, (_, n) => ({ index: n, localDate: `2027-03-0${n + 1}`, clearProbability: 1, hoursAvailable: 8, midBjdTdb: 100 + n + 0.25 }));
     const star = (id: string, periodDays: number) => ({
       id,
-      planets: [{ id: `${id} b`, priority: 1, kMps: 8, goal: 5 }],
+      planets: [{ id: `${id} b`, priority: 1, kMps: 8, goalSignificance: 5 }],
       model: buildStarModel({ planets: [{ id: `${id} b`, kMps: 8, periodDays, tcBjdTdb: 99.3, periodErrDays: 0, tcErrDays: 0, ecc: 0, omegaDeg: 90 }], nightlyJitterMps: 0, spanBjdTdb: [100, 106] }),
     });
     const slots: CandidateSlot[] = [];

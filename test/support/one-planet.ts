@@ -5,7 +5,7 @@ import type { ScheduleTarget } from '../../src/schedule/types.js';
 
 export function onePlanetStar(
   id: string,
-  planet: { kMps: number; periodDays: number; tcDays: number; tcErrDays?: number; periodErrDays?: number; goal?: number; priority?: number },
+  planet: { kMps: number; periodDays: number; tcDays: number; tcErrDays?: number; periodErrDays?: number; goalSignificance?: number; priority?: number },
   spanDays: [number, number],
   nightlyJitterMps = 0,
 ): ScheduleTarget {
@@ -14,5 +14,5 @@ export function onePlanetStar(
     nightlyJitterMps,
     spanBjdTdb: spanDays,
   });
-  return { id, planets: [{ id, priority: planet.priority ?? 1, kMps: planet.kMps, goal: planet.goal ?? 5 }], model };
+  return { id, planets: [{ id, priority: planet.priority ?? 1, kMps: planet.kMps, goalSignificance: planet.goalSignificance ?? 5 }], model };
 }
