@@ -40,7 +40,7 @@ function between(rng: Rng, lo: number, hi: number): number {
 
 interface SyntheticOrbit {
   periodDays: number;
-  tcDays: number;
+  tcBjdTdb: number;
   tcErrDays: number;
   periodErrDays: number;
 }
@@ -54,7 +54,7 @@ function syntheticTarget(rng: Rng, i: number, search: boolean, orbit: SyntheticO
   }
   const kMps = between(rng, 2, 12);
   const model = buildStarModel({
-    planets: [{ id, kMps, periodDays: orbit.periodDays, tcBjdTdb: orbit.tcDays, periodErrDays: orbit.periodErrDays, tcErrDays: orbit.tcErrDays, ecc: 0, omegaDeg: 90 }],
+    planets: [{ id, kMps, periodDays: orbit.periodDays, tcBjdTdb: orbit.tcBjdTdb, periodErrDays: orbit.periodErrDays, tcErrDays: orbit.tcErrDays, ecc: 0, omegaDeg: 90 }],
     nightlyJitterMps: 0,
     spanBjdTdb: spanDays,
   });
@@ -78,7 +78,7 @@ export function syntheticProblem(spec: SyntheticSpec): ScheduleProblem {
     const periodDays = Math.exp(between(rng, Math.log(1), Math.log(15)));
     const orbit: SyntheticOrbit = {
       periodDays,
-      tcDays: between(rng, 0, periodDays),
+      tcBjdTdb: between(rng, 0, periodDays),
       tcErrDays: spec.phaseErrors ? between(rng, 0.0005, 0.03) : 0,
       periodErrDays: spec.phaseErrors ? between(rng, 0, 0.002) : 0,
     };

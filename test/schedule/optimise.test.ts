@@ -100,7 +100,7 @@ function singleTarget(periodDays: number, nights: number, hoursPerNight: number)
   }
   return {
     nights: Array.from({ length: nights }, (_, n) => ({ index: n, localDate: `2027-04-${String(n + 1).padStart(2, '0')}`, clearProbability: 0.8, hoursAvailable: hoursPerNight })),
-    targets: [onePlanetStar('LONE-1', { kMps: 3, periodDays, tcDays: 0, goalSignificance: 100 }, [0, nights])],
+    targets: [onePlanetStar('LONE-1', { kMps: 3, periodDays, tcBjdTdb: 0, goalSignificance: 100 }, [0, nights])],
     slots,
     time: { mode: 'given-nights' },
     constraints: { minSpacingHours: 0, onePerNight: true },
@@ -144,7 +144,7 @@ describe('what the utility asks of a plan', () => {
   it('spends visits away from the quadratures when the ephemeris is stale, and none when it is fresh', () => {
     // The same slots; a catalogue Tc and P whose phase error reaches 0.15 cycles by the window's end.
     const fresh = { ...singleTarget(3.3, 40, 9), time: { mode: 'choose-nights' as const, nights: 12 } };
-    const stale = { ...fresh, targets: [onePlanetStar('LONE-1', { kMps: 3, periodDays: 3.3, tcDays: -300, tcErrDays: 0.05, periodErrDays: 0.0015, goalSignificance: 100 }, [0, 40])] };
+    const stale = { ...fresh, targets: [onePlanetStar('LONE-1', { kMps: 3, periodDays: 3.3, tcBjdTdb: -300, tcErrDays: 0.05, periodErrDays: 0.0015, goalSignificance: 100 }, [0, 40])] };
     // |sin 2 pi phi| below 0.7: more than 0.125 cycles from both quadratures (common practice).
     const offQuadrature = (problem: ScheduleProblem) => {
       const visits = visitsOf(problem, optimiseSchedule(problem, { seed: 2 }));

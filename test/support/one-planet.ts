@@ -5,12 +5,12 @@ import type { ScheduleTarget } from '../../src/schedule/types.js';
 
 export function onePlanetStar(
   id: string,
-  planet: { kMps: number; periodDays: number; tcDays: number; tcErrDays?: number; periodErrDays?: number; goalSignificance?: number; priority?: number },
+  planet: { kMps: number; periodDays: number; tcBjdTdb: number; tcErrDays?: number; periodErrDays?: number; goalSignificance?: number; priority?: number },
   spanDays: [number, number],
   nightlyJitterMps = 0,
 ): ScheduleTarget {
   const model = buildStarModel({
-    planets: [{ id, kMps: planet.kMps, periodDays: planet.periodDays, tcBjdTdb: planet.tcDays, tcErrDays: planet.tcErrDays ?? 0, periodErrDays: planet.periodErrDays ?? 0, ecc: 0, omegaDeg: 90 }],
+    planets: [{ id, kMps: planet.kMps, periodDays: planet.periodDays, tcBjdTdb: planet.tcBjdTdb, tcErrDays: planet.tcErrDays ?? 0, periodErrDays: planet.periodErrDays ?? 0, ecc: 0, omegaDeg: 90 }],
     nightlyJitterMps,
     spanBjdTdb: spanDays,
   });
