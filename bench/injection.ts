@@ -16,7 +16,7 @@ function benchInput(): InjectionInput {
   const timesBjdTdb = [...nights].sort((a, b) => a - b).map((n) => 2_461_400.6 + n + 0.25 * rng.uniform());
   return {
     timesBjdTdb,
-    sigmaMps: timesBjdTdb.map(() => 1.5 + 1.5 * rng.uniform()),
+    rvErrorsMps: timesBjdTdb.map(() => 1.5 + 1.5 * rng.uniform()),
     periodsDays: logSpaced(2, 100, 20),
     massesEarth: logSpaced(2, 60, 20),
     starMassSun: 0.9,

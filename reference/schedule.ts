@@ -66,8 +66,8 @@ function kOverSigmaKOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], g
       // A fresh accumulator over the visits: no running state from earlier moves.
       const asVisit = (v: CandidateSlot | PriorVisit) =>
         'nightIndex' in v
-          ? { bjdTdb: v.midBjdTdb, sigmaMps: v.sigmaWhiteMps, night: v.nightIndex, nightBjdTdb: nightMid.get(v.nightIndex)! }
-          : { bjdTdb: v.midBjdTdb, sigmaMps: v.sigmaWhiteMps, night: priorKey.get(v.localDate)!, nightBjdTdb: priorNightMid(v.localDate) };
+          ? { bjdTdb: v.midBjdTdb, whiteSigmaMps: v.whiteSigmaMps, night: v.nightIndex, nightBjdTdb: nightMid.get(v.nightIndex)! }
+          : { bjdTdb: v.midBjdTdb, whiteSigmaMps: v.whiteSigmaMps, night: priorKey.get(v.localDate)!, nightBjdTdb: priorNightMid(v.localDate) };
       const visits = informationVisits(target.model, mine.map(asVisit));
       // A visit whose phase information is in the prior keeps only the offset and K columns.
       const model = target.model;
@@ -84,7 +84,7 @@ function kOverSigmaKOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], g
     }
     const grid = grids[t];
     if (grid && target.search) {
-      const w = mine.map((v) => 1 / v.sigmaWhiteMps ** 2);
+      const w = mine.map((v) => 1 / v.whiteSigmaMps ** 2);
       let total = 0;
       for (let p = 0; p < grid.angularFreq.length; p++) {
         const m = [0, 1, 2].map((r) => [0, 1, 2].map((k) => (r === k ? grid.eps : 0)));

@@ -86,7 +86,7 @@ export function syntheticProblem(spec: SyntheticSpec): ScheduleProblem {
     if (spec.visitsPerNight !== undefined && i % 2 === 0) target.visitsPerNight = spec.visitsPerNight;
     targets.push(target);
     const durationSec = Math.round(between(rng, 600, 2400));
-    const sigmaMps = between(rng, 1, 4);
+    const whiteSigmaMps = between(rng, 1, 4);
     const windowHours = between(rng, 2, spec.nightHours);
     // Hours after dusk at which the window opens on the first night; drifts 4 min earlier per night.
     const openHours0 = between(rng, -spec.nightHours, spec.nightHours);
@@ -99,7 +99,7 @@ export function syntheticProblem(spec: SyntheticSpec): ScheduleProblem {
       for (let k = 0; k < spec.slotsPerNight; k++) {
         const startMs = FIRST_NIGHT_MS + night.index * DAY_MS + (opens + (spec.slotsPerNight === 1 ? usable / 2 : (usable * k) / (spec.slotsPerNight - 1))) * HOUR_MS;
         const midBjdTdb = (startMs + (durationSec * 1000) / 2 - FIRST_NIGHT_MS) / DAY_MS;
-        slots.push({ slotId: `${target.id}/${night.index}/${k}`, targetId: target.id, nightIndex: night.index, startMs, durationSec, sigmaWhiteMps: sigmaMps * between(rng, 1, 1.3), midBjdTdb });
+        slots.push({ slotId: `${target.id}/${night.index}/${k}`, targetId: target.id, nightIndex: night.index, startMs, durationSec, whiteSigmaMps: whiteSigmaMps * between(rng, 1, 1.3), midBjdTdb });
       }
     }
   });

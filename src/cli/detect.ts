@@ -52,7 +52,7 @@ function detectOptions(opts: DetectFlags): DetectOptions {
     goalSignificance: opts.significance,
     airmass: opts.airmass,
     exposureSec: opts.exposure,
-    targetSigmaMps: opts.targetSigma,
+    targetVisitSigmaMps: opts.targetSigma,
     seeingArcsec: opts.seeing,
     visits: opts.visits,
     hypothetical: opts.planetMass === undefined ? undefined : { massEarth: opts.planetMass, periodDays: opts.period!, ecc: opts.ecc },
@@ -88,7 +88,7 @@ function printTable(rows: TargetDetectability[], options: DetectOptions): void {
       fmt(r.vmag, 1),
       fmt(r.teffK, 0),
       fmt(r.planet?.kMps, 2),
-      fmt(r.sigmaMps, 2),
+      fmt(r.effectiveSigmaMps, 2),
       `${r.exposure.exposureSec}${r.exposure.tooFaint ? '!' : ''}`,
       ...levels.map((level) => pair(need(level)?.random, need(level)?.quadrature, 0)),
       pair(goal?.hoursRandom, goal?.hoursQuadrature, 1),
@@ -129,7 +129,7 @@ function csvRows(rows: TargetDetectability[], options: DetectOptions): string {
   const levels = [...new Set([3, 5, options.goalSignificance])].sort((a, b) => a - b);
   const header = [
     'target', 'vmag', 'teffK', 'massSun', 'planetSource', 'planetMassEarth', 'periodDays', 'ecc', 'kMps', 'exposureSec', 'tooFaint',
-    'sigmaPhotonMps', 'sigmaVisitMps', 'sigmaEffMps', 'visitCostSec',
+    'photonSigmaMps', 'visitSigmaMps', 'effectiveSigmaMps', 'visitCostSec',
     ...levels.flatMap((n) => [`visits${n}Random`, `visits${n}Quadrature`, `hours${n}Random`, `hours${n}Quadrature`]),
     'plannedVisits', 'sigmaKRandomMps', 'probabilityRandom', 'probabilityQuadrature', 'massMinRandomEarth', 'massMinQuadratureEarth', 'mass50RandomEarth', 'mass90RandomEarth',
     'snrPerPixel', 'jitterSource',
@@ -140,7 +140,7 @@ function csvRows(rows: TargetDetectability[], options: DetectOptions): string {
     const p = r.atPlannedVisits;
     return [
       r.targetId, r.vmag, r.teffK, r.massSun, r.planet?.source, r.planet?.massEarth, r.planet?.periodDays, r.planet?.ecc, r.planet?.kMps, r.exposure.exposureSec, String(r.exposure.tooFaint),
-      b.photonMps, b.visitMps, b.effMps, r.visitCostSec,
+      b.photonSigmaMps, b.visitSigmaMps, b.effectiveSigmaMps, r.visitCostSec,
       ...levels.flatMap((n) => {
         const v = r.needed.find((x) => x.goalSignificance === n);
         return [v?.random, v?.quadrature, v?.hoursRandom, v?.hoursQuadrature];

@@ -63,12 +63,12 @@ function planetMassEarth(plan: Plan, target: Target, eph: Ephemeris): number | u
 function jobOf(plan: Plan, target: Target, settings: MapSettings): MapJob | undefined {
   const visits = visitsOf(plan, target.starId);
   const timesBjdTdb = visits.map((v) => v.midBjdTdb);
-  const sigmaMps = visits.map((v) => v.sigmaEffMps);
+  const rvErrorsMps = visits.map((v) => v.effectiveSigmaMps);
   if (target.search) {
     const { periodMinDays, periodMaxDays, massEarth } = target.search;
     const { periodsDays, massesEarth } = axes(settings, [periodMinDays, periodMaxDays], [massEarth / 2, massEarth * SEARCH_MASS_FACTOR]);
     const input: InjectionInput = {
-      timesBjdTdb, sigmaMps, periodsDays, massesEarth, starMassSun: target.massSun,
+      timesBjdTdb, rvErrorsMps, periodsDays, massesEarth, starMassSun: target.massSun,
       trialsPerCell: settings.trialsPerCell, seed: settings.seed, fapThreshold: settings.fapThreshold,
     };
     if (settings.eccMax) input.eccentricity = { distribution: 'uniform', max: settings.eccMax };
@@ -80,7 +80,7 @@ function jobOf(plan: Plan, target: Target, settings: MapSettings): MapJob | unde
   const centre = mass ?? 10;
   const { periodsDays, massesEarth } = axes(settings, [eph.periodDays / PERIOD_FACTOR, eph.periodDays * PERIOD_FACTOR], [centre / MASS_FACTOR, centre * MASS_FACTOR]);
   const goalSignificance = plan.targets.find((s) => s.targetId === target.id)?.goalSignificance ?? plan.campaign.goals.significance;
-  const input: KnownPhaseInput = { timesBjdTdb, sigmaMps, ephemeris: eph, periodsDays, massesEarth, starMassSun: target.massSun, goalSignificance };
+  const input: KnownPhaseInput = { timesBjdTdb, rvErrorsMps, ephemeris: eph, periodsDays, massesEarth, starMassSun: target.massSun, goalSignificance };
   return { ...base(target, visits), kind: 'ephemeris', ephemeris: eph, planetMassEarth: mass, input };
 }
 

@@ -52,7 +52,7 @@ const targetSchema = z.object({
   logRhk: optional(num),
   logg: optional(num),
   exposureSec: optional(positive),
-  sigmaMps: optional(positive),
+  visitSigmaMps: optional(positive),
   jitterSource: z.string().optional(),
   priority: positive,
   goalSignificance: optional(positive),

@@ -39,7 +39,7 @@ const rowSchema = z.strictObject({
   logrhk: numberField("chromospheric activity log R'HK from -6 to -3.5", -6, -3.5),
   logg: numberField('surface gravity log g (cgs) from 0 to 6', 0, 6),
   exposuresec: numberField('exposure time in seconds, more than 0 and at most 100000', 0, 1e5, { exclusiveMin: true }),
-  sigmamps: numberField('sigma per visit in m/s (photon and floor), more than 0 and at most 10000', 0, 1e4, { exclusiveMin: true }),
+  visitsigmamps: numberField('sigma per visit in m/s (photon and floor), more than 0 and at most 10000', 0, 1e4, { exclusiveMin: true }),
   teffk: numberField('effective temperature in kelvin, 2300 to 12000', 2300, 12000),
   masssun: numberField('stellar mass in solar masses, more than 0.05 and at most 10', 0.05, 10, { exclusiveMin: true }),
   vsinikms: numberField('projected rotation in km/s, 0 to 300', 0, 300),
@@ -79,7 +79,7 @@ const CANONICAL: Record<string, string> = {
   searchmassearth: 'searchMassEarth', nightlyjitterfraction: 'nightlyJitterFraction', rotationdays: 'rotationDays', activitymps: 'activityMps',
   activitycoherencedays: 'activityCoherenceDays', eccsigma: 'eccSigma',
   rmag: 'rmag', imag: 'imag', jmag: 'jmag', hmag: 'hmag', gmag: 'gmag', logrhk: 'logRhk',
-  exposuresec: 'exposureSec', sigmamps: 'sigmaMps', visitspernight: 'visitsPerNight',
+  exposuresec: 'exposureSec', visitsigmamps: 'visitSigmaMps', visitspernight: 'visitsPerNight',
 };
 /** Magnitude columns other than V, by band. */
 const BAND_COLUMNS: [BandId, 'rmag' | 'imag' | 'jmag' | 'hmag' | 'gmag'][] = [['R', 'rmag'], ['I', 'imag'], ['J', 'jmag'], ['H', 'hmag'], ['G', 'gmag']];
@@ -89,7 +89,7 @@ const REQUIRED = ['id', 'ra', 'dec', 'vmag', 'teffk'];
 const STAR_COLUMNS = [
   'ra', 'dec', 'pmramasyr', 'pmdecmasyr', 'epochyear', 'vmag', 'teffk', 'masssun', 'vsinikms', 'jittermps',
   'nightlyjitterfraction', 'rotationdays', 'activitymps', 'activitycoherencedays', 'rmag', 'imag', 'jmag', 'hmag', 'gmag',
-  'logrhk', 'logg', 'exposuresec', 'sigmamps', 'visitspernight',
+  'logrhk', 'logg', 'exposuresec', 'visitsigmamps', 'visitspernight',
 ] as const;
 
 interface Place {
@@ -117,7 +117,7 @@ function buildTarget(row: Row, place: Place): Target {
   const firstBand = BAND_COLUMNS.find(([band]) => mags[band] !== undefined)?.[0];
   if (row.vmag === undefined && firstBand === undefined) fail(place, 'vmag', 'required: V magnitude from -2 to 20, or a magnitude in another band (rmag, imag, jmag, hmag, gmag)');
   if (row.visitspernight !== undefined && !Number.isInteger(row.visitspernight)) fail(place, 'visitspernight', 'visits of the star in one night, a whole number from 1 to 12');
-  if (row.exposuresec !== undefined && row.sigmamps !== undefined) fail(place, 'sigmamps', 'give exposureSec or sigmaMps, not both');
+  if (row.exposuresec !== undefined && row.visitsigmamps !== undefined) fail(place, 'visitsigmamps', 'give exposureSec or visitSigmaMps, not both');
   const withDefault = <T>(value: T | undefined, name: string, fallback: T): T => {
     if (value !== undefined) return value;
     estimated.push(name);
@@ -169,7 +169,7 @@ function buildTarget(row: Row, place: Place): Target {
   const optional = { nightlyJitterFraction: row.nightlyjitterfraction, rotationDays: row.rotationdays, activityMps: row.activitymps, activityCoherenceDays: row.activitycoherencedays };
   for (const [key, value] of Object.entries(optional)) if (value !== undefined) Object.assign(target, { [key]: value });
   if (Object.keys(mags).length > 0) target.mags = mags;
-  for (const [key, value] of [['logRhk', row.logrhk], ['logg', row.logg], ['exposureSec', row.exposuresec], ['sigmaMps', row.sigmamps], ['visitsPerNight', row.visitspernight]] as const) {
+  for (const [key, value] of [['logRhk', row.logrhk], ['logg', row.logg], ['exposureSec', row.exposuresec], ['visitSigmaMps', row.visitsigmamps], ['visitsPerNight', row.visitspernight]] as const) {
     if (value !== undefined) target[key] = value;
   }
   if (hasPeriod) {

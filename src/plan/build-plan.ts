@@ -79,10 +79,10 @@ function plannedVisit(d: SlotDetail, campaign: Campaign): PlannedVisit {
     airmass: d.airmass,
     moonSeparationDeg: d.moonSeparationDeg,
     phases: d.phases,
-    sigmaMps: d.sigmaMps,
+    visitSigmaMps: d.visitSigmaMps,
     snrPerPixel: d.snrPerPixel,
-    sigmaEffMps: d.sigmaEffMps,
-    sigmaWhiteMps: d.slot.sigmaWhiteMps,
+    effectiveSigmaMps: d.effectiveSigmaMps,
+    whiteSigmaMps: d.slot.whiteSigmaMps,
   };
 }
 

@@ -31,8 +31,8 @@ export interface SlotDetail {
   moonSeparationDeg: number;
   midBjdTdb: number;
   /** Photon + floor; with all the jitter. */
-  sigmaMps: number;
-  sigmaEffMps: number;
+  visitSigmaMps: number;
+  effectiveSigmaMps: number;
   phases: VisitPhase[];
   /** S/N per pixel at the instrument's wavelength. */
   snrPerPixel: number;
@@ -73,7 +73,7 @@ export function setupTargets(campaign: Campaign): TargetSetup[] {
     const options = { seeingArcsec: campaign.site.medianSeeingArcsec, kMps, goalSignificance, maxVisits: visitCap(campaign, target) };
     const exposure =
       target.exposureSec === undefined
-        ? chooseExposureSec(instrument, target, TYPICAL_AIRMASS, target.sigmaMps, options)
+        ? chooseExposureSec(instrument, target, TYPICAL_AIRMASS, target.visitSigmaMps, options)
         : fixedExposure(instrument, target, TYPICAL_AIRMASS, target.exposureSec, options);
     const setup: TargetSetup = { target, exposure, durationSec: visitCostSec(instrument, exposure.exposureSec) };
     if (target.ephemeris && kMps !== undefined) {
@@ -206,7 +206,7 @@ export function candidateSlots(campaign: Campaign, nights: Night[], windows: Win
           nightIndex: n,
           startMs,
           durationSec: setup.durationSec,
-          sigmaWhiteMps: whiteSigmaMps(budget.visitMps, setup.noise),
+          whiteSigmaMps: whiteSigmaMps(budget.visitSigmaMps, setup.noise),
           midBjdTdb,
         };
         details.push({
@@ -216,8 +216,8 @@ export function candidateSlots(campaign: Campaign, nights: Night[], windows: Win
           airmass,
           moonSeparationDeg: moonSeparationDeg(moon, position.vector, midMs),
           midBjdTdb,
-          sigmaMps: budget.visitMps,
-          sigmaEffMps: budget.effMps,
+          visitSigmaMps: budget.visitSigmaMps,
+          effectiveSigmaMps: budget.effectiveSigmaMps,
           phases: ephemerides.map(({ id, eph }) => ({ targetId: id, phase: phaseAt(eph, midBjdTdb), phaseErr: phaseErrCycles(eph, midBjdTdb) })),
           snrPerPixel: budget.snrPerPixel,
         });

@@ -48,7 +48,7 @@ export function priorVisits(h: History, fittedStars: ReadonlySet<string>, nights
     targetId: v.starId,
     localDate: v.localDate,
     midBjdTdb: v.midBjdTdb,
-    sigmaWhiteMps: v.sigmaWhiteMps,
+    whiteSigmaMps: v.whiteSigmaMps,
     ...(middle.has(v.localDate) ? { nightMidBjdTdb: middle.get(v.localDate)! } : {}),
     ...(phaseInPrior ? { phaseInPrior } : {}),
   });

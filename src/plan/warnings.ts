@@ -23,7 +23,7 @@ const RECOVERED_PHASE_ERR_CYCLES = 0.05;
  */
 function visitsHint(summary: TargetSummary, setup: TargetSetup): string {
   if (summary.kind !== 'ephemeris' || summary.kMps === undefined || summary.goalSignificance === undefined) return '';
-  const n = visitsNeeded(summary.kMps, setup.exposure.budget.effMps, summary.goalSignificance, 'quadrature');
+  const n = visitsNeeded(summary.kMps, setup.exposure.budget.effectiveSigmaMps, summary.goalSignificance, 'quadrature');
   return `; about ${n} visits at quadratures would reach it`;
 }
 
@@ -32,8 +32,8 @@ function visitsHint(summary: TargetSummary, setup: TargetSetup): string {
  * Fisher information on the phase δ of K sin(2πφ + δ) from N visits spread in phase is
  * N K² / (2σ²), so σ_δ = 2π σ_φ needs N = 2σ² / (K 2π σ_φ)² (docs/references.md [Kay1993]).
  */
-export function recoveryVisits(kMps: number, sigmaMps: number): number {
-  return Math.max(3, Math.ceil((2 * sigmaMps * sigmaMps) / (kMps * 2 * Math.PI * RECOVERED_PHASE_ERR_CYCLES) ** 2));
+export function recoveryVisits(kMps: number, effectiveSigmaMps: number): number {
+  return Math.max(3, Math.ceil((2 * effectiveSigmaMps * effectiveSigmaMps) / (kMps * 2 * Math.PI * RECOVERED_PHASE_ERR_CYCLES) ** 2));
 }
 
 /** Fills each target's warnings in place and returns the plan-wide ones. */
@@ -51,7 +51,7 @@ export function planWarnings(plan: Plan, setups: TargetSetup[], windows: Window[
       w.push(`goal K/sigma_K = ${summary.goalSignificance} not reached: ${summary.kOverSigmaK.toFixed(1)} with ${summary.visits} visits${visitsHint(summary, setup)}`);
     }
     if (summary.phaseErrAtEnd !== undefined && summary.phaseErrAtEnd > LOST_PHASE_ERR_CYCLES && summary.kMps !== undefined) {
-      const n = recoveryVisits(summary.kMps, setup.exposure.budget.effMps);
+      const n = recoveryVisits(summary.kMps, setup.exposure.budget.effectiveSigmaMps);
       w.push(
         `phase must be recovered first: phase error ±${summary.phaseErrAtEnd.toFixed(2)} cycles by the window's end, beyond what the plan's linearised model can trust; about ${n} visits spread in phase bring it to ±${RECOVERED_PHASE_ERR_CYCLES} cycles`,
       );

@@ -37,7 +37,7 @@ export function visitRow(visit: PlannedVisit, zone: string): string[] {
     fmt(visit.exposureSec, 0),
     fmt(visit.airmass, 2),
     phasesText(visit),
-    fmt(visit.sigmaEffMps, 2),
+    fmt(visit.effectiveSigmaMps, 2),
     fmt(visit.snrPerPixel, 0),
   ];
 }
@@ -143,7 +143,7 @@ export const OBSERVED_COLUMNS: Column[] = [
 ];
 
 export function observedRows(plan: Plan): string[][] {
-  return (plan.observed ?? []).map((v) => [v.localDate, v.midUtc.slice(11, 16), v.targetId, v.instrument, fmt(v.rvMps, 2), fmt(v.rvErrMps, 2)]);
+  return (plan.observed ?? []).map((v) => [v.localDate, v.midUtc.slice(11, 16), v.targetId, v.instrument, fmt(v.rvMps, 2), fmt(v.rvErrorMps, 2)]);
 }
 
 /** Signed difference in units of the fitted error, e.g. `+1.8σ`. */

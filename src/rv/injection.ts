@@ -25,7 +25,7 @@ export interface InjectionInput {
   /** Visit times, BJD_TDB days. */
   timesBjdTdb: number[];
   /** Each visit's effective σ (photon noise, floor and jitter together), m/s: noise and weights 1/σ². */
-  sigmaMps: number[];
+  rvErrorsMps: number[];
   periodsDays: number[];
   massesEarth: number[];
   starMassSun: number;
@@ -66,8 +66,8 @@ export interface InjectionMap {
 export const DEFAULT_FAP_THRESHOLD = 0.01;
 
 function checkInput(input: InjectionInput): void {
-  const { timesBjdTdb, sigmaMps, periodsDays, massesEarth, trialsPerCell, starMassSun } = input;
-  if (timesBjdTdb.length !== sigmaMps.length) throw new RangeError(`times and sigma differ in length: ${timesBjdTdb.length} and ${sigmaMps.length}`);
+  const { timesBjdTdb, rvErrorsMps, periodsDays, massesEarth, trialsPerCell, starMassSun } = input;
+  if (timesBjdTdb.length !== rvErrorsMps.length) throw new RangeError(`times and sigma differ in length: ${timesBjdTdb.length} and ${rvErrorsMps.length}`);
   if (periodsDays.length === 0 || massesEarth.length === 0) throw new RangeError('need at least one period and one mass');
   if (!periodsDays.every((p) => p > 0) || !massesEarth.every((m) => m > 0) || !(starMassSun > 0)) throw new RangeError('periods and masses must be positive');
   if (!Number.isInteger(trialsPerCell) || trialsPerCell < 1) throw new RangeError(`trialsPerCell must be a positive integer, got ${trialsPerCell}`);
@@ -93,8 +93,8 @@ export function prepareInjection(input: InjectionInput): InjectionSetup {
   return {
     input,
     grid,
-    kernel: glsKernel(input.timesBjdTdb, input.sigmaMps, grid),
-    fap: fapContext(input.timesBjdTdb, input.sigmaMps, grid),
+    kernel: glsKernel(input.timesBjdTdb, input.rvErrorsMps, grid),
+    fap: fapContext(input.timesBjdTdb, input.rvErrorsMps, grid),
     fapThreshold: input.fapThreshold ?? DEFAULT_FAP_THRESHOLD,
   };
 }
@@ -111,7 +111,7 @@ function drawEccentricity(model: EccentricityModel | undefined, rng: Rng): { ecc
  */
 export function detectionProbability(setup: InjectionSetup, i: number, j: number): number {
   const { input, grid, kernel, fap, fapThreshold } = setup;
-  const { timesBjdTdb, sigmaMps, periodsDays, massesEarth, starMassSun, trialsPerCell } = input;
+  const { timesBjdTdb, rvErrorsMps, periodsDays, massesEarth, starMassSun, trialsPerCell } = input;
   const periodDays = periodsDays[i]!;
   const rng = createRng(deriveSeed(input.seed, i * massesEarth.length + j));
   const toleranceFreq = 1 / grid.baselineDays;
@@ -123,7 +123,7 @@ export function detectionProbability(setup: InjectionSetup, i: number, j: number
     const kMps = semiAmplitudeMps({ starMassSun, planetMassEarth: massesEarth[j]!, periodDays, ecc });
     // Random phase: the periastron time uniform over one period.
     const orbit = { kMps, periodDays, ecc, omegaDeg, periastronBjdTdb: timesBjdTdb[0]! + periodDays * rng.uniform() };
-    for (let n = 0; n < values.length; n++) values[n] = radialVelocityMps(orbit, timesBjdTdb[n]!) + sigmaMps[n]! * rng.normal();
+    for (let n = 0; n < values.length; n++) values[n] = radialVelocityMps(orbit, timesBjdTdb[n]!) + rvErrorsMps[n]! * rng.normal();
     kernel.power(values, power);
     const best = argMax(power);
     const nearInjected = Math.abs(gridFrequency(grid, best) - 1 / periodDays) < toleranceFreq;

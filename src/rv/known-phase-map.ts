@@ -19,7 +19,7 @@ import { createRng, deriveSeed } from './random.js';
 export interface KnownPhaseInput {
   /** Visit times (BJD_TDB days) and each visit's σ_eff with jitter (m/s). */
   timesBjdTdb: number[];
-  sigmaMps: number[];
+  rvErrorsMps: number[];
   ephemeris: Ephemeris;
   periodsDays: number[];
   massesEarth: number[];
@@ -46,7 +46,7 @@ const atPeriod = (eph: Ephemeris, periodDays: number): Ephemeris => ({ ...eph, p
  * information model of one circular planet with its ephemeris held fixed, each visit on a night
  * of its own.
  */
-export function expectedSigmaKMps(timesBjdTdb: number[], sigmaMps: number[], eph: Ephemeris): number {
+export function expectedSigmaKMps(timesBjdTdb: number[], rvErrorsMps: number[], eph: Ephemeris): number {
   if (timesBjdTdb.length === 0) return Infinity;
   const span: [number, number] = [Math.min(...timesBjdTdb), Math.max(...timesBjdTdb)];
   const model = buildStarModel({
@@ -54,12 +54,12 @@ export function expectedSigmaKMps(timesBjdTdb: number[], sigmaMps: number[], eph
     nightlyJitterMps: 0,
     spanBjdTdb: span,
   });
-  const variance = kVariances(model, informationVisits(model, timesBjdTdb.map((bjd, n) => ({ bjdTdb: bjd, sigmaMps: sigmaMps[n]!, night: n, nightBjdTdb: bjd }))))[0]!;
+  const variance = kVariances(model, informationVisits(model, timesBjdTdb.map((bjd, n) => ({ bjdTdb: bjd, whiteSigmaMps: rvErrorsMps[n]!, night: n, nightBjdTdb: bjd }))))[0]!;
   return Math.sqrt(variance);
 }
 
 function checkInput(input: KnownPhaseInput): void {
-  if (input.timesBjdTdb.length !== input.sigmaMps.length) throw new RangeError('times and sigma differ in length');
+  if (input.timesBjdTdb.length !== input.rvErrorsMps.length) throw new RangeError('times and sigma differ in length');
   if (!input.periodsDays.length || !input.massesEarth.length) throw new RangeError('need at least one period and one mass');
 }
 
@@ -70,7 +70,7 @@ const kOf = (input: KnownPhaseInput, periodDays: number, planetMassEarth: number
 /** The analytic map: P = Φ(K/σ_K − n) per cell (docs/references.md [Detection-probability], src/rv/detect.ts). */
 export function knownPhaseMapAnalytic(input: KnownPhaseInput): KnownPhaseMap {
   checkInput(input);
-  const sigmaKMps = input.periodsDays.map((p) => expectedSigmaKMps(input.timesBjdTdb, input.sigmaMps, atPeriod(input.ephemeris, p)));
+  const sigmaKMps = input.periodsDays.map((p) => expectedSigmaKMps(input.timesBjdTdb, input.rvErrorsMps, atPeriod(input.ephemeris, p)));
   const detection = input.periodsDays.map((p, i) =>
     input.massesEarth.map((m) => (Number.isFinite(sigmaKMps[i]!) ? detectionProbabilityKnownPhase(kOf(input, p, m), sigmaKMps[i]!, input.goalSignificance) : 0)),
   );
@@ -87,9 +87,9 @@ export function knownPhaseMapAnalytic(input: KnownPhaseInput): KnownPhaseMap {
  */
 export function knownPhaseMapSimulated(input: KnownPhaseInput & { trialsPerCell: number; seed: number }): KnownPhaseMap {
   checkInput(input);
-  const { timesBjdTdb, sigmaMps, ephemeris: eph, massesEarth, trialsPerCell } = input;
+  const { timesBjdTdb, rvErrorsMps, ephemeris: eph, massesEarth, trialsPerCell } = input;
   const count = timesBjdTdb.length;
-  const w = sigmaMps.map((s) => 1 / (s * s));
+  const w = rvErrorsMps.map((s) => 1 / (s * s));
   const sumW = w.reduce((a, b) => a + b, 0);
   const truth = new Float64Array(count);
   const sigmaKMps: number[] = [];
@@ -107,7 +107,7 @@ export function knownPhaseMapSimulated(input: KnownPhaseInput & { trialsPerCell:
       let detected = 0;
       for (let trial = 0; trial < trialsPerCell; trial++) {
         const trueEph = { ...eph, periodDays: periodDays + eph.periodErrDays * rng.normal(), tcBjdTdb: eph.tcBjdTdb + eph.tcErrDays * rng.normal() };
-        for (let n = 0; n < count; n++) truth[n] = -kMps * Math.sin(2 * Math.PI * phaseAt(trueEph, timesBjdTdb[n]!)) + sigmaMps[n]! * rng.normal();
+        for (let n = 0; n < count; n++) truth[n] = -kMps * Math.sin(2 * Math.PI * phaseAt(trueEph, timesBjdTdb[n]!)) + rvErrorsMps[n]! * rng.normal();
         // Σ w (s − s̄)(v − v̄) = Σ w (s − s̄) v, since Σ w (s − s̄) = 0.
         let cross = 0;
         for (let n = 0; n < count; n++) cross += w[n]! * centred[n]! * truth[n]!;

@@ -27,7 +27,7 @@ export interface FitPlanetPrior {
 export interface FitPoint {
   bjdTdb: number;
   rvMps: number;
-  rvErrMps: number;
+  rvErrorMps: number;
   instrument: string;
 }
 
@@ -137,7 +137,7 @@ function checkInputs(planets: FitPlanetPrior[], points: FitPoint[], jitterMps: n
   if (!(jitterMps >= 0 && Number.isFinite(jitterMps))) throw validationError('jitterMps', jitterMps, 'a finite jitter of 0 m/s or more');
   points.forEach((pt, i) => {
     if (!Number.isFinite(pt.bjdTdb) || !Number.isFinite(pt.rvMps)) throw validationError(`points[${i}]`, pt, 'a finite time and RV');
-    if (!(pt.rvErrMps > 0 && Number.isFinite(pt.rvErrMps))) throw validationError(`points[${i}].rvErrMps`, pt.rvErrMps, 'a positive, finite uncertainty');
+    if (!(pt.rvErrorMps > 0 && Number.isFinite(pt.rvErrorMps))) throw validationError(`points[${i}].rvErrorMps`, pt.rvErrorMps, 'a positive, finite uncertainty');
   });
   planets.forEach((pl, i) => {
     const ok = pl.periodDays > 0 && pl.periodErrDays >= 0 && pl.tcErrDays >= 0 && pl.kMps > 0 && pl.ecc >= 0 && pl.ecc < MAX_ECC && Number.isFinite(pl.tcBjdTdb) && Number.isFinite(pl.omegaDeg);
@@ -168,7 +168,7 @@ export function fitOrbits(catalogue: FitPlanetPrior[], points: FitPoint[], jitte
   const lay = buildLayout(planets, instruments);
   const n = points.length;
   const instrumentOf = points.map((pt) => instruments.indexOf(pt.instrument));
-  const invSigma = points.map((pt) => 1 / Math.sqrt(pt.rvErrMps ** 2 + jitterMps ** 2));
+  const invSigma = points.map((pt) => 1 / Math.sqrt(pt.rvErrorMps ** 2 + jitterMps ** 2));
   const times = points.map((pt) => pt.bjdTdb - origin);
   const first = times.reduce((lo, t) => Math.min(lo, t), Infinity);
   const last = times.reduce((hi, t) => Math.max(hi, t), -Infinity);
@@ -231,7 +231,7 @@ function startsFor(planets: FitPlanetPrior[], points: FitPoint[], lay: Layout, m
   lay.instruments.forEach((name, j) => {
     // Weighted mean of the instrument's RVs (common practice).
     const own = points.filter((pt) => pt.instrument === name);
-    const w = own.map((pt) => 1 / pt.rvErrMps ** 2);
+    const w = own.map((pt) => 1 / pt.rvErrorMps ** 2);
     start[j] = own.reduce((s, pt, i) => s + w[i]! * pt.rvMps, 0) / w.reduce((s, v) => s + v, 0);
   });
   planets.forEach((pl, k) => {

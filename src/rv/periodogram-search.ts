@@ -42,15 +42,15 @@ export const FAP_LEVELS = [0.1, 0.01, 0.001];
 export function searchPeriodogram(
   timesDays: ArrayLike<number>,
   valuesMps: ArrayLike<number>,
-  sigmaMps: ArrayLike<number>,
+  rvErrorsMps: ArrayLike<number>,
   options: FrequencyGridOptions & { top?: number } = {},
 ): PeriodogramSearch {
   const grid = frequencyGrid(timesDays, options);
-  const power = glsPeriodogram(timesDays, valuesMps, sigmaMps, grid);
-  const fap = fapContext(timesDays, sigmaMps, grid);
+  const power = glsPeriodogram(timesDays, valuesMps, rvErrorsMps, grid);
+  const fap = fapContext(timesDays, rvErrorsMps, grid);
   const peaks = findPeaks(power, grid, options.top ?? 5).map((peak, i): RankedPeak => {
-    const refined = glsAt(timesDays, valuesMps, sigmaMps, peak.freqPerDay);
-    const fit = refined.power >= peak.power ? refined : glsAt(timesDays, valuesMps, sigmaMps, gridFrequency(grid, peak.index));
+    const refined = glsAt(timesDays, valuesMps, rvErrorsMps, peak.freqPerDay);
+    const fit = refined.power >= peak.power ? refined : glsAt(timesDays, valuesMps, rvErrorsMps, gridFrequency(grid, peak.index));
     return {
       rank: i + 1,
       periodDays: 1 / fit.freqPerDay,

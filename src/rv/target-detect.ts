@@ -25,7 +25,7 @@ export const DEMANDING_VISITS = 50;
 
 /** What detectability needs of a target: a Target, or a star given on the command line. */
 export type DetectStar = Pick<Target, 'id' | 'vmag' | 'teffK' | 'massSun' | 'vsiniKms' | 'jitterMps' | 'estimated'> &
-  Partial<Pick<Target, 'planet' | 'ephemeris' | 'search' | 'mags' | 'logg' | 'logRhk' | 'exposureSec' | 'sigmaMps' | 'jitterSource' | 'source'>>;
+  Partial<Pick<Target, 'planet' | 'ephemeris' | 'search' | 'mags' | 'logg' | 'logRhk' | 'exposureSec' | 'visitSigmaMps' | 'jitterSource' | 'source'>>;
 
 export interface DetectPlanet {
   source: 'given' | 'search' | 'hypothetical';
@@ -83,8 +83,8 @@ export interface DetectOptions {
   airmass: number;
   /** Fixed exposure (s); otherwise chooseExposureSec picks one. A target's own exposureSec wins. */
   exposureSec?: number;
-  /** Requested σ_visit for the exposure choice. A target's own sigmaMps wins. */
-  targetSigmaMps?: number;
+  /** Requested σ_visit for the exposure choice. A target's own visitSigmaMps wins. */
+  targetVisitSigmaMps?: number;
   /** Zenith seeing (arcsec), e.g. the site's median. */
   seeingArcsec?: number;
   /** A planet number of visits: σ_K, detection probability and mass limits at that N. */
@@ -131,9 +131,9 @@ export interface TargetDetectability {
   planet?: DetectPlanet;
   exposure: ExposureChoice;
   /** σ_eff per visit (m/s): photon, floor and jitter in quadrature. */
-  sigmaMps: number;
+  effectiveSigmaMps: number;
   /** The part of σ that averages down over visits (photon and jitter), and the floor that does not (m/s). */
-  whiteMps: number;
+  whiteSigmaMps: number;
   floorMps: number;
   /** The largest term of σ_eff. */
   dominantNoise: 'photon' | 'floor' | 'jitter';
@@ -151,20 +151,20 @@ export function targetDetectability(target: DetectStar, instrument: Instrument, 
   const precisionOptions = { seeingArcsec: options.seeingArcsec, kMps: planet?.kMps, goalSignificance: options.goalSignificance };
   const exposure =
     exposureSec === undefined
-      ? chooseExposureSec(instrument, target, options.airmass, target.sigmaMps ?? options.targetSigmaMps, precisionOptions)
+      ? chooseExposureSec(instrument, target, options.airmass, target.visitSigmaMps ?? options.targetVisitSigmaMps, precisionOptions)
       : fixedExposure(instrument, target, options.airmass, exposureSec, precisionOptions);
   const { budget } = exposure;
-  const sigmaMps = budget.effMps;
+  const effectiveSigmaMps = budget.effectiveSigmaMps;
   const costSec = visitCostSec(instrument, exposure.exposureSec);
   const hours = (visits: number) => (visits * costSec) / 3600;
   const levels = [...new Set([3, 5, options.goalSignificance])].sort((a, b) => a - b);
   const needed: VisitsAt[] = planet
     ? levels.map((n) => {
-        const [random, quadrature] = PHASE_LAYOUTS.map((layout) => visitsNeeded(planet.kMps, budget.whiteMps, n, layout, budget.floorMps)) as [number, number];
+        const [random, quadrature] = PHASE_LAYOUTS.map((layout) => visitsNeeded(planet.kMps, budget.whiteSigmaMps, n, layout, budget.floorMps)) as [number, number];
         return { goalSignificance: n, random, quadrature, hoursRandom: hours(random), hoursQuadrature: hours(quadrature) };
       })
     : [];
-  const terms = { photon: budget.photonMps, floor: budget.floorMps, jitter: budget.jitterMps };
+  const terms = { photon: budget.photonSigmaMps, floor: budget.floorMps, jitter: budget.jitterMps };
   const dominantNoise = (Object.keys(terms) as (keyof typeof terms)[]).reduce((a, b) => (terms[b] > terms[a] ? b : a));
   const result: TargetDetectability = {
     targetId: target.id,
@@ -175,8 +175,8 @@ export function targetDetectability(target: DetectStar, instrument: Instrument, 
     jitterSource: target.jitterSource,
     planet,
     exposure,
-    sigmaMps,
-    whiteMps: budget.whiteMps,
+    effectiveSigmaMps,
+    whiteSigmaMps: budget.whiteSigmaMps,
     floorMps: budget.floorMps,
     dominantNoise,
     visitCostSec: costSec,
@@ -191,15 +191,15 @@ export function targetDetectability(target: DetectStar, instrument: Instrument, 
 function atPlannedVisits(row: TargetDetectability, options: DetectOptions): AtPlannedVisits {
   const visits = options.visits!;
   const n = options.goalSignificance;
-  const { whiteMps, floorMps } = row;
-  const sigmaK = (layout: PhaseLayout) => sigmaKMps(whiteMps, visits, layout, floorOnKMps(floorMps, n));
+  const { whiteSigmaMps, floorMps } = row;
+  const sigmaK = (layout: PhaseLayout) => sigmaKMps(whiteSigmaMps, visits, layout, floorOnKMps(floorMps, n));
   const at: AtPlannedVisits = { visits, sigmaKRandomMps: sigmaK('random'), sigmaKQuadratureMps: sigmaK('quadrature') };
   const planet = row.planet;
   const limits = (periodsDays: readonly number[], ecc: number) =>
-    massLimitTable({ starMassSun: row.massSun, sigmaMps: whiteMps, floorMps, visits, goalSignificance: n, periodsDays, ecc });
+    massLimitTable({ starMassSun: row.massSun, whiteSigmaMps, floorMps, visits, goalSignificance: n, periodsDays, ecc });
   if (planet) {
-    at.probabilityRandom = detectionProbability(planet.kMps, whiteMps, visits, n, 'random', floorMps);
-    at.probabilityQuadrature = detectionProbability(planet.kMps, whiteMps, visits, n, 'quadrature', floorMps);
+    at.probabilityRandom = detectionProbability(planet.kMps, whiteSigmaMps, visits, n, 'random', floorMps);
+    at.probabilityQuadrature = detectionProbability(planet.kMps, whiteSigmaMps, visits, n, 'quadrature', floorMps);
     const [limit] = limits([planet.periodDays], planet.ecc);
     at.massMinRandomEarth = limit!.massMinRandomEarth;
     at.massMinQuadratureEarth = limit!.massMinQuadratureEarth;
@@ -227,7 +227,7 @@ function verdict(row: TargetDetectability, instrument: Instrument, goalSignifica
       return withNotes('demanding', `only with visits timed at quadrature: ${quad} for ${n}; random phases would need ${goal.random} (more than ${OUT_OF_REACH_VISITS})`);
     }
     const why = goal.quadrature > OUT_OF_REACH_VISITS ? `and ${goal.quadrature} even at ideal quadratures` : `${quad}, but the orbital phase is not known`;
-    return withNotes('out of reach', `K = ${k} m/s against sigma ${row.sigmaMps.toFixed(2)} m/s per visit needs ${goal.random} visits for ${n} at random phases (more than ${OUT_OF_REACH_VISITS}), ${why}`);
+    return withNotes('out of reach', `K = ${k} m/s against sigma ${row.effectiveSigmaMps.toFixed(2)} m/s per visit needs ${goal.random} visits for ${n} at random phases (more than ${OUT_OF_REACH_VISITS}), ${why}`);
   }
   const text = `${goal.random} visits (${goal.hoursRandom.toFixed(1)} h) for ${n} at random phases; ${quad}`;
   return withNotes(goal.random > DEMANDING_VISITS ? 'demanding' : 'feasible', text);

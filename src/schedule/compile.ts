@@ -99,7 +99,7 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
   for (const s of problem.slots) {
     if (!targetPos.has(s.targetId)) fail(`slot ${s.slotId} names unknown star ${s.targetId}`);
     if (!nightPos.has(s.nightIndex)) fail(`slot ${s.slotId} names unknown night ${s.nightIndex}`);
-    if (!(s.durationSec > 0 && s.sigmaWhiteMps > 0 && Number.isFinite(s.startMs) && Number.isFinite(s.midBjdTdb))) fail(`slot ${s.slotId} needs durationSec > 0, sigmaWhiteMps > 0, finite startMs and midBjdTdb`);
+    if (!(s.durationSec > 0 && s.whiteSigmaMps > 0 && Number.isFinite(s.startMs) && Number.isFinite(s.midBjdTdb))) fail(`slot ${s.slotId} needs durationSec > 0, whiteSigmaMps > 0, finite startMs and midBjdTdb`);
   }
 
   // Nights in time order of their slots; slots sorted by (night, start, id) so the order is total.
@@ -185,7 +185,7 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
     c.hours[j] = s.durationSec / 3600;
     c.midBjdTdb[j] = s.midBjdTdb;
     // Weighted least squares: a visit weighs 1/sigma^2 (common practice).
-    const w = 1 / (s.sigmaWhiteMps * s.sigmaWhiteMps);
+    const w = 1 / (s.whiteSigmaMps * s.whiteSigmaMps);
     c.weight[j] = w;
     c.maxWeight[t] = Math.max(c.maxWeight[t]!, w);
     const model = models[t];

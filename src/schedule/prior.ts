@@ -44,9 +44,9 @@ export function compilePrior(c: CompiledProblem): CompiledPrior {
   for (const v of prior) {
     const t = targetPos.get(v.targetId);
     if (t === undefined) throw new Error(`schedule problem: prior visit names unknown star ${v.targetId}`);
-    if (!(v.sigmaWhiteMps > 0 && Number.isFinite(v.midBjdTdb))) throw new Error(`schedule problem: prior visit of ${v.targetId} needs sigmaWhiteMps > 0 and a finite midBjdTdb`);
+    if (!(v.whiteSigmaMps > 0 && Number.isFinite(v.midBjdTdb))) throw new Error(`schedule problem: prior visit of ${v.targetId} needs whiteSigmaMps > 0 and a finite midBjdTdb`);
     // Weighted least squares: a visit weighs 1/sigma^2 (common practice).
-    const weight = 1 / (v.sigmaWhiteMps * v.sigmaWhiteMps);
+    const weight = 1 / (v.whiteSigmaMps * v.whiteSigmaMps);
     out.count[t]++;
     out.weightSum[t] += weight;
     const position = problemKey.get(v.localDate);

@@ -33,7 +33,7 @@ export interface CandidateSlot {
   /** Exposure plus readout plus acquisition. */
   durationSec: number;
   /** The visit's white noise (photon, floor, white part of the jitter); its weight is 1/sigma^2. */
-  sigmaWhiteMps: number;
+  whiteSigmaMps: number;
   /** Mid-exposure time in days, BJD_TDB (search targets: any fixed zero point will do). */
   midBjdTdb: number;
 }
@@ -86,7 +86,7 @@ export interface PriorVisit {
   /** Mid-exposure, BJD_TDB days (the slots' midBjdTdb scale). */
   midBjdTdb: number;
   /** White noise of the visit (m/s); its weight is 1/sigma^2. */
-  sigmaWhiteMps: number;
+  whiteSigmaMps: number;
   /** The middle of its night (midBjdTdb scale), where nightly activity is evaluated; default: the mean of that date's prior visits. */
   nightMidBjdTdb?: number;
   /**

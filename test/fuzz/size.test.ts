@@ -19,7 +19,7 @@ async function passes(name: string, c: FuzzCase) {
 }
 
 function rvSeries(rows: number): string {
-  const lines = ['bjdTdb,rvMps,sigmaMps'];
+  const lines = ['bjdTdb,rvMps,rvErrorMps'];
   for (let i = 0; i < rows; i++) lines.push(`${(2461000 + (i * 100) / rows).toFixed(6)},${(3 * Math.sin(i / 7)).toFixed(3)},2`);
   return `${lines.join('\n')}\n`;
 }

@@ -41,7 +41,7 @@ function trial(rng: Rng, fitted: boolean): number {
   // One visit on each of the first week's nights at a random time of its window.
   const points: FitPoint[] = Array.from({ length: FIRST_WEEK }, (_, n) => {
     const bjd = BJD0 + n + 0.05 + 0.33 * rng.uniform();
-    return { bjdTdb: bjd, rvMps: radialVelocityMps(orbit, bjd) + SIGMA_MPS * rng.normal() - 4.2, rvErrMps: SIGMA_MPS, instrument: 'spec' };
+    return { bjdTdb: bjd, rvMps: radialVelocityMps(orbit, bjd) + SIGMA_MPS * rng.normal() - 4.2, rvErrorMps: SIGMA_MPS, instrument: 'spec' };
   });
   const catalogue = { id: 'b', periodDays: PERIOD_DAYS, periodErrDays: 0, tcBjdTdb: tcCatalogue, tcErrDays: TC_ERR_DAYS, kMps: K_MPS, ecc: 0, omegaDeg: 90 };
   const fit = fitOrbits([catalogue], points, 0).planets[0]!;
@@ -53,9 +53,9 @@ function trial(rng: Rng, fitted: boolean): number {
   });
   const slots: CandidateSlot[] = [];
   for (let n = FIRST_WEEK; n < NIGHTS; n++) {
-    nightSlots(n).forEach(({ midBjdTdb }, k) => slots.push({ slotId: `${n}/${k}`, targetId: 'S', nightIndex: n, startMs: (midBjdTdb - 2440587.5) * 86_400_000, durationSec: 900, sigmaWhiteMps: SIGMA_MPS, midBjdTdb }));
+    nightSlots(n).forEach(({ midBjdTdb }, k) => slots.push({ slotId: `${n}/${k}`, targetId: 'S', nightIndex: n, startMs: (midBjdTdb - 2440587.5) * 86_400_000, durationSec: 900, whiteSigmaMps: SIGMA_MPS, midBjdTdb }));
   }
-  const prior: PriorVisit[] = points.map((p, n) => ({ targetId: 'S', localDate: `week1-${n}`, midBjdTdb: p.bjdTdb, sigmaWhiteMps: SIGMA_MPS, ...(fitted ? { phaseInPrior: true } : {}) }));
+  const prior: PriorVisit[] = points.map((p, n) => ({ targetId: 'S', localDate: `week1-${n}`, midBjdTdb: p.bjdTdb, whiteSigmaMps: SIGMA_MPS, ...(fitted ? { phaseInPrior: true } : {}) }));
   const problem: ScheduleProblem = {
     nights: Array.from({ length: NIGHTS - FIRST_WEEK }, (_, i) => ({ index: FIRST_WEEK + i, localDate: `n${FIRST_WEEK + i}`, clearProbability: 1, hoursAvailable: 8, midBjdTdb: BJD0 + FIRST_WEEK + i + 0.2 })),
     targets: [{ id: 'S', planets: [{ id: 'b', priority: 1, kMps: eph.kMps, goalSignificance: 50 }], model }],

@@ -60,7 +60,7 @@ describe('phase lost by the window\'s end', () => {
     // N K^2 / (2 sigma^2) (common practice), so sigma_phi = 0.05 cycle takes N = 2 sigma^2 / (2 pi K 0.05)^2.
     const target = campaign.targets.find((t) => t.id === 'Vago-2')!;
     const exposureSec = plan.visits.find((v) => v.starId === 'Vago-2')?.exposureSec ?? 600;
-    const sigma = visitPrecision(campaign.instrument, target, exposureSec, 1.2).effMps;
+    const sigma = visitPrecision(campaign.instrument, target, exposureSec, 1.2).effectiveSigmaMps;
     const n = Math.max(3, Math.ceil((2 * sigma ** 2) / (2 * Math.PI * summary.kMps! * 0.05) ** 2));
     expect(warningsOf('Vago-2').some((w) => w.includes('phase must be recovered first') && w.includes(`about ${n} visits spread in phase`))).toBe(true);
   });
@@ -80,7 +80,7 @@ describe('goal not reached on the demo cut to 7 nights', () => {
     for (const t of short) {
       const target = demo.targets.find((x) => x.id === t.targetId)!;
       const exposureSec = demoPlan.visits.find((v) => v.starId === t.starId)!.exposureSec;
-      const sigma = visitPrecision(demo.instrument, target, exposureSec, 1.2).effMps;
+      const sigma = visitPrecision(demo.instrument, target, exposureSec, 1.2).effectiveSigmaMps;
       const n = Math.ceil((t.goalSignificance! * sigma / t.kMps!) ** 2);
       expect(t.warnings.join(' ')).toContain(`about ${n} visits at quadratures`);
     }

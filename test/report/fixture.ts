@@ -30,7 +30,7 @@ const instrument: Instrument = {
   wavelengthNm: 550,
   coverageNm: [380, 690],
   spectralRegion: 'optical',
-  reference: { sigmaMps: 1, mag: 8, exposureSec: 600, airmass: 1.2, seeingArcsec: 1, snrPerPixel: 100, teffK: 5300, vsiniKms: 2 },
+  reference: { photonSigmaMps: 1, mag: 8, exposureSec: 600, airmass: 1.2, seeingArcsec: 1, snrPerPixel: 100, teffK: 5300, vsiniKms: 2 },
   readNoiseE: 4,
   pixelsPerResolutionElement: 3.5,
   spatialPixels: 6,
@@ -111,7 +111,7 @@ export const NIGHTS: Night[] = Array.from({ length: 12 }, (_, i) => {
 const JD_UNIX_EPOCH = 2440587.5;
 
 /** A visit as the scheduler would write it (BJD taken as JD(UTC) here: a fixture, not a reduction). */
-function visit(starId: string, start: Date, exposureSec: number, airmass: number, sigmaMps: number): PlannedVisit {
+function visit(starId: string, start: Date, exposureSec: number, airmass: number, visitSigmaMps: number): PlannedVisit {
   const t = TARGETS.find((x) => x.id === starId)!;
   const mid = new Date(start.getTime() + (exposureSec / 2) * 1000);
   const midBjdTdb = mid.getTime() / 86_400_000 + JD_UNIX_EPOCH;
@@ -120,10 +120,10 @@ function visit(starId: string, start: Date, exposureSec: number, airmass: number
   const phases = t.ephemeris ? [{ targetId: starId, phase: phaseAt(t.ephemeris, midBjdTdb), phaseErr: phaseErrCycles(t.ephemeris, midBjdTdb) }] : [];
   return {
     starId, localDate, startUtc: start.toISOString(), startLocal: local, midBjdTdb, exposureSec,
-    durationSec: exposureSec + 150, airmass, moonSeparationDeg: 60, phases, sigmaMps,
-    sigmaEffMps: Math.hypot(sigmaMps, t.jitterMps),
-    sigmaWhiteMps: Math.hypot(sigmaMps, t.jitterMps * Math.SQRT1_2),
-    snrPerPixel: 100 / sigmaMps,
+    durationSec: exposureSec + 150, airmass, moonSeparationDeg: 60, phases, visitSigmaMps,
+    effectiveSigmaMps: Math.hypot(visitSigmaMps, t.jitterMps),
+    whiteSigmaMps: Math.hypot(visitSigmaMps, t.jitterMps * Math.SQRT1_2),
+    snrPerPixel: 100 / visitSigmaMps,
   };
 }
 

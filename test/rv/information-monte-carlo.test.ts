@@ -29,14 +29,14 @@ function stalePlanet(id: string, kMps: number, periodDays: number, phaseErrEnd: 
 }
 
 /** One visit per night on `nights` distinct random nights of the span, at a random time in each. */
-function onePerNight(rng: Rng, span: [number, number], nights: number, sigmaMps: number): FitVisit[] {
+function onePerNight(rng: Rng, span: [number, number], nights: number, whiteSigmaMps: number): FitVisit[] {
   const days = new Set<number>();
   while (days.size < nights) days.add(Math.floor(span[0] - BJD0 + rng.uniform() * (span[1] - span[0] - 1)));
   return [...days]
     .sort((a, b) => a - b)
     .map((night) => {
       const bjd = BJD0 + night + 0.1 + 0.3 * rng.uniform();
-      return { bjdTdb: bjd, sigmaMps, night, nightBjdTdb: BJD0 + night + 0.25 };
+      return { bjdTdb: bjd, whiteSigmaMps, night, nightBjdTdb: BJD0 + night + 0.25 };
     });
 }
 

@@ -66,7 +66,7 @@ function randomVisits(rng: Rng, star: StarInput, count: number): DenseVisit[] {
     const nightBjdTdb = BJD0 + night + 0.2;
     const n = rng.uniform() < 0.35 ? 2 + Math.floor(rng.uniform() * 3) : 1;
     for (let k = 0; k < n && visits.length < count; k++) {
-      visits.push({ bjdTdb: nightBjdTdb + between(rng, -0.15, 0.15), sigmaMps: between(rng, 1, 5), night, nightBjdTdb });
+      visits.push({ bjdTdb: nightBjdTdb + between(rng, -0.15, 0.15), whiteSigmaMps: between(rng, 1, 5), night, nightBjdTdb });
     }
   }
   return visits;
@@ -129,8 +129,8 @@ function quadratureVisits(nA: number, sigmaA: number, nB: number, sigmaB: number
   const tA = BJD0 + 10 * 5 + 0.75 * 5;
   const tB = BJD0 + 14 * 5 + 0.25 * 5;
   return [
-    ...Array.from({ length: nA }, () => ({ bjdTdb: tA, sigmaMps: sigmaA, night: 1, nightBjdTdb: tA })),
-    ...Array.from({ length: nB }, () => ({ bjdTdb: tB, sigmaMps: sigmaB, night: 2, nightBjdTdb: tB })),
+    ...Array.from({ length: nA }, () => ({ bjdTdb: tA, whiteSigmaMps: sigmaA, night: 1, nightBjdTdb: tA })),
+    ...Array.from({ length: nB }, () => ({ bjdTdb: tB, whiteSigmaMps: sigmaB, night: 2, nightBjdTdb: tB })),
   ];
 }
 
@@ -146,11 +146,11 @@ describe('analytic cases', () => {
   it('no visits or one visit: K is not determined (Infinity)', () => {
     const model = buildStarModel(randomStar(createRng(7), 1, { jitter: true, activity: false }));
     expect(kVariances(model, [])[0]).toBe(Infinity);
-    const one = informationVisits(model, [{ bjdTdb: model.input.spanBjdTdb[0] + 3.3, sigmaMps: 2, night: 3, nightBjdTdb: model.input.spanBjdTdb[0] + 3 }]);
+    const one = informationVisits(model, [{ bjdTdb: model.input.spanBjdTdb[0] + 3.3, whiteSigmaMps: 2, night: 3, nightBjdTdb: model.input.spanBjdTdb[0] + 3 }]);
     // One number cannot separate γ from K.
     expect(kVariances(model, one)[0]).toBe(Infinity);
     const two = buildStarModel({ ...model.input, planets: [model.input.planets[0]!, { ...model.input.planets[0]!, id: 'c', periodDays: 13.1 }] });
-    expect(Array.from(kVariances(two, informationVisits(two, [{ bjdTdb: two.input.spanBjdTdb[0] + 3.3, sigmaMps: 2, night: 3, nightBjdTdb: two.input.spanBjdTdb[0] + 3 }])))).toEqual([Infinity, Infinity]);
+    expect(Array.from(kVariances(two, informationVisits(two, [{ bjdTdb: two.input.spanBjdTdb[0] + 3.3, whiteSigmaMps: 2, night: 3, nightBjdTdb: two.input.spanBjdTdb[0] + 3 }])))).toEqual([Infinity, Infinity]);
   });
 
   it('one visit per quadrature, white noise only: Var(K) = σ²/2', () => {
@@ -187,8 +187,8 @@ describe('analytic cases', () => {
     const tau = 1.2;
     const model = buildStarModel(knownPlanetStar(tau));
     const visits = quadratureVisits(3, 2, 2, 5);
-    visits[1]!.sigmaMps = 3;
-    visits[2]!.sigmaMps = 6;
+    visits[1]!.whiteSigmaMps = 3;
+    visits[2]!.whiteSigmaMps = 6;
     const wA = 1 / 4 + 1 / 9 + 1 / 36;
     const got = kVariances(model, informationVisits(model, visits))[0]!;
     expect(relDiff(got, analytic(1 / wA + tau * tau, 25 / 2 + tau * tau))).toBeLessThan(1e-10);

@@ -49,12 +49,12 @@ describe('detection level along a row', () => {
 });
 
 /** 14 visits on random nights over 60 days, σ_eff 1.5–2.5 m/s (invented). */
-function visits(): Pick<InjectionInput, 'timesBjdTdb' | 'sigmaMps'> {
+function visits(): Pick<InjectionInput, 'timesBjdTdb' | 'rvErrorsMps'> {
   const rng = createRng(11);
   const nights = new Set<number>();
   while (nights.size < 14) nights.add(Math.floor(60 * rng.uniform()));
   const timesBjdTdb = [...nights].sort((a, b) => a - b).map((n) => 2_461_300.6 + n + 0.2 * rng.uniform());
-  return { timesBjdTdb, sigmaMps: timesBjdTdb.map(() => 1.5 + rng.uniform()) };
+  return { timesBjdTdb, rvErrorsMps: timesBjdTdb.map(() => 1.5 + rng.uniform()) };
 }
 
 describe.skipIf(!existsSync(POOL))('parallel injection–recovery (worker threads)', () => {

@@ -6,12 +6,12 @@ import { createRng } from '../../src/rv/random.js';
  * 30 visits on randomly chosen nights over ~90 days, σ_eff 1.5 to 2.5 m/s (an invented schedule;
  * irregular on purpose: a strictly regular cadence makes aliases as high as the true peak).
  */
-function schedule(): Pick<InjectionInput, 'timesBjdTdb' | 'sigmaMps'> {
+function schedule(): Pick<InjectionInput, 'timesBjdTdb' | 'rvErrorsMps'> {
   const rng = createRng(3);
   const nights = new Set<number>();
   while (nights.size < 30) nights.add(Math.floor(90 * rng.uniform()));
   const timesBjdTdb = [...nights].sort((a, b) => a - b).map((night) => 2_461_200.6 + night + 0.2 * rng.uniform());
-  return { timesBjdTdb, sigmaMps: timesBjdTdb.map(() => 1.5 + rng.uniform()) };
+  return { timesBjdTdb, rvErrorsMps: timesBjdTdb.map(() => 1.5 + rng.uniform()) };
 }
 
 const binomialSe = (q: number, trials: number) => Math.sqrt(Math.max(q * (1 - q), 0.25 / trials) / trials);

@@ -26,10 +26,10 @@ function truthRv(truths: Truth[], t: number, gammaMps: number): number {
   }, gammaMps);
 }
 
-function simulate(truths: Truth[], times: number[], sigmaMps: number, rng: Rng | null, instrumentOf: (i: number) => string = () => 'echelle-a', gammas: Record<string, number> = { 'echelle-a': 3 }): FitPoint[] {
+function simulate(truths: Truth[], times: number[], rvErrorMps: number, rng: Rng | null, instrumentOf: (i: number) => string = () => 'echelle-a', gammas: Record<string, number> = { 'echelle-a': 3 }): FitPoint[] {
   return times.map((bjd, i) => {
     const instrument = instrumentOf(i);
-    return { bjdTdb: bjd, instrument, rvErrMps: sigmaMps, rvMps: truthRv(truths, bjd, gammas[instrument]!) + (rng ? sigmaMps * rng.normal() : 0) };
+    return { bjdTdb: bjd, instrument, rvErrorMps, rvMps: truthRv(truths, bjd, gammas[instrument]!) + (rng ? rvErrorMps * rng.normal() : 0) };
   });
 }
 
@@ -174,17 +174,17 @@ describe('fitOrbits', () => {
     expect(fixed.planets[0]).toMatchObject({ periodDays: 3.3, periodErrDays: 0, tcBjdTdb: 2461000.5, tcErrDays: 0 });
     expect(fixed.planets[0]!.kMps).toBeCloseTo(5, 6);
     // One point: γ absorbs it and K is free of the data.
-    const single = fitOrbits([prior], [{ bjdTdb: 2461010.1, rvMps: 2, rvErrMps: 1, instrument: 'echelle-a' }], 0);
+    const single = fitOrbits([prior], [{ bjdTdb: 2461010.1, rvMps: 2, rvErrorMps: 1, instrument: 'echelle-a' }], 0);
     expect(single.planets[0]!.kErrMps).toBe(Infinity);
-    const loose = fitOrbits([{ ...prior, tcErrDays: 0.1, periodErrDays: 0.01 }], [{ bjdTdb: 2461010.1, rvMps: 2, rvErrMps: 1, instrument: 'echelle-a' }], 0);
+    const loose = fitOrbits([{ ...prior, tcErrDays: 0.1, periodErrDays: 0.01 }], [{ bjdTdb: 2461010.1, rvMps: 2, rvErrorMps: 1, instrument: 'echelle-a' }], 0);
     expect(loose.planets[0]).toMatchObject({ kErrMps: Infinity, tcErrDays: Infinity, periodErrDays: Infinity });
   });
 
   it('refuses impossible calls with a ValidationError', () => {
     const prior: FitPlanetPrior = { id: 'x', periodDays: 3, periodErrDays: 0.1, tcBjdTdb: 2461000, tcErrDays: 0.1, kMps: 5, ecc: 0, omegaDeg: 90 };
     expect(() => fitOrbits([prior], [], 0)).toThrow(ValidationError);
-    expect(() => fitOrbits([{ ...prior, kMps: 0 }], [{ bjdTdb: 2461000, rvMps: 1, rvErrMps: 1, instrument: 'a' }], 0)).toThrow(ValidationError);
-    expect(() => fitOrbits([prior], [{ bjdTdb: 2461000, rvMps: 1, rvErrMps: 0, instrument: 'a' }], 0)).toThrow(ValidationError);
+    expect(() => fitOrbits([{ ...prior, kMps: 0 }], [{ bjdTdb: 2461000, rvMps: 1, rvErrorMps: 1, instrument: 'a' }], 0)).toThrow(ValidationError);
+    expect(() => fitOrbits([prior], [{ bjdTdb: 2461000, rvMps: 1, rvErrorMps: 0, instrument: 'a' }], 0)).toThrow(ValidationError);
   });
 });
 
@@ -205,7 +205,7 @@ describe('blindPeak', () => {
     const times = visitTimes(rng, 20, 2461000, 40);
     let flagged = 0;
     for (let trial = 0; trial < 300; trial++) {
-      const points = times.map((bjd, i) => ({ bjdTdb: bjd, rvMps: 2 * rng.normal(), rvErrMps: 2, instrument: i % 2 ? 'a' : 'b' }));
+      const points = times.map((bjd, i) => ({ bjdTdb: bjd, rvMps: 2 * rng.normal(), rvErrorMps: 2, instrument: i % 2 ? 'a' : 'b' }));
       if (blindPeak(points, { periodMinDays: 2, periodMaxDays: 30 }, 0)!.significant) flagged++;
     }
     // Binomial(300, 0.01): mean 3, P(X > 9) < 0.1% (common practice).
@@ -213,6 +213,6 @@ describe('blindPeak', () => {
   });
 
   it('gives nothing for fewer than five points', () => {
-    expect(blindPeak([{ bjdTdb: 2461000, rvMps: 1, rvErrMps: 1, instrument: 'a' }], { periodMinDays: 2, periodMaxDays: 30 }, 0)).toBeUndefined();
+    expect(blindPeak([{ bjdTdb: 2461000, rvMps: 1, rvErrorMps: 1, instrument: 'a' }], { periodMinDays: 2, periodMaxDays: 30 }, 0)).toBeUndefined();
   });
 });

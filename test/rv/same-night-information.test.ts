@@ -53,7 +53,7 @@ function modelSigmaK(visits: Visit[]): number {
     nightlyJitterMps: SIGMA_NIGHT,
     spanBjdTdb: [0, 30],
   });
-  const input = visits.map((v) => ({ bjdTdb: v.bjdTdb, sigmaMps: SIGMA_WHITE, night: v.night, nightBjdTdb: v.night + 0.5 }));
+  const input = visits.map((v) => ({ bjdTdb: v.bjdTdb, whiteSigmaMps: SIGMA_WHITE, night: v.night, nightBjdTdb: v.night + 0.5 }));
   return Math.sqrt(kVariances(model, informationVisits(model, input))[0]!);
 }
 

@@ -51,14 +51,14 @@ describe('targetDetectability', () => {
     const d = targetDetectability(given, stable4m, { goalSignificance: 4, airmass: 1.2 });
     expect(d.needed.map((v) => v.goalSignificance)).toEqual([3, 4, 5]);
     for (const v of d.needed) expect(v.hoursRandom).toBeCloseTo((v.random * d.visitCostSec) / 3600, 12);
-    expect(d.sigmaMps).toBe(d.exposure.budget.effMps);
+    expect(d.effectiveSigmaMps).toBe(d.exposure.budget.effectiveSigmaMps);
   });
 
   it('at a planned N: Φ(K/σ_K − n) and the smallest detectable mass at the planet\'s period', () => {
     const d = targetDetectability(given, stable4m, { goalSignificance: 5, airmass: 1.2, visits: 30, periodsDays: [1, 10] });
     const at = d.atPlannedVisits!;
     // σ_K² = σ_white² / E[S] + (floor/n)², E[S] = (N − 1)/2 at random phases.
-    expect(at.sigmaKRandomMps).toBeCloseTo(Math.sqrt((2 * d.whiteMps ** 2) / 29 + (stable4m.floorMps / 5) ** 2), 12);
+    expect(at.sigmaKRandomMps).toBeCloseTo(Math.sqrt((2 * d.whiteSigmaMps ** 2) / 29 + (stable4m.floorMps / 5) ** 2), 12);
     expect(at.mass50RandomEarth!).toBeLessThan(at.mass90RandomEarth!);
     expect(at.massLimits).toHaveLength(2);
     const kMin = semiAmplitudeMps({ starMassSun: 0.85, planetMassEarth: at.massMinRandomEarth!, periodDays: 6.5, ecc: 0.3 });

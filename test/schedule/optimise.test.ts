@@ -95,7 +95,7 @@ function singleTarget(periodDays: number, nights: number, hoursPerNight: number)
   for (let n = 0; n < nights; n++) {
     for (let k = 0; k < hoursPerNight * 3; k++) {
       const startMs = t0 + n * 86_400_000 + k * 1_200_000;
-      slots.push({ slotId: `n${n}k${k}`, targetId: 'LONE-1', nightIndex: n, startMs, durationSec: 1200, sigmaWhiteMps: 2, midBjdTdb: (startMs + 600_000 - t0) / 86_400_000 });
+      slots.push({ slotId: `n${n}k${k}`, targetId: 'LONE-1', nightIndex: n, startMs, durationSec: 1200, whiteSigmaMps: 2, midBjdTdb: (startMs + 600_000 - t0) / 86_400_000 });
     }
   }
   return {

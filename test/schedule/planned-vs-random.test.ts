@@ -27,7 +27,7 @@ function slots(starId: string): CandidateSlot[] {
     const opens = 0.08 - (4 / 1440) * n;
     for (let k = 0; k < 16; k++) {
       const midBjdTdb = BJD0 + n + opens + (k * 30 + 10) / 1440;
-      out.push({ slotId: `${n}/${k}`, targetId: starId, nightIndex: n, startMs: (midBjdTdb - 2440587.5) * 86_400_000 - 600_000, durationSec: SLOT_SEC, sigmaWhiteMps: SIGMA_MPS, midBjdTdb });
+      out.push({ slotId: `${n}/${k}`, targetId: starId, nightIndex: n, startMs: (midBjdTdb - 2440587.5) * 86_400_000 - 600_000, durationSec: SLOT_SEC, whiteSigmaMps: SIGMA_MPS, midBjdTdb });
     }
   }
   return out;
@@ -44,7 +44,7 @@ function problemOf(star: StarInput, visits: number, onePerNight: boolean, goalSi
   };
 }
 
-const asFit = (s: CandidateSlot): FitVisit => ({ bjdTdb: s.midBjdTdb, sigmaMps: s.sigmaWhiteMps, night: s.nightIndex, nightBjdTdb: BJD0 + s.nightIndex + 0.25 });
+const asFit = (s: CandidateSlot): FitVisit => ({ bjdTdb: s.midBjdTdb, whiteSigmaMps: s.whiteSigmaMps, night: s.nightIndex, nightBjdTdb: BJD0 + s.nightIndex + 0.25 });
 
 function plannedVisits(problem: ScheduleProblem): FitVisit[] {
   const byId = new Map(problem.slots.map((s) => [s.slotId, s]));

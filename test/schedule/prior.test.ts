@@ -21,12 +21,12 @@ function withPrior(seed: number, sharedNight: boolean): ScheduleProblem {
   const past = new Set([0, 1, 2]);
   const prior: PriorVisit[] = problem.slots
     .filter((s) => past.has(s.nightIndex) && rng.uniform() < 0.3)
-    .map((s) => ({ targetId: s.targetId, localDate: problem.nights[s.nightIndex]!.localDate, midBjdTdb: s.midBjdTdb, sigmaWhiteMps: s.sigmaWhiteMps }));
+    .map((s) => ({ targetId: s.targetId, localDate: problem.nights[s.nightIndex]!.localDate, midBjdTdb: s.midBjdTdb, whiteSigmaMps: s.whiteSigmaMps }));
   // With `sharedNight`, night 3 stays in the problem and also holds a prior visit of every star.
   const keep = (s: CandidateSlot) => !past.has(s.nightIndex);
   if (sharedNight) {
     for (const s of problem.slots.filter((x) => x.nightIndex === 3 && x.slotId.endsWith('/0'))) {
-      prior.push({ targetId: s.targetId, localDate: problem.nights[3]!.localDate, midBjdTdb: s.midBjdTdb - 0.01, sigmaWhiteMps: s.sigmaWhiteMps });
+      prior.push({ targetId: s.targetId, localDate: problem.nights[3]!.localDate, midBjdTdb: s.midBjdTdb - 0.01, whiteSigmaMps: s.whiteSigmaMps });
     }
   }
   return { ...problem, nights: problem.nights.filter((n) => !past.has(n.index)), slots: problem.slots.filter(keep), prior };
@@ -87,7 +87,7 @@ describe('prior visits in the optimiser', () => {
       for (const n of nights) {
         for (let k = 0; k < 8; k++) {
           const midBjdTdb = n.midBjdTdb - 0.15 + k * 0.04;
-          slots.push({ slotId: `${id}/${n.index}/${k}`, targetId: id, nightIndex: n.index, startMs: (midBjdTdb - 2440587.5) * 86_400_000, durationSec: 900, sigmaWhiteMps: 2, midBjdTdb });
+          slots.push({ slotId: `${id}/${n.index}/${k}`, targetId: id, nightIndex: n.index, startMs: (midBjdTdb - 2440587.5) * 86_400_000, durationSec: 900, whiteSigmaMps: 2, midBjdTdb });
         }
       }
     }
@@ -96,7 +96,7 @@ describe('prior visits in the optimiser', () => {
       targetId: 'DONE',
       localDate: `2027-02-${10 + i}`,
       midBjdTdb: 99.3 - 3.1 * (10 - Math.floor(i / 2)) + 3.1 * (i % 2 ? 0.75 : 0.25),
-      sigmaWhiteMps: 1,
+      whiteSigmaMps: 1,
     }));
     const problem: ScheduleProblem = {
       nights,

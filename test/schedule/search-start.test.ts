@@ -19,9 +19,9 @@ function problem(): ScheduleProblem {
   const nights = Array.from({ length: 30 }, (_, n) => ({ index: n, localDate: `n${n}`, clearProbability: 1, hoursAvailable: 8 }));
   for (let n = 0; n < 30; n++) {
     const eStart = T0 + n * DAY_MS;
-    slots.push({ slotId: `e${n}`, targetId: 'E', nightIndex: n, startMs: eStart, durationSec: 3600, sigmaWhiteMps: 2, midBjdTdb: (eStart - T0) / DAY_MS });
+    slots.push({ slotId: `e${n}`, targetId: 'E', nightIndex: n, startMs: eStart, durationSec: 3600, whiteSigmaMps: 2, midBjdTdb: (eStart - T0) / DAY_MS });
     const sStart = eStart + 2 * 3_600_000;
-    slots.push({ slotId: `s${n}`, targetId: 'S', nightIndex: n, startMs: sStart, durationSec: 300, sigmaWhiteMps: 2, midBjdTdb: (sStart - T0) / DAY_MS });
+    slots.push({ slotId: `s${n}`, targetId: 'S', nightIndex: n, startMs: sStart, durationSec: 300, whiteSigmaMps: 2, midBjdTdb: (sStart - T0) / DAY_MS });
   }
   return {
     nights,

@@ -21,7 +21,7 @@ import type { StarModel } from '../../src/rv/information-model.js';
 
 export interface DenseVisit {
   bjdTdb: number;
-  sigmaMps: number;
+  whiteSigmaMps: number;
   night: number;
   nightBjdTdb: number;
 }
@@ -103,7 +103,7 @@ export function denseCovariance(model: StarModel, visits: DenseVisit[]): number[
   const act = model.input.activity;
   return visits.map((vi, i) =>
     visits.map((vj, j) => {
-      let c = i === j ? vi.sigmaMps * vi.sigmaMps : 0;
+      let c = i === j ? vi.whiteSigmaMps * vi.whiteSigmaMps : 0;
       if (vi.night === vj.night) c += tau2;
       if (act) c += activityCovariance(act, vi.nightBjdTdb - vj.nightBjdTdb);
       return c;

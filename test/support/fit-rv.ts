@@ -23,7 +23,7 @@ import type { Rng } from '../../src/rv/random.js';
 
 export interface FitVisit {
   bjdTdb: number;
-  sigmaMps: number;
+  whiteSigmaMps: number;
   night: number;
   nightBjdTdb: number;
 }
@@ -172,7 +172,7 @@ export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, opti
   const cov = new Float64Array(n * n);
   for (let i = 0; i < n; i++)
     for (let j = 0; j < n; j++) {
-      let c = i === j ? visits[i]!.sigmaMps ** 2 : 0;
+      let c = i === j ? visits[i]!.whiteSigmaMps ** 2 : 0;
       if (visits[i]!.night === visits[j]!.night) c += tau2;
       if (setup.activity) c += activityCovariance(setup.activity, visits[i]!.nightBjdTdb - visits[j]!.nightBjdTdb);
       cov[i * n + j] = c;
@@ -247,7 +247,7 @@ export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, opti
       for (let q = 0; q < m; q++) for (let r = 0; r <= q; r++) actNoise[q] += activityFactor[q * m + r]! * z[r]!;
     }
     const truthOrbits = planetOrbits(planets, lay, truth);
-    for (let i = 0; i < n; i++) y[i] = modelVelocity(truth[0]!, truthOrbits, tRel[i]!) + visits[i]!.sigmaMps * rng.normal() + nightNoise[nightOf[i]!]! + actNoise[nightOf[i]!]!;
+    for (let i = 0; i < n; i++) y[i] = modelVelocity(truth[0]!, truthOrbits, tRel[i]!) + visits[i]!.whiteSigmaMps * rng.normal() + nightNoise[nightOf[i]!]! + actNoise[nightOf[i]!]!;
 
     const fromCatalogue = Float64Array.from(lay.centre);
     fromCatalogue[0] = y.reduce((s, v) => s + v, 0) / n;

@@ -16,7 +16,7 @@ function logGridDays(minDays: number, maxDays: number): number[] {
 }
 
 export interface MassLimit {
-  sigmaMps: number;
+  effectiveSigmaMps: number;
   visits: number;
   goalSignificance: number;
   rows: MassLimitRow[];
@@ -31,14 +31,14 @@ export interface MassLimit {
  */
 export function searchMassLimit(plan: Plan, summary: TargetSummary, target: Target, periodsDays: number[]): MassLimit | undefined {
   const visits = visitsOf(plan, summary.starId);
-  const sigmaMps = equivalentSigmaMps(visits);
-  if (sigmaMps === undefined || visits.length < MIN_VISITS) return undefined;
+  const effectiveSigmaMps = equivalentSigmaMps(visits);
+  if (effectiveSigmaMps === undefined || visits.length < MIN_VISITS) return undefined;
   const goalSignificance = summary.goalSignificance ?? plan.campaign.goals.significance;
   // The floor does not average down: it is taken out of the per-visit σ and given apart (src/rv/detect.ts).
-  const floorMps = Math.min(plan.campaign.instrument.floorMps, sigmaMps);
-  const whiteMps = Math.sqrt(sigmaMps ** 2 - floorMps ** 2);
-  const rows = massLimitTable({ starMassSun: target.massSun, sigmaMps: whiteMps, floorMps, visits: visits.length, goalSignificance, periodsDays });
-  return { sigmaMps, visits: visits.length, goalSignificance, rows };
+  const floorMps = Math.min(plan.campaign.instrument.floorMps, effectiveSigmaMps);
+  const whiteSigmaMps = Math.sqrt(effectiveSigmaMps ** 2 - floorMps ** 2);
+  const rows = massLimitTable({ starMassSun: target.massSun, whiteSigmaMps, floorMps, visits: visits.length, goalSignificance, periodsDays });
+  return { effectiveSigmaMps, visits: visits.length, goalSignificance, rows };
 }
 
 /** The minimum detectable m sin i against period (log axis) with the search's target mass; undefined without enough visits. */
@@ -46,7 +46,7 @@ export function massLimitFigure(plan: Plan, summary: TargetSummary, target: Targ
   const { periodMinDays, periodMaxDays, massEarth } = target.search;
   const limit = searchMassLimit(plan, summary, target, logGridDays(periodMinDays, periodMaxDays));
   if (!limit) return undefined;
-  const { rows, goalSignificance, sigmaMps } = limit;
+  const { rows, goalSignificance, effectiveSigmaMps } = limit;
   const yMax = Math.max(massEarth, ...rows.map((r) => r.massMinRandomEarth)) * 1.15;
   const curve = rows.map((r) => ({ periodDays: r.periodDays, massEarth: r.massMinRandomEarth, top: yMax }));
   const x = { field: 'periodDays', type: 'quantitative' as const, title: 'Orbital period (days)', scale: { type: 'log', domain: [periodMinDays, periodMaxDays], nice: false } };
@@ -83,7 +83,7 @@ export function massLimitFigure(plan: Plan, summary: TargetSummary, target: Targ
     title: `${summary.targetId}: detectable planet mass against period`,
     caption:
       `Planets above the line (shaded) reach K/σ_K ≥ ${fmt(goalSignificance, 1)} with the ${limit.visits} planned visits ` +
-      `(equivalent σ = ${fmt(sigmaMps, 2)} m/s per visit, star ${fmt(target.massSun, 2)} M☉, circular orbits). ` +
+      `(equivalent σ = ${fmt(effectiveSigmaMps, 2)} m/s per visit, star ${fmt(target.massSun, 2)} M☉, circular orbits). ` +
       'It uses the random-phase rule σ_K ≈ σ√(2/N) and the exact inverse of K; the dashed line is the mass the search aims at.',
     spec,
     columns: [{ header: 'period (d)', align: 'right' }, { header: 'K min (m/s)', align: 'right' }, { header: 'm sin i min (Earth masses)', align: 'right' }],

@@ -47,7 +47,7 @@ export function foldedRvs(plan: Plan, summary: TargetSummary): { points: FoldedR
   const model = (bjd: number) => signals.reduce((sum, p) => sum + p.at(bjd), 0);
   const others = (bjd: number) => signals.reduce((sum, p) => sum + (p.id === summary.targetId ? 0 : p.at(bjd)), 0);
   const points = (plan.observed ?? []).flatMap((v) =>
-    v.starId === summary.starId && v.rvMps !== undefined ? [{ v, rv: v.rvMps, err: Math.hypot(v.rvErrMps ?? 0, jitter) }] : [],
+    v.starId === summary.starId && v.rvMps !== undefined ? [{ v, rv: v.rvMps, err: Math.hypot(v.rvErrorMps ?? 0, jitter) }] : [],
   );
   const gamma = new Map<string, number>();
   for (const instrument of new Set(points.map((p) => p.v.instrument))) {

@@ -28,8 +28,8 @@ export function priorInformationVisits(plan: Plan, starId: string, model: StarMo
     prior.map((v) => {
       const at = nightPos.get(v.localDate);
       return at !== undefined
-        ? { bjdTdb: v.midBjdTdb, sigmaMps: v.sigmaWhiteMps, night: at, nightBjdTdb: nights[at]!.midBjdTdb ?? 0 }
-        : { bjdTdb: v.midBjdTdb, sigmaMps: v.sigmaWhiteMps, night: nights.length + otherDates.indexOf(v.localDate), nightBjdTdb: meanMiddle(v.localDate) };
+        ? { bjdTdb: v.midBjdTdb, whiteSigmaMps: v.whiteSigmaMps, night: at, nightBjdTdb: nights[at]!.midBjdTdb ?? 0 }
+        : { bjdTdb: v.midBjdTdb, whiteSigmaMps: v.whiteSigmaMps, night: nights.length + otherDates.indexOf(v.localDate), nightBjdTdb: meanMiddle(v.localDate) };
     }),
   );
   visits.forEach((v, i) => {

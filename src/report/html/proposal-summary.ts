@@ -89,7 +89,7 @@ export function proposalParagraph(plan: Plan): string {
   const c = plan.campaign;
   const t = plan.totals;
   const observed = plan.targets.filter((s) => s.visits > 0);
-  const sigmas = plan.visits.map((v) => v.sigmaEffMps);
+  const sigmas = plan.visits.map((v) => v.effectiveSigmaMps);
   const exposures = plan.visits.map((v) => v.exposureSec);
   const ephemeris = observed.filter((s) => s.kind === 'ephemeris');
   const search = observed.filter((s) => s.kind === 'search');
