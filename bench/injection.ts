@@ -18,7 +18,7 @@ function benchInput(): InjectionInput {
     timesBjdTdb,
     rvErrorsMps: timesBjdTdb.map(() => 1.5 + 1.5 * rng.uniform()),
     periodsDays: logSpaced(2, 100, 20),
-    massesEarth: logSpaced(2, 60, 20),
+    msinisEarth: logSpaced(2, 60, 20),
     starMassSun: 0.9,
     trialsPerCell: 200,
     seed: 1,
@@ -33,8 +33,8 @@ async function timedMap(input: InjectionInput, threads: number): Promise<number>
 
 async function run(): Promise<Record<string, unknown>> {
   const input = benchInput();
-  const trials = input.periodsDays.length * input.massesEarth.length * input.trialsPerCell;
-  const threads = Math.min(availableParallelism(), input.periodsDays.length * input.massesEarth.length);
+  const trials = input.periodsDays.length * input.msinisEarth.length * input.trialsPerCell;
+  const threads = Math.min(availableParallelism(), input.periodsDays.length * input.msinisEarth.length);
   const loadAvg1 = loadavg()[0]!;
   const sec1 = await timedMap(input, 1);
   const secN = await timedMap(input, threads);

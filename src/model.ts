@@ -19,7 +19,7 @@ export interface Ephemeris {
 }
 
 export interface PlanetSpec {
-  massEarth?: number;
+  msiniEarth?: number;
   kMps?: number;
   ecc: number;
   omegaDeg: number;
@@ -30,7 +30,7 @@ export interface PlanetSpec {
 export interface SearchSpec {
   periodMinDays: number;
   periodMaxDays: number;
-  massEarth: number;
+  msiniEarth: number;
 }
 
 /**

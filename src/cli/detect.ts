@@ -55,7 +55,7 @@ function detectOptions(opts: DetectFlags): DetectOptions {
     targetVisitSigmaMps: opts.targetSigma,
     seeingArcsec: opts.seeing,
     visits: opts.visits,
-    hypothetical: opts.planetMass === undefined ? undefined : { massEarth: opts.planetMass, periodDays: opts.period!, ecc: opts.ecc },
+    hypothetical: opts.planetMass === undefined ? undefined : { msiniEarth: opts.planetMass, periodDays: opts.period!, ecc: opts.ecc },
     periodsDays: opts.visits === undefined ? undefined : LIMIT_PERIODS_DAYS,
   };
 }
@@ -128,7 +128,7 @@ function printLimits(rows: TargetDetectability[], options: DetectOptions): void 
 function csvRows(rows: TargetDetectability[], options: DetectOptions): string {
   const levels = [...new Set([3, 5, options.goalSignificance])].sort((a, b) => a - b);
   const header = [
-    'target', 'vmag', 'teffK', 'massSun', 'planetSource', 'planetMassEarth', 'periodDays', 'ecc', 'kMps', 'exposureSec', 'tooFaint',
+    'target', 'vmag', 'teffK', 'massSun', 'planetSource', 'planetMsiniEarth', 'periodDays', 'ecc', 'kMps', 'exposureSec', 'tooFaint',
     'photonSigmaMps', 'visitSigmaMps', 'effectiveSigmaMps', 'visitCostSec',
     ...levels.flatMap((n) => [`visits${n}Random`, `visits${n}Quadrature`, `hours${n}Random`, `hours${n}Quadrature`]),
     'plannedVisits', 'sigmaKRandomMps', 'probabilityRandom', 'probabilityQuadrature', 'massMinRandomEarth', 'massMinQuadratureEarth', 'mass50RandomEarth', 'mass90RandomEarth',
@@ -139,7 +139,7 @@ function csvRows(rows: TargetDetectability[], options: DetectOptions): string {
     const b = r.exposure.budget;
     const p = r.atPlannedVisits;
     return [
-      r.targetId, r.vmag, r.teffK, r.massSun, r.planet?.source, r.planet?.massEarth, r.planet?.periodDays, r.planet?.ecc, r.planet?.kMps, r.exposure.exposureSec, String(r.exposure.tooFaint),
+      r.targetId, r.vmag, r.teffK, r.massSun, r.planet?.source, r.planet?.msiniEarth, r.planet?.periodDays, r.planet?.ecc, r.planet?.kMps, r.exposure.exposureSec, String(r.exposure.tooFaint),
       b.photonSigmaMps, b.visitSigmaMps, b.effectiveSigmaMps, r.visitCostSec,
       ...levels.flatMap((n) => {
         const v = r.needed.find((x) => x.goalSignificance === n);

@@ -56,7 +56,7 @@ const rowSchema = z.strictObject({
   tcbjdtdb: numberField('mid-transit time as a full BJD_TDB, 2400000 to 2600000', 2.4e6, 2.6e6),
   tcerrdays: numberField('uncertainty of Tc in days, 0 to 100', 0, 100),
   transitdurationhours: numberField('transit duration in hours, more than 0 and at most 48', 0, 48, { exclusiveMin: true }),
-  planetmassearth: numberField('planet mass in Earth masses, more than 0 and at most 30000', 0, 3e4, { exclusiveMin: true }),
+  planetmsiniearth: numberField('planet m sin i in Earth masses, more than 0 and at most 30000', 0, 3e4, { exclusiveMin: true }),
   planetkmps: numberField('semi-amplitude K in m/s, more than 0 and at most 10000', 0, 1e4, { exclusiveMin: true }),
   ecc: z.preprocess(
     (cell: Cell) => (cell === undefined || cell.trim() === '' ? undefined : parseDecimal(cell)),
@@ -66,7 +66,7 @@ const rowSchema = z.strictObject({
   eccsigma: numberField('prior width on e cos(omega) and e sin(omega) when e is fitted, more than 0 and at most 1', 0, 1, { exclusiveMin: true }),
   searchperiodmindays: numberField('shortest search period in days, more than 0.1 and at most 100000', 0.1, 1e5, { exclusiveMin: true }),
   searchperiodmaxdays: numberField('longest search period in days, more than 0.1 and at most 100000', 0.1, 1e5, { exclusiveMin: true }),
-  searchmassearth: numberField('search mass in Earth masses, more than 0', 0, 3e4, { exclusiveMin: true }),
+  searchmsiniearth: numberField('search m sin i in Earth masses, more than 0', 0, 3e4, { exclusiveMin: true }),
 });
 
 type Row = z.infer<typeof rowSchema>;
@@ -74,9 +74,9 @@ const COLUMNS = Object.keys(rowSchema.shape);
 const CANONICAL: Record<string, string> = {
   pmramasyr: 'pmRaMasYr', pmdecmasyr: 'pmDecMasYr', epochyear: 'epochYear', teffk: 'teffK', masssun: 'massSun',
   vsinikms: 'vsiniKms', jittermps: 'jitterMps', goalsignificance: 'goalSignificance', perioddays: 'periodDays', perioderrdays: 'periodErrDays',
-  tcbjdtdb: 'tcBjdTdb', tcerrdays: 'tcErrDays', transitdurationhours: 'transitDurationHours', planetmassearth: 'planetMassEarth', planetkmps: 'planetKMps',
+  tcbjdtdb: 'tcBjdTdb', tcerrdays: 'tcErrDays', transitdurationhours: 'transitDurationHours', planetmsiniearth: 'planetMsiniEarth', planetkmps: 'planetKMps',
   omegadeg: 'omegaDeg', searchperiodmindays: 'searchPeriodMinDays', searchperiodmaxdays: 'searchPeriodMaxDays',
-  searchmassearth: 'searchMassEarth', nightlyjitterfraction: 'nightlyJitterFraction', rotationdays: 'rotationDays', activitymps: 'activityMps',
+  searchmsiniearth: 'searchMsiniEarth', nightlyjitterfraction: 'nightlyJitterFraction', rotationdays: 'rotationDays', activitymps: 'activityMps',
   activitycoherencedays: 'activityCoherenceDays', eccsigma: 'eccSigma',
   rmag: 'rmag', imag: 'imag', jmag: 'jmag', hmag: 'hmag', gmag: 'gmag', logrhk: 'logRhk',
   exposuresec: 'exposureSec', visitsigmamps: 'visitSigmaMps', visitspernight: 'visitsPerNight',
@@ -125,21 +125,21 @@ function buildTarget(row: Row, place: Place): Target {
   };
 
   const hasPeriod = row.perioddays !== undefined;
-  for (const c of ['tcbjdtdb', 'planetmassearth', 'planetkmps', 'perioderrdays', 'tcerrdays', 'transitdurationhours', 'eccsigma'] as const) {
+  for (const c of ['tcbjdtdb', 'planetmsiniearth', 'planetkmps', 'perioderrdays', 'tcerrdays', 'transitdurationhours', 'eccsigma'] as const) {
     if (!hasPeriod && row[c] !== undefined) fail(place, c, 'needs periodDays in the same row');
   }
   if (hasPeriod && row.tcbjdtdb === undefined) fail(place, 'tcbjdtdb', 'required with periodDays: mid-transit time as a full BJD_TDB');
-  if (row.planetmassearth !== undefined && row.planetkmps !== undefined) {
-    fail(place, 'planetkmps', 'give planetMassEarth or planetKMps, not both');
+  if (row.planetmsiniearth !== undefined && row.planetkmps !== undefined) {
+    fail(place, 'planetkmps', 'give planetMsiniEarth or planetKMps, not both');
   }
   if (hasPeriod && row.perioderrdays !== undefined && row.perioderrdays >= row.perioddays!) {
     fail(place, 'perioderrdays', 'period uncertainty in days, smaller than the period');
   }
-  const search = [row.searchperiodmindays, row.searchperiodmaxdays, row.searchmassearth];
+  const search = [row.searchperiodmindays, row.searchperiodmaxdays, row.searchmsiniearth];
   const searchGiven = search.filter((v) => v !== undefined).length;
   if (searchGiven > 0 && searchGiven < 3) {
-    const missing = (['searchperiodmindays', 'searchperiodmaxdays', 'searchmassearth'] as const).find((c) => row[c] === undefined)!;
-    fail(place, missing, 'the three search columns go together: searchPeriodMinDays, searchPeriodMaxDays, searchMassEarth');
+    const missing = (['searchperiodmindays', 'searchperiodmaxdays', 'searchmsiniearth'] as const).find((c) => row[c] === undefined)!;
+    fail(place, missing, 'the three search columns go together: searchPeriodMinDays, searchPeriodMaxDays, searchMsiniEarth');
   }
   if (searchGiven === 3 && row.searchperiodmindays! >= row.searchperiodmaxdays!) {
     fail(place, 'searchperiodmaxdays', 'longer than searchPeriodMinDays');
@@ -180,9 +180,9 @@ function buildTarget(row: Row, place: Place): Target {
       tcErrDays: withDefault(row.tcerrdays, 'tcErrDays', 0),
     };
     if (row.transitdurationhours !== undefined) target.ephemeris.transitDurationHours = row.transitdurationhours;
-    if (row.planetmassearth !== undefined || row.planetkmps !== undefined) {
+    if (row.planetmsiniearth !== undefined || row.planetkmps !== undefined) {
       target.planet = {
-        massEarth: row.planetmassearth,
+        msiniEarth: row.planetmsiniearth,
         kMps: row.planetkmps,
         ecc: row.ecc ?? 0,
         omegaDeg: row.omegadeg ?? 90,
@@ -194,7 +194,7 @@ function buildTarget(row: Row, place: Place): Target {
     target.search = {
       periodMinDays: row.searchperiodmindays!,
       periodMaxDays: row.searchperiodmaxdays!,
-      massEarth: row.searchmassearth!,
+      msiniEarth: row.searchmsiniearth!,
     };
   }
   return target;

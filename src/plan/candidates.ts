@@ -80,9 +80,9 @@ export function setupTargets(campaign: Campaign): TargetSetup[] {
       setup.role = 'ephemeris';
       setup.kMps = kMps;
     } else if (target.search) {
-      const { periodMinDays, massEarth } = target.search;
+      const { periodMinDays, msiniEarth } = target.search;
       setup.role = 'search';
-      setup.kMps = semiAmplitudeMps({ starMassSun: target.massSun, planetMassEarth: massEarth, periodDays: periodMinDays });
+      setup.kMps = semiAmplitudeMps({ starMassSun: target.massSun, planetMassEarth: msiniEarth, periodDays: periodMinDays });
     } else {
       setup.skipped = target.ephemeris ? 'has an ephemeris but no planet mass or K: nothing to schedule for' : 'has neither an ephemeris with a planet nor a search range: nothing to schedule for';
     }

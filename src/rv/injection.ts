@@ -27,7 +27,7 @@ export interface InjectionInput {
   /** Each visit's effective σ (photon noise, floor and jitter together), m/s: noise and weights 1/σ². */
   rvErrorsMps: number[];
   periodsDays: number[];
-  massesEarth: number[];
+  msinisEarth: number[];
   starMassSun: number;
   trialsPerCell: number;
   seed: number;
@@ -53,10 +53,10 @@ export interface InjectionSetup {
 
 export interface InjectionMap {
   periodsDays: number[];
-  massesEarth: number[];
+  msinisEarth: number[];
   trialsPerCell: number;
   fapThreshold: number;
-  /** detection[i][j]: fraction of trials detected at periodsDays[i], massesEarth[j]. */
+  /** detection[i][j]: fraction of trials detected at periodsDays[i], msinisEarth[j]. */
   detection: number[][];
   /** Semi-amplitude of each cell for a circular orbit, m/s (the eccentric K is larger by 1/√(1 − e²)). */
   kCircularMps: number[][];
@@ -66,10 +66,10 @@ export interface InjectionMap {
 export const DEFAULT_FAP_THRESHOLD = 0.01;
 
 function checkInput(input: InjectionInput): void {
-  const { timesBjdTdb, rvErrorsMps, periodsDays, massesEarth, trialsPerCell, starMassSun } = input;
+  const { timesBjdTdb, rvErrorsMps, periodsDays, msinisEarth, trialsPerCell, starMassSun } = input;
   if (timesBjdTdb.length !== rvErrorsMps.length) throw new RangeError(`times and sigma differ in length: ${timesBjdTdb.length} and ${rvErrorsMps.length}`);
-  if (periodsDays.length === 0 || massesEarth.length === 0) throw new RangeError('need at least one period and one mass');
-  if (!periodsDays.every((p) => p > 0) || !massesEarth.every((m) => m > 0) || !(starMassSun > 0)) throw new RangeError('periods and masses must be positive');
+  if (periodsDays.length === 0 || msinisEarth.length === 0) throw new RangeError('need at least one period and one mass');
+  if (!periodsDays.every((p) => p > 0) || !msinisEarth.every((m) => m > 0) || !(starMassSun > 0)) throw new RangeError('periods and masses must be positive');
   if (!Number.isInteger(trialsPerCell) || trialsPerCell < 1) throw new RangeError(`trialsPerCell must be a positive integer, got ${trialsPerCell}`);
   const e = input.eccentricity;
   const eMax = e === undefined ? 0 : e.distribution === 'fixed' ? e.value : e.max;
@@ -111,16 +111,16 @@ function drawEccentricity(model: EccentricityModel | undefined, rng: Rng): { ecc
  */
 export function detectionProbability(setup: InjectionSetup, i: number, j: number): number {
   const { input, grid, kernel, fap, fapThreshold } = setup;
-  const { timesBjdTdb, rvErrorsMps, periodsDays, massesEarth, starMassSun, trialsPerCell } = input;
+  const { timesBjdTdb, rvErrorsMps, periodsDays, msinisEarth, starMassSun, trialsPerCell } = input;
   const periodDays = periodsDays[i]!;
-  const rng = createRng(deriveSeed(input.seed, i * massesEarth.length + j));
+  const rng = createRng(deriveSeed(input.seed, i * msinisEarth.length + j));
   const toleranceFreq = 1 / grid.baselineDays;
   const values = new Float64Array(timesBjdTdb.length);
   const power = new Float64Array(grid.count);
   let detected = 0;
   for (let trial = 0; trial < trialsPerCell; trial++) {
     const { ecc, omegaDeg } = drawEccentricity(input.eccentricity, rng);
-    const kMps = semiAmplitudeMps({ starMassSun, planetMassEarth: massesEarth[j]!, periodDays, ecc });
+    const kMps = semiAmplitudeMps({ starMassSun, planetMassEarth: msinisEarth[j]!, periodDays, ecc });
     // Random phase: the periastron time uniform over one period.
     const orbit = { kMps, periodDays, ecc, omegaDeg, periastronBjdTdb: timesBjdTdb[0]! + periodDays * rng.uniform() };
     for (let n = 0; n < values.length; n++) values[n] = radialVelocityMps(orbit, timesBjdTdb[n]!) + rvErrorsMps[n]! * rng.normal();
@@ -135,14 +135,14 @@ export function detectionProbability(setup: InjectionSetup, i: number, j: number
 /** The full map, one cell after another (a pure function of its input). */
 export function injectionRecovery(input: InjectionInput): InjectionMap {
   const setup = prepareInjection(input);
-  const { periodsDays, massesEarth, starMassSun } = input;
+  const { periodsDays, msinisEarth, starMassSun } = input;
   return {
     periodsDays,
-    massesEarth,
+    msinisEarth,
     trialsPerCell: input.trialsPerCell,
     fapThreshold: setup.fapThreshold,
-    detection: periodsDays.map((_, i) => massesEarth.map((_, j) => detectionProbability(setup, i, j))),
-    kCircularMps: periodsDays.map((periodDays) => massesEarth.map((planetMassEarth) => semiAmplitudeMps({ starMassSun, planetMassEarth, periodDays }))),
+    detection: periodsDays.map((_, i) => msinisEarth.map((_, j) => detectionProbability(setup, i, j))),
+    kCircularMps: periodsDays.map((periodDays) => msinisEarth.map((planetMassEarth) => semiAmplitudeMps({ starMassSun, planetMassEarth, periodDays }))),
     grid: setup.grid,
   };
 }

@@ -22,7 +22,7 @@ export interface KnownPhaseInput {
   rvErrorsMps: number[];
   ephemeris: Ephemeris;
   periodsDays: number[];
-  massesEarth: number[];
+  msinisEarth: number[];
   starMassSun: number;
   /** The detection threshold n on K̂/σ_K. */
   goalSignificance: number;
@@ -30,9 +30,9 @@ export interface KnownPhaseInput {
 
 export interface KnownPhaseMap {
   periodsDays: number[];
-  massesEarth: number[];
+  msinisEarth: number[];
   goalSignificance: number;
-  /** detection[i][j] at periodsDays[i], massesEarth[j]. */
+  /** detection[i][j] at periodsDays[i], msinisEarth[j]. */
   detection: number[][];
   /** Expected σ_K of each period's row, m/s (infinite when the visits carry no information on K). */
   sigmaKMps: number[];
@@ -60,7 +60,7 @@ export function expectedSigmaKMps(timesBjdTdb: number[], rvErrorsMps: number[], 
 
 function checkInput(input: KnownPhaseInput): void {
   if (input.timesBjdTdb.length !== input.rvErrorsMps.length) throw new RangeError('times and sigma differ in length');
-  if (!input.periodsDays.length || !input.massesEarth.length) throw new RangeError('need at least one period and one mass');
+  if (!input.periodsDays.length || !input.msinisEarth.length) throw new RangeError('need at least one period and one mass');
 }
 
 /** K of a circular orbit, m/s. */
@@ -72,9 +72,9 @@ export function knownPhaseMapAnalytic(input: KnownPhaseInput): KnownPhaseMap {
   checkInput(input);
   const sigmaKMps = input.periodsDays.map((p) => expectedSigmaKMps(input.timesBjdTdb, input.rvErrorsMps, atPeriod(input.ephemeris, p)));
   const detection = input.periodsDays.map((p, i) =>
-    input.massesEarth.map((m) => (Number.isFinite(sigmaKMps[i]!) ? detectionProbabilityKnownPhase(kOf(input, p, m), sigmaKMps[i]!, input.goalSignificance) : 0)),
+    input.msinisEarth.map((m) => (Number.isFinite(sigmaKMps[i]!) ? detectionProbabilityKnownPhase(kOf(input, p, m), sigmaKMps[i]!, input.goalSignificance) : 0)),
   );
-  return { periodsDays: input.periodsDays, massesEarth: input.massesEarth, goalSignificance: input.goalSignificance, detection, sigmaKMps };
+  return { periodsDays: input.periodsDays, msinisEarth: input.msinisEarth, goalSignificance: input.goalSignificance, detection, sigmaKMps };
 }
 
 /**
@@ -87,7 +87,7 @@ export function knownPhaseMapAnalytic(input: KnownPhaseInput): KnownPhaseMap {
  */
 export function knownPhaseMapSimulated(input: KnownPhaseInput & { trialsPerCell: number; seed: number }): KnownPhaseMap {
   checkInput(input);
-  const { timesBjdTdb, rvErrorsMps, ephemeris: eph, massesEarth, trialsPerCell } = input;
+  const { timesBjdTdb, rvErrorsMps, ephemeris: eph, msinisEarth, trialsPerCell } = input;
   const count = timesBjdTdb.length;
   const w = rvErrorsMps.map((s) => 1 / (s * s));
   const sumW = w.reduce((a, b) => a + b, 0);
@@ -100,10 +100,10 @@ export function knownPhaseMapSimulated(input: KnownPhaseInput & { trialsPerCell:
     const info = centred.reduce((a, c, n) => a + w[n]! * c * c, 0);
     const sigmaK = info > 0 ? 1 / Math.sqrt(info) : Infinity;
     sigmaKMps.push(sigmaK);
-    return massesEarth.map((m, j) => {
+    return msinisEarth.map((m, j) => {
       if (!Number.isFinite(sigmaK)) return 0;
       const kMps = kOf(input, periodDays, m);
-      const rng = createRng(deriveSeed(input.seed, i * massesEarth.length + j));
+      const rng = createRng(deriveSeed(input.seed, i * msinisEarth.length + j));
       let detected = 0;
       for (let trial = 0; trial < trialsPerCell; trial++) {
         const trueEph = { ...eph, periodDays: periodDays + eph.periodErrDays * rng.normal(), tcBjdTdb: eph.tcBjdTdb + eph.tcErrDays * rng.normal() };
@@ -116,5 +116,5 @@ export function knownPhaseMapSimulated(input: KnownPhaseInput & { trialsPerCell:
       return detected / trialsPerCell;
     });
   });
-  return { periodsDays: input.periodsDays, massesEarth, goalSignificance: input.goalSignificance, detection, sigmaKMps };
+  return { periodsDays: input.periodsDays, msinisEarth, goalSignificance: input.goalSignificance, detection, sigmaKMps };
 }

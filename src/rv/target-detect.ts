@@ -29,7 +29,7 @@ export type DetectStar = Pick<Target, 'id' | 'vmag' | 'teffK' | 'massSun' | 'vsi
 
 export interface DetectPlanet {
   source: 'given' | 'search' | 'hypothetical';
-  massEarth?: number;
+  msiniEarth?: number;
   kMps: number;
   periodDays: number;
   ecc: number;
@@ -38,7 +38,7 @@ export interface DetectPlanet {
 }
 
 export interface HypotheticalPlanet {
-  massEarth: number;
+  msiniEarth: number;
   periodDays: number;
   ecc?: number;
 }
@@ -50,28 +50,28 @@ export interface HypotheticalPlanet {
  * prior); else none.
  */
 export function planetOfTarget(target: DetectStar, hypothetical?: HypotheticalPlanet): DetectPlanet | undefined {
-  const kOf = (massEarth: number, periodDays: number, ecc: number) =>
-    semiAmplitudeMps({ starMassSun: target.massSun, planetMassEarth: massEarth, periodDays, ecc });
+  const kOf = (msiniEarth: number, periodDays: number, ecc: number) =>
+    semiAmplitudeMps({ starMassSun: target.massSun, planetMassEarth: msiniEarth, periodDays, ecc });
   if (hypothetical) {
     const ecc = hypothetical.ecc ?? 0;
-    return { source: 'hypothetical', massEarth: hypothetical.massEarth, kMps: kOf(hypothetical.massEarth, hypothetical.periodDays, ecc), periodDays: hypothetical.periodDays, ecc, note: `hypothetical ${hypothetical.massEarth} M_earth at P = ${hypothetical.periodDays} d` };
+    return { source: 'hypothetical', msiniEarth: hypothetical.msiniEarth, kMps: kOf(hypothetical.msiniEarth, hypothetical.periodDays, ecc), periodDays: hypothetical.periodDays, ecc, note: `hypothetical ${hypothetical.msiniEarth} M_earth at P = ${hypothetical.periodDays} d` };
   }
   const { planet, ephemeris, search } = target;
   if (planet && ephemeris) {
     const periodDays = ephemeris.periodDays;
     if (planet.kMps !== undefined) return { source: 'given', kMps: planet.kMps, periodDays, ecc: planet.ecc, note: `K = ${planet.kMps} m/s as given` };
-    const massEarth = planet.massEarth!;
-    return { source: 'given', massEarth, kMps: kOf(massEarth, periodDays, planet.ecc), periodDays, ecc: planet.ecc, note: `${massEarth} M_earth at P = ${periodDays} d` };
+    const msiniEarth = planet.msiniEarth!;
+    return { source: 'given', msiniEarth, kMps: kOf(msiniEarth, periodDays, planet.ecc), periodDays, ecc: planet.ecc, note: `${msiniEarth} M_earth at P = ${periodDays} d` };
   }
   if (search) {
     const periodDays = Math.sqrt(search.periodMinDays * search.periodMaxDays);
     return {
       source: 'search',
-      massEarth: search.massEarth,
-      kMps: kOf(search.massEarth, periodDays, 0),
+      msiniEarth: search.msiniEarth,
+      kMps: kOf(search.msiniEarth, periodDays, 0),
       periodDays,
       ecc: 0,
-      note: `search: ${search.massEarth} M_earth at P = ${periodDays.toFixed(1)} d, the logarithmic middle of ${search.periodMinDays}-${search.periodMaxDays} d`,
+      note: `search: ${search.msiniEarth} M_earth at P = ${periodDays.toFixed(1)} d, the logarithmic middle of ${search.periodMinDays}-${search.periodMaxDays} d`,
     };
   }
   return undefined;

@@ -15,7 +15,7 @@ const CAMPAIGN = (overrides: Record<string, string> = {}) => {
     .map(([k, v]) => `${k}: ${v}`)
     .join('\n');
 };
-const HEADER = 'id,ra,dec,vmag,teffK,periodDays,tcBjdTdb,planetMassEarth,ecc';
+const HEADER = 'id,ra,dec,vmag,teffK,periodDays,tcBjdTdb,planetMsiniEarth,ecc';
 const GOOD_ROW = 'Alba,10:00:00,-30:00:00,9.5,5200,4.1,2461000.5,10,';
 const targets = (...rows: string[]) => `${HEADER}\n${GOOD_ROW}\n${rows.join('\n')}\n`;
 

@@ -5,7 +5,7 @@ import { fixturePlan } from '../report/fixture.js';
 
 export const TARGETS_CSV = [
   '# invented stars',
-  'id,ra,dec,vmag,teffK,periodDays,tcBjdTdb,planetMassEarth,ecc,searchPeriodMinDays,searchPeriodMaxDays,searchMassEarth',
+  'id,ra,dec,vmag,teffK,periodDays,tcBjdTdb,planetMsiniEarth,ecc,searchPeriodMinDays,searchPeriodMaxDays,searchMsiniEarth',
   'Orvel-2,10:12:30.5,-31:04:00,9.4,5300,4.217,2461000.52,12,0.1,,,',
   'Sanu,161.2,-22.5,8.1,4900,,,,,2,40,8',
   '"Tekla b",11:40:00,-12:30:00,10.2,5900,2.95,2461001.11,30,,,,',

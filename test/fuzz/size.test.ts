@@ -25,7 +25,7 @@ function rvSeries(rows: number): string {
 }
 
 function targetList(rows: number): string {
-  const lines = ['id,ra,dec,vmag,teffK,periodDays,tcBjdTdb,planetMassEarth'];
+  const lines = ['id,ra,dec,vmag,teffK,periodDays,tcBjdTdb,planetMsiniEarth'];
   for (let i = 0; i < rows; i++) {
     const planet = i % 2 ? ',,' : `${2 + (i % 50)},2461000.5,${5 + (i % 40)}`;
     lines.push(`Star-${i},${i % 360},${(i % 170) - 85},${6 + (i % 8)},${3500 + (i % 3000)},${planet}`);

@@ -90,7 +90,7 @@ describe('goal not reached on the demo cut to 7 nights', () => {
 describe('a window without darkness', () => {
   it('78 deg N in June: no dark span on any night, no visit, and both plan-wide warnings', () => {
     const dir = mkdtempSync(path.join(tmpdir(), 'crest-arctic-'));
-    writeFileSync(path.join(dir, 'targets.csv'), 'id,ra,dec,vmag,teffK,periodDays,tcBjdTdb,planetMassEarth\nNorda-1,18:00:00,+60:00:00,9,5200,4.2,2461500.3,20\n');
+    writeFileSync(path.join(dir, 'targets.csv'), 'id,ra,dec,vmag,teffK,periodDays,tcBjdTdb,planetMsiniEarth\nNorda-1,18:00:00,+60:00:00,9,5200,4.2,2461500.3,20\n');
     writeFileSync(
       path.join(dir, 'campaign.yaml'),
       `name: Arctic\nsite: ${path.resolve('test/fixtures/sites/high-arctic.json')}\ninstrument: stable-2m\ntargets: targets.csv\nwindow: { start: 2027-06-15, end: 2027-06-18 }\ntime: { mode: choose-nights, nights: 2 }\n`,

@@ -57,14 +57,14 @@ function target(id: string, raDeg: number, decDeg: number, vmag: number, extra: 
 export const TARGETS: Target[] = [
   target('Teyu-3', 160.5, -35.1, 10.2, {
     ephemeris: { periodDays: 3.2174, periodErrDays: 0.0004, tcBjdTdb: 2461480.3121, tcErrDays: 0.002 },
-    planet: { massEarth: 14, ecc: 0, omegaDeg: 90 },
+    planet: { msiniEarth: 14, ecc: 0, omegaDeg: 90 },
   }),
   target('Mirador-7', 185.2, -22.4, 9.4, {
     massSun: 1.02, teffK: 5800,
     ephemeris: { periodDays: 8.7032, periodErrDays: 0.004, tcBjdTdb: 2461472.905, tcErrDays: 0.004 },
-    planet: { massEarth: 30, ecc: 0, omegaDeg: 90 },
+    planet: { msiniEarth: 30, ecc: 0, omegaDeg: 90 },
   }),
-  target('Alba', 201.7, -41.8, 7.1, { search: { periodMinDays: 2, periodMaxDays: 40, massEarth: 8 } }),
+  target('Alba', 201.7, -41.8, 7.1, { search: { periodMinDays: 2, periodMaxDays: 40, msiniEarth: 8 } }),
   target('Quena-2', 75.3, 12.5, 11.0, { priority: 0.5 }),
 ];
 

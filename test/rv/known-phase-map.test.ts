@@ -23,7 +23,7 @@ const input: KnownPhaseInput = {
   ...visits(),
   ephemeris: EPH,
   periodsDays: logSpaced(EPH.periodDays / 1.6, EPH.periodDays * 1.6, 6),
-  massesEarth: logSpaced(4, 40, 7),
+  msinisEarth: logSpaced(4, 40, 7),
   starMassSun: 0.82,
   goalSignificance: 4,
 };
@@ -66,7 +66,7 @@ describe('known-phase detection map', () => {
     const kOf = (m: number) => semiAmplitudeMps({ starMassSun: input.starMassSun, planetMassEarth: m, periodDays: EPH.periodDays });
     let lo = 0.1, hi = 1000;
     for (let k = 0; k < 100; k++) { const mid = Math.sqrt(lo * hi); if (kOf(mid) < input.goalSignificance * sigmaK) lo = mid; else hi = mid; }
-    const map = knownPhaseMapAnalytic({ ...input, periodsDays: [EPH.periodDays], massesEarth: [lo] });
+    const map = knownPhaseMapAnalytic({ ...input, periodsDays: [EPH.periodDays], msinisEarth: [lo] });
     expect(map.detection[0]![0]).toBeCloseTo(0.5, 6);
   });
 });

@@ -7,7 +7,7 @@ import { semiAmplitudeMps } from '../../src/orbit/semi-amplitude.js';
 import { OUT_OF_REACH_VISITS, planetOfTarget, targetDetectability } from '../../src/rv/target-detect.js';
 
 const stable4m = readInstrument(path.join(INSTRUMENTS_DIR, 'stable-4m.json'));
-const header = 'id,ra,dec,vmag,teffK,massSun,jitterMps,periodDays,tcBjdTdb,planetMassEarth,planetKMps,ecc,searchPeriodMinDays,searchPeriodMaxDays,searchMassEarth';
+const header = 'id,ra,dec,vmag,teffK,massSun,jitterMps,periodDays,tcBjdTdb,planetMsiniEarth,planetKMps,ecc,searchPeriodMinDays,searchPeriodMaxDays,searchMsiniEarth';
 const [given, byK, search, bare, tiny] = parseTargets(
   [
     header,
@@ -41,7 +41,7 @@ describe('planetOfTarget', () => {
   });
 
   it('a hypothetical planet replaces the target\'s own, and nothing gives nothing', () => {
-    expect(planetOfTarget(given, { massEarth: 10, periodDays: 20 })!.source).toBe('hypothetical');
+    expect(planetOfTarget(given, { msiniEarth: 10, periodDays: 20 })!.source).toBe('hypothetical');
     expect(planetOfTarget(bare)).toBeUndefined();
   });
 });
@@ -76,8 +76,8 @@ describe('targetDetectability', () => {
     for (const visits of [10, 100, 10_000]) {
       const d = targetDetectability(tiny, stable4m, { goalSignificance: 5, airmass: 1.2, visits });
       expect(d.verdict.level).toBe('out of reach');
-      expect(d.atPlannedVisits!.massMinRandomEarth!).toBeGreaterThan(d.planet!.massEarth!);
-      expect(d.atPlannedVisits!.mass50RandomEarth!).toBeGreaterThan(d.planet!.massEarth!);
+      expect(d.atPlannedVisits!.massMinRandomEarth!).toBeGreaterThan(d.planet!.msiniEarth!);
+      expect(d.atPlannedVisits!.mass50RandomEarth!).toBeGreaterThan(d.planet!.msiniEarth!);
       expect(d.atPlannedVisits!.probabilityRandom!).toBeLessThan(0.01);
       expect(5 * d.atPlannedVisits!.sigmaKRandomMps).toBeGreaterThan(stable4m.floorMps);
       expect(d.needed.every((v) => v.random === Infinity)).toBe(true);
@@ -85,7 +85,7 @@ describe('targetDetectability', () => {
   });
 
   it(`says plainly when more than ${OUT_OF_REACH_VISITS} visits are needed`, () => {
-    const d = targetDetectability(bare, stable4m, { goalSignificance: 5, airmass: 1.2, hypothetical: { massEarth: 2.5, periodDays: 30 } });
+    const d = targetDetectability(bare, stable4m, { goalSignificance: 5, airmass: 1.2, hypothetical: { msiniEarth: 2.5, periodDays: 30 } });
     expect(d.planet!.kMps).toBeGreaterThan(stable4m.floorMps);
     expect(d.needed.find((v) => v.goalSignificance === 5)!.random).toBeGreaterThan(OUT_OF_REACH_VISITS);
     expect(d.verdict.level).toBe('out of reach');

@@ -43,12 +43,12 @@ export function searchMassLimit(plan: Plan, summary: TargetSummary, target: Targ
 
 /** The minimum detectable m sin i against period (log axis) with the search's target mass; undefined without enough visits. */
 export function massLimitFigure(plan: Plan, summary: TargetSummary, target: Target & { search: SearchSpec }): ChartFigure | undefined {
-  const { periodMinDays, periodMaxDays, massEarth } = target.search;
+  const { periodMinDays, periodMaxDays, msiniEarth } = target.search;
   const limit = searchMassLimit(plan, summary, target, logGridDays(periodMinDays, periodMaxDays));
   if (!limit) return undefined;
   const { rows, goalSignificance, effectiveSigmaMps } = limit;
-  const yMax = Math.max(massEarth, ...rows.map((r) => r.massMinRandomEarth)) * 1.15;
-  const curve = rows.map((r) => ({ periodDays: r.periodDays, massEarth: r.massMinRandomEarth, top: yMax }));
+  const yMax = Math.max(msiniEarth, ...rows.map((r) => r.massMinRandomEarth)) * 1.15;
+  const curve = rows.map((r) => ({ periodDays: r.periodDays, msiniEarth: r.massMinRandomEarth, top: yMax }));
   const x = { field: 'periodDays', type: 'quantitative' as const, title: 'Orbital period (days)', scale: { type: 'log', domain: [periodMinDays, periodMaxDays], nice: false } };
   const spec = {
     width: 380,
@@ -57,20 +57,20 @@ export function massLimitFigure(plan: Plan, summary: TargetSummary, target: Targ
       {
         data: { values: curve },
         name: 'detectable_area', mark: { type: 'area', color: OKABE_ITO.bluishGreen, opacity: 0.12 },
-        encoding: { x, y: { field: 'massEarth', type: 'quantitative' }, y2: { field: 'top' } },
+        encoding: { x, y: { field: 'msiniEarth', type: 'quantitative' }, y2: { field: 'top' } },
       },
       {
         data: { values: curve },
         name: 'mass_limit_line', mark: { type: 'line', color: OKABE_ITO.bluishGreen, strokeWidth: 2 },
-        encoding: { x, y: { field: 'massEarth', type: 'quantitative', title: 'Smallest m sin i (M⊕)', scale: { domain: [0, yMax], nice: false } } },
+        encoding: { x, y: { field: 'msiniEarth', type: 'quantitative', title: 'Smallest m sin i (M⊕)', scale: { domain: [0, yMax], nice: false } } },
       },
       {
-        data: { values: [{ massEarth, periodDays: periodMinDays, label: `target mass ${fmt(massEarth, 1)} M⊕` }] },
+        data: { values: [{ msiniEarth, periodDays: periodMinDays, label: `target mass ${fmt(msiniEarth, 1)} M⊕` }] },
         layer: [
-          { name: 'goal_mass', mark: { type: 'rule', color: MUTED, strokeDash: [5, 3], strokeWidth: 1.5 }, encoding: { y: { field: 'massEarth', type: 'quantitative' } } },
+          { name: 'goal_mass', mark: { type: 'rule', color: MUTED, strokeDash: [5, 3], strokeWidth: 1.5 }, encoding: { y: { field: 'msiniEarth', type: 'quantitative' } } },
           {
             mark: { type: 'text', align: 'left', dx: 4, dy: -7, color: MUTED, fontSize: 11 },
-            encoding: { x, y: { field: 'massEarth', type: 'quantitative' }, text: { field: 'label' } },
+            encoding: { x, y: { field: 'msiniEarth', type: 'quantitative' }, text: { field: 'label' } },
           },
         ],
       },
