@@ -13,12 +13,12 @@ function benchInput(): InjectionInput {
   const rng = createRng(2027);
   const nights = new Set<number>();
   while (nights.size < 40) nights.add(Math.floor(180 * rng.uniform()));
-  const timesBjd = [...nights].sort((a, b) => a - b).map((n) => 2_461_400.6 + n + 0.25 * rng.uniform());
+  const timesBjdTdb = [...nights].sort((a, b) => a - b).map((n) => 2_461_400.6 + n + 0.25 * rng.uniform());
   return {
-    timesBjd,
-    sigmaMps: timesBjd.map(() => 1.5 + 1.5 * rng.uniform()),
+    timesBjdTdb,
+    rvErrorsMps: timesBjdTdb.map(() => 1.5 + 1.5 * rng.uniform()),
     periodsDays: logSpaced(2, 100, 20),
-    massesEarth: logSpaced(2, 60, 20),
+    msinisEarth: logSpaced(2, 60, 20),
     starMassSun: 0.9,
     trialsPerCell: 200,
     seed: 1,
@@ -33,8 +33,8 @@ async function timedMap(input: InjectionInput, threads: number): Promise<number>
 
 async function run(): Promise<Record<string, unknown>> {
   const input = benchInput();
-  const trials = input.periodsDays.length * input.massesEarth.length * input.trialsPerCell;
-  const threads = Math.min(availableParallelism(), input.periodsDays.length * input.massesEarth.length);
+  const trials = input.periodsDays.length * input.msinisEarth.length * input.trialsPerCell;
+  const threads = Math.min(availableParallelism(), input.periodsDays.length * input.msinisEarth.length);
   const loadAvg1 = loadavg()[0]!;
   const sec1 = await timedMap(input, 1);
   const secN = await timedMap(input, threads);

@@ -22,7 +22,7 @@ function runCampaign(targets: number, nights: number): Record<string, unknown> {
     weather1000Sec: Number(weather.sec.toFixed(2)),
     utility: Number(result.utility.toFixed(3)),
     visits: result.slotIds.length,
-    targetsAtGoal: result.targets.filter((t) => t.kOverSigmaK >= t.goal).length,
+    targetsAtGoal: result.targets.filter((t) => t.kOverSigmaK >= t.goalSignificance).length,
     peakRssMb: Math.round(process.resourceUsage().maxRSS / 1024),
   };
 }

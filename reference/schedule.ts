@@ -40,7 +40,7 @@ export function referenceKOverSigmaK(problem: ScheduleProblem, visits: Candidate
 
 interface Ratio {
   ratio: number;
-  goal: number;
+  goalSignificance: number;
   priority: number;
 }
 
@@ -56,7 +56,7 @@ function kOverSigmaKOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], g
     const key = priorKey.get(date)!;
     if (nightMid.has(key)) return nightMid.get(key)!;
     const same = (problem.prior ?? []).filter((v) => v.localDate === date);
-    return same.reduce((sum, v) => sum + (v.nightMidDays ?? v.midDays), 0) / same.length;
+    return same.reduce((sum, v) => sum + (v.nightMidBjdTdb ?? v.midBjdTdb), 0) / same.length;
   };
   return problem.targets.flatMap((target, t) => {
     const prior = (problem.prior ?? []).filter((v) => v.targetId === target.id);
@@ -66,8 +66,8 @@ function kOverSigmaKOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], g
       // A fresh accumulator over the visits: no running state from earlier moves.
       const asVisit = (v: CandidateSlot | PriorVisit) =>
         'nightIndex' in v
-          ? { bjd: v.midDays, sigmaMps: v.sigmaWhiteMps, night: v.nightIndex, nightBjd: nightMid.get(v.nightIndex)! }
-          : { bjd: v.midDays, sigmaMps: v.sigmaWhiteMps, night: priorKey.get(v.localDate)!, nightBjd: priorNightMid(v.localDate) };
+          ? { bjdTdb: v.midBjdTdb, whiteSigmaMps: v.whiteSigmaMps, night: v.nightIndex, nightBjdTdb: nightMid.get(v.nightIndex)! }
+          : { bjdTdb: v.midBjdTdb, whiteSigmaMps: v.whiteSigmaMps, night: priorKey.get(v.localDate)!, nightBjdTdb: priorNightMid(v.localDate) };
       const visits = informationVisits(target.model, mine.map(asVisit));
       // A visit whose phase information is in the prior keeps only the offset and K columns.
       const model = target.model;
@@ -80,21 +80,21 @@ function kOverSigmaKOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], g
         }
       });
       const variance = kVariances(model, visits);
-      target.planets.forEach((planet, i) => out.push({ ratio: variance[i] === Infinity ? 0 : planet.kMps / Math.sqrt(variance[i]!), goal: planet.goal, priority: planet.priority }));
+      target.planets.forEach((planet, i) => out.push({ ratio: variance[i] === Infinity ? 0 : planet.kMps / Math.sqrt(variance[i]!), goalSignificance: planet.goalSignificance, priority: planet.priority }));
     }
     const grid = grids[t];
     if (grid && target.search) {
-      const w = mine.map((v) => 1 / v.sigmaWhiteMps ** 2);
+      const w = mine.map((v) => 1 / v.whiteSigmaMps ** 2);
       let total = 0;
       for (let p = 0; p < grid.angularFreq.length; p++) {
         const m = [0, 1, 2].map((r) => [0, 1, 2].map((k) => (r === k ? grid.eps : 0)));
         mine.forEach((v, i) => {
-          const x = [1, Math.sin(grid.angularFreq[p]! * v.midDays), Math.cos(grid.angularFreq[p]! * v.midDays)];
+          const x = [1, Math.sin(grid.angularFreq[p]! * v.midBjdTdb), Math.cos(grid.angularFreq[p]! * v.midBjdTdb)];
           for (let r = 0; r < 3; r++) for (let k = 0; k < 3; k++) m[r]![k]! += w[i]! * x[r]! * x[k]!;
         });
         total += grid.logK[p]! + 0.25 * Math.log(determinant(m) / m[0]![0]!);
       }
-      out.push({ ratio: Math.exp(total / grid.angularFreq.length), goal: target.search.goal, priority: target.search.priority });
+      out.push({ ratio: Math.exp(total / grid.angularFreq.length), goalSignificance: target.search.goalSignificance, priority: target.search.priority });
     }
     return out;
   });
@@ -105,7 +105,7 @@ function nightMiddles(problem: ScheduleProblem): Map<number, number> {
   const out = new Map<number, number>();
   for (const night of problem.nights) {
     const mine = problem.slots.filter((s) => s.nightIndex === night.index);
-    out.set(night.index, night.midDays ?? (mine.length ? mine.reduce((sum, s) => sum + s.midDays, 0) / mine.length : 0));
+    out.set(night.index, night.midBjdTdb ?? (mine.length ? mine.reduce((sum, s) => sum + s.midBjdTdb, 0) / mine.length : 0));
   }
   return out;
 }
@@ -117,7 +117,7 @@ export function referenceUtility(problem: ScheduleProblem, visits: CandidateSlot
 
 function utilityOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], grids: (SearchGrid | null)[], overshootWeight: number): number {
   const prior = kOverSigmaKOnGrids(problem, [], grids);
-  return kOverSigmaKOnGrids(problem, visits, grids).reduce((sum, r, i) => sum + r.priority * goalValue(r.ratio / r.goal, overshootAfterPrior(prior[i]!.ratio / r.goal, overshootWeight)), 0);
+  return kOverSigmaKOnGrids(problem, visits, grids).reduce((sum, r, i) => sum + r.priority * goalValue(r.ratio / r.goalSignificance, overshootAfterPrior(prior[i]!.ratio / r.goalSignificance, overshootWeight)), 0);
 }
 
 /** Every constraint of the problem, checked pairwise: an empty list means feasible. */

@@ -40,7 +40,7 @@ function between(rng: Rng, lo: number, hi: number): number {
 
 interface SyntheticOrbit {
   periodDays: number;
-  tcDays: number;
+  tcBjdTdb: number;
   tcErrDays: number;
   periodErrDays: number;
 }
@@ -50,15 +50,15 @@ function syntheticTarget(rng: Rng, i: number, search: boolean, orbit: SyntheticO
   const priority = Math.ceil(between(rng, 0, 3));
   if (search) {
     const periodMinDays = Math.exp(between(rng, Math.log(2), Math.log(20)));
-    return { id, planets: [], search: { id, priority, goal: 5, kMps: between(rng, 2, 8), periodMinDays, periodMaxDays: periodMinDays * between(rng, 2, 8) } };
+    return { id, planets: [], search: { id, priority, goalSignificance: 5, kMps: between(rng, 2, 8), periodMinDays, periodMaxDays: periodMinDays * between(rng, 2, 8) } };
   }
   const kMps = between(rng, 2, 12);
   const model = buildStarModel({
-    planets: [{ id, kMps, periodDays: orbit.periodDays, tcBjd: orbit.tcDays, periodErrDays: orbit.periodErrDays, tcErrDays: orbit.tcErrDays, ecc: 0, omegaDeg: 90 }],
+    planets: [{ id, kMps, periodDays: orbit.periodDays, tcBjdTdb: orbit.tcBjdTdb, periodErrDays: orbit.periodErrDays, tcErrDays: orbit.tcErrDays, ecc: 0, omegaDeg: 90 }],
     nightlyJitterMps: 0,
-    spanBjd: spanDays,
+    spanBjdTdb: spanDays,
   });
-  return { id, planets: [{ id, priority, goal: 5, kMps }], model };
+  return { id, planets: [{ id, priority, goalSignificance: 5, kMps }], model };
 }
 
 export function syntheticProblem(spec: SyntheticSpec): ScheduleProblem {
@@ -68,7 +68,7 @@ export function syntheticProblem(spec: SyntheticSpec): ScheduleProblem {
     localDate: new Date(FIRST_NIGHT_MS + i * DAY_MS).toISOString().slice(0, 10),
     clearProbability: between(rng, 0.5, 0.9),
     hoursAvailable: spec.nightHours,
-    midDays: i + spec.nightHours / 48,
+    midBjdTdb: i + spec.nightHours / 48,
   }));
   const searchCount = Math.round(spec.targets * spec.searchFraction);
   const kinds = Array.from({ length: spec.targets }, (_, i) => i >= spec.targets - searchCount);
@@ -78,7 +78,7 @@ export function syntheticProblem(spec: SyntheticSpec): ScheduleProblem {
     const periodDays = Math.exp(between(rng, Math.log(1), Math.log(15)));
     const orbit: SyntheticOrbit = {
       periodDays,
-      tcDays: between(rng, 0, periodDays),
+      tcBjdTdb: between(rng, 0, periodDays),
       tcErrDays: spec.phaseErrors ? between(rng, 0.0005, 0.03) : 0,
       periodErrDays: spec.phaseErrors ? between(rng, 0, 0.002) : 0,
     };
@@ -86,7 +86,7 @@ export function syntheticProblem(spec: SyntheticSpec): ScheduleProblem {
     if (spec.visitsPerNight !== undefined && i % 2 === 0) target.visitsPerNight = spec.visitsPerNight;
     targets.push(target);
     const durationSec = Math.round(between(rng, 600, 2400));
-    const sigmaMps = between(rng, 1, 4);
+    const whiteSigmaMps = between(rng, 1, 4);
     const windowHours = between(rng, 2, spec.nightHours);
     // Hours after dusk at which the window opens on the first night; drifts 4 min earlier per night.
     const openHours0 = between(rng, -spec.nightHours, spec.nightHours);
@@ -98,8 +98,8 @@ export function syntheticProblem(spec: SyntheticSpec): ScheduleProblem {
       if (usable < 0) continue;
       for (let k = 0; k < spec.slotsPerNight; k++) {
         const startMs = FIRST_NIGHT_MS + night.index * DAY_MS + (opens + (spec.slotsPerNight === 1 ? usable / 2 : (usable * k) / (spec.slotsPerNight - 1))) * HOUR_MS;
-        const midDays = (startMs + (durationSec * 1000) / 2 - FIRST_NIGHT_MS) / DAY_MS;
-        slots.push({ slotId: `${target.id}/${night.index}/${k}`, targetId: target.id, nightIndex: night.index, startMs, durationSec, sigmaWhiteMps: sigmaMps * between(rng, 1, 1.3), midDays });
+        const midBjdTdb = (startMs + (durationSec * 1000) / 2 - FIRST_NIGHT_MS) / DAY_MS;
+        slots.push({ slotId: `${target.id}/${night.index}/${k}`, targetId: target.id, nightIndex: night.index, startMs, durationSec, whiteSigmaMps: whiteSigmaMps * between(rng, 1, 1.3), midBjdTdb });
       }
     }
   });

@@ -25,7 +25,7 @@ export { semiMajorAxisAu, periodDaysFromAu } from './orbit/kepler-third-law.js';
 export { summarizeOrbit } from './orbit/summary.js';
 export { eccentricAnomalyRad } from './orbit/kepler-equation.js';
 export { radialVelocityMps } from './orbit/rv-curve.js';
-export { periastronFromConjunctionBjd } from './orbit/periastron-time.js';
+export { periastronFromConjunctionBjdTdb } from './orbit/periastron-time.js';
 export { phaseAt, phaseErrCycles, overlapsTransit } from './orbit/ephemeris.js';
 export { signalShape } from './orbit/signal-shape.js';
 

@@ -19,7 +19,7 @@ export interface Ephemeris {
 }
 
 export interface PlanetSpec {
-  massEarth?: number;
+  msiniEarth?: number;
   kMps?: number;
   ecc: number;
   omegaDeg: number;
@@ -30,7 +30,7 @@ export interface PlanetSpec {
 export interface SearchSpec {
   periodMinDays: number;
   periodMaxDays: number;
-  massEarth: number;
+  msiniEarth: number;
 }
 
 /**
@@ -72,7 +72,7 @@ export interface Target {
   logg?: number;
   /** The target's own exposure (s) or σ per visit (m/s, photon + floor); either wins over the chosen exposure. */
   exposureSec?: number;
-  sigmaMps?: number;
+  visitSigmaMps?: number;
   /** Visits of the star allowed in one night (default 1), spaced by the campaign's sameNightSpacingHours. */
   visitsPerNight?: number;
   /** How the jitter was found: "as given", or the relations behind the default. */

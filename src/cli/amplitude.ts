@@ -34,12 +34,12 @@ function rowsFor(s: OrbitSummary, inverse: { massSinIApproxEarth: number } | und
   ];
   const rows: string[][] = [['semi-amplitude K', sig(s.kMps), 'm/s']];
   if (inverse) {
-    rows.push(...mass('m sin i (exact)', s.massSinIEarth));
+    rows.push(...mass('m sin i (exact)', s.msiniEarth));
     rows.push(...mass('m sin i (if m << M*)', inverse.massSinIApproxEarth));
     if (s.inclinationDeg !== 90) rows.push(...mass('planet mass m', s.massEarth));
   } else {
     rows.push(...mass('planet mass m', s.massEarth));
-    if (s.inclinationDeg !== 90) rows.push(...mass('m sin i', s.massSinIEarth));
+    if (s.inclinationDeg !== 90) rows.push(...mass('m sin i', s.msiniEarth));
   }
   rows.push(
     ['semi-major axis a', sig(s.semiMajorAxisAu), 'au'],

@@ -49,13 +49,13 @@ function detectOptions(opts: DetectFlags): DetectOptions {
   }
   checkExposureFlags(opts);
   return {
-    significance: opts.significance,
+    goalSignificance: opts.significance,
     airmass: opts.airmass,
     exposureSec: opts.exposure,
-    targetSigmaMps: opts.targetSigma,
+    targetVisitSigmaMps: opts.targetSigma,
     seeingArcsec: opts.seeing,
     visits: opts.visits,
-    hypothetical: opts.planetMass === undefined ? undefined : { massEarth: opts.planetMass, periodDays: opts.period!, ecc: opts.ecc },
+    hypothetical: opts.planetMass === undefined ? undefined : { msiniEarth: opts.planetMass, periodDays: opts.period!, ecc: opts.ecc },
     periodsDays: opts.visits === undefined ? undefined : LIMIT_PERIODS_DAYS,
   };
 }
@@ -63,7 +63,7 @@ function detectOptions(opts: DetectFlags): DetectOptions {
 const pair = (a: number | undefined, b: number | undefined, decimals: number) => (a === undefined ? '-' : `${fmt(a, decimals)}/${fmt(b, decimals)}`);
 
 function printTable(rows: TargetDetectability[], options: DetectOptions): void {
-  const n = options.significance;
+  const n = options.goalSignificance;
   const levels = [...new Set([3, 5, n])].sort((a, b) => a - b);
   const columns: Column[] = [
     { header: 'target' },
@@ -81,14 +81,14 @@ function printTable(rows: TargetDetectability[], options: DetectOptions): void {
   }
   columns.push({ header: 'verdict' });
   const body = rows.map((r) => {
-    const need = (level: number) => r.needed.find((v) => v.significance === level);
+    const need = (level: number) => r.needed.find((v) => v.goalSignificance === level);
     const goal = need(n);
     const cells = [
       r.targetId,
       fmt(r.vmag, 1),
       fmt(r.teffK, 0),
       fmt(r.planet?.kMps, 2),
-      fmt(r.sigmaMps, 2),
+      fmt(r.effectiveSigmaMps, 2),
       `${r.exposure.exposureSec}${r.exposure.tooFaint ? '!' : ''}`,
       ...levels.map((level) => pair(need(level)?.random, need(level)?.quadrature, 0)),
       pair(goal?.hoursRandom, goal?.hoursQuadrature, 1),
@@ -120,16 +120,16 @@ function printNotes(rows: TargetDetectability[]): void {
 function printLimits(rows: TargetDetectability[], options: DetectOptions): void {
   const first = rows[0]?.atPlannedVisits?.massLimits;
   if (!first) return;
-  console.log(`\nSmallest detectable m sin i (Earth masses) for K/sigma_K = ${options.significance} with ${options.visits} visits at random phases:`);
+  console.log(`\nSmallest detectable m sin i (Earth masses) for K/sigma_K = ${options.goalSignificance} with ${options.visits} visits at random phases:`);
   const body = first.map((limit, i) => [fmt(limit.periodDays, 0), ...rows.map((r) => fmt(r.atPlannedVisits!.massLimits![i]!.massMinRandomEarth, 1))]);
   console.log(renderTable([{ header: 'P (d)', align: 'right' }, ...rows.map((r) => ({ header: r.targetId, align: 'right' as const }))], body));
 }
 
 function csvRows(rows: TargetDetectability[], options: DetectOptions): string {
-  const levels = [...new Set([3, 5, options.significance])].sort((a, b) => a - b);
+  const levels = [...new Set([3, 5, options.goalSignificance])].sort((a, b) => a - b);
   const header = [
-    'target', 'vmag', 'teffK', 'massSun', 'planetSource', 'planetMassEarth', 'periodDays', 'ecc', 'kMps', 'exposureSec', 'tooFaint',
-    'sigmaPhotonMps', 'sigmaVisitMps', 'sigmaEffMps', 'visitCostSec',
+    'target', 'vmag', 'teffK', 'massSun', 'planetSource', 'planetMsiniEarth', 'periodDays', 'ecc', 'kMps', 'exposureSec', 'tooFaint',
+    'photonSigmaMps', 'visitSigmaMps', 'effectiveSigmaMps', 'visitCostSec',
     ...levels.flatMap((n) => [`visits${n}Random`, `visits${n}Quadrature`, `hours${n}Random`, `hours${n}Quadrature`]),
     'plannedVisits', 'sigmaKRandomMps', 'probabilityRandom', 'probabilityQuadrature', 'massMinRandomEarth', 'massMinQuadratureEarth', 'mass50RandomEarth', 'mass90RandomEarth',
     'snrPerPixel', 'jitterSource',
@@ -139,10 +139,10 @@ function csvRows(rows: TargetDetectability[], options: DetectOptions): string {
     const b = r.exposure.budget;
     const p = r.atPlannedVisits;
     return [
-      r.targetId, r.vmag, r.teffK, r.massSun, r.planet?.source, r.planet?.massEarth, r.planet?.periodDays, r.planet?.ecc, r.planet?.kMps, r.exposure.exposureSec, String(r.exposure.tooFaint),
-      b.photonMps, b.visitMps, b.effMps, r.visitCostSec,
+      r.targetId, r.vmag, r.teffK, r.massSun, r.planet?.source, r.planet?.msiniEarth, r.planet?.periodDays, r.planet?.ecc, r.planet?.kMps, r.exposure.exposureSec, String(r.exposure.tooFaint),
+      b.photonSigmaMps, b.visitSigmaMps, b.effectiveSigmaMps, r.visitCostSec,
       ...levels.flatMap((n) => {
-        const v = r.needed.find((x) => x.significance === n);
+        const v = r.needed.find((x) => x.goalSignificance === n);
         return [v?.random, v?.quadrature, v?.hoursRandom, v?.hoursQuadrature];
       }),
       p?.visits, p?.sigmaKRandomMps, p?.probabilityRandom, p?.probabilityQuadrature, p?.massMinRandomEarth, p?.massMinQuadratureEarth, p?.mass50RandomEarth, p?.mass90RandomEarth,
@@ -179,7 +179,7 @@ export function registerDetect(program: Command): Command {
         return printJson({ instrument: profile, options, targets: rows });
       }
       if (opts.csv) return void process.stdout.write(csvRows(rows, options));
-      console.log(`Instrument: ${instrument.id} (${instrument.name}); airmass ${options.airmass}; goal K/sigma_K = ${options.significance}`);
+      console.log(`Instrument: ${instrument.id} (${instrument.name}); airmass ${options.airmass}; goal K/sigma_K = ${options.goalSignificance}`);
       console.log('');
       printTable(rows, options);
       printNotes(rows);

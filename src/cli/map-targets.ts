@@ -39,13 +39,13 @@ interface JobBase {
 }
 
 export type MapJob =
-  | (JobBase & { kind: 'search'; searchMassEarth: number; input: InjectionInput })
-  | (JobBase & { kind: 'ephemeris'; ephemeris: Ephemeris; planetMassEarth?: number; input: KnownPhaseInput });
+  | (JobBase & { kind: 'search'; searchMsiniEarth: number; input: InjectionInput })
+  | (JobBase & { kind: 'ephemeris'; ephemeris: Ephemeris; planetMsiniEarth?: number; input: KnownPhaseInput });
 
 function axes(settings: MapSettings, periods: [number, number], masses: [number, number]) {
   const [pMin, pMax] = settings.periods ?? periods;
   const [mMin, mMax] = settings.masses ?? masses;
-  return { periodsDays: logSpaced(pMin, pMax, settings.grid.periods), massesEarth: logSpaced(mMin, mMax, settings.grid.masses) };
+  return { periodsDays: logSpaced(pMin, pMax, settings.grid.periods), msinisEarth: logSpaced(mMin, mMax, settings.grid.masses) };
 }
 
 function base(target: Target, visits: PlannedVisit[]): JobBase {
@@ -54,34 +54,34 @@ function base(target: Target, visits: PlannedVisit[]): JobBase {
 }
 
 /** The planet's m sin i: given, or from its K at the ephemeris period (exact inverse of K). */
-function planetMassEarth(plan: Plan, target: Target, eph: Ephemeris): number | undefined {
-  if (target.planet?.massEarth !== undefined) return target.planet.massEarth;
+function planetMsiniEarth(plan: Plan, target: Target, eph: Ephemeris): number | undefined {
+  if (target.planet?.msiniEarth !== undefined) return target.planet.msiniEarth;
   const kMps = plan.targets.find((s) => s.targetId === target.id)?.kMps;
   return kMps && kMps > 0 ? planetMassFromKEarth({ starMassSun: target.massSun, kMps, periodDays: eph.periodDays }) : undefined;
 }
 
 function jobOf(plan: Plan, target: Target, settings: MapSettings): MapJob | undefined {
   const visits = visitsOf(plan, target.starId);
-  const timesBjd = visits.map((v) => v.midBjdTdb);
-  const sigmaMps = visits.map((v) => v.sigmaEffMps);
+  const timesBjdTdb = visits.map((v) => v.midBjdTdb);
+  const rvErrorsMps = visits.map((v) => v.effectiveSigmaMps);
   if (target.search) {
-    const { periodMinDays, periodMaxDays, massEarth } = target.search;
-    const { periodsDays, massesEarth } = axes(settings, [periodMinDays, periodMaxDays], [massEarth / 2, massEarth * SEARCH_MASS_FACTOR]);
+    const { periodMinDays, periodMaxDays, msiniEarth } = target.search;
+    const { periodsDays, msinisEarth } = axes(settings, [periodMinDays, periodMaxDays], [msiniEarth / 2, msiniEarth * SEARCH_MASS_FACTOR]);
     const input: InjectionInput = {
-      timesBjd, sigmaMps, periodsDays, massesEarth, starMassSun: target.massSun,
+      timesBjdTdb, rvErrorsMps, periodsDays, msinisEarth, starMassSun: target.massSun,
       trialsPerCell: settings.trialsPerCell, seed: settings.seed, fapThreshold: settings.fapThreshold,
     };
     if (settings.eccMax) input.eccentricity = { distribution: 'uniform', max: settings.eccMax };
-    return { ...base(target, visits), kind: 'search', searchMassEarth: massEarth, input };
+    return { ...base(target, visits), kind: 'search', searchMsiniEarth: msiniEarth, input };
   }
   const eph = target.ephemeris;
   if (!eph) return undefined;
-  const mass = planetMassEarth(plan, target, eph);
+  const mass = planetMsiniEarth(plan, target, eph);
   const centre = mass ?? 10;
-  const { periodsDays, massesEarth } = axes(settings, [eph.periodDays / PERIOD_FACTOR, eph.periodDays * PERIOD_FACTOR], [centre / MASS_FACTOR, centre * MASS_FACTOR]);
-  const significance = plan.targets.find((s) => s.targetId === target.id)?.goal ?? plan.campaign.goals.significance;
-  const input: KnownPhaseInput = { timesBjd, sigmaMps, ephemeris: eph, periodsDays, massesEarth, starMassSun: target.massSun, significance };
-  return { ...base(target, visits), kind: 'ephemeris', ephemeris: eph, planetMassEarth: mass, input };
+  const { periodsDays, msinisEarth } = axes(settings, [eph.periodDays / PERIOD_FACTOR, eph.periodDays * PERIOD_FACTOR], [centre / MASS_FACTOR, centre * MASS_FACTOR]);
+  const goalSignificance = plan.targets.find((s) => s.targetId === target.id)?.goalSignificance ?? plan.campaign.goals.significance;
+  const input: KnownPhaseInput = { timesBjdTdb, rvErrorsMps, ephemeris: eph, periodsDays, msinisEarth, starMassSun: target.massSun, goalSignificance };
+  return { ...base(target, visits), kind: 'ephemeris', ephemeris: eph, planetMsiniEarth: mass, input };
 }
 
 /**

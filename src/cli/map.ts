@@ -74,15 +74,15 @@ interface MapResult {
 
 
 async function runJob(job: MapJob, settings: MapSettings, threads: number, progress: Progress): Promise<Omit<MapResult, 'svg'>> {
-  const { periodsDays, massesEarth } = job.input;
+  const { periodsDays, msinisEarth } = job.input;
   if (job.kind === 'search') {
     const map = await injectionRecoveryParallel(job.input, { threads, onProgress: (done, total) => progress.update(job.targetId, done, total) });
     progress.end();
     const method =
       `Injection–recovery: ${settings.trialsPerCell} trials a cell at the ${job.visits} planned visits (σ_eff with jitter), random phase, ${settings.eccMax ? `e uniform in [0, ${settings.eccMax}]` : 'circular orbits'}; ` +
       `detected when the highest GLS peak lies within 1/T of the injected frequency with Baluev FAP < ${settings.fapThreshold}.`;
-    const chart: DetectionMapData = { targetId: job.targetId, method, periodsDays, massesEarth, panels: [{ label: 'simulated', detection: map.detection }], markMassEarth: job.searchMassEarth };
-    return { job, chart, levels: levelRows(periodsDays, massesEarth, map.detection) };
+    const chart: DetectionMapData = { targetId: job.targetId, method, periodsDays, msinisEarth, panels: [{ label: 'simulated', detection: map.detection }], markMsiniEarth: job.searchMsiniEarth };
+    return { job, chart, levels: levelRows(periodsDays, msinisEarth, map.detection) };
   }
   const simulatedInput = { ...job.input, trialsPerCell: settings.trialsPerCell, seed: settings.seed };
   const analytic = knownPhaseMapAnalytic(job.input);
@@ -90,7 +90,7 @@ async function runJob(job: MapJob, settings: MapSettings, threads: number, progr
   const at = { periodsDays: [job.ephemeris.periodDays] };
   const atAnalytic = knownPhaseMapAnalytic({ ...job.input, ...at });
   const atSimulated = knownPhaseMapSimulated({ ...simulatedInput, ...at });
-  const planetMass = job.planetMassEarth === undefined ? undefined : { ...at, massesEarth: [job.planetMassEarth] };
+  const planetMass = job.planetMsiniEarth === undefined ? undefined : { ...at, msinisEarth: [job.planetMsiniEarth] };
   const planet = planetMass && {
     analytic: knownPhaseMapAnalytic({ ...job.input, ...planetMass }).detection[0]![0]!,
     simulated: knownPhaseMapSimulated({ ...simulatedInput, ...planetMass }).detection[0]![0]!,
@@ -98,20 +98,20 @@ async function runJob(job: MapJob, settings: MapSettings, threads: number, progr
   const maxDifference = extent(analytic.detection.flatMap((row, i) => row.map((p, j) => Math.abs(p - simulated.detection[i]![j]!)))).max;
   const method =
     `Known phase from the ephemeris (Tc fixed; rows other than P = ${fmt(job.ephemeris.periodDays, 4)} d ask "had the period been P"), ` +
-    `${job.visits} planned visits, circular orbits; detected when K̂/σ_K > ${job.input.significance}. ` +
+    `${job.visits} planned visits, circular orbits; detected when K̂/σ_K > ${job.input.goalSignificance}. ` +
     `Left: Φ(K/σ_K − n) with the scheduler's expected information; right: ${settings.trialsPerCell} simulated least-squares fits a cell.`;
   const chart: DetectionMapData = {
-    targetId: job.targetId, method, periodsDays, massesEarth,
+    targetId: job.targetId, method, periodsDays, msinisEarth,
     panels: [{ label: 'analytic', detection: analytic.detection }, { label: 'simulated', detection: simulated.detection }],
-    markMassEarth: job.planetMassEarth,
+    markMsiniEarth: job.planetMsiniEarth,
   };
   return {
     job, chart, maxDifference,
-    levels: levelRows(periodsDays, massesEarth, analytic.detection),
+    levels: levelRows(periodsDays, msinisEarth, analytic.detection),
     atEphemeris: {
       periodDays: job.ephemeris.periodDays,
-      analytic: levelRows(at.periodsDays, massesEarth, atAnalytic.detection)[0]!,
-      simulated: levelRows(at.periodsDays, massesEarth, atSimulated.detection)[0]!,
+      analytic: levelRows(at.periodsDays, msinisEarth, atAnalytic.detection)[0]!,
+      simulated: levelRows(at.periodsDays, msinisEarth, atSimulated.detection)[0]!,
       planet,
     },
   };
@@ -123,14 +123,14 @@ function printText(results: MapResult[], skipped: string[], written: string[], f
     const head = `${job.targetId}: ${job.visits} visits over ${fmt(job.baselineDays, 1)} d, star ${fmt(job.starMassSun, 2)} M☉`;
     if (job.kind === 'search') {
       console.log(`${head}; blind search, detection probability (%)`);
-      console.log(mapTableText(chart.periodsDays, chart.massesEarth, chart.panels[0]!.detection));
+      console.log(mapTableText(chart.periodsDays, chart.msinisEarth, chart.panels[0]!.detection));
       console.log(`\nm sin i detected in 50% and 90% of trials (interpolated in log mass)`);
-      console.log(levelTableText(chart.periodsDays, chart.massesEarth, chart.panels));
+      console.log(levelTableText(chart.periodsDays, chart.msinisEarth, chart.panels));
     } else if (full) {
       console.log(`${head}; known phase, P = ${fmt(job.ephemeris.periodDays, 4)} d, detection probability (%)`);
-      for (const panel of chart.panels) console.log(`\n${panel.label}\n${mapTableText(chart.periodsDays, chart.massesEarth, panel.detection)}`);
+      for (const panel of chart.panels) console.log(`\n${panel.label}\n${mapTableText(chart.periodsDays, chart.msinisEarth, panel.detection)}`);
       console.log(`\nm sin i detected in 50% and 90% of cases; largest analytic - simulated difference ${percent(r.maxDifference!)}`);
-      console.log(levelTableText(chart.periodsDays, chart.massesEarth, chart.panels));
+      console.log(levelTableText(chart.periodsDays, chart.msinisEarth, chart.panels));
     }
     if (job.kind === 'search' || full) console.log('');
   }
@@ -139,8 +139,8 @@ function printText(results: MapResult[], skipped: string[], written: string[], f
     console.log('Known-phase targets at their ephemeris period: m sin i detected in 50% / 90% of cases (analytic | simulated)');
     for (const r of known) {
       const a = r.atEphemeris!;
-      const pair = (row: LevelRow) => row.levels.map((l) => (l.mass.where === 'inside' ? fmt(l.mass.massEarth, 1) : l.mass.where)).join(' / ');
-      const planet = r.job.kind === 'ephemeris' && a.planet ? `; planet ${fmt(r.job.planetMassEarth, 1)} M⊕ detected ${percent(a.planet.analytic)} | ${percent(a.planet.simulated)}` : '';
+      const pair = (row: LevelRow) => row.levels.map((l) => (l.mass.where === 'inside' ? fmt(l.mass.msiniEarth, 1) : l.mass.where)).join(' / ');
+      const planet = r.job.kind === 'ephemeris' && a.planet ? `; planet ${fmt(r.job.planetMsiniEarth, 1)} M⊕ detected ${percent(a.planet.analytic)} | ${percent(a.planet.simulated)}` : '';
       console.log(`  ${r.job.targetId.padEnd(9)} P = ${fmt(a.periodDays, 3).padStart(6)} d: ${pair(a.analytic)} | ${pair(a.simulated)} M⊕${planet}; map cells differ by ${percent(r.maxDifference!)} at most`);
     }
     console.log('');
@@ -152,10 +152,10 @@ function printText(results: MapResult[], skipped: string[], written: string[], f
 function csvText(results: MapResult[]): string {
   const rows = results.flatMap(({ job, chart }) =>
     chart.panels.flatMap((panel) =>
-      chart.periodsDays.flatMap((p, i) => chart.massesEarth.map((m, j) => [job.targetId, job.kind, panel.label, p, m, panel.detection[i]![j]!])),
+      chart.periodsDays.flatMap((p, i) => chart.msinisEarth.map((m, j) => [job.targetId, job.kind, panel.label, p, m, panel.detection[i]![j]!])),
     ),
   );
-  return toCsv(['target', 'kind', 'method', 'periodDays', 'massEarth', 'detectionProbability'], rows);
+  return toCsv(['target', 'kind', 'method', 'periodDays', 'msiniEarth', 'detectionProbability'], rows);
 }
 
 const jsonLevels = (levels: LevelRow[]) =>
@@ -208,18 +208,18 @@ async function runMap(opts: MapFlags): Promise<void> {
       baselineDays: r.job.baselineDays,
       starMassSun: r.job.starMassSun,
       periodsDays: r.chart.periodsDays,
-      massesEarth: r.chart.massesEarth,
+      msinisEarth: r.chart.msinisEarth,
       ...Object.fromEntries(r.chart.panels.map((p) => [p.label, p.detection])),
       levels: jsonLevels(r.levels),
       ...(r.job.kind === 'ephemeris'
         ? {
             ephemerisPeriodDays: r.job.ephemeris.periodDays,
-            significance: r.job.input.significance,
-            planetMassEarth: r.job.planetMassEarth,
+            goalSignificance: r.job.input.goalSignificance,
+            planetMsiniEarth: r.job.planetMsiniEarth,
             maxDifference: r.maxDifference,
             atEphemerisPeriod: { analytic: jsonLevels([r.atEphemeris!.analytic])[0], simulated: jsonLevels([r.atEphemeris!.simulated])[0], planetDetection: r.atEphemeris!.planet },
           }
-        : { searchMassEarth: r.job.searchMassEarth }),
+        : { searchMsiniEarth: r.job.searchMsiniEarth }),
       svg: path.join(outDir, r.svg),
     })),
   });

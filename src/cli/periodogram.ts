@@ -20,7 +20,7 @@ interface PeriodogramOptions {
 
 /** Weighted rms about the weighted mean (weights 1/σ²), m/s. */
 function weightedRmsMps(series: RvSeries): number {
-  const w = series.sigmaMps.map((s) => 1 / (s * s));
+  const w = series.rvErrorsMps.map((s) => 1 / (s * s));
   const sw = w.reduce((a, b) => a + b, 0);
   const mean = series.rvMps.reduce((a, v, i) => a + w[i]! * v, 0) / sw;
   return Math.sqrt(series.rvMps.reduce((a, v, i) => a + w[i]! * (v - mean) ** 2, 0) / sw);
@@ -38,7 +38,7 @@ function probabilityText(p: number): string {
 }
 
 function checkedRange(series: RvSeries, opts: PeriodogramOptions) {
-  const baseline = baselineDays(series.timesBjd);
+  const baseline = baselineDays(series.timesBjdTdb);
   const minPeriodDays = opts.minPeriod ?? DEFAULT_MIN_PERIOD_DAYS;
   const maxPeriodDays = opts.maxPeriod ?? DEFAULT_MAX_PERIOD_PER_BASELINE * baseline;
   if (minPeriodDays >= maxPeriodDays) {
@@ -56,10 +56,10 @@ function checkedRange(series: RvSeries, opts: PeriodogramOptions) {
 
 function printText(series: RvSeries, search: PeriodogramSearch): void {
   const { grid } = search;
-  const first = extent(series.timesBjd).min;
+  const first = extent(series.timesBjdTdb).min;
   console.log(`RV series: ${series.file}`);
-  console.log(`  ${series.timesBjd.length} visits over ${fmt(grid.baselineDays, 1)} days (BJD_TDB ${fmt(first, 3)} to ${fmt(first + grid.baselineDays, 3)})`);
-  console.log(`  median sigma ${fmt(median(series.sigmaMps), 2)} m/s; weighted rms about the mean ${fmt(weightedRmsMps(series), 2)} m/s`);
+  console.log(`  ${series.timesBjdTdb.length} visits over ${fmt(grid.baselineDays, 1)} days (BJD_TDB ${fmt(first, 3)} to ${fmt(first + grid.baselineDays, 3)})`);
+  console.log(`  median sigma ${fmt(median(series.rvErrorsMps), 2)} m/s; weighted rms about the mean ${fmt(weightedRmsMps(series), 2)} m/s`);
   console.log(`Search: periods ${fmt(grid.minPeriodDays, 2)} to ${fmt(grid.maxPeriodDays, 1)} days, ${grid.count} frequencies, step 1/(T x ${grid.oversample}) = ${grid.stepPerDay.toPrecision(3)} per day`);
   console.log(`Power with a false-alarm probability over the band (Baluev 2008): ${search.levels.map((l) => `${probabilityText(l.fap)} at p = ${fmt(l.power, 3)}`).join(', ')}`);
   console.log('');
@@ -79,8 +79,8 @@ function printText(series: RvSeries, search: PeriodogramSearch): void {
 export function registerPeriodogram(program: Command): Command {
   return program
     .command('periodogram')
-    .description('generalised Lomb-Scargle periodogram of an RV series (CSV: bjd,rvMps,sigmaMps) with false-alarm probabilities')
-    .argument('<file>', 'CSV file with the header bjd,rvMps,sigmaMps (BJD_TDB days, m/s, m/s)')
+    .description('generalised Lomb-Scargle periodogram of an RV series (CSV: bjdTdb,rvMps,rvErrorMps) with false-alarm probabilities')
+    .argument('<file>', 'CSV file with the header bjdTdb,rvMps,rvErrorMps (BJD_TDB days, m/s, m/s)')
     .option('--min-period <days>', `shortest period searched (default ${DEFAULT_MIN_PERIOD_DAYS} d)`, numberFlag('--min-period', 'a period in days, more than 0.01 and at most 1e6', 0.01, 1e6, { exclusiveMin: true }))
     .option('--max-period <days>', `longest period searched (default ${DEFAULT_MAX_PERIOD_PER_BASELINE} x the baseline)`, numberFlag('--max-period', 'a period in days, more than 0.01 and at most 1e6', 0.01, 1e6, { exclusiveMin: true }))
     .option('--oversample <k>', 'grid points per resolution element 1/T', numberFlag('--oversample', 'a number from 1 to 100', 1, 100), DEFAULT_OVERSAMPLE)
@@ -89,15 +89,15 @@ export function registerPeriodogram(program: Command): Command {
     .action((file: string, opts: PeriodogramOptions) => {
       const series = readRvSeries(file);
       const range = checkedRange(series, opts);
-      const search = searchPeriodogram(series.timesBjd, series.rvMps, series.sigmaMps, { ...range, oversample: opts.oversample, top: opts.top });
+      const search = searchPeriodogram(series.timesBjdTdb, series.rvMps, series.rvErrorsMps, { ...range, oversample: opts.oversample, top: opts.top });
       if (!opts.json) return printText(series, search);
       const { grid } = search;
       printJson({
         file,
-        visits: series.timesBjd.length,
+        visits: series.timesBjdTdb.length,
         baselineDays: grid.baselineDays,
-        firstBjd: extent(series.timesBjd).min,
-        medianSigmaMps: median(series.sigmaMps),
+        firstBjdTdb: extent(series.timesBjdTdb).min,
+        medianRvErrorMps: median(series.rvErrorsMps),
         weightedRmsMps: weightedRmsMps(series),
         grid: { minPeriodDays: grid.minPeriodDays, maxPeriodDays: grid.maxPeriodDays, oversample: grid.oversample, frequencies: grid.count, stepPerDay: grid.stepPerDay },
         fapLevels: search.levels,

@@ -105,7 +105,7 @@ function budgetRows(b: PrecisionBudget, instrument: Instrument, star: Pick<Detec
   const times = (x: number) => `x ${x.toFixed(3)}`;
   const snr = b.snr;
   return [
-    ['reference photon noise', `${fmt(b.referenceSigmaMps, 2)} m/s`, `${instrument.band} = ${ref.mag}, ${ref.exposureSec} s, Teff ${ref.teffK} K, v sin i ${ref.vsiniKms} km/s, airmass ${ref.airmass}, S/N ${ref.snrPerPixel}`],
+    ['reference photon noise', `${fmt(b.referencePhotonSigmaMps, 2)} m/s`, `${instrument.band} = ${ref.mag}, ${ref.exposureSec} s, Teff ${ref.teffK} K, v sin i ${ref.vsiniKms} km/s, airmass ${ref.airmass}, S/N ${ref.snrPerPixel}`],
     ['magnitude', times(f.magnitude), `10^(0.2 (m - m_ref)), ${b.band} = ${fmt(b.mag, 2)}${b.magEstimated ? ' (estimated from V and Teff, dwarf colours)' : ''}`],
     ['exposure', times(f.exposure), `(t / t_ref)^(-1/2), t = ${b.exposureSec} s`],
     ['aperture', times(f.aperture), `(D / D_ref)^(-1), D = ${b.apertureM} m, D_ref = ${instrument.apertureM} m`],
@@ -115,11 +115,11 @@ function budgetRows(b: PrecisionBudget, instrument: Instrument, star: Pick<Detec
     ['line width', times(f.lineWidth), `rotation: v sin i = ${star.vsiniKms} km/s, w0 = ${fmt(b.lineWidthKms, 1)} km/s at R = ${instrument.resolvingPower}`],
     ['spectral type', times(f.spectralType), `Teff = ${star.teffK} K, ${b.spectralTypeSource}`],
     ['S/N per pixel', fmt(b.snrPerPixel, 1), `at ${b.snrWavelengthNm} nm: star ${fmt(snr.starElectrons, 0)} e- per pixel`],
-    ['photon noise', `${fmt(b.photonMps, 2)} m/s`, 'the product of the factors above'],
+    ['photon noise', `${fmt(b.photonSigmaMps, 2)} m/s`, 'the product of the factors above'],
     ['instrument floor', `${fmt(b.floorMps, 2)} m/s`, 'systematics; does not average down'],
-    ['sigma per visit', `${fmt(b.visitMps, 2)} m/s`, 'photon and floor in quadrature'],
+    ['sigma per visit', `${fmt(b.visitSigmaMps, 2)} m/s`, 'photon and floor in quadrature'],
     ['stellar jitter', `${fmt(b.jitterMps, 2)} m/s`, star.jitterSource ?? (star.estimated.includes('jitterMps') ? 'default' : 'as given')],
-    ['effective sigma', `${fmt(b.effMps, 2)} m/s`, 'visit and jitter in quadrature: the scatter about the orbit'],
+    ['effective sigma', `${fmt(b.effectiveSigmaMps, 2)} m/s`, 'visit and jitter in quadrature: the scatter about the orbit'],
   ];
 }
 

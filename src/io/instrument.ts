@@ -31,7 +31,7 @@ export const instrumentSchema = z
     coverageNm: z.tuple([positive('nm'), positive('nm')]).refine(([a, b]) => a < b, 'shortest then longest wavelength, nm'),
     spectralRegion: z.enum(['optical', 'near-infrared'], { error: 'optical or near-infrared' }),
     reference: z.strictObject({
-      sigmaMps: between(0.01, 1000, 'm/s from 0.01 to 1000'),
+      photonSigmaMps: between(0.01, 1000, 'm/s from 0.01 to 1000'),
       mag: between(-2, 20, 'a magnitude from -2 to 20'),
       exposureSec: between(1, 1e5, 'seconds from 1 to 100000'),
       airmass: between(1, 3, 'an airmass from 1 to 3'),

@@ -22,14 +22,14 @@ const rowSchema = z.strictObject({
   instrument: z.preprocess(blankToUndefined, z.string({ error: INSTRUMENT_ALLOWED }).regex(/^[A-Za-z0-9-]+$/, INSTRUMENT_ALLOWED)),
   rvmps: numberField('measured radial velocity in m/s, -1e6 to 1e6', -1e6, 1e6),
   // Below 1 mm/s the weights 1/sigma^2 of a fit leave the range of a double (as for an RV series).
-  rverrmps: numberField('1-sigma RV uncertainty in m/s, 0.001 to 10000', 1e-3, 1e4),
+  rverrormps: numberField('1-sigma RV uncertainty in m/s, 0.001 to 10000', 1e-3, 1e4),
 });
 type Row = z.infer<typeof rowSchema>;
 
 const COLUMNS = Object.keys(rowSchema.shape);
-const CANONICAL: Record<string, string> = { target: 'target', midbjdtdb: 'midBjdTdb', midutc: 'midUtc', instrument: 'instrument', rvmps: 'rvMps', rverrmps: 'rvErrMps' };
+const CANONICAL: Record<string, string> = { target: 'target', midbjdtdb: 'midBjdTdb', midutc: 'midUtc', instrument: 'instrument', rvmps: 'rvMps', rverrormps: 'rvErrorMps' };
 const display = (column: string) => CANONICAL[column] ?? column;
-const EXPECTED = 'the header target,midBjdTdb or midUtc,instrument (rvMps,rvErrMps optional) and one row per visit made';
+const EXPECTED = 'the header target,midBjdTdb or midUtc,instrument (rvMps,rvErrorMps optional) and one row per visit made';
 
 /** Refuses unknown, repeated and missing columns; returns the lower-case column names. */
 function checkHeader(header: string[], file: string): string[] {
@@ -57,15 +57,15 @@ function buildRow(data: Row, raw: Record<string, string>, knownIds: ReadonlySet<
   const hasUtc = data.midutc !== undefined;
   if (hasBjd && hasUtc) fail('midutc', 'give midBjdTdb or midUtc, not both');
   if (!hasBjd && !hasUtc) fail('midbjdtdb', 'required: midBjdTdb (full BJD_TDB) or midUtc (ISO 8601 with Z or an offset)');
-  if ((data.rvmps === undefined) !== (data.rverrmps === undefined)) {
-    fail(data.rvmps === undefined ? 'rvmps' : 'rverrmps', 'rvMps and rvErrMps go together: both or neither');
+  if ((data.rvmps === undefined) !== (data.rverrormps === undefined)) {
+    fail(data.rvmps === undefined ? 'rvmps' : 'rverrormps', 'rvMps and rvErrorMps go together: both or neither');
   }
   const out: Omit<ObservedRow, 'row' | 'line'> = { targetId: data.target, instrument: data.instrument };
   if (hasBjd) out.midBjdTdb = data.midbjdtdb;
   if (hasUtc) out.midUtc = new Date(isoInstantMs(raw.midutc!)).toISOString();
   if (data.rvmps !== undefined) {
     out.rvMps = data.rvmps;
-    out.rvErrMps = data.rverrmps;
+    out.rvErrorMps = data.rverrormps;
   }
   return out;
 }

@@ -52,16 +52,16 @@ const targetSchema = z.object({
   logRhk: optional(num),
   logg: optional(num),
   exposureSec: optional(positive),
-  sigmaMps: optional(positive),
+  visitSigmaMps: optional(positive),
   jitterSource: z.string().optional(),
   priority: positive,
   goalSignificance: optional(positive),
   ephemeris: z
     .object({ periodDays: positive, periodErrDays: nonNegative, tcBjdTdb: bjd, tcErrDays: nonNegative, transitDurationHours: optional(positive) })
     .optional(),
-  planet: z.object({ massEarth: optional(positive), kMps: optional(positive), ecc: num.min(0, 'from 0 to 0.99').max(0.99, 'from 0 to 0.99'), omegaDeg: num, eccPriorSigma: optional(positive) }).optional(),
+  planet: z.object({ msiniEarth: optional(positive), kMps: optional(positive), ecc: num.min(0, 'from 0 to 0.99').max(0.99, 'from 0 to 0.99'), omegaDeg: num, eccPriorSigma: optional(positive) }).optional(),
   search: z
-    .object({ periodMinDays: positive, periodMaxDays: positive, massEarth: positive })
+    .object({ periodMinDays: positive, periodMaxDays: positive, msiniEarth: positive })
     .refine((s) => s.periodMinDays < s.periodMaxDays, { path: ['periodMaxDays'], message: 'longer than periodMinDays' })
     .optional(),
   estimated: z.array(z.string()),

@@ -39,7 +39,7 @@ const rowSchema = z.strictObject({
   logrhk: numberField("chromospheric activity log R'HK from -6 to -3.5", -6, -3.5),
   logg: numberField('surface gravity log g (cgs) from 0 to 6', 0, 6),
   exposuresec: numberField('exposure time in seconds, more than 0 and at most 100000', 0, 1e5, { exclusiveMin: true }),
-  sigmamps: numberField('sigma per visit in m/s (photon and floor), more than 0 and at most 10000', 0, 1e4, { exclusiveMin: true }),
+  visitsigmamps: numberField('sigma per visit in m/s (photon and floor), more than 0 and at most 10000', 0, 1e4, { exclusiveMin: true }),
   teffk: numberField('effective temperature in kelvin, 2300 to 12000', 2300, 12000),
   masssun: numberField('stellar mass in solar masses, more than 0.05 and at most 10', 0.05, 10, { exclusiveMin: true }),
   vsinikms: numberField('projected rotation in km/s, 0 to 300', 0, 300),
@@ -56,7 +56,7 @@ const rowSchema = z.strictObject({
   tcbjdtdb: numberField('mid-transit time as a full BJD_TDB, 2400000 to 2600000', 2.4e6, 2.6e6),
   tcerrdays: numberField('uncertainty of Tc in days, 0 to 100', 0, 100),
   transitdurationhours: numberField('transit duration in hours, more than 0 and at most 48', 0, 48, { exclusiveMin: true }),
-  planetmassearth: numberField('planet mass in Earth masses, more than 0 and at most 30000', 0, 3e4, { exclusiveMin: true }),
+  planetmsiniearth: numberField('planet m sin i in Earth masses, more than 0 and at most 30000', 0, 3e4, { exclusiveMin: true }),
   planetkmps: numberField('semi-amplitude K in m/s, more than 0 and at most 10000', 0, 1e4, { exclusiveMin: true }),
   ecc: z.preprocess(
     (cell: Cell) => (cell === undefined || cell.trim() === '' ? undefined : parseDecimal(cell)),
@@ -66,7 +66,7 @@ const rowSchema = z.strictObject({
   eccsigma: numberField('prior width on e cos(omega) and e sin(omega) when e is fitted, more than 0 and at most 1', 0, 1, { exclusiveMin: true }),
   searchperiodmindays: numberField('shortest search period in days, more than 0.1 and at most 100000', 0.1, 1e5, { exclusiveMin: true }),
   searchperiodmaxdays: numberField('longest search period in days, more than 0.1 and at most 100000', 0.1, 1e5, { exclusiveMin: true }),
-  searchmassearth: numberField('search mass in Earth masses, more than 0', 0, 3e4, { exclusiveMin: true }),
+  searchmsiniearth: numberField('search m sin i in Earth masses, more than 0', 0, 3e4, { exclusiveMin: true }),
 });
 
 type Row = z.infer<typeof rowSchema>;
@@ -74,12 +74,12 @@ const COLUMNS = Object.keys(rowSchema.shape);
 const CANONICAL: Record<string, string> = {
   pmramasyr: 'pmRaMasYr', pmdecmasyr: 'pmDecMasYr', epochyear: 'epochYear', teffk: 'teffK', masssun: 'massSun',
   vsinikms: 'vsiniKms', jittermps: 'jitterMps', goalsignificance: 'goalSignificance', perioddays: 'periodDays', perioderrdays: 'periodErrDays',
-  tcbjdtdb: 'tcBjdTdb', tcerrdays: 'tcErrDays', transitdurationhours: 'transitDurationHours', planetmassearth: 'planetMassEarth', planetkmps: 'planetKMps',
+  tcbjdtdb: 'tcBjdTdb', tcerrdays: 'tcErrDays', transitdurationhours: 'transitDurationHours', planetmsiniearth: 'planetMsiniEarth', planetkmps: 'planetKMps',
   omegadeg: 'omegaDeg', searchperiodmindays: 'searchPeriodMinDays', searchperiodmaxdays: 'searchPeriodMaxDays',
-  searchmassearth: 'searchMassEarth', nightlyjitterfraction: 'nightlyJitterFraction', rotationdays: 'rotationDays', activitymps: 'activityMps',
+  searchmsiniearth: 'searchMsiniEarth', nightlyjitterfraction: 'nightlyJitterFraction', rotationdays: 'rotationDays', activitymps: 'activityMps',
   activitycoherencedays: 'activityCoherenceDays', eccsigma: 'eccSigma',
   rmag: 'rmag', imag: 'imag', jmag: 'jmag', hmag: 'hmag', gmag: 'gmag', logrhk: 'logRhk',
-  exposuresec: 'exposureSec', sigmamps: 'sigmaMps', visitspernight: 'visitsPerNight',
+  exposuresec: 'exposureSec', visitsigmamps: 'visitSigmaMps', visitspernight: 'visitsPerNight',
 };
 /** Magnitude columns other than V, by band. */
 const BAND_COLUMNS: [BandId, 'rmag' | 'imag' | 'jmag' | 'hmag' | 'gmag'][] = [['R', 'rmag'], ['I', 'imag'], ['J', 'jmag'], ['H', 'hmag'], ['G', 'gmag']];
@@ -89,7 +89,7 @@ const REQUIRED = ['id', 'ra', 'dec', 'vmag', 'teffk'];
 const STAR_COLUMNS = [
   'ra', 'dec', 'pmramasyr', 'pmdecmasyr', 'epochyear', 'vmag', 'teffk', 'masssun', 'vsinikms', 'jittermps',
   'nightlyjitterfraction', 'rotationdays', 'activitymps', 'activitycoherencedays', 'rmag', 'imag', 'jmag', 'hmag', 'gmag',
-  'logrhk', 'logg', 'exposuresec', 'sigmamps', 'visitspernight',
+  'logrhk', 'logg', 'exposuresec', 'visitsigmamps', 'visitspernight',
 ] as const;
 
 interface Place {
@@ -117,7 +117,7 @@ function buildTarget(row: Row, place: Place): Target {
   const firstBand = BAND_COLUMNS.find(([band]) => mags[band] !== undefined)?.[0];
   if (row.vmag === undefined && firstBand === undefined) fail(place, 'vmag', 'required: V magnitude from -2 to 20, or a magnitude in another band (rmag, imag, jmag, hmag, gmag)');
   if (row.visitspernight !== undefined && !Number.isInteger(row.visitspernight)) fail(place, 'visitspernight', 'visits of the star in one night, a whole number from 1 to 12');
-  if (row.exposuresec !== undefined && row.sigmamps !== undefined) fail(place, 'sigmamps', 'give exposureSec or sigmaMps, not both');
+  if (row.exposuresec !== undefined && row.visitsigmamps !== undefined) fail(place, 'visitsigmamps', 'give exposureSec or visitSigmaMps, not both');
   const withDefault = <T>(value: T | undefined, name: string, fallback: T): T => {
     if (value !== undefined) return value;
     estimated.push(name);
@@ -125,21 +125,21 @@ function buildTarget(row: Row, place: Place): Target {
   };
 
   const hasPeriod = row.perioddays !== undefined;
-  for (const c of ['tcbjdtdb', 'planetmassearth', 'planetkmps', 'perioderrdays', 'tcerrdays', 'transitdurationhours', 'eccsigma'] as const) {
+  for (const c of ['tcbjdtdb', 'planetmsiniearth', 'planetkmps', 'perioderrdays', 'tcerrdays', 'transitdurationhours', 'eccsigma'] as const) {
     if (!hasPeriod && row[c] !== undefined) fail(place, c, 'needs periodDays in the same row');
   }
   if (hasPeriod && row.tcbjdtdb === undefined) fail(place, 'tcbjdtdb', 'required with periodDays: mid-transit time as a full BJD_TDB');
-  if (row.planetmassearth !== undefined && row.planetkmps !== undefined) {
-    fail(place, 'planetkmps', 'give planetMassEarth or planetKMps, not both');
+  if (row.planetmsiniearth !== undefined && row.planetkmps !== undefined) {
+    fail(place, 'planetkmps', 'give planetMsiniEarth or planetKMps, not both');
   }
   if (hasPeriod && row.perioderrdays !== undefined && row.perioderrdays >= row.perioddays!) {
     fail(place, 'perioderrdays', 'period uncertainty in days, smaller than the period');
   }
-  const search = [row.searchperiodmindays, row.searchperiodmaxdays, row.searchmassearth];
+  const search = [row.searchperiodmindays, row.searchperiodmaxdays, row.searchmsiniearth];
   const searchGiven = search.filter((v) => v !== undefined).length;
   if (searchGiven > 0 && searchGiven < 3) {
-    const missing = (['searchperiodmindays', 'searchperiodmaxdays', 'searchmassearth'] as const).find((c) => row[c] === undefined)!;
-    fail(place, missing, 'the three search columns go together: searchPeriodMinDays, searchPeriodMaxDays, searchMassEarth');
+    const missing = (['searchperiodmindays', 'searchperiodmaxdays', 'searchmsiniearth'] as const).find((c) => row[c] === undefined)!;
+    fail(place, missing, 'the three search columns go together: searchPeriodMinDays, searchPeriodMaxDays, searchMsiniEarth');
   }
   if (searchGiven === 3 && row.searchperiodmindays! >= row.searchperiodmaxdays!) {
     fail(place, 'searchperiodmaxdays', 'longer than searchPeriodMinDays');
@@ -169,7 +169,7 @@ function buildTarget(row: Row, place: Place): Target {
   const optional = { nightlyJitterFraction: row.nightlyjitterfraction, rotationDays: row.rotationdays, activityMps: row.activitymps, activityCoherenceDays: row.activitycoherencedays };
   for (const [key, value] of Object.entries(optional)) if (value !== undefined) Object.assign(target, { [key]: value });
   if (Object.keys(mags).length > 0) target.mags = mags;
-  for (const [key, value] of [['logRhk', row.logrhk], ['logg', row.logg], ['exposureSec', row.exposuresec], ['sigmaMps', row.sigmamps], ['visitsPerNight', row.visitspernight]] as const) {
+  for (const [key, value] of [['logRhk', row.logrhk], ['logg', row.logg], ['exposureSec', row.exposuresec], ['visitSigmaMps', row.visitsigmamps], ['visitsPerNight', row.visitspernight]] as const) {
     if (value !== undefined) target[key] = value;
   }
   if (hasPeriod) {
@@ -180,9 +180,9 @@ function buildTarget(row: Row, place: Place): Target {
       tcErrDays: withDefault(row.tcerrdays, 'tcErrDays', 0),
     };
     if (row.transitdurationhours !== undefined) target.ephemeris.transitDurationHours = row.transitdurationhours;
-    if (row.planetmassearth !== undefined || row.planetkmps !== undefined) {
+    if (row.planetmsiniearth !== undefined || row.planetkmps !== undefined) {
       target.planet = {
-        massEarth: row.planetmassearth,
+        msiniEarth: row.planetmsiniearth,
         kMps: row.planetkmps,
         ecc: row.ecc ?? 0,
         omegaDeg: row.omegadeg ?? 90,
@@ -194,7 +194,7 @@ function buildTarget(row: Row, place: Place): Target {
     target.search = {
       periodMinDays: row.searchperiodmindays!,
       periodMaxDays: row.searchperiodmaxdays!,
-      massEarth: row.searchmassearth!,
+      msiniEarth: row.searchmsiniearth!,
     };
   }
   return target;

@@ -1,17 +1,17 @@
 import type { Ephemeris } from '../model.js';
 
 /** Orbital cycles since the reference mid-transit time: x = (t − Tc) / P (any real number). */
-export function cyclesSinceTc(eph: Ephemeris, tBjd: number): number {
-  return (tBjd - eph.tcBjdTdb) / eph.periodDays;
+export function cyclesSinceTc(eph: Ephemeris, tBjdTdb: number): number {
+  return (tBjdTdb - eph.tcBjdTdb) / eph.periodDays;
 }
 
 /** The transit epoch n nearest to time t: Tc + n P is the closest predicted mid-transit. */
-export function nearestEpoch(eph: Ephemeris, tBjd: number): number {
-  return Math.round(cyclesSinceTc(eph, tBjd));
+export function nearestEpoch(eph: Ephemeris, tBjdTdb: number): number {
+  return Math.round(cyclesSinceTc(eph, tBjdTdb));
 }
 
 /** Predicted mid-transit time (BJD_TDB) of epoch n: Tc(n) = Tc + n P. */
-export function tcAtEpochBjd(eph: Ephemeris, epoch: number): number {
+export function tcAtEpochBjdTdb(eph: Ephemeris, epoch: number): number {
   return eph.tcBjdTdb + epoch * eph.periodDays;
 }
 
@@ -24,8 +24,8 @@ export function tcErrAtEpochDays(eph: Ephemeris, epoch: number): number {
 }
 
 /** Orbital phase at time t in [0, 1): 0 at mid-transit, 0.25 and 0.75 at the quadratures. */
-export function phaseAt(eph: Ephemeris, tBjd: number): number {
-  const x = cyclesSinceTc(eph, tBjd);
+export function phaseAt(eph: Ephemeris, tBjdTdb: number): number {
+  const x = cyclesSinceTc(eph, tBjdTdb);
   const phase = x - Math.floor(x);
   return phase === 1 ? 0 : phase;
 }
@@ -35,8 +35,8 @@ export function phaseAt(eph: Ephemeris, tBjd: number): number {
  * propagation gives σ_φ² = (σ_T0² + x² σ_P²) / P² with x = (t − Tc)/P: the propagation law above at
  * the fractional epoch, divided by P. Values of 0.5 or more mean the phase is unknown.
  */
-export function phaseErrCycles(eph: Ephemeris, tBjd: number): number {
-  return Math.hypot(eph.tcErrDays, cyclesSinceTc(eph, tBjd) * eph.periodErrDays) / eph.periodDays;
+export function phaseErrCycles(eph: Ephemeris, tBjdTdb: number): number {
+  return Math.hypot(eph.tcErrDays, cyclesSinceTc(eph, tBjdTdb) * eph.periodErrDays) / eph.periodDays;
 }
 
 /** How visits are kept out of transits: the margin in standard deviations and the largest fraction of the orbit removed. */
@@ -58,16 +58,16 @@ export function transitHalfWidthDays(eph: Ephemeris, epoch: number, rule: Transi
 }
 
 /**
- * Whether [startBjd, endBjd] overlaps a predicted transit widened as transitHalfWidthDays says.
+ * Whether [startBjdTdb, endBjdTdb] overlaps a predicted transit widened as transitHalfWidthDays says.
  * RVs taken in transit are distorted by the Rossiter–McLaughlin effect (Rossiter 1924;
  * McLaughlin 1924), so RV programmes avoid them (common practice). False when the ephemeris has
  * no transit duration, or when the transit is too uncertain to avoid.
  */
-export function overlapsTransit(eph: Ephemeris, startBjd: number, endBjd: number, rule: TransitRule): boolean {
-  for (const epoch of new Set([nearestEpoch(eph, startBjd), nearestEpoch(eph, endBjd)])) {
-    const tc = tcAtEpochBjd(eph, epoch);
+export function overlapsTransit(eph: Ephemeris, startBjdTdb: number, endBjdTdb: number, rule: TransitRule): boolean {
+  for (const epoch of new Set([nearestEpoch(eph, startBjdTdb), nearestEpoch(eph, endBjdTdb)])) {
+    const tc = tcAtEpochBjdTdb(eph, epoch);
     const margin = transitHalfWidthDays(eph, epoch, rule);
-    if (margin > 0 && startBjd < tc + margin && endBjd > tc - margin) return true;
+    if (margin > 0 && startBjdTdb < tc + margin && endBjdTdb > tc - margin) return true;
   }
   return false;
 }

@@ -11,9 +11,9 @@ import { meanAnomalyRad } from './kepler-equation.js';
  * relation, common practice). Then E_c from ν_c, M_c = E_c − e sin E_c (Kepler's equation), and
  * T_p = Tc − P M_c / 2π. For e = 0 and ω = 90° this gives T_p = Tc.
  */
-export function periastronFromConjunctionBjd(input: { tcBjd: number; periodDays: number; ecc: number; omegaDeg: number }): number {
-  const { tcBjd, periodDays, ecc, omegaDeg } = input;
+export function periastronFromConjunctionBjdTdb(input: { tcBjdTdb: number; periodDays: number; ecc: number; omegaDeg: number }): number {
+  const { tcBjdTdb, periodDays, ecc, omegaDeg } = input;
   const nuConjunction = Math.PI / 2 - (omegaDeg * Math.PI) / 180;
   const meanAnomaly = meanAnomalyRad(eccentricFromTrueRad(nuConjunction, ecc), ecc);
-  return tcBjd - (periodDays * meanAnomaly) / (2 * Math.PI);
+  return tcBjdTdb - (periodDays * meanAnomaly) / (2 * Math.PI);
 }

@@ -2,7 +2,7 @@
 // model (src/rv/information-model.ts) and the report need for an orbit of any eccentricity.
 import { eccentricAnomalyRad } from './kepler-equation.js';
 import { trueAnomalyRad } from './anomalies.js';
-import { periastronFromConjunctionBjd } from './periastron-time.js';
+import { periastronFromConjunctionBjdTdb } from './periastron-time.js';
 
 export interface SignalShape {
   ecc: number;
@@ -21,7 +21,7 @@ export function planetSignalShape(planet: { ecc: number; omegaDeg: number } | un
 /**
  * The signal of a Keplerian orbit: v = γ + K [cos(ν + ω) + e cos ω] (docs/references.md
  * [Kepler-RV]), with the mean anomaly M = 2π(φ − φ_p) counted from the periastron phase φ_p that
- * puts the transit at φ = 0 (periastronFromConjunctionBjd). For e = 0 and ω = 90° this is
+ * puts the transit at φ = 0 (periastronFromConjunctionBjdTdb). For e = 0 and ω = 90° this is
  * s = −sin 2πφ. The slope is ds/dφ = −sin(ν + ω) 2π dν/dM with dν/dM = (1 + e cos ν)² / (1 − e²)^(3/2)
  * (angular momentum r² dν/dt = const; [Murray-Dermott1999] §2.4).
  */
@@ -30,7 +30,7 @@ export function signalShape(ecc: number, omegaDeg: number): SignalShape {
   if (ecc === 0 && omegaDeg === 90) {
     return { ecc, omegaDeg, at: (phase) => -Math.sin(2 * Math.PI * phase), slope: (phase) => -2 * Math.PI * Math.cos(2 * Math.PI * phase) };
   }
-  const periastronPhase = periastronFromConjunctionBjd({ tcBjd: 0, periodDays: 1, ecc, omegaDeg });
+  const periastronPhase = periastronFromConjunctionBjdTdb({ tcBjdTdb: 0, periodDays: 1, ecc, omegaDeg });
   const nuAt = (phase: number) => trueAnomalyRad(eccentricAnomalyRad(2 * Math.PI * (phase - periastronPhase), ecc), ecc);
   return {
     ecc,

@@ -12,8 +12,8 @@ export interface OrbitSummary {
   kMps: number;
   massEarth: number;
   massJupiter: number;
-  massSinIEarth: number;
-  massSinIJupiter: number;
+  msiniEarth: number;
+  msiniJupiter: number;
   semiMajorAxisAu: number;
   starOrbitRadiusKm: number;
   /** a★ sin i, what the RV curve measures. */
@@ -37,8 +37,8 @@ export function summarizeOrbit(input: SemiAmplitudeInput): OrbitSummary {
     kMps: semiAmplitudeMps({ starMassSun, planetMassEarth, periodDays, ecc, inclinationDeg }),
     massEarth: planetMassEarth,
     massJupiter: planetMassEarth / EARTH_PER_JUPITER,
-    massSinIEarth: planetMassEarth * sinI,
-    massSinIJupiter: (planetMassEarth * sinI) / EARTH_PER_JUPITER,
+    msiniEarth: planetMassEarth * sinI,
+    msiniJupiter: (planetMassEarth * sinI) / EARTH_PER_JUPITER,
     semiMajorAxisAu: semiMajorAxisAu(input),
     starOrbitRadiusKm,
     starOrbitProjectedKm: starOrbitRadiusKm * sinI,

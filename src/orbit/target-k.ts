@@ -10,10 +10,10 @@ export function targetKMps(target: Target): number | undefined {
   const planet = target.planet;
   if (!planet || !target.ephemeris) return undefined;
   if (planet.kMps !== undefined) return planet.kMps;
-  if (planet.massEarth === undefined) return undefined;
+  if (planet.msiniEarth === undefined) return undefined;
   return semiAmplitudeMps({
     starMassSun: target.massSun,
-    planetMassEarth: planet.massEarth,
+    planetMassEarth: planet.msiniEarth,
     periodDays: target.ephemeris.periodDays,
     ecc: planet.ecc,
   });

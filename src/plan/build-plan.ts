@@ -33,10 +33,10 @@ export function buildPlan(given: Campaign, options: PlanOptions = {}): Plan {
   const bySlot = new Map(details.map((d) => [d.slot.slotId, d]));
   const ahead = result.slotIds.map((id) => plannedVisit(bySlot.get(id)!, campaign));
   const visits = [...past.kept, ...ahead].sort((a, b) => a.startUtc.localeCompare(b.startUtc));
-  const windowEndBjd = (t: TargetSetup) =>
+  const windowEndBjdTdb = (t: TargetSetup) =>
     starBjdTdb(DateTime.fromISO(window.end, { zone: site.timeZone }).plus({ days: 1 }).toJSDate(), t.target);
   const targets = setups.map((setup) => {
-    const summary = targetSummary(setup, result, weather.targets, windowEndBjd(setup));
+    const summary = targetSummary(setup, result, weather.targets, windowEndBjdTdb(setup));
     const fit = rv.fits.get(setup.target.id);
     const peak = rv.peaks.get(setup.target.id);
     return { ...summary, ...(fit ? { fit } : {}), ...(peak ? { peak } : {}) };
@@ -79,10 +79,10 @@ function plannedVisit(d: SlotDetail, campaign: Campaign): PlannedVisit {
     airmass: d.airmass,
     moonSeparationDeg: d.moonSeparationDeg,
     phases: d.phases,
-    sigmaMps: d.sigmaMps,
+    visitSigmaMps: d.visitSigmaMps,
     snrPerPixel: d.snrPerPixel,
-    sigmaEffMps: d.sigmaEffMps,
-    sigmaWhiteMps: d.slot.sigmaWhiteMps,
+    effectiveSigmaMps: d.effectiveSigmaMps,
+    whiteSigmaMps: d.slot.whiteSigmaMps,
   };
 }
 
@@ -90,7 +90,7 @@ function targetSummary(
   setup: TargetSetup,
   result: ScheduleResult,
   weather: { targetId: string; goalProbability: number }[],
-  windowEndBjd: number,
+  windowEndBjdTdb: number,
 ): TargetSummary {
   const { target } = setup;
   const summary: TargetSummary = {
@@ -102,7 +102,7 @@ function targetSummary(
     hours: 0,
     warnings: [],
   };
-  if (target.ephemeris) summary.phaseErrAtEnd = phaseErrCycles(target.ephemeris, windowEndBjd);
+  if (target.ephemeris) summary.phaseErrAtEnd = phaseErrCycles(target.ephemeris, windowEndBjdTdb);
   const outcome = result.targets.find((t) => t.targetId === target.id);
   if (!setup.role || !outcome) return summary;
   return {
@@ -113,7 +113,7 @@ function targetSummary(
     ...(outcome.priorVisits > 0 ? { priorVisits: outcome.priorVisits, priorKOverSigmaK: outcome.priorKOverSigmaK } : {}),
     sigmaKMps: outcome.sigmaKMps,
     kOverSigmaK: outcome.kOverSigmaK,
-    goal: outcome.goal,
+    goalSignificance: outcome.goalSignificance,
     goalProbability: weather.find((w) => w.targetId === target.id)?.goalProbability,
     informationEfficiency: outcome.informationEfficiency,
   };

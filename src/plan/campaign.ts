@@ -29,7 +29,7 @@ export interface ObservedRow {
   midUtc?: string;
   instrument: string;
   rvMps?: number;
-  rvErrMps?: number;
+  rvErrorMps?: number;
   /** 1-based data row and the line it ends on. */
   row: number;
   line: number;

@@ -31,8 +31,8 @@ export interface SlotDetail {
   moonSeparationDeg: number;
   midBjdTdb: number;
   /** Photon + floor; with all the jitter. */
-  sigmaMps: number;
-  sigmaEffMps: number;
+  visitSigmaMps: number;
+  effectiveSigmaMps: number;
   phases: VisitPhase[];
   /** S/N per pixel at the instrument's wavelength. */
   snrPerPixel: number;
@@ -67,22 +67,22 @@ export function setupTargets(campaign: Campaign): TargetSetup[] {
   const { instrument, goals } = campaign;
   return campaign.targets.map((target) => {
     const kMps = targetKMps(target);
-    const goal = target.goalSignificance ?? goals.significance;
+    const goalSignificance = target.goalSignificance ?? goals.significance;
     // The target's own exposure or sigma wins; otherwise the fewest hours for its K within the
     // visits the campaign can give (src/rv/exposure.ts).
-    const options = { seeingArcsec: campaign.site.medianSeeingArcsec, kMps, significance: goal, maxVisits: visitCap(campaign, target) };
+    const options = { seeingArcsec: campaign.site.medianSeeingArcsec, kMps, goalSignificance, maxVisits: visitCap(campaign, target) };
     const exposure =
       target.exposureSec === undefined
-        ? chooseExposureSec(instrument, target, TYPICAL_AIRMASS, target.sigmaMps, options)
+        ? chooseExposureSec(instrument, target, TYPICAL_AIRMASS, target.visitSigmaMps, options)
         : fixedExposure(instrument, target, TYPICAL_AIRMASS, target.exposureSec, options);
     const setup: TargetSetup = { target, exposure, durationSec: visitCostSec(instrument, exposure.exposureSec) };
     if (target.ephemeris && kMps !== undefined) {
       setup.role = 'ephemeris';
       setup.kMps = kMps;
     } else if (target.search) {
-      const { periodMinDays, massEarth } = target.search;
+      const { periodMinDays, msiniEarth } = target.search;
       setup.role = 'search';
-      setup.kMps = semiAmplitudeMps({ starMassSun: target.massSun, planetMassEarth: massEarth, periodDays: periodMinDays });
+      setup.kMps = semiAmplitudeMps({ starMassSun: target.massSun, planetMassEarth: msiniEarth, periodDays: periodMinDays });
     } else {
       setup.skipped = target.ephemeris ? 'has an ephemeris but no planet mass or K: nothing to schedule for' : 'has neither an ephemeris with a planet nor a search range: nothing to schedule for';
     }
@@ -101,7 +101,7 @@ export function setupStars(campaign: Campaign, setups: TargetSetup[]): StarSetup
     for (const row of rowSetups) Object.assign(row, { exposure: lead.exposure, durationSec: lead.durationSec });
     const star: StarSetup = { starId, star: lead.target, rows: rowSetups, exposure: lead.exposure, durationSec: lead.durationSec, noise: starNoise(lead.target, campaign.noise.nightlyJitterFraction) };
     const goalOf = (t: Target) => t.goalSignificance ?? campaign.goals.significance;
-    const planets = planetRows(rows).map((t) => ({ id: t.id, priority: t.priority, kMps: byId.get(t.id)!.kMps!, goal: goalOf(t) }));
+    const planets = planetRows(rows).map((t) => ({ id: t.id, priority: t.priority, kMps: byId.get(t.id)!.kMps!, goalSignificance: goalOf(t) }));
     const searchRow = rowSetups.find((s) => s.role === 'search');
     if (planets.length === 0 && !searchRow) return star;
     const target: ScheduleTarget = { id: starId, planets };
@@ -110,7 +110,7 @@ export function setupStars(campaign: Campaign, setups: TargetSetup[]): StarSetup
     if (model) target.model = model;
     if (searchRow) {
       const { periodMinDays, periodMaxDays } = searchRow.target.search!;
-      target.search = { id: searchRow.target.id, priority: searchRow.target.priority, kMps: searchRow.kMps!, goal: goalOf(searchRow.target), periodMinDays, periodMaxDays };
+      target.search = { id: searchRow.target.id, priority: searchRow.target.priority, kMps: searchRow.kMps!, goalSignificance: goalOf(searchRow.target), periodMinDays, periodMaxDays };
     }
     star.scheduleTarget = target;
     return star;
@@ -150,7 +150,7 @@ export function scheduleNights(campaign: Campaign, nights: Night[]): ScheduleNig
       clearProbability: clearProbability(campaign.site.clearFraction, night.localDate),
       hoursAvailable: night.darkHours,
     };
-    if (night.darkStart && night.darkEnd) out.midDays = julianDate((night.darkStart.getTime() + night.darkEnd.getTime()) / 2);
+    if (night.darkStart && night.darkEnd) out.midBjdTdb = julianDate((night.darkStart.getTime() + night.darkEnd.getTime()) / 2);
     return out;
   });
 }
@@ -206,8 +206,8 @@ export function candidateSlots(campaign: Campaign, nights: Night[], windows: Win
           nightIndex: n,
           startMs,
           durationSec: setup.durationSec,
-          sigmaWhiteMps: whiteSigmaMps(budget.visitMps, setup.noise),
-          midDays: midBjdTdb,
+          whiteSigmaMps: whiteSigmaMps(budget.visitSigmaMps, setup.noise),
+          midBjdTdb,
         };
         details.push({
           slot,
@@ -216,8 +216,8 @@ export function candidateSlots(campaign: Campaign, nights: Night[], windows: Win
           airmass,
           moonSeparationDeg: moonSeparationDeg(moon, position.vector, midMs),
           midBjdTdb,
-          sigmaMps: budget.visitMps,
-          sigmaEffMps: budget.effMps,
+          visitSigmaMps: budget.visitSigmaMps,
+          effectiveSigmaMps: budget.effectiveSigmaMps,
           phases: ephemerides.map(({ id, eph }) => ({ targetId: id, phase: phaseAt(eph, midBjdTdb), phaseErr: phaseErrCycles(eph, midBjdTdb) })),
           snrPerPixel: budget.snrPerPixel,
         });

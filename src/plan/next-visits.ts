@@ -25,7 +25,7 @@ export interface NextChoice {
   gain: number;
   gainPerHour: number;
   /** Per planet or search of the star: K/sigma_K before and after the visit, and its goal. */
-  effects: { targetId: string; before: number; after: number; goal: number }[];
+  effects: { targetId: string; before: number; after: number; goalSignificance: number }[];
   airmass: number;
   /** Minutes left in the star's window from the visit's start. */
   windowLeftMin: number;
@@ -74,8 +74,8 @@ export function nextVisits(given: Campaign, at: Date): NextAnswer {
   }
   const ratios = (t: number) => {
     const star = problem.targets[t]!;
-    const out = star.planets.map((p, i) => ({ targetId: p.id, ratio: state.planetFractionOfGoal(c.planetFrom[t]! + i) * p.goal, goal: p.goal }));
-    if (star.search) out.push({ targetId: star.search.id, ratio: state.searchFractionOfGoal(t, 0, 0) * star.search.goal, goal: star.search.goal });
+    const out = star.planets.map((p, i) => ({ targetId: p.id, ratio: state.planetFractionOfGoal(c.planetFrom[t]! + i) * p.goalSignificance, goalSignificance: p.goalSignificance }));
+    if (star.search) out.push({ targetId: star.search.id, ratio: state.searchFractionOfGoal(t, 0, 0) * star.search.goalSignificance, goalSignificance: star.search.goalSignificance });
     return out;
   };
   const choices: NextChoice[] = [];
@@ -89,14 +89,14 @@ export function nextVisits(given: Campaign, at: Date): NextAnswer {
     const window = inputs.windows.find((w) => w.targetId === d.slot.targetId && w.localDate === localDate && w.start.getTime() <= d.slot.startMs && w.end.getTime() >= d.slot.startMs)!;
     // A star with one planet or search is named once, by its line.
     const name = (id: string) => (before.length > 1 ? `${id} ` : '');
-    const goalWords = before.map((b) => (b.ratio >= b.goal ? `${name(b.targetId)}goal reached (K/sigma_K ${b.ratio.toFixed(1)})` : `${name(b.targetId)}K/sigma_K ${b.ratio.toFixed(1)} of ${b.goal}`));
+    const goalWords = before.map((b) => (b.ratio >= b.goalSignificance ? `${name(b.targetId)}goal reached (K/sigma_K ${b.ratio.toFixed(1)})` : `${name(b.targetId)}K/sigma_K ${b.ratio.toFixed(1)} of ${b.goalSignificance}`));
     choices.push({
       starId: d.slot.targetId,
       startMs: d.slot.startMs,
       durationSec: d.slot.durationSec,
       gain,
       gainPerHour: gain / c.hours[j]!,
-      effects: before.map((b, i) => ({ targetId: b.targetId, before: b.ratio, after: after[i]!.ratio, goal: b.goal })),
+      effects: before.map((b, i) => ({ targetId: b.targetId, before: b.ratio, after: after[i]!.ratio, goalSignificance: b.goalSignificance })),
       airmass: d.airmass,
       windowLeftMin: (window.end.getTime() - d.slot.startMs) / 60_000,
       moonSeparationDeg: d.moonSeparationDeg,

@@ -14,7 +14,7 @@ const DAY_MS = 86_400_000;
 const JD_UNIX_EPOCH = 2_440_587.5;
 
 /** UTC of a BJD_TDB towards a star: the barycentric correction inverted by two fixed-point steps (it changes by < 1 ms over its own size). */
-function utcOfBjd(bjd: number, star: Target): Date {
+function utcOfBjdTdb(bjd: number, star: Target): Date {
   let ms = (bjd - JD_UNIX_EPOCH) * DAY_MS;
   for (let i = 0; i < 2; i++) ms -= (starBjdTdb(new Date(ms), star) - bjd) * DAY_MS;
   return new Date(Math.round(ms));
@@ -42,14 +42,14 @@ export function observedVisits(campaign: Campaign, stars: StarSetup[]): Observed
   const starMps = new Map<string, number>();
   const instrumentMpsOf = (setup: StarSetup) => {
     if (!starMps.has(setup.starId)) {
-      starMps.set(setup.starId, visitPrecision(campaign.instrument, setup.star, setup.exposure.exposureSec, TYPICAL_AIRMASS, { seeingArcsec: campaign.site.medianSeeingArcsec }).visitMps);
+      starMps.set(setup.starId, visitPrecision(campaign.instrument, setup.star, setup.exposure.exposureSec, TYPICAL_AIRMASS, { seeingArcsec: campaign.site.medianSeeingArcsec }).visitSigmaMps);
     }
     return starMps.get(setup.starId)!;
   };
   const visits = observed.rows.map((row): ObservedVisit => {
     const setup = starOf.get(row.targetId)!;
-    const at = row.midUtc !== undefined ? new Date(row.midUtc) : utcOfBjd(row.midBjdTdb!, setup.star);
-    const instrumentMps = row.rvErrMps ?? instrumentMpsOf(setup);
+    const at = row.midUtc !== undefined ? new Date(row.midUtc) : utcOfBjdTdb(row.midBjdTdb!, setup.star);
+    const instrumentMps = row.rvErrorMps ?? instrumentMpsOf(setup);
     const visit: ObservedVisit = {
       targetId: row.targetId,
       starId: setup.starId,
@@ -57,11 +57,11 @@ export function observedVisits(campaign: Campaign, stars: StarSetup[]): Observed
       midUtc: DateTime.fromJSDate(at, { zone: 'utc' }).toISO({ suppressMilliseconds: true })!,
       localDate: eveningDate(at, campaign.site.timeZone),
       instrument: row.instrument,
-      sigmaWhiteMps: whiteSigmaMps(instrumentMps, setup.noise),
+      whiteSigmaMps: whiteSigmaMps(instrumentMps, setup.noise),
       source: `${observed.file} row ${row.row}`,
     };
     if (row.rvMps !== undefined) visit.rvMps = row.rvMps;
-    if (row.rvErrMps !== undefined) visit.rvErrMps = row.rvErrMps;
+    if (row.rvErrorMps !== undefined) visit.rvErrorMps = row.rvErrorMps;
     return visit;
   });
   return visits.sort((a, b) => a.midBjdTdb - b.midBjdTdb);

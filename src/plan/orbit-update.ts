@@ -23,7 +23,7 @@ export interface RvUpdate {
 
 /** The RV-carrying observed visits of a star, as the fit takes them. */
 function points(observed: ObservedVisit[], starId: string): FitPoint[] {
-  return observed.filter((v) => v.starId === starId && v.rvMps !== undefined).map((v) => ({ bjd: v.midBjdTdb, rvMps: v.rvMps!, rvErrMps: v.rvErrMps!, instrument: v.instrument }));
+  return observed.filter((v) => v.starId === starId && v.rvMps !== undefined).map((v) => ({ bjdTdb: v.midBjdTdb, rvMps: v.rvMps!, rvErrorMps: v.rvErrorMps!, instrument: v.instrument }));
 }
 
 /**

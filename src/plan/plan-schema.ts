@@ -30,9 +30,9 @@ export const plannedVisitSchema = z.object({
   /** Predicted phase of each planet of the star that has an ephemeris. */
   phases: z.array(visitPhaseSchema),
   /** Per-visit precision (photon + floor), with all the jitter, and its white part (without the nightly share). */
-  sigmaMps: positive,
-  sigmaEffMps: positive,
-  sigmaWhiteMps: positive,
+  visitSigmaMps: positive,
+  effectiveSigmaMps: positive,
+  whiteSigmaMps: positive,
   /** S/N per pixel at the instrument's reference wavelength. */
   snrPerPixel: positive,
   /** A visit before the re-planning time (`--now`), kept as it was planned; absent for visits ahead. */
@@ -55,9 +55,9 @@ export const observedVisitSchema = z.object({
   instrument: z.string(),
   /** Measured RV and its uncertainty (m/s), when the file gives them. */
   rvMps: num.optional(),
-  rvErrMps: positive.optional(),
-  /** The white noise the information model gives this visit: rvErrMps (or the instrument's σ) with the white jitter. */
-  sigmaWhiteMps: positive,
+  rvErrorMps: positive.optional(),
+  /** The white noise the information model gives this visit: rvErrorMps (or the instrument's σ) with the white jitter. */
+  whiteSigmaMps: positive,
   /** `observed.csv row 3`. */
   source: z.string(),
 });
@@ -84,7 +84,7 @@ export const targetSummarySchema = z.object({
   hours: nonNegative,
   sigmaKMps: nonNegative.optional(),
   kOverSigmaK: nonNegative.optional(),
-  goal: positive.optional(),
+  goalSignificance: positive.optional(),
   /** Probability of reaching the goal under the site's weather (simulated). */
   goalProbability: fraction.optional(),
   /** (sigma^2/N) / Var(K): 1 is the best any schedule can do. */

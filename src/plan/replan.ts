@@ -43,13 +43,13 @@ export function history(campaign: Campaign, observed: ObservedVisit[], options: 
 
 /** Kept and observed visits as the scheduler's prior visits; an RV of a star fitted so far informs only its offset and K's. */
 export function priorVisits(h: History, fittedStars: ReadonlySet<string>, nights: ScheduleNight[]): PriorVisit[] {
-  const middle = new Map(nights.flatMap((n) => (n.midDays === undefined ? [] : [[n.localDate, n.midDays] as const])));
+  const middle = new Map(nights.flatMap((n) => (n.midBjdTdb === undefined ? [] : [[n.localDate, n.midBjdTdb] as const])));
   const prior = (v: PlannedVisit | ObservedVisit, phaseInPrior: boolean): PriorVisit => ({
     targetId: v.starId,
     localDate: v.localDate,
-    midDays: v.midBjdTdb,
-    sigmaWhiteMps: v.sigmaWhiteMps,
-    ...(middle.has(v.localDate) ? { nightMidDays: middle.get(v.localDate)! } : {}),
+    midBjdTdb: v.midBjdTdb,
+    whiteSigmaMps: v.whiteSigmaMps,
+    ...(middle.has(v.localDate) ? { nightMidBjdTdb: middle.get(v.localDate)! } : {}),
     ...(phaseInPrior ? { phaseInPrior } : {}),
   });
   return [...h.kept.map((v) => prior(v, false)), ...h.observed.map((v) => prior(v, v.rvMps !== undefined && fittedStars.has(v.starId)))];
@@ -66,10 +66,10 @@ export function openSlot(campaign: Campaign, h: History, now: Date | undefined):
   const { minSpacingHours, sameNightSpacingHours } = campaign.constraints;
   const onePerNight = minSpacingHours >= 12;
   const perNight = new Map(campaign.targets.map((t) => [t.starId, t.visitsPerNight ?? 1]));
-  const byStar = new Map<string, { bjd: number; date: string }[]>();
+  const byStar = new Map<string, { bjdTdb: number; date: string }[]>();
   for (const v of [...h.kept, ...h.observed]) {
     const mine = byStar.get(v.starId) ?? [];
-    mine.push({ bjd: v.midBjdTdb, date: v.localDate });
+    mine.push({ bjdTdb: v.midBjdTdb, date: v.localDate });
     byStar.set(v.starId, mine);
   }
   return (d) => {
@@ -77,7 +77,7 @@ export function openSlot(campaign: Campaign, h: History, now: Date | undefined):
     const prior = byStar.get(d.slot.targetId) ?? [];
     const several = (perNight.get(d.slot.targetId) ?? 1) > 1;
     return !prior.some((p) => {
-      const apartDays = Math.abs(p.bjd - d.midBjdTdb);
+      const apartDays = Math.abs(p.bjdTdb - d.midBjdTdb);
       if (onePerNight && p.date === d.localDate) return !several || apartDays < sameNightSpacingHours / 24;
       return apartDays < minSpacingHours / 24;
     });

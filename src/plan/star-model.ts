@@ -15,7 +15,7 @@ export function planetRows(rows: Target[]): Target[] {
 }
 
 /** First and last instant of the campaign window as JD (noon of the first day to noon after the last; BJD within minutes). */
-export function campaignSpanBjd(campaign: Pick<Campaign, 'window' | 'site'>): [number, number] {
+export function campaignSpanBjdTdb(campaign: Pick<Campaign, 'window' | 'site'>): [number, number] {
   const jd = (iso: string) => DateTime.fromISO(iso, { zone: campaign.site.timeZone }).toMillis() / 86_400_000 + 2_440_587.5;
   return [jd(campaign.window.start), jd(campaign.window.end) + 1];
 }
@@ -30,7 +30,7 @@ export function starModel(rows: Target[], campaign: Pick<Campaign, 'noise' | 'wi
       id: t.id,
       kMps: targetKMps(t)!,
       periodDays: t.ephemeris!.periodDays,
-      tcBjd: t.ephemeris!.tcBjdTdb,
+      tcBjdTdb: t.ephemeris!.tcBjdTdb,
       periodErrDays: t.ephemeris!.periodErrDays,
       tcErrDays: t.ephemeris!.tcErrDays,
       ecc: t.planet!.ecc,
@@ -39,7 +39,7 @@ export function starModel(rows: Target[], campaign: Pick<Campaign, 'noise' | 'wi
     })),
     nightlyJitterMps: noise.nightlyJitterMps,
     ...(noise.activity ? { activity: noise.activity } : {}),
-    spanBjd: campaignSpanBjd(campaign),
+    spanBjdTdb: campaignSpanBjdTdb(campaign),
   });
 }
 

@@ -29,7 +29,7 @@ export function starVisitInformation(
     model,
     visits: informationVisits(
       model,
-      visits.map((v) => ({ bjd: v.midBjdTdb, sigmaMps: v.sigmaWhiteMps, night: nightPos.get(v.localDate) ?? -1, nightBjd: nightMiddleJd(nights[nightPos.get(v.localDate)!]) })),
+      visits.map((v) => ({ bjdTdb: v.midBjdTdb, whiteSigmaMps: v.whiteSigmaMps, night: nightPos.get(v.localDate) ?? -1, nightBjdTdb: nightMiddleJd(nights[nightPos.get(v.localDate)!]) })),
     ),
   };
 }

@@ -22,8 +22,8 @@ const RECOVERED_PHASE_ERR_CYCLES = 0.05;
  * More nights, or several visits a night (a shorter minSpacingHours), are the usual ways there.
  */
 function visitsHint(summary: TargetSummary, setup: TargetSetup): string {
-  if (summary.kind !== 'ephemeris' || summary.kMps === undefined || summary.goal === undefined) return '';
-  const n = visitsNeeded(summary.kMps, setup.exposure.budget.effMps, summary.goal, 'quadrature');
+  if (summary.kind !== 'ephemeris' || summary.kMps === undefined || summary.goalSignificance === undefined) return '';
+  const n = visitsNeeded(summary.kMps, setup.exposure.budget.effectiveSigmaMps, summary.goalSignificance, 'quadrature');
   return `; about ${n} visits at quadratures would reach it`;
 }
 
@@ -32,14 +32,14 @@ function visitsHint(summary: TargetSummary, setup: TargetSetup): string {
  * Fisher information on the phase δ of K sin(2πφ + δ) from N visits spread in phase is
  * N K² / (2σ²), so σ_δ = 2π σ_φ needs N = 2σ² / (K 2π σ_φ)² (docs/references.md [Kay1993]).
  */
-export function recoveryVisits(kMps: number, sigmaMps: number): number {
-  return Math.max(3, Math.ceil((2 * sigmaMps * sigmaMps) / (kMps * 2 * Math.PI * RECOVERED_PHASE_ERR_CYCLES) ** 2));
+export function recoveryVisits(kMps: number, effectiveSigmaMps: number): number {
+  return Math.max(3, Math.ceil((2 * effectiveSigmaMps * effectiveSigmaMps) / (kMps * 2 * Math.PI * RECOVERED_PHASE_ERR_CYCLES) ** 2));
 }
 
 /** Fills each target's warnings in place and returns the plan-wide ones. */
 export function planWarnings(plan: Plan, setups: TargetSetup[], windows: Window[], rule: TransitRule): string[] {
   const observable = new Set(windows.map((w) => w.targetId));
-  const windowEndBjd = Math.max(...plan.nights.map((n) => (n.darkEnd ? n.darkEnd.getTime() / 86_400_000 + 2_440_587.5 : -Infinity)));
+  const windowEndBjdTdb = Math.max(...plan.nights.map((n) => (n.darkEnd ? n.darkEnd.getTime() / 86_400_000 + 2_440_587.5 : -Infinity)));
   for (const summary of plan.targets) {
     const setup = setups.find((s) => s.target.id === summary.targetId)!;
     const w = summary.warnings;
@@ -47,17 +47,17 @@ export function planWarnings(plan: Plan, setups: TargetSetup[], windows: Window[
     const neverObservable = !observable.has(summary.starId);
     if (neverObservable) w.push('never observable in the window under the constraints (altitude, airmass, Moon, dark time)');
     if (setup.exposure.warning) w.push(setup.exposure.warning);
-    if (!neverObservable && summary.goal !== undefined && summary.kOverSigmaK !== undefined && summary.kOverSigmaK < summary.goal) {
-      w.push(`goal K/sigma_K = ${summary.goal} not reached: ${summary.kOverSigmaK.toFixed(1)} with ${summary.visits} visits${visitsHint(summary, setup)}`);
+    if (!neverObservable && summary.goalSignificance !== undefined && summary.kOverSigmaK !== undefined && summary.kOverSigmaK < summary.goalSignificance) {
+      w.push(`goal K/sigma_K = ${summary.goalSignificance} not reached: ${summary.kOverSigmaK.toFixed(1)} with ${summary.visits} visits${visitsHint(summary, setup)}`);
     }
     if (summary.phaseErrAtEnd !== undefined && summary.phaseErrAtEnd > LOST_PHASE_ERR_CYCLES && summary.kMps !== undefined) {
-      const n = recoveryVisits(summary.kMps, setup.exposure.budget.effMps);
+      const n = recoveryVisits(summary.kMps, setup.exposure.budget.effectiveSigmaMps);
       w.push(
         `phase must be recovered first: phase error ±${summary.phaseErrAtEnd.toFixed(2)} cycles by the window's end, beyond what the plan's linearised model can trust; about ${n} visits spread in phase bring it to ±${RECOVERED_PHASE_ERR_CYCLES} cycles`,
       );
     }
     const eph = setup.target.ephemeris;
-    if (eph?.transitDurationHours !== undefined && Number.isFinite(windowEndBjd) && transitHalfWidthDays(eph, nearestEpoch(eph, windowEndBjd), rule) === 0) {
+    if (eph?.transitDurationHours !== undefined && Number.isFinite(windowEndBjdTdb) && transitHalfWidthDays(eph, nearestEpoch(eph, windowEndBjdTdb), rule) === 0) {
       w.push(`transit time too uncertain to avoid by the window's end (keeping out of it would remove more than ${Math.round(rule.maxOrbitFraction * 100)}% of the orbit): visits may fall in transit`);
     }
   }

@@ -37,7 +37,7 @@ export function visitRow(visit: PlannedVisit, zone: string): string[] {
     fmt(visit.exposureSec, 0),
     fmt(visit.airmass, 2),
     phasesText(visit),
-    fmt(visit.sigmaEffMps, 2),
+    fmt(visit.effectiveSigmaMps, 2),
     fmt(visit.snrPerPixel, 0),
   ];
 }
@@ -91,7 +91,7 @@ export function targetRows(plan: Plan): string[][] {
       String(t.visits),
       fmt(t.sigmaKMps, 2),
       fmt(t.kOverSigmaK, 1),
-      fmt(t.goal, 1),
+      fmt(t.goalSignificance, 1),
       percent(t.goalProbability),
       fmt(t.informationEfficiency, 2),
       fmt(t.hours, 1),
@@ -143,7 +143,7 @@ export const OBSERVED_COLUMNS: Column[] = [
 ];
 
 export function observedRows(plan: Plan): string[][] {
-  return (plan.observed ?? []).map((v) => [v.localDate, v.midUtc.slice(11, 16), v.targetId, v.instrument, fmt(v.rvMps, 2), fmt(v.rvErrMps, 2)]);
+  return (plan.observed ?? []).map((v) => [v.localDate, v.midUtc.slice(11, 16), v.targetId, v.instrument, fmt(v.rvMps, 2), fmt(v.rvErrorMps, 2)]);
 }
 
 /** Signed difference in units of the fitted error, e.g. `+1.8σ`. */

@@ -27,15 +27,15 @@ export interface BlindPeak {
  * or times that span nothing.
  */
 export function blindPeak(
-  points: { bjd: number; rvMps: number; rvErrMps: number; instrument: string }[],
+  points: { bjdTdb: number; rvMps: number; rvErrorMps: number; instrument: string }[],
   range: { periodMinDays: number; periodMaxDays: number },
   jitterMps: number,
   fapLevel = BLIND_PEAK_FAP,
 ): BlindPeak | undefined {
   if (!(fapLevel > 0 && fapLevel < 1)) throw validationError('fapLevel', fapLevel, 'a probability between 0 and 1');
-  const times = points.map((pt) => pt.bjd);
+  const times = points.map((pt) => pt.bjdTdb);
   if (points.length < BLIND_PEAK_MIN_POINTS || !(baselineDays(times) > 0)) return undefined;
-  const sigma = points.map((pt) => Math.sqrt(pt.rvErrMps ** 2 + jitterMps ** 2));
+  const sigma = points.map((pt) => Math.sqrt(pt.rvErrorMps ** 2 + jitterMps ** 2));
   const means = new Map<string, { sum: number; weight: number }>();
   points.forEach((pt, i) => {
     const m = means.get(pt.instrument) ?? { sum: 0, weight: 0 };

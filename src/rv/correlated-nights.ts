@@ -84,11 +84,11 @@ export class CorrelatedNights {
   }
 
   /** ā (kernel to the existing nights) in scratchA, b = P ā in scratchB; returns s = a − āᵀ b. */
-  private border(nightBjd: number, weight: number): number {
+  private border(nightBjdTdb: number, weight: number): number {
     const { m, cap, pm } = this;
     const a = this.scratchA;
     const b = this.scratchB;
-    for (let i = 0; i < m; i++) a[i] = activityCovariance(this.activity, nightBjd - this.times[i]!);
+    for (let i = 0; i < m; i++) a[i] = activityCovariance(this.activity, nightBjdTdb - this.times[i]!);
     let ab = 0;
     for (let i = 0; i < m; i++) {
       let sum = 0;
@@ -112,7 +112,7 @@ export class CorrelatedNights {
     const q = this.position.get(v.night);
     if (q === undefined) {
       if (this.m === this.cap) this.grow();
-      const s = this.border(v.nightBjd, v.weight);
+      const s = this.border(v.nightBjdTdb, v.weight);
       for (let k = 0; k < this.samples; k++) {
         this.residual(v.rows, v.offset, k);
         addOuter(out, k * this.packed, this.p, this.d, this.d, 1 / s);
@@ -184,7 +184,7 @@ export class CorrelatedNights {
 
   private addNight(v: InformationVisit): void {
     const { m, cap, p, row, pm } = this;
-    const s = this.border(v.nightBjd, v.weight);
+    const s = this.border(v.nightBjdTdb, v.weight);
     const b = this.scratchB;
     const rs = new Float64Array(row);
     for (let k = 0; k < this.samples; k++) {
@@ -200,7 +200,7 @@ export class CorrelatedNights {
     pm[m * cap + m] = 1 / s;
     for (let c = 0; c < row; c++) this.h[m * row + c] = rs[c]! / s;
     this.ubar.set(v.rows.subarray(v.offset, v.offset + row), m * row);
-    this.times[m] = v.nightBjd;
+    this.times[m] = v.nightBjdTdb;
     this.weights[m] = v.weight;
     this.keys[m] = v.night;
     this.position.set(v.night, m);

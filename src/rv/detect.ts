@@ -30,32 +30,32 @@ export function phaseSumMoments(visits: number, layout: PhaseLayout): { mean: nu
 }
 
 /** The floor's term of σ_K (m/s) for a goal of n: σ_floor / n, so that K = σ_floor is the limit of K = n σ_K. */
-export function floorOnKMps(floorMps: number, significance: number): number {
-  return floorMps / significance;
+export function floorOnKMps(floorMps: number, goalSignificance: number): number {
+  return floorMps / goalSignificance;
 }
 
 /**
  * σ_K (m/s) after N visits: √(σ² / E[S] + floorOnK²). σ is the scatter that averages down (photon
  * and jitter); floorOnK (floorOnKMps) is the floor's term, which no number of visits removes.
  */
-export function sigmaKMps(sigmaMps: number, visits: number, layout: PhaseLayout, floorOnK = 0): number {
-  return Math.sqrt(sigmaMps ** 2 / phaseSumMoments(visits, layout).mean + floorOnK ** 2);
+export function sigmaKMps(whiteSigmaMps: number, visits: number, layout: PhaseLayout, floorOnK = 0): number {
+  return Math.sqrt(whiteSigmaMps ** 2 / phaseSumMoments(visits, layout).mean + floorOnK ** 2);
 }
 
 /**
  * Visits (not rounded) for K/σ_K = n: solve K² = n² σ²/E[S] + f², i.e. E[S] = n²σ² / (K² − f²)
  * with f the floor: N = 2 E[S] + 1 at random phases, N = E[S] at quadratures. Infinity when K ≤ f.
  */
-export function visitsExact(kMps: number, sigmaMps: number, significance: number, layout: PhaseLayout, floorMps = 0): number {
+export function visitsExact(kMps: number, whiteSigmaMps: number, goalSignificance: number, layout: PhaseLayout, floorMps = 0): number {
   const room = kMps ** 2 - floorMps ** 2;
   if (room <= 0) return Infinity;
-  const sumNeeded = (significance * sigmaMps) ** 2 / room;
+  const sumNeeded = (goalSignificance * whiteSigmaMps) ** 2 / room;
   return layout === 'random' ? 2 * sumNeeded + 1 : sumNeeded;
 }
 
 /** Visits needed for K/σ_K ≥ n (visitsExact rounded up, at least MIN_VISITS; Infinity when out of reach). */
-export function visitsNeeded(kMps: number, sigmaMps: number, significance: number, layout: PhaseLayout, floorMps = 0): number {
-  const exact = visitsExact(kMps, sigmaMps, significance, layout, floorMps);
+export function visitsNeeded(kMps: number, whiteSigmaMps: number, goalSignificance: number, layout: PhaseLayout, floorMps = 0): number {
+  const exact = visitsExact(kMps, whiteSigmaMps, goalSignificance, layout, floorMps);
   // The small allowance keeps an exact 50.000000001 (rounding in the arithmetic) at 50.
   return Number.isFinite(exact) ? Math.max(MIN_VISITS, Math.ceil(exact - 1e-9)) : Infinity;
 }
@@ -64,8 +64,8 @@ export function visitsNeeded(kMps: number, sigmaMps: number, significance: numbe
  * Probability that K̂/σ_K exceeds n when K̂ is normal with mean K and spread σ_K:
  * P = Φ(K/σ_K − n) (for a σ_K known in advance, e.g. from the planned phases).
  */
-export function detectionProbabilityKnownPhase(kMps: number, sigmaK: number, significance: number): number {
-  return normalCdf(kMps / sigmaK - significance);
+export function detectionProbabilityKnownPhase(kMps: number, sigmaK: number, goalSignificance: number): number {
+  return normalCdf(kMps / sigmaK - goalSignificance);
 }
 
 /**
@@ -75,9 +75,9 @@ export function detectionProbabilityKnownPhase(kMps: number, sigmaK: number, sig
  * and 20-point Gauss–Hermite; within 0.03 of a
  * free-offset Monte Carlo for N ≥ 5 (test/rv/detect-small-n.test.ts). At quadratures S = N.
  */
-export function detectionProbability(kMps: number, sigmaMps: number, visits: number, significance: number, layout: PhaseLayout, floorMps = 0): number {
-  const floorOnK = floorOnKMps(floorMps, significance);
-  const at = (s: number) => (s <= 0 ? 0 : normalCdf(kMps / Math.sqrt(sigmaMps ** 2 / s + floorOnK ** 2) - significance));
+export function detectionProbability(kMps: number, whiteSigmaMps: number, visits: number, goalSignificance: number, layout: PhaseLayout, floorMps = 0): number {
+  const floorOnK = floorOnKMps(floorMps, goalSignificance);
+  const at = (s: number) => (s <= 0 ? 0 : normalCdf(kMps / Math.sqrt(whiteSigmaMps ** 2 / s + floorOnK ** 2) - goalSignificance));
   const { mean, variance } = phaseSumMoments(visits, layout);
   if (variance === 0) return at(mean);
   const shape = (mean * mean) / variance;
@@ -86,18 +86,18 @@ export function detectionProbability(kMps: number, sigmaMps: number, visits: num
 }
 
 /** The smallest K (m/s) reaching K/σ_K = n with N visits: K = n σ_K, always above the floor. */
-export function minimumDetectableKMps(sigmaMps: number, visits: number, significance: number, layout: PhaseLayout, floorMps = 0): number {
-  return significance * sigmaKMps(sigmaMps, visits, layout, floorOnKMps(floorMps, significance));
+export function minimumDetectableKMps(whiteSigmaMps: number, visits: number, goalSignificance: number, layout: PhaseLayout, floorMps = 0): number {
+  return goalSignificance * sigmaKMps(whiteSigmaMps, visits, layout, floorOnKMps(floorMps, goalSignificance));
 }
 
 /** The K (m/s) detected with probability `level` after N visits (bisection; P rises with K). */
-export function kAtProbabilityMps(sigmaMps: number, visits: number, significance: number, layout: PhaseLayout, floorMps: number, level: number): number {
+export function kAtProbabilityMps(whiteSigmaMps: number, visits: number, goalSignificance: number, layout: PhaseLayout, floorMps: number, level: number): number {
   let lo = 0;
-  let hi = 2 * minimumDetectableKMps(sigmaMps, visits, significance, layout, floorMps) + 1e-9;
-  while (detectionProbability(hi, sigmaMps, visits, significance, layout, floorMps) < level) hi *= 2;
+  let hi = 2 * minimumDetectableKMps(whiteSigmaMps, visits, goalSignificance, layout, floorMps) + 1e-9;
+  while (detectionProbability(hi, whiteSigmaMps, visits, goalSignificance, layout, floorMps) < level) hi *= 2;
   for (let i = 0; i < 60; i++) {
     const mid = (lo + hi) / 2;
-    if (detectionProbability(mid, sigmaMps, visits, significance, layout, floorMps) < level) lo = mid;
+    if (detectionProbability(mid, whiteSigmaMps, visits, goalSignificance, layout, floorMps) < level) lo = mid;
     else hi = mid;
   }
   return hi;
@@ -122,11 +122,11 @@ export interface MassLimitRow {
 export interface MassLimitInput {
   starMassSun: number;
   /** Per-visit scatter that averages down (m/s). */
-  sigmaMps: number;
+  whiteSigmaMps: number;
   /** Instrument floor (m/s), a term of σ_K that does not average down; default 0. */
   floorMps?: number;
   visits: number;
-  significance: number;
+  goalSignificance: number;
   periodsDays: readonly number[];
   ecc?: number;
 }
@@ -136,10 +136,10 @@ export interface MassLimitInput {
  * 90% probability, turned into masses with the exact inverse of K (src/orbit/minimum-mass.ts).
  */
 export function massLimitTable(input: MassLimitInput): MassLimitRow[] {
-  const { starMassSun, sigmaMps, visits, significance, ecc = 0, floorMps = 0 } = input;
-  const kRandom = minimumDetectableKMps(sigmaMps, visits, significance, 'random', floorMps);
-  const kQuad = minimumDetectableKMps(sigmaMps, visits, significance, 'quadrature', floorMps);
-  const [k50, k90] = COMPLETENESS_LEVELS.map((level) => kAtProbabilityMps(sigmaMps, visits, significance, 'random', floorMps, level)) as [number, number];
+  const { starMassSun, whiteSigmaMps, visits, goalSignificance, ecc = 0, floorMps = 0 } = input;
+  const kRandom = minimumDetectableKMps(whiteSigmaMps, visits, goalSignificance, 'random', floorMps);
+  const kQuad = minimumDetectableKMps(whiteSigmaMps, visits, goalSignificance, 'quadrature', floorMps);
+  const [k50, k90] = COMPLETENESS_LEVELS.map((level) => kAtProbabilityMps(whiteSigmaMps, visits, goalSignificance, 'random', floorMps, level)) as [number, number];
   const mass = (kMps: number, periodDays: number) => planetMassFromKEarth({ starMassSun, kMps, periodDays, ecc });
   return input.periodsDays.map((periodDays) => ({
     periodDays,

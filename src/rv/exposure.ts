@@ -10,9 +10,9 @@ import { dwarfLoggFromTeff } from './star-defaults.js';
 export type ExposureStar = PrecisionStar & { logg?: number };
 
 export interface ExposureOptions extends PrecisionOptions {
-  /** The planet's K (m/s): with it the exposure minimises the hours to K/σ_K = significance. */
+  /** The planet's K (m/s): with it the exposure minimises the hours to K/σ_K = goalSignificance. */
   kMps?: number;
-  significance?: number;
+  goalSignificance?: number;
   /** Phase layout for the visits count (default random). */
   layout?: PhaseLayout;
   /** The most visits the campaign can give the target (e.g. one a night): exposures needing more are passed over. */
@@ -88,15 +88,15 @@ const HOURS_GRID_POINTS = 400;
  * fewest. Undefined when no exposure reaches the goal (K at or below the floor).
  */
 function fewestHoursSec(instrument: Instrument, star: ExposureStar, airmass: number, minSec: number, options: ExposureOptions): number | undefined {
-  const { kMps, significance = 5, layout = 'random', maxVisits = Infinity } = options;
+  const { kMps, goalSignificance = 5, layout = 'random', maxVisits = Infinity } = options;
   const overhead = instrument.readoutSec + instrument.acquisitionSec;
   let best: { sec: number; cost: number } | undefined;
   let fewest: { sec: number; visits: number } | undefined;
   const ratio = instrument.maxExposureSec / minSec;
   for (let i = 0; i < HOURS_GRID_POINTS; i++) {
     const sec = Math.round(minSec * ratio ** (i / (HOURS_GRID_POINTS - 1)));
-    const white = quadratureSum(photonNoise(instrument, star, sec, airmass, options).photonMps, star.jitterMps);
-    const visits = visitsExact(kMps!, white, significance, layout, instrument.floorMps);
+    const white = quadratureSum(photonNoise(instrument, star, sec, airmass, options).photonSigmaMps, star.jitterMps);
+    const visits = visitsExact(kMps!, white, goalSignificance, layout, instrument.floorMps);
     const cost = visits * (sec + overhead);
     if (Number.isFinite(cost) && visits <= maxVisits && (!best || cost < best.cost)) best = { sec, cost };
     if (Number.isFinite(visits) && (!fewest || visits < fewest.visits)) fewest = { sec, visits };
@@ -105,7 +105,7 @@ function fewestHoursSec(instrument: Instrument, star: ExposureStar, airmass: num
 }
 
 /**
- * The exposure for a star (see ExposureChoice.goal). With `targetSigmaMps` the photon part must
+ * The exposure for a star (see ExposureChoice.goal). With `targetVisitSigmaMps` the photon part must
  * reach √(σ_request² − σ_floor²) (σ_visit² = σ_photon² + σ_floor², common practice); with the
  * planet's K, the fewest hours; otherwise photon noise down to √(jitter² + floor²).
  */
@@ -113,23 +113,23 @@ export function chooseExposureSec(
   instrument: Instrument,
   star: ExposureStar,
   airmass: number,
-  targetSigmaMps?: number,
+  targetVisitSigmaMps?: number,
   options: ExposureOptions = {},
 ): ExposureChoice {
   const minimum = minimumExposure(instrument, star);
-  const photonAt = (t: number) => photonNoise(instrument, star, t, airmass, options).photonMps;
-  const hoursSec = targetSigmaMps === undefined && options.kMps !== undefined ? fewestHoursSec(instrument, star, airmass, minimum.sec, options) : undefined;
+  const photonAt = (t: number) => photonNoise(instrument, star, t, airmass, options).photonSigmaMps;
+  const hoursSec = targetVisitSigmaMps === undefined && options.kMps !== undefined ? fewestHoursSec(instrument, star, airmass, minimum.sec, options) : undefined;
   let goal: ExposureChoice['goal'];
   let goalMps: number;
   let requiredSec: number;
-  if (targetSigmaMps !== undefined) {
+  if (targetVisitSigmaMps !== undefined) {
     goal = 'target-sigma';
-    goalMps = targetSigmaMps;
-    requiredSec = targetSigmaMps > instrument.floorMps ? exposureForSigma(photonAt, Math.sqrt(targetSigmaMps ** 2 - instrument.floorMps ** 2)) : Infinity;
+    goalMps = targetVisitSigmaMps;
+    requiredSec = targetVisitSigmaMps > instrument.floorMps ? exposureForSigma(photonAt, Math.sqrt(targetVisitSigmaMps ** 2 - instrument.floorMps ** 2)) : Infinity;
   } else if (hoursSec !== undefined) {
     goal = 'fewest-hours';
     requiredSec = hoursSec;
-    goalMps = visitPrecision(instrument, star, hoursSec, airmass, options).visitMps;
+    goalMps = visitPrecision(instrument, star, hoursSec, airmass, options).visitSigmaMps;
   } else {
     goal = 'photon-at-noise-floor';
     goalMps = quadratureSum(star.jitterMps, instrument.floorMps);
@@ -141,23 +141,23 @@ export function chooseExposureSec(
     exposureSec, requiredSec, goal, goalMps, clippedTo, minimumSec: minimum.sec, minimumReason: minimum.reason,
     tooFaint: clippedTo === 'max' && goal !== 'fewest-hours', budget,
   };
-  if (choice.tooFaint) choice.warning = exposureWarning(choice, instrument, targetSigmaMps);
+  if (choice.tooFaint) choice.warning = exposureWarning(choice, instrument, targetVisitSigmaMps);
   return choice;
 }
 
-function exposureWarning(choice: ExposureChoice, instrument: Instrument, targetSigmaMps: number | undefined): string {
+function exposureWarning(choice: ExposureChoice, instrument: Instrument, targetVisitSigmaMps: number | undefined): string {
   const max = `the maximum exposure of ${instrument.maxExposureSec} s`;
   const b = choice.budget;
-  if (targetSigmaMps === undefined) {
+  if (targetVisitSigmaMps === undefined) {
     // The default goal is a preference (longer exposures buy little beyond it), not a requirement.
     const level = Number.isFinite(choice.requiredSec) ? `above jitter and floor (${choice.goalMps.toFixed(2)} m/s)` : 'with no jitter or floor to match';
-    return `photon-limited: ${max} leaves photon noise at ${b.photonMps.toFixed(2)} m/s, ${level}`;
+    return `photon-limited: ${max} leaves photon noise at ${b.photonSigmaMps.toFixed(2)} m/s, ${level}`;
   }
-  const reached = `${max} gives sigma per visit ${b.visitMps.toFixed(2)} m/s`;
-  if (targetSigmaMps <= instrument.floorMps) {
-    return `requested sigma ${targetSigmaMps} m/s is at or below the instrument floor of ${instrument.floorMps} m/s: no exposure reaches it; ${reached}`;
+  const reached = `${max} gives sigma per visit ${b.visitSigmaMps.toFixed(2)} m/s`;
+  if (targetVisitSigmaMps <= instrument.floorMps) {
+    return `requested sigma ${targetVisitSigmaMps} m/s is at or below the instrument floor of ${instrument.floorMps} m/s: no exposure reaches it; ${reached}`;
   }
-  return `too faint: sigma per visit ${targetSigmaMps} m/s needs ${Math.ceil(choice.requiredSec)} s; ${reached}`;
+  return `too faint: sigma per visit ${targetVisitSigmaMps} m/s needs ${Math.ceil(choice.requiredSec)} s; ${reached}`;
 }
 
 /** A given exposure, in the same shape as a chosen one; warns when outside the limits or shorter than the p modes. */
@@ -165,7 +165,7 @@ export function fixedExposure(instrument: Instrument, star: ExposureStar, airmas
   const budget = visitPrecision(instrument, star, exposureSec, airmass, options);
   const minimum = minimumExposure(instrument, star);
   const choice: ExposureChoice = {
-    exposureSec, requiredSec: exposureSec, goal: 'fixed', goalMps: budget.visitMps, clippedTo: null,
+    exposureSec, requiredSec: exposureSec, goal: 'fixed', goalMps: budget.visitSigmaMps, clippedTo: null,
     minimumSec: minimum.sec, minimumReason: minimum.reason, tooFaint: false, budget,
   };
   if (exposureSec < instrument.minExposureSec || exposureSec > instrument.maxExposureSec) {

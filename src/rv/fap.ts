@@ -17,18 +17,18 @@ export interface FapContext {
 }
 
 /** The FAP context of a series searched on a grid (weights 1/σ² as in the periodogram). */
-export function fapContext(timesDays: ArrayLike<number>, sigmaMps: ArrayLike<number>, grid: FrequencyGrid): FapContext {
+export function fapContext(timesDays: ArrayLike<number>, rvErrorsMps: ArrayLike<number>, grid: FrequencyGrid): FapContext {
   const n = timesDays.length;
   if (n < 4) throw new RangeError(`a false-alarm probability needs at least 4 points, got ${n}`);
   let sw = 0, st = 0;
   for (let i = 0; i < n; i++) {
-    const w = 1 / (sigmaMps[i]! * sigmaMps[i]!);
+    const w = 1 / (rvErrorsMps[i]! * rvErrorsMps[i]!);
     sw += w;
     st += w * timesDays[i]!;
   }
   const mean = st / sw;
   let dt = 0;
-  for (let i = 0; i < n; i++) dt += ((timesDays[i]! - mean) ** 2) / (sigmaMps[i]! * sigmaMps[i]!);
+  for (let i = 0; i < n; i++) dt += ((timesDays[i]! - mean) ** 2) / (rvErrorsMps[i]! * rvErrorsMps[i]!);
   const weightedVarDays2 = dt / sw;
   const fMax = grid.startPerDay + (grid.count - 1) * grid.stepPerDay;
   return {

@@ -25,7 +25,7 @@ export interface PlanetInput {
   kMps: number;
   periodDays: number;
   /** Mid-transit (conjunction) time, BJD_TDB. */
-  tcBjd: number;
+  tcBjdTdb: number;
   periodErrDays: number;
   tcErrDays: number;
   ecc: number;
@@ -48,12 +48,12 @@ export interface StarInput {
   /** Correlated activity across nights; constant within a night. */
   activity?: ActivityInput;
   /** First and last time (BJD_TDB) the visits may fall at: sets reference epochs and samples. */
-  spanBjd: [number, number];
+  spanBjdTdb: [number, number];
 }
 
 interface PlanetLayout {
   input: PlanetInput;
-  tcRefBjd: number;
+  tcRefBjdTdb: number;
   /** Orbits from Tc_ref to the farther end of the span (at least 1). */
   orbitsScale: number;
   alpha: number;
@@ -131,19 +131,19 @@ function sigmaPoints(d: number): { weight: number; z: Float64Array }[] {
 
 /** Builds the model of one star; throws a plain Error for values the caller should never pass. */
 export function buildStarModel(input: StarInput): StarModel {
-  const [start, end] = input.spanBjd;
+  const [start, end] = input.spanBjdTdb;
   if (!(end >= start)) fail('span end before start');
   if (!(input.nightlyJitterMps >= 0)) fail('nightly jitter must be >= 0');
   const mid = (start + end) / 2;
   let p = 1;
   const layouts: PlanetLayout[] = input.planets.map((planet) => {
     if (!(planet.kMps > 0 && planet.periodDays > 0 && planet.ecc >= 0 && planet.ecc < 1)) fail(`planet ${planet.id} needs K > 0, P > 0, 0 <= e < 1`);
-    const epochs = Math.round((mid - planet.tcBjd) / planet.periodDays);
-    const tcRefBjd = planet.tcBjd + epochs * planet.periodDays;
-    const orbitsScale = Math.max(1, Math.abs(start - tcRefBjd) / planet.periodDays, Math.abs(end - tcRefBjd) / planet.periodDays);
+    const epochs = Math.round((mid - planet.tcBjdTdb) / planet.periodDays);
+    const tcRefBjdTdb = planet.tcBjdTdb + epochs * planet.periodDays;
+    const orbitsScale = Math.max(1, Math.abs(start - tcRefBjdTdb) / planet.periodDays, Math.abs(end - tcRefBjdTdb) / planet.periodDays);
     const layout: PlanetLayout = {
       input: planet,
-      tcRefBjd,
+      tcRefBjdTdb,
       orbitsScale,
       alpha: -1,
       beta: -1,
@@ -167,7 +167,7 @@ export function buildStarModel(input: StarInput): StarModel {
   layouts.forEach((layout, i) => {
     const planet = layout.input;
     if (layout.alpha >= 0) {
-      const epochs = Math.round((layout.tcRefBjd - planet.tcBjd) / planet.periodDays);
+      const epochs = Math.round((layout.tcRefBjdTdb - planet.tcBjdTdb) / planet.periodDays);
       const cov = shiftCovariance(planet, epochs, layout.orbitsScale);
       if (layout.beta < 0) {
         prior[packedIndex(layout.alpha, layout.alpha)] = 1 / cov.aa;
@@ -214,14 +214,14 @@ function signalAtEccVector(phase: number, x: number, y: number): number {
  * The sample's ephemeris is the nominal one shifted by its (α, β): Tc_ref' = Tc_ref + α P,
  * P' = P (1 + β / U); the phase is (t − Tc_ref') / P'.
  */
-export function designRow(model: StarModel, sample: EphemerisSample, tBjd: number, out: Float64Array, offset: number): void {
+export function designRow(model: StarModel, sample: EphemerisSample, tBjdTdb: number, out: Float64Array, offset: number): void {
   out.fill(0, offset, offset + model.paramCount);
   out[offset] = 1;
   model.planets.forEach((layout, i) => {
     const planet = layout.input;
     const period = planet.periodDays * (1 + sample.beta[i]! / layout.orbitsScale);
-    const tcRef = layout.tcRefBjd + sample.alpha[i]! * planet.periodDays;
-    const cycles = (tBjd - tcRef) / period;
+    const tcRef = layout.tcRefBjdTdb + sample.alpha[i]! * planet.periodDays;
+    const cycles = (tBjdTdb - tcRef) / period;
     const phase = cycles - Math.floor(cycles);
     const k = planet.kMps;
     out[offset + layout.k] = layout.shape.at(phase);
@@ -240,9 +240,9 @@ export function designRow(model: StarModel, sample: EphemerisSample, tBjd: numbe
 }
 
 /** Design rows of one visit for every sample: samples × paramCount values. */
-export function designRows(model: StarModel, tBjd: number): Float64Array {
+export function designRows(model: StarModel, tBjdTdb: number): Float64Array {
   const p = model.paramCount;
   const out = new Float64Array(model.samples.length * p);
-  model.samples.forEach((sample, s) => designRow(model, sample, tBjd, out, s * p));
+  model.samples.forEach((sample, s) => designRow(model, sample, tBjdTdb, out, s * p));
   return out;
 }

@@ -29,7 +29,7 @@ export interface InformationVisit {
   /** Any integer naming the visit's night; visits of one night share the nightly noise. */
   night: number;
   /** A time (BJD_TDB) for the night, where the activity kernel is evaluated. */
-  nightBjd: number;
+  nightBjdTdb: number;
 }
 
 interface NightSums {
@@ -255,6 +255,6 @@ export function kVariances(model: StarModel, visits: InformationVisit[]): Float6
 }
 
 /** The visits of one star as the information sees them: design rows at each time, one night key per visit. */
-export function informationVisits(model: StarModel, visits: { bjd: number; sigmaMps: number; night: number; nightBjd: number }[]): InformationVisit[] {
-  return visits.map((v) => ({ rows: designRows(model, v.bjd), offset: 0, weight: 1 / (v.sigmaMps * v.sigmaMps), night: v.night, nightBjd: v.nightBjd }));
+export function informationVisits(model: StarModel, visits: { bjdTdb: number; whiteSigmaMps: number; night: number; nightBjdTdb: number }[]): InformationVisit[] {
+  return visits.map((v) => ({ rows: designRows(model, v.bjdTdb), offset: 0, weight: 1 / (v.whiteSigmaMps * v.whiteSigmaMps), night: v.night, nightBjdTdb: v.nightBjdTdb }));
 }

@@ -11,7 +11,7 @@ export function logSpaced(min: number, max: number, count: number): number[] {
 
 /** Where a detection level is reached along one period's row of masses. */
 export type LevelMass =
-  | { where: 'inside'; massEarth: number }
+  | { where: 'inside'; msiniEarth: number }
   /** Already reached at the smallest mass of the grid: only an upper bound is known. */
   | { where: 'below grid' }
   /** Not reached at the largest mass of the grid. */
@@ -23,13 +23,13 @@ export type LevelMass =
  * against the previous grid point (common practice for detection-limit curves). Monte Carlo noise
  * can make a row dip after its first crossing; the first crossing is the one reported.
  */
-export function levelMass(massesEarth: number[], probabilities: number[], level: number): LevelMass {
+export function levelMass(msinisEarth: number[], probabilities: number[], level: number): LevelMass {
   const j = probabilities.findIndex((p) => p >= level);
   if (j < 0) return { where: 'above grid' };
   if (j === 0) return { where: 'below grid' };
   const p0 = probabilities[j - 1]!, p1 = probabilities[j]!;
-  const l0 = Math.log(massesEarth[j - 1]!), l1 = Math.log(massesEarth[j]!);
-  return { where: 'inside', massEarth: Math.exp(l0 + ((level - p0) / (p1 - p0)) * (l1 - l0)) };
+  const l0 = Math.log(msinisEarth[j - 1]!), l1 = Math.log(msinisEarth[j]!);
+  return { where: 'inside', msiniEarth: Math.exp(l0 + ((level - p0) / (p1 - p0)) * (l1 - l0)) };
 }
 
 /** The detection levels every map reports: 50% and 90%. */
@@ -41,9 +41,9 @@ export interface LevelRow {
 }
 
 /** The 50% and 90% detection mass of every period of a map (detection[i][j]: period i, mass j). */
-export function levelRows(periodsDays: number[], massesEarth: number[], detection: number[][]): LevelRow[] {
+export function levelRows(periodsDays: number[], msinisEarth: number[], detection: number[][]): LevelRow[] {
   return periodsDays.map((periodDays, i) => ({
     periodDays,
-    levels: DETECTION_LEVELS.map((level) => ({ level, mass: levelMass(massesEarth, detection[i]!, level) })),
+    levels: DETECTION_LEVELS.map((level) => ({ level, mass: levelMass(msinisEarth, detection[i]!, level) })),
   }));
 }

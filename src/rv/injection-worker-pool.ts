@@ -21,8 +21,8 @@ export interface ParallelOptions {
 export async function injectionRecoveryParallel(input: InjectionInput, options: ParallelOptions): Promise<InjectionMap> {
   // Validates the input and gives the grid and threshold before any thread starts.
   const setup = prepareInjection(input);
-  const { periodsDays, massesEarth, starMassSun } = input;
-  const total = periodsDays.length * massesEarth.length;
+  const { periodsDays, msinisEarth, starMassSun } = input;
+  const total = periodsDays.length * msinisEarth.length;
   const threads = Math.max(1, Math.min(options.threads, total));
   const flat = new Array<number>(total);
   let next = 0;
@@ -56,11 +56,11 @@ export async function injectionRecoveryParallel(input: InjectionInput, options: 
   }
   return {
     periodsDays,
-    massesEarth,
+    msinisEarth,
     trialsPerCell: input.trialsPerCell,
     fapThreshold: setup.fapThreshold,
-    detection: periodsDays.map((_, i) => flat.slice(i * massesEarth.length, (i + 1) * massesEarth.length)),
-    kCircularMps: periodsDays.map((periodDays) => massesEarth.map((planetMassEarth) => semiAmplitudeMps({ starMassSun, planetMassEarth, periodDays }))),
+    detection: periodsDays.map((_, i) => flat.slice(i * msinisEarth.length, (i + 1) * msinisEarth.length)),
+    kCircularMps: periodsDays.map((periodDays) => msinisEarth.map((planetMassEarth) => semiAmplitudeMps({ starMassSun, planetMassEarth, periodDays }))),
     grid: setup.grid,
   };
 }

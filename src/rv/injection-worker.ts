@@ -13,7 +13,7 @@ export interface CellResult {
 const port = parentPort;
 if (port) {
   const setup = prepareInjection(workerData as InjectionInput);
-  const masses = setup.input.massesEarth.length;
+  const masses = setup.input.msinisEarth.length;
   port.on('message', (cell: number) => {
     const result: CellResult = { cell, probability: detectionProbability(setup, Math.floor(cell / masses), cell % masses) };
     port.postMessage(result);

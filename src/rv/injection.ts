@@ -23,11 +23,11 @@ export type EccentricityModel =
 
 export interface InjectionInput {
   /** Visit times, BJD_TDB days. */
-  timesBjd: number[];
+  timesBjdTdb: number[];
   /** Each visit's effective σ (photon noise, floor and jitter together), m/s: noise and weights 1/σ². */
-  sigmaMps: number[];
+  rvErrorsMps: number[];
   periodsDays: number[];
-  massesEarth: number[];
+  msinisEarth: number[];
   starMassSun: number;
   trialsPerCell: number;
   seed: number;
@@ -53,10 +53,10 @@ export interface InjectionSetup {
 
 export interface InjectionMap {
   periodsDays: number[];
-  massesEarth: number[];
+  msinisEarth: number[];
   trialsPerCell: number;
   fapThreshold: number;
-  /** detection[i][j]: fraction of trials detected at periodsDays[i], massesEarth[j]. */
+  /** detection[i][j]: fraction of trials detected at periodsDays[i], msinisEarth[j]. */
   detection: number[][];
   /** Semi-amplitude of each cell for a circular orbit, m/s (the eccentric K is larger by 1/√(1 − e²)). */
   kCircularMps: number[][];
@@ -66,10 +66,10 @@ export interface InjectionMap {
 export const DEFAULT_FAP_THRESHOLD = 0.01;
 
 function checkInput(input: InjectionInput): void {
-  const { timesBjd, sigmaMps, periodsDays, massesEarth, trialsPerCell, starMassSun } = input;
-  if (timesBjd.length !== sigmaMps.length) throw new RangeError(`times and sigma differ in length: ${timesBjd.length} and ${sigmaMps.length}`);
-  if (periodsDays.length === 0 || massesEarth.length === 0) throw new RangeError('need at least one period and one mass');
-  if (!periodsDays.every((p) => p > 0) || !massesEarth.every((m) => m > 0) || !(starMassSun > 0)) throw new RangeError('periods and masses must be positive');
+  const { timesBjdTdb, rvErrorsMps, periodsDays, msinisEarth, trialsPerCell, starMassSun } = input;
+  if (timesBjdTdb.length !== rvErrorsMps.length) throw new RangeError(`times and sigma differ in length: ${timesBjdTdb.length} and ${rvErrorsMps.length}`);
+  if (periodsDays.length === 0 || msinisEarth.length === 0) throw new RangeError('need at least one period and one mass');
+  if (!periodsDays.every((p) => p > 0) || !msinisEarth.every((m) => m > 0) || !(starMassSun > 0)) throw new RangeError('periods and masses must be positive');
   if (!Number.isInteger(trialsPerCell) || trialsPerCell < 1) throw new RangeError(`trialsPerCell must be a positive integer, got ${trialsPerCell}`);
   const e = input.eccentricity;
   const eMax = e === undefined ? 0 : e.distribution === 'fixed' ? e.value : e.max;
@@ -78,8 +78,8 @@ function checkInput(input: InjectionInput): void {
 
 /** The periodogram grid of an injection map: the defaults, widened to cover the injected periods. */
 export function injectionGrid(input: InjectionInput): FrequencyGrid {
-  const baseline = baselineDays(input.timesBjd);
-  return frequencyGrid(input.timesBjd, {
+  const baseline = baselineDays(input.timesBjdTdb);
+  return frequencyGrid(input.timesBjdTdb, {
     ...input.grid,
     minPeriodDays: input.grid?.minPeriodDays ?? Math.min(DEFAULT_MIN_PERIOD_DAYS, 0.9 * Math.min(...input.periodsDays)),
     maxPeriodDays: input.grid?.maxPeriodDays ?? Math.max(DEFAULT_MAX_PERIOD_PER_BASELINE * baseline, 1.1 * Math.max(...input.periodsDays)),
@@ -93,8 +93,8 @@ export function prepareInjection(input: InjectionInput): InjectionSetup {
   return {
     input,
     grid,
-    kernel: glsKernel(input.timesBjd, input.sigmaMps, grid),
-    fap: fapContext(input.timesBjd, input.sigmaMps, grid),
+    kernel: glsKernel(input.timesBjdTdb, input.rvErrorsMps, grid),
+    fap: fapContext(input.timesBjdTdb, input.rvErrorsMps, grid),
     fapThreshold: input.fapThreshold ?? DEFAULT_FAP_THRESHOLD,
   };
 }
@@ -111,19 +111,19 @@ function drawEccentricity(model: EccentricityModel | undefined, rng: Rng): { ecc
  */
 export function detectionProbability(setup: InjectionSetup, i: number, j: number): number {
   const { input, grid, kernel, fap, fapThreshold } = setup;
-  const { timesBjd, sigmaMps, periodsDays, massesEarth, starMassSun, trialsPerCell } = input;
+  const { timesBjdTdb, rvErrorsMps, periodsDays, msinisEarth, starMassSun, trialsPerCell } = input;
   const periodDays = periodsDays[i]!;
-  const rng = createRng(deriveSeed(input.seed, i * massesEarth.length + j));
+  const rng = createRng(deriveSeed(input.seed, i * msinisEarth.length + j));
   const toleranceFreq = 1 / grid.baselineDays;
-  const values = new Float64Array(timesBjd.length);
+  const values = new Float64Array(timesBjdTdb.length);
   const power = new Float64Array(grid.count);
   let detected = 0;
   for (let trial = 0; trial < trialsPerCell; trial++) {
     const { ecc, omegaDeg } = drawEccentricity(input.eccentricity, rng);
-    const kMps = semiAmplitudeMps({ starMassSun, planetMassEarth: massesEarth[j]!, periodDays, ecc });
+    const kMps = semiAmplitudeMps({ starMassSun, planetMassEarth: msinisEarth[j]!, periodDays, ecc });
     // Random phase: the periastron time uniform over one period.
-    const orbit = { kMps, periodDays, ecc, omegaDeg, periastronBjd: timesBjd[0]! + periodDays * rng.uniform() };
-    for (let n = 0; n < values.length; n++) values[n] = radialVelocityMps(orbit, timesBjd[n]!) + sigmaMps[n]! * rng.normal();
+    const orbit = { kMps, periodDays, ecc, omegaDeg, periastronBjdTdb: timesBjdTdb[0]! + periodDays * rng.uniform() };
+    for (let n = 0; n < values.length; n++) values[n] = radialVelocityMps(orbit, timesBjdTdb[n]!) + rvErrorsMps[n]! * rng.normal();
     kernel.power(values, power);
     const best = argMax(power);
     const nearInjected = Math.abs(gridFrequency(grid, best) - 1 / periodDays) < toleranceFreq;
@@ -135,14 +135,14 @@ export function detectionProbability(setup: InjectionSetup, i: number, j: number
 /** The full map, one cell after another (a pure function of its input). */
 export function injectionRecovery(input: InjectionInput): InjectionMap {
   const setup = prepareInjection(input);
-  const { periodsDays, massesEarth, starMassSun } = input;
+  const { periodsDays, msinisEarth, starMassSun } = input;
   return {
     periodsDays,
-    massesEarth,
+    msinisEarth,
     trialsPerCell: input.trialsPerCell,
     fapThreshold: setup.fapThreshold,
-    detection: periodsDays.map((_, i) => massesEarth.map((_, j) => detectionProbability(setup, i, j))),
-    kCircularMps: periodsDays.map((periodDays) => massesEarth.map((planetMassEarth) => semiAmplitudeMps({ starMassSun, planetMassEarth, periodDays }))),
+    detection: periodsDays.map((_, i) => msinisEarth.map((_, j) => detectionProbability(setup, i, j))),
+    kCircularMps: periodsDays.map((periodDays) => msinisEarth.map((planetMassEarth) => semiAmplitudeMps({ starMassSun, planetMassEarth, periodDays }))),
     grid: setup.grid,
   };
 }

@@ -8,7 +8,7 @@ import type { SpectralRegion } from './teff-information.js';
 /** The measured point every other star's photon noise is scaled from (src/rv/precision.ts). */
 export interface InstrumentReference {
   /** Photon-noise σ (m/s) at this point. */
-  sigmaMps: number;
+  photonSigmaMps: number;
   /** The reference star's magnitude in the instrument's band. */
   mag: number;
   exposureSec: number;

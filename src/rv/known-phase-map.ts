@@ -18,21 +18,21 @@ import { createRng, deriveSeed } from './random.js';
 
 export interface KnownPhaseInput {
   /** Visit times (BJD_TDB days) and each visit's σ_eff with jitter (m/s). */
-  timesBjd: number[];
-  sigmaMps: number[];
+  timesBjdTdb: number[];
+  rvErrorsMps: number[];
   ephemeris: Ephemeris;
   periodsDays: number[];
-  massesEarth: number[];
+  msinisEarth: number[];
   starMassSun: number;
   /** The detection threshold n on K̂/σ_K. */
-  significance: number;
+  goalSignificance: number;
 }
 
 export interface KnownPhaseMap {
   periodsDays: number[];
-  massesEarth: number[];
-  significance: number;
-  /** detection[i][j] at periodsDays[i], massesEarth[j]. */
+  msinisEarth: number[];
+  goalSignificance: number;
+  /** detection[i][j] at periodsDays[i], msinisEarth[j]. */
   detection: number[][];
   /** Expected σ_K of each period's row, m/s (infinite when the visits carry no information on K). */
   sigmaKMps: number[];
@@ -46,21 +46,21 @@ const atPeriod = (eph: Ephemeris, periodDays: number): Ephemeris => ({ ...eph, p
  * information model of one circular planet with its ephemeris held fixed, each visit on a night
  * of its own.
  */
-export function expectedSigmaKMps(timesBjd: number[], sigmaMps: number[], eph: Ephemeris): number {
-  if (timesBjd.length === 0) return Infinity;
-  const span: [number, number] = [Math.min(...timesBjd), Math.max(...timesBjd)];
+export function expectedSigmaKMps(timesBjdTdb: number[], rvErrorsMps: number[], eph: Ephemeris): number {
+  if (timesBjdTdb.length === 0) return Infinity;
+  const span: [number, number] = [Math.min(...timesBjdTdb), Math.max(...timesBjdTdb)];
   const model = buildStarModel({
-    planets: [{ id: 'known-phase', kMps: 1, periodDays: eph.periodDays, tcBjd: eph.tcBjdTdb, periodErrDays: 0, tcErrDays: 0, ecc: 0, omegaDeg: 90 }],
+    planets: [{ id: 'known-phase', kMps: 1, periodDays: eph.periodDays, tcBjdTdb: eph.tcBjdTdb, periodErrDays: 0, tcErrDays: 0, ecc: 0, omegaDeg: 90 }],
     nightlyJitterMps: 0,
-    spanBjd: span,
+    spanBjdTdb: span,
   });
-  const variance = kVariances(model, informationVisits(model, timesBjd.map((bjd, n) => ({ bjd, sigmaMps: sigmaMps[n]!, night: n, nightBjd: bjd }))))[0]!;
+  const variance = kVariances(model, informationVisits(model, timesBjdTdb.map((bjd, n) => ({ bjdTdb: bjd, whiteSigmaMps: rvErrorsMps[n]!, night: n, nightBjdTdb: bjd }))))[0]!;
   return Math.sqrt(variance);
 }
 
 function checkInput(input: KnownPhaseInput): void {
-  if (input.timesBjd.length !== input.sigmaMps.length) throw new RangeError('times and sigma differ in length');
-  if (!input.periodsDays.length || !input.massesEarth.length) throw new RangeError('need at least one period and one mass');
+  if (input.timesBjdTdb.length !== input.rvErrorsMps.length) throw new RangeError('times and sigma differ in length');
+  if (!input.periodsDays.length || !input.msinisEarth.length) throw new RangeError('need at least one period and one mass');
 }
 
 /** K of a circular orbit, m/s. */
@@ -70,11 +70,11 @@ const kOf = (input: KnownPhaseInput, periodDays: number, planetMassEarth: number
 /** The analytic map: P = Φ(K/σ_K − n) per cell (docs/references.md [Detection-probability], src/rv/detect.ts). */
 export function knownPhaseMapAnalytic(input: KnownPhaseInput): KnownPhaseMap {
   checkInput(input);
-  const sigmaKMps = input.periodsDays.map((p) => expectedSigmaKMps(input.timesBjd, input.sigmaMps, atPeriod(input.ephemeris, p)));
+  const sigmaKMps = input.periodsDays.map((p) => expectedSigmaKMps(input.timesBjdTdb, input.rvErrorsMps, atPeriod(input.ephemeris, p)));
   const detection = input.periodsDays.map((p, i) =>
-    input.massesEarth.map((m) => (Number.isFinite(sigmaKMps[i]!) ? detectionProbabilityKnownPhase(kOf(input, p, m), sigmaKMps[i]!, input.significance) : 0)),
+    input.msinisEarth.map((m) => (Number.isFinite(sigmaKMps[i]!) ? detectionProbabilityKnownPhase(kOf(input, p, m), sigmaKMps[i]!, input.goalSignificance) : 0)),
   );
-  return { periodsDays: input.periodsDays, massesEarth: input.massesEarth, significance: input.significance, detection, sigmaKMps };
+  return { periodsDays: input.periodsDays, msinisEarth: input.msinisEarth, goalSignificance: input.goalSignificance, detection, sigmaKMps };
 }
 
 /**
@@ -87,34 +87,34 @@ export function knownPhaseMapAnalytic(input: KnownPhaseInput): KnownPhaseMap {
  */
 export function knownPhaseMapSimulated(input: KnownPhaseInput & { trialsPerCell: number; seed: number }): KnownPhaseMap {
   checkInput(input);
-  const { timesBjd, sigmaMps, ephemeris: eph, massesEarth, trialsPerCell } = input;
-  const count = timesBjd.length;
-  const w = sigmaMps.map((s) => 1 / (s * s));
+  const { timesBjdTdb, rvErrorsMps, ephemeris: eph, msinisEarth, trialsPerCell } = input;
+  const count = timesBjdTdb.length;
+  const w = rvErrorsMps.map((s) => 1 / (s * s));
   const sumW = w.reduce((a, b) => a + b, 0);
   const truth = new Float64Array(count);
   const sigmaKMps: number[] = [];
   const detection = input.periodsDays.map((periodDays, i) => {
-    const predicted = timesBjd.map((t) => -Math.sin(2 * Math.PI * phaseAt(atPeriod(eph, periodDays), t)));
+    const predicted = timesBjdTdb.map((t) => -Math.sin(2 * Math.PI * phaseAt(atPeriod(eph, periodDays), t)));
     const meanS = predicted.reduce((a, s, n) => a + w[n]! * s, 0) / sumW;
     const centred = predicted.map((s) => s - meanS);
     const info = centred.reduce((a, c, n) => a + w[n]! * c * c, 0);
     const sigmaK = info > 0 ? 1 / Math.sqrt(info) : Infinity;
     sigmaKMps.push(sigmaK);
-    return massesEarth.map((m, j) => {
+    return msinisEarth.map((m, j) => {
       if (!Number.isFinite(sigmaK)) return 0;
       const kMps = kOf(input, periodDays, m);
-      const rng = createRng(deriveSeed(input.seed, i * massesEarth.length + j));
+      const rng = createRng(deriveSeed(input.seed, i * msinisEarth.length + j));
       let detected = 0;
       for (let trial = 0; trial < trialsPerCell; trial++) {
         const trueEph = { ...eph, periodDays: periodDays + eph.periodErrDays * rng.normal(), tcBjdTdb: eph.tcBjdTdb + eph.tcErrDays * rng.normal() };
-        for (let n = 0; n < count; n++) truth[n] = -kMps * Math.sin(2 * Math.PI * phaseAt(trueEph, timesBjd[n]!)) + sigmaMps[n]! * rng.normal();
+        for (let n = 0; n < count; n++) truth[n] = -kMps * Math.sin(2 * Math.PI * phaseAt(trueEph, timesBjdTdb[n]!)) + rvErrorsMps[n]! * rng.normal();
         // Σ w (s − s̄)(v − v̄) = Σ w (s − s̄) v, since Σ w (s − s̄) = 0.
         let cross = 0;
         for (let n = 0; n < count; n++) cross += w[n]! * centred[n]! * truth[n]!;
-        if (cross / info / sigmaK > input.significance) detected++;
+        if (cross / info / sigmaK > input.goalSignificance) detected++;
       }
       return detected / trialsPerCell;
     });
   });
-  return { periodsDays: input.periodsDays, massesEarth, significance: input.significance, detection, sigmaKMps };
+  return { periodsDays: input.periodsDays, msinisEarth, goalSignificance: input.goalSignificance, detection, sigmaKMps };
 }

@@ -2,7 +2,7 @@
 // Gaussian priors from the catalogue ephemeris, by Levenberg–Marquardt on whitened residuals.
 import { validationError } from '../errors.js';
 import type { FittedOrbit } from './fitted-orbit.js';
-import { periastronFromConjunctionBjd } from '../orbit/periastron-time.js';
+import { periastronFromConjunctionBjdTdb } from '../orbit/periastron-time.js';
 import { radialVelocityMps } from '../orbit/rv-curve.js';
 import { packedIndex } from './information-model.js';
 import { levenbergMarquardt, type LeastSquaresProblem, type LeastSquaresResult } from './levenberg-marquardt.js';
@@ -25,9 +25,9 @@ export interface FitPlanetPrior {
 }
 
 export interface FitPoint {
-  bjd: number;
+  bjdTdb: number;
   rvMps: number;
-  rvErrMps: number;
+  rvErrorMps: number;
   instrument: string;
 }
 
@@ -104,7 +104,7 @@ function buildLayout(planets: FitPlanetPrior[], instruments: string[]): Layout {
 }
 
 interface Elements {
-  tcBjd: number;
+  tcBjdTdb: number;
   periodDays: number;
   ecc: number;
   omegaDeg: number;
@@ -119,7 +119,7 @@ function elements(pl: FitPlanetPrior, s: Slots, theta: ArrayLike<number>): Eleme
     if (ecc > 0) omegaDeg = (Math.atan2(theta[s.ecc + 1]!, theta[s.ecc]!) * 180) / Math.PI;
   }
   return {
-    tcBjd: pl.tcBjdTdb + (s.tc >= 0 ? theta[s.tc]! : 0),
+    tcBjdTdb: pl.tcBjdTdb + (s.tc >= 0 ? theta[s.tc]! : 0),
     periodDays: s.period >= 0 ? theta[s.period]! : pl.periodDays,
     ecc,
     omegaDeg,
@@ -127,17 +127,17 @@ function elements(pl: FitPlanetPrior, s: Slots, theta: ArrayLike<number>): Eleme
 }
 
 /** The curve of unit K at t: cos(ν + ω) + e cos ω, with T_p from Tc (src/orbit/periastron-time.ts). */
-function unitCurve(el: Elements, tBjd: number): number {
-  const periastronBjd = periastronFromConjunctionBjd(el);
-  return radialVelocityMps({ kMps: 1, periodDays: el.periodDays, ecc: el.ecc, omegaDeg: el.omegaDeg, periastronBjd }, tBjd);
+function unitCurve(el: Elements, tBjdTdb: number): number {
+  const periastronBjdTdb = periastronFromConjunctionBjdTdb(el);
+  return radialVelocityMps({ kMps: 1, periodDays: el.periodDays, ecc: el.ecc, omegaDeg: el.omegaDeg, periastronBjdTdb }, tBjdTdb);
 }
 
 function checkInputs(planets: FitPlanetPrior[], points: FitPoint[], jitterMps: number): void {
   if (points.length === 0) throw validationError('points', 0, 'at least one RV to fit');
   if (!(jitterMps >= 0 && Number.isFinite(jitterMps))) throw validationError('jitterMps', jitterMps, 'a finite jitter of 0 m/s or more');
   points.forEach((pt, i) => {
-    if (!Number.isFinite(pt.bjd) || !Number.isFinite(pt.rvMps)) throw validationError(`points[${i}]`, pt, 'a finite time and RV');
-    if (!(pt.rvErrMps > 0 && Number.isFinite(pt.rvErrMps))) throw validationError(`points[${i}].rvErrMps`, pt.rvErrMps, 'a positive, finite uncertainty');
+    if (!Number.isFinite(pt.bjdTdb) || !Number.isFinite(pt.rvMps)) throw validationError(`points[${i}]`, pt, 'a finite time and RV');
+    if (!(pt.rvErrorMps > 0 && Number.isFinite(pt.rvErrorMps))) throw validationError(`points[${i}].rvErrorMps`, pt.rvErrorMps, 'a positive, finite uncertainty');
   });
   planets.forEach((pl, i) => {
     const ok = pl.periodDays > 0 && pl.periodErrDays >= 0 && pl.tcErrDays >= 0 && pl.kMps > 0 && pl.ecc >= 0 && pl.ecc < MAX_ECC && Number.isFinite(pl.tcBjdTdb) && Number.isFinite(pl.omegaDeg);
@@ -162,14 +162,14 @@ export function fitOrbits(catalogue: FitPlanetPrior[], points: FitPoint[], jitte
   checkInputs(catalogue, points, jitterMps);
   // Times from a whole day before the first point: a full BJD carries ~3e-10 d of rounding,
   // which the finite differences below would turn into a Jacobian wrong by ~1e-5.
-  const origin = Math.floor(points.reduce((lo, pt) => Math.min(lo, pt.bjd), Infinity));
+  const origin = Math.floor(points.reduce((lo, pt) => Math.min(lo, pt.bjdTdb), Infinity));
   const planets = catalogue.map((pl) => ({ ...pl, tcBjdTdb: pl.tcBjdTdb - origin }));
   const instruments = [...new Set(points.map((pt) => pt.instrument))];
   const lay = buildLayout(planets, instruments);
   const n = points.length;
   const instrumentOf = points.map((pt) => instruments.indexOf(pt.instrument));
-  const invSigma = points.map((pt) => 1 / Math.sqrt(pt.rvErrMps ** 2 + jitterMps ** 2));
-  const times = points.map((pt) => pt.bjd - origin);
+  const invSigma = points.map((pt) => 1 / Math.sqrt(pt.rvErrorMps ** 2 + jitterMps ** 2));
+  const times = points.map((pt) => pt.bjdTdb - origin);
   const first = times.reduce((lo, t) => Math.min(lo, t), Infinity);
   const last = times.reduce((hi, t) => Math.max(hi, t), -Infinity);
 
@@ -226,12 +226,12 @@ export function fitOrbits(catalogue: FitPlanetPrior[], points: FitPoint[], jitte
 }
 
 /** The catalogue start and, per planet with a loose phase, starts with Tc shifted by SHIFTS phase errors. */
-function startsFor(planets: FitPlanetPrior[], points: FitPoint[], lay: Layout, middleBjd: number): Float64Array[] {
+function startsFor(planets: FitPlanetPrior[], points: FitPoint[], lay: Layout, middleBjdTdb: number): Float64Array[] {
   const start = new Float64Array(lay.count);
   lay.instruments.forEach((name, j) => {
     // Weighted mean of the instrument's RVs (common practice).
     const own = points.filter((pt) => pt.instrument === name);
-    const w = own.map((pt) => 1 / pt.rvErrMps ** 2);
+    const w = own.map((pt) => 1 / pt.rvErrorMps ** 2);
     start[j] = own.reduce((s, pt, i) => s + w[i]! * pt.rvMps, 0) / w.reduce((s, v) => s + v, 0);
   });
   planets.forEach((pl, k) => {
@@ -248,7 +248,7 @@ function startsFor(planets: FitPlanetPrior[], points: FitPoint[], lay: Layout, m
   planets.forEach((pl, k) => {
     const tc = lay.slots[k]!.tc;
     // Phase error at the middle of the data: σ_φ = √(σ_Tc² + (n σ_P)²) / P, n orbits from Tc (propagation of errors, common practice).
-    const orbits = (middleBjd - pl.tcBjdTdb) / pl.periodDays;
+    const orbits = (middleBjdTdb - pl.tcBjdTdb) / pl.periodDays;
     const phaseErrCycles = Math.hypot(pl.tcErrDays, orbits * pl.periodErrDays) / pl.periodDays;
     if (tc < 0 || phaseErrCycles <= SHIFT_ABOVE_CYCLES) return;
     for (const shift of SHIFTS) {
@@ -284,7 +284,7 @@ function summarise(planets: FitPlanetPrior[], points: FitPoint[], lay: Layout, f
       id: pl.id,
       kMps: theta[s.k]!,
       kErrMps: sd(s.k),
-      tcBjdTdb: origin + el.tcBjd + epochs * el.periodDays,
+      tcBjdTdb: origin + el.tcBjdTdb + epochs * el.periodDays,
       tcErrDays: Math.sqrt(varTc),
       periodDays: el.periodDays,
       periodErrDays: sd(s.period),

@@ -12,7 +12,7 @@ export interface RankedPeak {
   /** Semi-amplitude of the sinusoid fitted at this period, m/s. */
   amplitudeMps: number;
   /** A time (BJD_TDB) of maximum fitted velocity. */
-  timeOfMaxBjd: number;
+  timeOfMaxBjdTdb: number;
   /** Over the band, Baluev 2008. */
   fapBaluev: number;
   /** Over the band, from the number of independent frequencies. */
@@ -42,22 +42,22 @@ export const FAP_LEVELS = [0.1, 0.01, 0.001];
 export function searchPeriodogram(
   timesDays: ArrayLike<number>,
   valuesMps: ArrayLike<number>,
-  sigmaMps: ArrayLike<number>,
+  rvErrorsMps: ArrayLike<number>,
   options: FrequencyGridOptions & { top?: number } = {},
 ): PeriodogramSearch {
   const grid = frequencyGrid(timesDays, options);
-  const power = glsPeriodogram(timesDays, valuesMps, sigmaMps, grid);
-  const fap = fapContext(timesDays, sigmaMps, grid);
+  const power = glsPeriodogram(timesDays, valuesMps, rvErrorsMps, grid);
+  const fap = fapContext(timesDays, rvErrorsMps, grid);
   const peaks = findPeaks(power, grid, options.top ?? 5).map((peak, i): RankedPeak => {
-    const refined = glsAt(timesDays, valuesMps, sigmaMps, peak.freqPerDay);
-    const fit = refined.power >= peak.power ? refined : glsAt(timesDays, valuesMps, sigmaMps, gridFrequency(grid, peak.index));
+    const refined = glsAt(timesDays, valuesMps, rvErrorsMps, peak.freqPerDay);
+    const fit = refined.power >= peak.power ? refined : glsAt(timesDays, valuesMps, rvErrorsMps, gridFrequency(grid, peak.index));
     return {
       rank: i + 1,
       periodDays: 1 / fit.freqPerDay,
       freqPerDay: fit.freqPerDay,
       power: fit.power,
       amplitudeMps: fit.amplitudeMps,
-      timeOfMaxBjd: fit.timeOfMaxBjd,
+      timeOfMaxBjdTdb: fit.timeOfMaxBjdTdb,
       fapBaluev: fapBaluev(fit.power, fap),
       fapIndependent: fapIndependent(fit.power, fap),
       fapSingle: fapSingle(fit.power, fap.n),

@@ -24,14 +24,14 @@ export interface GlsKernel {
   power(valuesMps: ArrayLike<number>, out?: Float64Array): Float64Array;
 }
 
-function normalisedWeights(sigmaMps: ArrayLike<number>): Float64Array {
-  const w = new Float64Array(sigmaMps.length);
+function normalisedWeights(rvErrorsMps: ArrayLike<number>): Float64Array {
+  const w = new Float64Array(rvErrorsMps.length);
   let sum = 0;
   for (let i = 0; i < w.length; i++) {
-    const s = sigmaMps[i]!;
+    const s = rvErrorsMps[i]!;
     w[i] = 1 / (s * s);
     // 1/sigma^2 overflows below about 1e-154: such weights would make every sum NaN.
-    if (!(s > 0) || !Number.isFinite(w[i]!)) throw validationError(`sigmaMps[${i}]`, s, 'a positive, finite uncertainty of at least 1e-150');
+    if (!(s > 0) || !Number.isFinite(w[i]!)) throw validationError(`rvErrorsMps[${i}]`, s, 'a positive, finite uncertainty of at least 1e-150');
     sum += w[i]!;
   }
   for (let i = 0; i < w.length; i++) w[i]! /= sum;
@@ -54,13 +54,13 @@ function weightedMean(values: ArrayLike<number>, w: Float64Array): number {
  */
 export function glsKernel(
   timesDays: ArrayLike<number>,
-  sigmaMps: ArrayLike<number>,
+  rvErrorsMps: ArrayLike<number>,
   grid: FrequencyGrid,
   offset: OffsetModel = 'floating',
 ): GlsKernel {
   const n = timesDays.length;
-  if (sigmaMps.length !== n) throw new RangeError(`times and sigma differ in length: ${n} and ${sigmaMps.length}`);
-  const w = normalisedWeights(sigmaMps);
+  if (rvErrorsMps.length !== n) throw new RangeError(`times and sigma differ in length: ${n} and ${rvErrorsMps.length}`);
+  const w = normalisedWeights(rvErrorsMps);
   const tRef = weightedMean(timesDays, w);
   const f = grid.count;
   const cos0 = new Float64Array(n), sin0 = new Float64Array(n), cosStep = new Float64Array(n), sinStep = new Float64Array(n);
@@ -142,11 +142,11 @@ export function glsKernel(
 export function glsPeriodogram(
   timesDays: ArrayLike<number>,
   valuesMps: ArrayLike<number>,
-  sigmaMps: ArrayLike<number>,
+  rvErrorsMps: ArrayLike<number>,
   grid: FrequencyGrid,
   offset: OffsetModel = 'floating',
 ): Float64Array {
-  return glsKernel(timesDays, sigmaMps, grid, offset).power(valuesMps);
+  return glsKernel(timesDays, rvErrorsMps, grid, offset).power(valuesMps);
 }
 
 /** The best-fitting sinusoid at one frequency and its normalised power. */
@@ -158,7 +158,7 @@ export interface SinusoidFit {
   /** Fitted constant c, m/s. */
   offsetMps: number;
   /** A time (BJD, days) of maximum fitted velocity. */
-  timeOfMaxBjd: number;
+  timeOfMaxBjdTdb: number;
 }
 
 /**
@@ -169,11 +169,11 @@ export interface SinusoidFit {
 export function glsAt(
   timesDays: ArrayLike<number>,
   valuesMps: ArrayLike<number>,
-  sigmaMps: ArrayLike<number>,
+  rvErrorsMps: ArrayLike<number>,
   freqPerDay: number,
 ): SinusoidFit {
   const n = timesDays.length;
-  const w = normalisedWeights(sigmaMps);
+  const w = normalisedWeights(rvErrorsMps);
   const tRef = weightedMean(timesDays, w);
   let Y = 0, C = 0, S = 0, YYh = 0, YCh = 0, YSh = 0, CCh = 0, SSh = 0, CSh = 0;
   for (let i = 0; i < n; i++) {
@@ -196,6 +196,6 @@ export function glsAt(
     power: Number.isFinite(p) && D > 0 ? Math.min(1, Math.max(0, p)) : 0,
     amplitudeMps: Math.hypot(a, b),
     offsetMps: Y - a * C - b * S,
-    timeOfMaxBjd: timeOfMax,
+    timeOfMaxBjdTdb: timeOfMax,
   };
 }

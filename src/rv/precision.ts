@@ -67,23 +67,23 @@ export interface PrecisionBudget {
   snrWavelengthNm: number;
   snr: SignalToNoise;
   /** The instrument's photon-noise σ at its reference point (m/s). */
-  referenceSigmaMps: number;
+  referencePhotonSigmaMps: number;
   factors: PrecisionFactors;
   spectralTypeSource: string;
   /** Set when the star's Teff is where the information table is least reliable. */
   teffWarning?: string;
   /** Width of a non-rotating star's lines on this instrument (km/s). */
   lineWidthKms: number;
-  /** referenceSigmaMps times every factor. */
-  photonMps: number;
+  /** referencePhotonSigmaMps times every factor. */
+  photonSigmaMps: number;
   floorMps: number;
   /** √(photon² + floor²): what the instrument delivers for this star in one visit. */
-  visitMps: number;
+  visitSigmaMps: number;
   jitterMps: number;
   /** √(photon² + jitter²): the part that averages down over visits. */
-  whiteMps: number;
+  whiteSigmaMps: number;
   /** √(visit² + jitter²): the scatter to expect about a Keplerian. */
-  effMps: number;
+  effectiveSigmaMps: number;
 }
 
 /** Spectral-type factor, or one input-error line naming the star when its Teff is off the table. */
@@ -111,7 +111,7 @@ export function photonNoise(
   exposureSec: number,
   airmass: number,
   options: PrecisionOptions = {},
-): Omit<PrecisionBudget, 'floorMps' | 'visitMps' | 'jitterMps' | 'whiteMps' | 'effMps'> {
+): Omit<PrecisionBudget, 'floorMps' | 'visitSigmaMps' | 'jitterMps' | 'whiteSigmaMps' | 'effectiveSigmaMps'> {
   const ref = instrument.reference;
   const apertureM = options.apertureM ?? instrument.apertureM;
   const refObs = referenceObservation(instrument);
@@ -146,11 +146,11 @@ export function photonNoise(
     snrPerPixel: snr.snrPerPixel,
     snrWavelengthNm: instrument.wavelengthNm,
     snr,
-    referenceSigmaMps: ref.sigmaMps,
+    referencePhotonSigmaMps: ref.photonSigmaMps,
     factors,
     spectralTypeSource: spectral.source,
     lineWidthKms: widthKms,
-    photonMps: ref.sigmaMps * product,
+    photonSigmaMps: ref.photonSigmaMps * product,
   };
   if (spectral.warning) budget.teffWarning = spectral.warning;
   return budget;
@@ -173,13 +173,13 @@ export function visitPrecision(
   options: PrecisionOptions = {},
 ): PrecisionBudget {
   const photon = photonNoise(instrument, star, exposureSec, airmass, options);
-  const visitMps = quadratureSum(photon.photonMps, instrument.floorMps);
+  const visitSigmaMps = quadratureSum(photon.photonSigmaMps, instrument.floorMps);
   return {
     ...photon,
     floorMps: instrument.floorMps,
-    visitMps,
+    visitSigmaMps,
     jitterMps: star.jitterMps,
-    whiteMps: quadratureSum(photon.photonMps, star.jitterMps),
-    effMps: quadratureSum(visitMps, star.jitterMps),
+    whiteSigmaMps: quadratureSum(photon.photonSigmaMps, star.jitterMps),
+    effectiveSigmaMps: quadratureSum(visitSigmaMps, star.jitterMps),
   };
 }

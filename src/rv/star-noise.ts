@@ -36,7 +36,7 @@ export function starNoise(star: Target, campaignFraction: number): StarNoise {
 }
 
 /** A visit's white noise: photon and floor (σ_visit) with the white part of the jitter. */
-export function whiteSigmaMps(visitMps: number, noise: StarNoise): number {
-  return quadratureSum(visitMps, noise.whiteJitterMps);
+export function whiteSigmaMps(visitSigmaMps: number, noise: StarNoise): number {
+  return quadratureSum(visitSigmaMps, noise.whiteJitterMps);
 }
 

@@ -25,11 +25,11 @@ export const DEMANDING_VISITS = 50;
 
 /** What detectability needs of a target: a Target, or a star given on the command line. */
 export type DetectStar = Pick<Target, 'id' | 'vmag' | 'teffK' | 'massSun' | 'vsiniKms' | 'jitterMps' | 'estimated'> &
-  Partial<Pick<Target, 'planet' | 'ephemeris' | 'search' | 'mags' | 'logg' | 'logRhk' | 'exposureSec' | 'sigmaMps' | 'jitterSource' | 'source'>>;
+  Partial<Pick<Target, 'planet' | 'ephemeris' | 'search' | 'mags' | 'logg' | 'logRhk' | 'exposureSec' | 'visitSigmaMps' | 'jitterSource' | 'source'>>;
 
 export interface DetectPlanet {
   source: 'given' | 'search' | 'hypothetical';
-  massEarth?: number;
+  msiniEarth?: number;
   kMps: number;
   periodDays: number;
   ecc: number;
@@ -38,7 +38,7 @@ export interface DetectPlanet {
 }
 
 export interface HypotheticalPlanet {
-  massEarth: number;
+  msiniEarth: number;
   periodDays: number;
   ecc?: number;
 }
@@ -50,28 +50,28 @@ export interface HypotheticalPlanet {
  * prior); else none.
  */
 export function planetOfTarget(target: DetectStar, hypothetical?: HypotheticalPlanet): DetectPlanet | undefined {
-  const kOf = (massEarth: number, periodDays: number, ecc: number) =>
-    semiAmplitudeMps({ starMassSun: target.massSun, planetMassEarth: massEarth, periodDays, ecc });
+  const kOf = (msiniEarth: number, periodDays: number, ecc: number) =>
+    semiAmplitudeMps({ starMassSun: target.massSun, planetMassEarth: msiniEarth, periodDays, ecc });
   if (hypothetical) {
     const ecc = hypothetical.ecc ?? 0;
-    return { source: 'hypothetical', massEarth: hypothetical.massEarth, kMps: kOf(hypothetical.massEarth, hypothetical.periodDays, ecc), periodDays: hypothetical.periodDays, ecc, note: `hypothetical ${hypothetical.massEarth} M_earth at P = ${hypothetical.periodDays} d` };
+    return { source: 'hypothetical', msiniEarth: hypothetical.msiniEarth, kMps: kOf(hypothetical.msiniEarth, hypothetical.periodDays, ecc), periodDays: hypothetical.periodDays, ecc, note: `hypothetical ${hypothetical.msiniEarth} M_earth at P = ${hypothetical.periodDays} d` };
   }
   const { planet, ephemeris, search } = target;
   if (planet && ephemeris) {
     const periodDays = ephemeris.periodDays;
     if (planet.kMps !== undefined) return { source: 'given', kMps: planet.kMps, periodDays, ecc: planet.ecc, note: `K = ${planet.kMps} m/s as given` };
-    const massEarth = planet.massEarth!;
-    return { source: 'given', massEarth, kMps: kOf(massEarth, periodDays, planet.ecc), periodDays, ecc: planet.ecc, note: `${massEarth} M_earth at P = ${periodDays} d` };
+    const msiniEarth = planet.msiniEarth!;
+    return { source: 'given', msiniEarth, kMps: kOf(msiniEarth, periodDays, planet.ecc), periodDays, ecc: planet.ecc, note: `${msiniEarth} M_earth at P = ${periodDays} d` };
   }
   if (search) {
     const periodDays = Math.sqrt(search.periodMinDays * search.periodMaxDays);
     return {
       source: 'search',
-      massEarth: search.massEarth,
-      kMps: kOf(search.massEarth, periodDays, 0),
+      msiniEarth: search.msiniEarth,
+      kMps: kOf(search.msiniEarth, periodDays, 0),
       periodDays,
       ecc: 0,
-      note: `search: ${search.massEarth} M_earth at P = ${periodDays.toFixed(1)} d, the logarithmic middle of ${search.periodMinDays}-${search.periodMaxDays} d`,
+      note: `search: ${search.msiniEarth} M_earth at P = ${periodDays.toFixed(1)} d, the logarithmic middle of ${search.periodMinDays}-${search.periodMaxDays} d`,
     };
   }
   return undefined;
@@ -79,12 +79,12 @@ export function planetOfTarget(target: DetectStar, hypothetical?: HypotheticalPl
 
 export interface DetectOptions {
   /** K/σ_K to reach (the goal); visits are also reported for 3 and 5. */
-  significance: number;
+  goalSignificance: number;
   airmass: number;
   /** Fixed exposure (s); otherwise chooseExposureSec picks one. A target's own exposureSec wins. */
   exposureSec?: number;
-  /** Requested σ_visit for the exposure choice. A target's own sigmaMps wins. */
-  targetSigmaMps?: number;
+  /** Requested σ_visit for the exposure choice. A target's own visitSigmaMps wins. */
+  targetVisitSigmaMps?: number;
   /** Zenith seeing (arcsec), e.g. the site's median. */
   seeingArcsec?: number;
   /** A planet number of visits: σ_K, detection probability and mass limits at that N. */
@@ -95,7 +95,7 @@ export interface DetectOptions {
 }
 
 export interface VisitsAt {
-  significance: number;
+  goalSignificance: number;
   random: number;
   quadrature: number;
   hoursRandom: number;
@@ -131,9 +131,9 @@ export interface TargetDetectability {
   planet?: DetectPlanet;
   exposure: ExposureChoice;
   /** σ_eff per visit (m/s): photon, floor and jitter in quadrature. */
-  sigmaMps: number;
+  effectiveSigmaMps: number;
   /** The part of σ that averages down over visits (photon and jitter), and the floor that does not (m/s). */
-  whiteMps: number;
+  whiteSigmaMps: number;
   floorMps: number;
   /** The largest term of σ_eff. */
   dominantNoise: 'photon' | 'floor' | 'jitter';
@@ -148,23 +148,23 @@ export interface TargetDetectability {
 export function targetDetectability(target: DetectStar, instrument: Instrument, options: DetectOptions): TargetDetectability {
   const planet = planetOfTarget(target, options.hypothetical);
   const exposureSec = target.exposureSec ?? options.exposureSec;
-  const precisionOptions = { seeingArcsec: options.seeingArcsec, kMps: planet?.kMps, significance: options.significance };
+  const precisionOptions = { seeingArcsec: options.seeingArcsec, kMps: planet?.kMps, goalSignificance: options.goalSignificance };
   const exposure =
     exposureSec === undefined
-      ? chooseExposureSec(instrument, target, options.airmass, target.sigmaMps ?? options.targetSigmaMps, precisionOptions)
+      ? chooseExposureSec(instrument, target, options.airmass, target.visitSigmaMps ?? options.targetVisitSigmaMps, precisionOptions)
       : fixedExposure(instrument, target, options.airmass, exposureSec, precisionOptions);
   const { budget } = exposure;
-  const sigmaMps = budget.effMps;
+  const effectiveSigmaMps = budget.effectiveSigmaMps;
   const costSec = visitCostSec(instrument, exposure.exposureSec);
   const hours = (visits: number) => (visits * costSec) / 3600;
-  const levels = [...new Set([3, 5, options.significance])].sort((a, b) => a - b);
+  const levels = [...new Set([3, 5, options.goalSignificance])].sort((a, b) => a - b);
   const needed: VisitsAt[] = planet
     ? levels.map((n) => {
-        const [random, quadrature] = PHASE_LAYOUTS.map((layout) => visitsNeeded(planet.kMps, budget.whiteMps, n, layout, budget.floorMps)) as [number, number];
-        return { significance: n, random, quadrature, hoursRandom: hours(random), hoursQuadrature: hours(quadrature) };
+        const [random, quadrature] = PHASE_LAYOUTS.map((layout) => visitsNeeded(planet.kMps, budget.whiteSigmaMps, n, layout, budget.floorMps)) as [number, number];
+        return { goalSignificance: n, random, quadrature, hoursRandom: hours(random), hoursQuadrature: hours(quadrature) };
       })
     : [];
-  const terms = { photon: budget.photonMps, floor: budget.floorMps, jitter: budget.jitterMps };
+  const terms = { photon: budget.photonSigmaMps, floor: budget.floorMps, jitter: budget.jitterMps };
   const dominantNoise = (Object.keys(terms) as (keyof typeof terms)[]).reduce((a, b) => (terms[b] > terms[a] ? b : a));
   const result: TargetDetectability = {
     targetId: target.id,
@@ -175,8 +175,8 @@ export function targetDetectability(target: DetectStar, instrument: Instrument, 
     jitterSource: target.jitterSource,
     planet,
     exposure,
-    sigmaMps,
-    whiteMps: budget.whiteMps,
+    effectiveSigmaMps,
+    whiteSigmaMps: budget.whiteSigmaMps,
     floorMps: budget.floorMps,
     dominantNoise,
     visitCostSec: costSec,
@@ -184,22 +184,22 @@ export function targetDetectability(target: DetectStar, instrument: Instrument, 
     verdict: { level: 'no planet', text: '' },
   };
   if (options.visits !== undefined) result.atPlannedVisits = atPlannedVisits(result, options);
-  result.verdict = verdict(result, instrument, options.significance, target.ephemeris !== undefined && planet?.source === 'given');
+  result.verdict = verdict(result, instrument, options.goalSignificance, target.ephemeris !== undefined && planet?.source === 'given');
   return result;
 }
 
 function atPlannedVisits(row: TargetDetectability, options: DetectOptions): AtPlannedVisits {
   const visits = options.visits!;
-  const n = options.significance;
-  const { whiteMps, floorMps } = row;
-  const sigmaK = (layout: PhaseLayout) => sigmaKMps(whiteMps, visits, layout, floorOnKMps(floorMps, n));
+  const n = options.goalSignificance;
+  const { whiteSigmaMps, floorMps } = row;
+  const sigmaK = (layout: PhaseLayout) => sigmaKMps(whiteSigmaMps, visits, layout, floorOnKMps(floorMps, n));
   const at: AtPlannedVisits = { visits, sigmaKRandomMps: sigmaK('random'), sigmaKQuadratureMps: sigmaK('quadrature') };
   const planet = row.planet;
   const limits = (periodsDays: readonly number[], ecc: number) =>
-    massLimitTable({ starMassSun: row.massSun, sigmaMps: whiteMps, floorMps, visits, significance: n, periodsDays, ecc });
+    massLimitTable({ starMassSun: row.massSun, whiteSigmaMps, floorMps, visits, goalSignificance: n, periodsDays, ecc });
   if (planet) {
-    at.probabilityRandom = detectionProbability(planet.kMps, whiteMps, visits, n, 'random', floorMps);
-    at.probabilityQuadrature = detectionProbability(planet.kMps, whiteMps, visits, n, 'quadrature', floorMps);
+    at.probabilityRandom = detectionProbability(planet.kMps, whiteSigmaMps, visits, n, 'random', floorMps);
+    at.probabilityQuadrature = detectionProbability(planet.kMps, whiteSigmaMps, visits, n, 'quadrature', floorMps);
     const [limit] = limits([planet.periodDays], planet.ecc);
     at.massMinRandomEarth = limit!.massMinRandomEarth;
     at.massMinQuadratureEarth = limit!.massMinQuadratureEarth;
@@ -210,7 +210,7 @@ function atPlannedVisits(row: TargetDetectability, options: DetectOptions): AtPl
   return at;
 }
 
-function verdict(row: TargetDetectability, instrument: Instrument, significance: number, phaseKnown: boolean): { level: VerdictLevel; text: string } {
+function verdict(row: TargetDetectability, instrument: Instrument, goalSignificance: number, phaseKnown: boolean): { level: VerdictLevel; text: string } {
   const notes = [row.exposure.warning, row.dominantNoise === 'jitter' ? 'jitter-limited: longer exposures barely help' : undefined].filter((x) => x);
   const withNotes = (level: VerdictLevel, text: string) => ({ level, text: [text, ...notes].join('; ') });
   const planet = row.planet;
@@ -219,15 +219,15 @@ function verdict(row: TargetDetectability, instrument: Instrument, significance:
   if (planet.kMps <= instrument.floorMps) {
     return withNotes('out of reach', `K = ${k} m/s is below the instrument floor of ${instrument.floorMps} m/s, which does not average down over visits`);
   }
-  const goal = row.needed.find((v) => v.significance === significance)!;
-  const n = `${significance} sigma`;
+  const goal = row.needed.find((v) => v.goalSignificance === goalSignificance)!;
+  const n = `${goalSignificance} sigma`;
   const quad = `${goal.quadrature} (${goal.hoursQuadrature.toFixed(1)} h) at quadratures`;
   if (goal.random > OUT_OF_REACH_VISITS) {
     if (goal.quadrature <= OUT_OF_REACH_VISITS && phaseKnown) {
       return withNotes('demanding', `only with visits timed at quadrature: ${quad} for ${n}; random phases would need ${goal.random} (more than ${OUT_OF_REACH_VISITS})`);
     }
     const why = goal.quadrature > OUT_OF_REACH_VISITS ? `and ${goal.quadrature} even at ideal quadratures` : `${quad}, but the orbital phase is not known`;
-    return withNotes('out of reach', `K = ${k} m/s against sigma ${row.sigmaMps.toFixed(2)} m/s per visit needs ${goal.random} visits for ${n} at random phases (more than ${OUT_OF_REACH_VISITS}), ${why}`);
+    return withNotes('out of reach', `K = ${k} m/s against sigma ${row.effectiveSigmaMps.toFixed(2)} m/s per visit needs ${goal.random} visits for ${n} at random phases (more than ${OUT_OF_REACH_VISITS}), ${why}`);
   }
   const text = `${goal.random} visits (${goal.hoursRandom.toFixed(1)} h) for ${n} at random phases; ${quad}`;
   return withNotes(goal.random > DEMANDING_VISITS ? 'demanding' : 'feasible', text);

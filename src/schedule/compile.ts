@@ -19,14 +19,14 @@ export interface CompiledProblem {
   planetFrom: Int32Array;
   planetPriority: Float64Array;
   planetK: Float64Array;
-  planetGoal: Float64Array;
+  planetGoalSignificance: Float64Array;
   /** Per planet, for the greedy's first-visit estimate: the largest |s| among its star's slots. */
   planetMaxAbsSignal: Float64Array;
   /** Per star: search grid, or null. */
   grids: (SearchGrid | null)[];
   searchPriority: Float64Array;
   searchK: Float64Array;
-  searchGoal: Float64Array;
+  searchGoalSignificance: Float64Array;
   statsOffset: Int32Array;
   statsLength: number;
   /** Per star: largest visit weight among its slots. */
@@ -44,7 +44,7 @@ export interface CompiledProblem {
   endMs: Float64Array;
   hours: Float64Array;
   weight: Float64Array;
-  midDays: Float64Array;
+  midBjdTdb: Float64Array;
   /** Slot j's design rows (samples x parameters of its star's model) start at rows[rowOffset[j]]; -1 without a model. */
   rowOffset: Float64Array;
   rows: Float64Array;
@@ -57,8 +57,8 @@ export interface CompiledProblem {
   nightHours: Float64Array;
   /** Per night position: 1 for a granted night (types.ts ScheduleNight.granted). */
   nightGranted: Uint8Array;
-  /** Per night position: the night's middle (midDays scale), where nightly activity is evaluated. */
-  nightMidDays: Float64Array;
+  /** Per night position: the night's middle (midBjdTdb scale), where nightly activity is evaluated. */
+  nightMidBjdTdb: Float64Array;
   /** Sorted slots of night n are positions nightFrom[n] .. nightTo[n] - 1. */
   nightFrom: Int32Array;
   nightTo: Int32Array;
@@ -76,7 +76,7 @@ function fail(message: string): never {
 }
 
 function checkTarget(t: ScheduleTarget): void {
-  const positive = (x: { priority: number; kMps: number; goal: number }) => x.priority > 0 && x.kMps > 0 && x.goal > 0;
+  const positive = (x: { priority: number; kMps: number; goalSignificance: number }) => x.priority > 0 && x.kMps > 0 && x.goalSignificance > 0;
   if (t.planets.length === 0 && !t.search) fail(`star ${t.id} has neither planets nor a search`);
   if (t.planets.length > 0 && t.model?.planetCount !== t.planets.length) fail(`star ${t.id} needs a model with one planet per planet`);
   for (const planet of t.planets) if (!positive(planet)) fail(`planet ${planet.id} needs priority, kMps and goal > 0`);
@@ -99,7 +99,7 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
   for (const s of problem.slots) {
     if (!targetPos.has(s.targetId)) fail(`slot ${s.slotId} names unknown star ${s.targetId}`);
     if (!nightPos.has(s.nightIndex)) fail(`slot ${s.slotId} names unknown night ${s.nightIndex}`);
-    if (!(s.durationSec > 0 && s.sigmaWhiteMps > 0 && Number.isFinite(s.startMs) && Number.isFinite(s.midDays))) fail(`slot ${s.slotId} needs durationSec > 0, sigmaWhiteMps > 0, finite startMs and midDays`);
+    if (!(s.durationSec > 0 && s.whiteSigmaMps > 0 && Number.isFinite(s.startMs) && Number.isFinite(s.midBjdTdb))) fail(`slot ${s.slotId} needs durationSec > 0, whiteSigmaMps > 0, finite startMs and midBjdTdb`);
   }
 
   // Nights in time order of their slots; slots sorted by (night, start, id) so the order is total.
@@ -109,7 +109,7 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
   for (const s of problem.slots) {
     const n = nightPos.get(s.nightIndex)!;
     firstStart[n] = Math.min(firstStart[n]!, s.startMs);
-    midSum[n] += s.midDays;
+    midSum[n] += s.midBjdTdb;
     midCount[n]++;
   }
   const nightOrder = problem.nights.map((_, i) => i).sort((a, b) => firstStart[a]! - firstStart[b]! || problem.nights[a]!.index - problem.nights[b]!.index);
@@ -136,12 +136,12 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
     planetFrom,
     planetPriority: Float64Array.from(planets, (p) => p.priority),
     planetK: Float64Array.from(planets, (p) => p.kMps),
-    planetGoal: Float64Array.from(planets, (p) => p.goal),
+    planetGoalSignificance: Float64Array.from(planets, (p) => p.goalSignificance),
     planetMaxAbsSignal: new Float64Array(planets.length),
     grids: [],
     searchPriority: Float64Array.from(problem.targets, (t) => t.search?.priority ?? 0),
     searchK: Float64Array.from(problem.targets, (t) => t.search?.kMps ?? 0),
-    searchGoal: Float64Array.from(problem.targets, (t) => t.search?.goal ?? 1),
+    searchGoalSignificance: Float64Array.from(problem.targets, (t) => t.search?.goalSignificance ?? 1),
     statsOffset: new Int32Array(T),
     statsLength: 0,
     maxWeight: new Float64Array(T),
@@ -154,7 +154,7 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
     endMs: new Float64Array(S),
     hours: new Float64Array(S),
     weight: new Float64Array(S),
-    midDays: new Float64Array(S),
+    midBjdTdb: new Float64Array(S),
     rowOffset: new Float64Array(S),
     rows: new Float64Array(rowsTotal),
     signal: new Float64Array(S),
@@ -162,7 +162,7 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
     nightOrder,
     nightHours: Float64Array.from(nightOrder, (n) => problem.nights[n]!.hoursAvailable),
     nightGranted: Uint8Array.from(nightOrder, (n) => (problem.nights[n]!.granted ? 1 : 0)),
-    nightMidDays: Float64Array.from(nightOrder, (n) => problem.nights[n]!.midDays ?? (midCount[n]! > 0 ? midSum[n]! / midCount[n]! : 0)),
+    nightMidBjdTdb: Float64Array.from(nightOrder, (n) => problem.nights[n]!.midBjdTdb ?? (midCount[n]! > 0 ? midSum[n]! / midCount[n]! : 0)),
     nightFrom: new Int32Array(N),
     nightTo: new Int32Array(N),
     spacingMs: Math.max(0, problem.constraints.minSpacingHours) * 3_600_000,
@@ -183,16 +183,16 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
     c.startMs[j] = s.startMs;
     c.endMs[j] = s.startMs + s.durationSec * 1000;
     c.hours[j] = s.durationSec / 3600;
-    c.midDays[j] = s.midDays;
+    c.midBjdTdb[j] = s.midBjdTdb;
     // Weighted least squares: a visit weighs 1/sigma^2 (common practice).
-    const w = 1 / (s.sigmaWhiteMps * s.sigmaWhiteMps);
+    const w = 1 / (s.whiteSigmaMps * s.whiteSigmaMps);
     c.weight[j] = w;
     c.maxWeight[t] = Math.max(c.maxWeight[t]!, w);
     const model = models[t];
     if (model) {
       c.rowOffset[j] = rowAt;
       const p = model.paramCount;
-      model.samples.forEach((sample, k) => designRow(model, sample, s.midDays, c.rows, rowAt + k * p));
+      model.samples.forEach((sample, k) => designRow(model, sample, s.midBjdTdb, c.rows, rowAt + k * p));
       // Sample 0 is the nominal ephemeris (information-model.ts).
       for (let i = 0; i < model.planetCount; i++) {
         const signal = c.rows[rowAt + model.kIndex[i]!]!;
@@ -247,7 +247,7 @@ export class SlotVisit implements InformationVisit {
   get night(): number {
     return this.c.slotNight[this.slot]!;
   }
-  get nightBjd(): number {
-    return this.c.nightMidDays[this.c.slotNight[this.slot]!]!;
+  get nightBjdTdb(): number {
+    return this.c.nightMidBjdTdb[this.c.slotNight[this.slot]!]!;
   }
 }

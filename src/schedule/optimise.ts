@@ -54,35 +54,35 @@ function outcomes(state: PlanState): TargetOutcome[] {
     const out: TargetOutcome[] = star.planets.map((planet, i) => {
       const at = c.planetFrom[t]! + i;
       const variance = state.kVariance[at]!;
-      const kOverSigmaK = state.planetFractionOfGoal(at) * planet.goal;
+      const kOverSigmaK = state.planetFractionOfGoal(at) * planet.goalSignificance;
       const outcome: TargetOutcome = {
         targetId: planet.id,
         kind: 'ephemeris',
         ...shared,
-        priorKOverSigmaK: state.priorPlanetFraction[at]! * planet.goal,
+        priorKOverSigmaK: state.priorPlanetFraction[at]! * planet.goalSignificance,
         informationPerMps2: 1 / variance,
         sigmaKMps: Math.sqrt(variance),
         kOverSigmaK,
-        goal: planet.goal,
-        utility: planet.priority * goalValue(kOverSigmaK / planet.goal, state.planetOvershoot[at]!),
+        goalSignificance: planet.goalSignificance,
+        utility: planet.priority * goalValue(kOverSigmaK / planet.goalSignificance, state.planetOvershoot[at]!),
       };
       // Efficiency (sigma^2/N)/Var(K^) generalised to unequal weights: I / sum w (docs/references.md [Visits-needed]).
       if (visits.length + shared.priorVisits > 0) outcome.informationEfficiency = 1 / variance / weightSum;
       return outcome;
     });
     if (star.search) {
-      const kOverSigmaK = state.searchFractionOfGoal(t, 0, 0) * star.search.goal;
+      const kOverSigmaK = state.searchFractionOfGoal(t, 0, 0) * star.search.goalSignificance;
       const info = (kOverSigmaK / star.search.kMps) ** 2;
       out.push({
         targetId: star.search.id,
         kind: 'search',
         ...shared,
-        priorKOverSigmaK: state.priorSearchFraction[t]! * star.search.goal,
+        priorKOverSigmaK: state.priorSearchFraction[t]! * star.search.goalSignificance,
         informationPerMps2: info,
         sigmaKMps: info > 0 ? 1 / Math.sqrt(info) : Infinity,
         kOverSigmaK,
-        goal: star.search.goal,
-        utility: star.search.priority * goalValue(kOverSigmaK / star.search.goal, state.searchOvershoot[t]!),
+        goalSignificance: star.search.goalSignificance,
+        utility: star.search.priority * goalValue(kOverSigmaK / star.search.goalSignificance, state.searchOvershoot[t]!),
       });
     }
     return out;

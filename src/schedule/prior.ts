@@ -30,7 +30,7 @@ export function compilePrior(c: CompiledProblem): CompiledPrior {
   for (const v of prior) {
     if (problemKey.has(v.localDate)) continue;
     const night = otherNights.get(v.localDate) ?? { key: c.nightCount + otherNights.size, sumDays: 0, count: 0 };
-    night.sumDays += v.nightMidDays ?? v.midDays;
+    night.sumDays += v.nightMidBjdTdb ?? v.midBjdTdb;
     night.count++;
     otherNights.set(v.localDate, night);
   }
@@ -44,23 +44,23 @@ export function compilePrior(c: CompiledProblem): CompiledPrior {
   for (const v of prior) {
     const t = targetPos.get(v.targetId);
     if (t === undefined) throw new Error(`schedule problem: prior visit names unknown star ${v.targetId}`);
-    if (!(v.sigmaWhiteMps > 0 && Number.isFinite(v.midDays))) throw new Error(`schedule problem: prior visit of ${v.targetId} needs sigmaWhiteMps > 0 and a finite midDays`);
+    if (!(v.whiteSigmaMps > 0 && Number.isFinite(v.midBjdTdb))) throw new Error(`schedule problem: prior visit of ${v.targetId} needs whiteSigmaMps > 0 and a finite midBjdTdb`);
     // Weighted least squares: a visit weighs 1/sigma^2 (common practice).
-    const weight = 1 / (v.sigmaWhiteMps * v.sigmaWhiteMps);
+    const weight = 1 / (v.whiteSigmaMps * v.whiteSigmaMps);
     out.count[t]++;
     out.weightSum[t] += weight;
     const position = problemKey.get(v.localDate);
     if (position !== undefined) out.inNight.set(t * c.nightCount + position, (out.inNight.get(t * c.nightCount + position) ?? 0) + 1);
     const grid = c.grids[t];
-    if (grid) updateSearchStats(out.stats, c.statsOffset[t]!, grid, weight, v.midDays, 1);
+    if (grid) updateSearchStats(out.stats, c.statsOffset[t]!, grid, weight, v.midBjdTdb, 1);
     const model = c.models[t];
     if (!model) continue;
     const other = otherNights.get(v.localDate);
     const night = position ?? other!.key;
-    const nightBjd = position !== undefined ? c.nightMidDays[position]! : other!.sumDays / other!.count;
-    const rows = designRows(model, v.midDays);
+    const nightBjdTdb = position !== undefined ? c.nightMidBjdTdb[position]! : other!.sumDays / other!.count;
+    const rows = designRows(model, v.midBjdTdb);
     if (v.phaseInPrior) keepOffsetAndK(rows, model);
-    out.visits[t]!.push({ rows, offset: 0, weight, night, nightBjd });
+    out.visits[t]!.push({ rows, offset: 0, weight, night, nightBjdTdb });
   }
   return out;
 }

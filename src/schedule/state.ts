@@ -89,7 +89,7 @@ export class PlanState {
 
   /** (K/sigma_K)/goal of planet i (compiled order) for a K variance. */
   private planetFraction(i: number, variance: number): number {
-    return variance === Infinity ? 0 : this.c.planetK[i]! / Math.sqrt(variance) / this.c.planetGoal[i]!;
+    return variance === Infinity ? 0 : this.c.planetK[i]! / Math.sqrt(variance) / this.c.planetGoalSignificance[i]!;
   }
 
   /** (K/sigma_K)/goal of planet i as the plan stands. */
@@ -101,8 +101,8 @@ export class PlanState {
   searchFractionOfGoal(t: number, sign: number, j: number): number {
     const c = this.c;
     const w = sign === 0 ? 0 : c.weight[j]!;
-    const a = sign === 0 ? 0 : c.midDays[j]!;
-    return Math.exp(searchLogScore(this.stats, c.statsOffset[t]!, c.grids[t]!, sign, w, a)) / c.searchGoal[t]!;
+    const a = sign === 0 ? 0 : c.midBjdTdb[j]!;
+    return Math.exp(searchLogScore(this.stats, c.statsOffset[t]!, c.grids[t]!, sign, w, a)) / c.searchGoalSignificance[t]!;
   }
 
   /** Utility of star t with slot j added (sign 1), removed (-1), or as it is (0). */
@@ -153,7 +153,7 @@ export class PlanState {
     const gain = this.gain(j);
     let credit = 0;
     const grid = c.grids[t];
-    if (grid && visits < 3) credit += (c.searchPriority[t]! * goalValue((Math.exp(grid.meanLogK) * Math.sqrt(1.5 * c.weight[j]!)) / c.searchGoal[t]!, this.searchOvershoot[t]!)) / 3;
+    if (grid && visits < 3) credit += (c.searchPriority[t]! * goalValue((Math.exp(grid.meanLogK) * Math.sqrt(1.5 * c.weight[j]!)) / c.searchGoalSignificance[t]!, this.searchOvershoot[t]!)) / 3;
     // Until the star's visits determine its K's (one visit per planet beyond the offset), each is credited as half a pair.
     if (this.information[t] && this.kVariance[c.planetFrom[t]!] === Infinity) {
       const w = c.weight[j]!;
@@ -164,7 +164,7 @@ export class PlanState {
         const m = c.rows[c.rowOffset[j]! + model.kIndex[i]!]!;
         const partner = m >= 0 ? -c.planetMaxAbsSignal[at]! : c.planetMaxAbsSignal[at]!;
         const info = ((w * wp) / (w + wp)) * (m - partner) * (m - partner);
-        credit += 0.5 * c.planetPriority[at]! * goalValue((c.planetK[at]! * Math.sqrt(info)) / c.planetGoal[at]!, this.planetOvershoot[at]!);
+        credit += 0.5 * c.planetPriority[at]! * goalValue((c.planetK[at]! * Math.sqrt(info)) / c.planetGoalSignificance[at]!, this.planetOvershoot[at]!);
       }
     }
     return Math.max(gain, credit);
@@ -231,7 +231,7 @@ export class PlanState {
     if (grid) {
       // No visits left: back to the prior's sums exactly rather than keep the rounding residue of the removals.
       if (mine.length === 0) seedSearchStats(this.stats, c, c.prior, t);
-      else updateSearchStats(this.stats, c.statsOffset[t]!, grid, c.weight[j]!, c.midDays[j]!, sign);
+      else updateSearchStats(this.stats, c.statsOffset[t]!, grid, c.weight[j]!, c.midBjdTdb[j]!, sign);
     }
     const info = this.information[t];
     if (info) {

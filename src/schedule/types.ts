@@ -13,8 +13,8 @@ export interface ScheduleNight {
   clearProbability: number;
   /** Hours of dark time that visits may fill; chosen visits in one night never sum to more. */
   hoursAvailable: number;
-  /** The night's middle in the slots' midDays scale (where nightly activity is evaluated); default: the mean of its slots. */
-  midDays?: number;
+  /** The night's middle on the slots' BJD_TDB scale (where nightly activity is evaluated; the planner gives the dark time's middle as a JD(UTC), within 10 min of it); default: the mean of its slots. */
+  midBjdTdb?: number;
   /**
    * choose-nights: a night already granted (one in progress when re-planning): open from the
    * start, never closed, and not counted in `time.nights`.
@@ -33,9 +33,9 @@ export interface CandidateSlot {
   /** Exposure plus readout plus acquisition. */
   durationSec: number;
   /** The visit's white noise (photon, floor, white part of the jitter); its weight is 1/sigma^2. */
-  sigmaWhiteMps: number;
+  whiteSigmaMps: number;
   /** Mid-exposure time in days, BJD_TDB (search targets: any fixed zero point will do). */
-  midDays: number;
+  midBjdTdb: number;
 }
 
 /** A planet with an ephemeris: scored by the information on its K (src/rv/information.ts). */
@@ -45,7 +45,7 @@ export interface SchedulePlanet {
   priority: number;
   kMps: number;
   /** K / sigma_K to reach. */
-  goal: number;
+  goalSignificance: number;
 }
 
 /** A blind search: phase coverage over a period range; K scales as P^(-1/3) from periodMinDays. */
@@ -54,7 +54,7 @@ export interface ScheduleSearch {
   priority: number;
   /** Semi-amplitude at periodMinDays. */
   kMps: number;
-  goal: number;
+  goalSignificance: number;
   periodMinDays: number;
   periodMaxDays: number;
 }
@@ -83,12 +83,12 @@ export interface PriorVisit {
   targetId: string;
   /** The evening's local date: a visit on a problem night's date shares that night's nightly noise. */
   localDate: string;
-  /** Mid-exposure, BJD_TDB days (the slots' midDays scale). */
-  midDays: number;
+  /** Mid-exposure, BJD_TDB days (the slots' midBjdTdb scale). */
+  midBjdTdb: number;
   /** White noise of the visit (m/s); its weight is 1/sigma^2. */
-  sigmaWhiteMps: number;
-  /** The middle of its night (midDays scale), where nightly activity is evaluated; default: the mean of that date's prior visits. */
-  nightMidDays?: number;
+  whiteSigmaMps: number;
+  /** The middle of its night (midBjdTdb scale), where nightly activity is evaluated; default: the mean of that date's prior visits. */
+  nightMidBjdTdb?: number;
   /**
    * The star's ephemeris prior already holds what this visit says about phases, periods and
    * eccentricity (an orbit fit of its RV): it then informs only the offset and the K's.
@@ -162,7 +162,7 @@ export interface TargetOutcome {
   informationPerMps2: number;
   sigmaKMps: number;
   kOverSigmaK: number;
-  goal: number;
+  goalSignificance: number;
   /** This target's term of the total utility. */
   utility: number;
   /** Ephemeris targets: information / sum w; 1 is the best a white-noise, known-phase schedule can do. */

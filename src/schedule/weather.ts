@@ -61,11 +61,11 @@ export function simulateWeather(problem: ScheduleProblem, result: ScheduleResult
   let utility = 0;
   // The plan state with prior visits alone gives each target's overshoot weight (utility.ts).
   const prior = new PlanState(c, Infinity, overshoot);
-  const count = (slot: number, ratio: number, goal: number, priority: number, weight: number) => {
+  const count = (slot: number, ratio: number, goalSignificance: number, priority: number, weight: number) => {
     sumRatio[slot] += ratio;
     // A hair of tolerance so a plan that reaches the goal exactly counts as reaching it.
-    if (ratio >= goal * (1 - 1e-9)) reached[slot]++;
-    utility += priority * goalValue(ratio / goal, weight);
+    if (ratio >= goalSignificance * (1 - 1e-9)) reached[slot]++;
+    utility += priority * goalValue(ratio / goalSignificance, weight);
   };
   for (let trial = 0; trial < trials; trial++) {
     usedNights.forEach((n, i) => {
@@ -83,7 +83,7 @@ export function simulateWeather(problem: ScheduleProblem, result: ScheduleResult
       }
       for (const j of perTarget[t]!) {
         if (!clear[c.slotNight[j]!]) continue;
-        if (grid) updateSearchStats(stats, 0, grid, c.weight[j]!, c.midDays[j]!, 1);
+        if (grid) updateSearchStats(stats, 0, grid, c.weight[j]!, c.midBjdTdb[j]!, 1);
         if (info) {
           visit.slot = j;
           info.apply(visit, 1);
@@ -93,10 +93,10 @@ export function simulateWeather(problem: ScheduleProblem, result: ScheduleResult
         info.variances(variance);
         for (let i = 0; i < info.planetCount; i++) {
           const at = c.planetFrom[t]! + i;
-          count(at, variance[i] === Infinity ? 0 : c.planetK[at]! / Math.sqrt(variance[i]!), c.planetGoal[at]!, c.planetPriority[at]!, prior.planetOvershoot[at]!);
+          count(at, variance[i] === Infinity ? 0 : c.planetK[at]! / Math.sqrt(variance[i]!), c.planetGoalSignificance[at]!, c.planetPriority[at]!, prior.planetOvershoot[at]!);
         }
       }
-      if (grid) count(searchSlot[t]!, Math.exp(searchLogScore(stats, 0, grid)), c.searchGoal[t]!, c.searchPriority[t]!, prior.searchOvershoot[t]!);
+      if (grid) count(searchSlot[t]!, Math.exp(searchLogScore(stats, 0, grid)), c.searchGoalSignificance[t]!, c.searchPriority[t]!, prior.searchOvershoot[t]!);
     }
   }
   return {

@@ -15,7 +15,7 @@ const CAMPAIGN = (overrides: Record<string, string> = {}) => {
     .map(([k, v]) => `${k}: ${v}`)
     .join('\n');
 };
-const HEADER = 'id,ra,dec,vmag,teffK,periodDays,tcBjdTdb,planetMassEarth,ecc';
+const HEADER = 'id,ra,dec,vmag,teffK,periodDays,tcBjdTdb,planetMsiniEarth,ecc';
 const GOOD_ROW = 'Alba,10:00:00,-30:00:00,9.5,5200,4.1,2461000.5,10,';
 const targets = (...rows: string[]) => `${HEADER}\n${GOOD_ROW}\n${rows.join('\n')}\n`;
 
@@ -35,7 +35,7 @@ const CASES: [string, string[], RegExp][] = [
   ['Dec +95 deg', planCase({ 'targets.csv': targets('Bruma,11:00:00,+95:00:00,9,5000,,,,') }), /^crest: targets\.csv: row 2 \(line 3\): dec = "\+95:00:00"/],
   ['negative period in the target list', planCase({ 'targets.csv': targets('Bruma,11:00:00,-20:00:00,9,5000,-3,2461000.1,5,') }), /^crest: targets\.csv: row 2 \(line 3\): periodDays = "-3"/],
   ['a star too hot for the RV-information table', planCase({ 'targets.csv': targets('Bruma,11:00:00,-20:00:00,9,9500,3,2461000.1,5,') }), /^crest: targets\.csv: row 2 \(line 3\): teffK = 9500: outside 3000-8000 K, .*\(instrument stable-2m\)$/],
-  ['observed file: an RV without its error', planCase({ 'campaign.yaml': `${CAMPAIGN()}\nobserved: observed.csv`, 'observed.csv': 'target,midBjdTdb,instrument,rvMps,rvErrMps\nAlba,2461480.6,spec,3.1,\n' }), /^crest: observed\.csv: row 1 \(line 2\): rvErrMps/],
+  ['observed file: an RV without its error', planCase({ 'campaign.yaml': `${CAMPAIGN()}\nobserved: observed.csv`, 'observed.csv': 'target,midBjdTdb,instrument,rvMps,rvErrorMps\nAlba,2461480.6,spec,3.1,\n' }), /^crest: observed\.csv: row 1 \(line 2\): rvErrorMps/],
   ['observed file: an unknown star', planCase({ 'campaign.yaml': `${CAMPAIGN()}\nobserved: observed.csv`, 'observed.csv': 'target,midUtc,instrument\nNessa,2027-03-02T03:00:00Z,spec\n' }), /^crest: observed\.csv: row 1 \(line 2\): target = "Nessa"/],
   ['--now without a zone', ['plan', '--now', '2027-03-15T02:00'], /^crest: command line: --now = "2027-03-15T02:00"/],
   ['--lost with a bad date', ['plan', '--lost', '2027-02-30'], /^crest: command line: --lost = "2027-02-30"/],

@@ -47,8 +47,8 @@ describe('crest map', () => {
     // Defaults from the search spec (2 to 40 d) and its mass (8 Earth masses: half to eight times).
     expect(a.targets[0].periodsDays[0]).toBeCloseTo(2, 9);
     expect(a.targets[0].periodsDays[3]).toBeCloseTo(40, 9);
-    expect(a.targets[0].massesEarth[0]).toBeCloseTo(4, 9);
-    expect(a.targets[0].massesEarth[4]).toBeCloseTo(64, 9);
+    expect(a.targets[0].msinisEarth[0]).toBeCloseTo(4, 9);
+    expect(a.targets[0].msinisEarth[4]).toBeCloseTo(64, 9);
     expect(existsSync(path.join(dir, 'one', 'map-alba.svg'))).toBe(true);
   });
 
@@ -76,7 +76,7 @@ describe('crest map', () => {
     const r = await runCliInProcess(['map', '--plan', planFile, '--target', 'Teyu-3', ...small, '--csv', '--out', path.join(dir, 'csv')]);
     expect(r.status).toBe(0);
     const lines = r.stdout.trim().split('\r\n');
-    expect(lines[0]).toBe('target,kind,method,periodDays,massEarth,detectionProbability');
+    expect(lines[0]).toBe('target,kind,method,periodDays,msiniEarth,detectionProbability');
     expect(lines).toHaveLength(1 + 2 * 4 * 5);
     expect(lines[1]).toMatch(/^Teyu-3,ephemeris,analytic,/);
   });

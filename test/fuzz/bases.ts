@@ -5,7 +5,7 @@ import { fixturePlan } from '../report/fixture.js';
 
 export const TARGETS_CSV = [
   '# invented stars',
-  'id,ra,dec,vmag,teffK,periodDays,tcBjdTdb,planetMassEarth,ecc,searchPeriodMinDays,searchPeriodMaxDays,searchMassEarth',
+  'id,ra,dec,vmag,teffK,periodDays,tcBjdTdb,planetMsiniEarth,ecc,searchPeriodMinDays,searchPeriodMaxDays,searchMsiniEarth',
   'Orvel-2,10:12:30.5,-31:04:00,9.4,5300,4.217,2461000.52,12,0.1,,,',
   'Sanu,161.2,-22.5,8.1,4900,,,,,2,40,8',
   '"Tekla b",11:40:00,-12:30:00,10.2,5900,2.95,2461001.11,30,,,,',
@@ -58,7 +58,7 @@ export const INSTRUMENT_JSON = `${JSON.stringify(
   ],
   "spectralRegion": "optical",
   "reference": {
-    "sigmaMps": 1.43,
+    "photonSigmaMps": 1.43,
     "mag": 8,
     "exposureSec": 600,
     "airmass": 1.2,
@@ -103,7 +103,7 @@ export const INSTRUMENT_JSON = `${JSON.stringify(
 )}\n`;
 
 export const RV_CSV = [
-  'bjd,rvMps,sigmaMps',
+  'bjdTdb,rvMps,rvErrorMps',
   ...[0, 1.1, 2.3, 4.0, 5.2, 7.9, 9.1, 12.6, 15.0, 18.4].map((d, i) => `${(2461000.5 + d).toFixed(4)},${(3 * Math.sin(d)).toFixed(2)},${(1.5 + (i % 3) * 0.2).toFixed(1)}`),
   '',
 ].join('\n');
@@ -114,7 +114,7 @@ export const PLAN_JSON = renderPlanJson(fixturePlan());
 /** Visits already made of the stars of TARGETS_CSV: BJD and UTC rows, with and without RVs. */
 export const OBSERVED_CSV = [
   '# invented visits',
-  'target,midBjdTdb,midUtc,instrument,rvMps,rvErrMps',
+  'target,midBjdTdb,midUtc,instrument,rvMps,rvErrorMps',
   'Orvel-2,2461000.6123,,fuzz-echelle,-3.2,1.6',
   'Sanu,,2027-03-01T03:40:00Z,fuzz-echelle,,',
   '"Tekla b",,2027-03-01T05:10:30-03:00,fuzz-echelle,12.5,2.1',

@@ -19,13 +19,13 @@ async function passes(name: string, c: FuzzCase) {
 }
 
 function rvSeries(rows: number): string {
-  const lines = ['bjd,rvMps,sigmaMps'];
+  const lines = ['bjdTdb,rvMps,rvErrorMps'];
   for (let i = 0; i < rows; i++) lines.push(`${(2461000 + (i * 100) / rows).toFixed(6)},${(3 * Math.sin(i / 7)).toFixed(3)},2`);
   return `${lines.join('\n')}\n`;
 }
 
 function targetList(rows: number): string {
-  const lines = ['id,ra,dec,vmag,teffK,periodDays,tcBjdTdb,planetMassEarth'];
+  const lines = ['id,ra,dec,vmag,teffK,periodDays,tcBjdTdb,planetMsiniEarth'];
   for (let i = 0; i < rows; i++) {
     const planet = i % 2 ? ',,' : `${2 + (i % 50)},2461000.5,${5 + (i % 40)}`;
     lines.push(`Star-${i},${i % 360},${(i % 170) - 85},${6 + (i % 8)},${3500 + (i % 3000)},${planet}`);

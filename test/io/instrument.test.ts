@@ -15,7 +15,7 @@ const GOOD = {
   wavelengthNm: 550,
   coverageNm: [400, 700],
   spectralRegion: 'optical',
-  reference: { sigmaMps: 5, mag: 8, exposureSec: 600, airmass: 1.2, seeingArcsec: 1.5, snrPerPixel: 60, teffK: 5300, vsiniKms: 2 },
+  reference: { photonSigmaMps: 5, mag: 8, exposureSec: 600, airmass: 1.2, seeingArcsec: 1.5, snrPerPixel: 60, teffK: 5300, vsiniKms: 2 },
   readNoiseE: 4,
   pixelsPerResolutionElement: 4,
   spatialPixels: 6,
@@ -41,7 +41,7 @@ describe('instrument profiles', () => {
     expect(instruments.some((i) => i.spectralRegion === 'near-infrared')).toBe(true);
     // Common practice: at a common star and exposure, larger optical telescopes give smaller photon noise.
     const optical = instruments.filter((i) => i.spectralRegion === 'optical').sort((a, b) => a.apertureM - b.apertureM);
-    const sigma = (i: Instrument) => visitPrecision(i, { vmag: 8, teffK: 5800, vsiniKms: 2, jitterMps: 0 }, 900, 1.2).photonMps;
+    const sigma = (i: Instrument) => visitPrecision(i, { vmag: 8, teffK: 5800, vsiniKms: 2, jitterMps: 0 }, 900, 1.2).photonSigmaMps;
     for (let k = 1; k < optical.length; k++) expect(sigma(optical[k]!)).toBeLessThan(sigma(optical[k - 1]!));
   });
 

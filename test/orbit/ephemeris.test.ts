@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { nearestEpoch, phaseAt, phaseErrCycles, tcAtEpochBjd, tcErrAtEpochDays } from '../../src/orbit/ephemeris.js';
+import { nearestEpoch, phaseAt, phaseErrCycles, tcAtEpochBjdTdb, tcErrAtEpochDays } from '../../src/orbit/ephemeris.js';
 import type { Ephemeris } from '../../src/model.js';
 
 const EPH: Ephemeris = { tcBjdTdb: 2_461_342.6124, tcErrDays: 0.0011, periodDays: 3.41872, periodErrDays: 0.00012 };
@@ -23,7 +23,7 @@ describe('ephemeris propagation', () => {
     expect(nearestEpoch(EPH, EPH.tcBjdTdb + 100 * EPH.periodDays + 1.6)).toBe(100);
     expect(nearestEpoch(EPH, EPH.tcBjdTdb + 100 * EPH.periodDays + 1.8)).toBe(101);
     expect(nearestEpoch(EPH, EPH.tcBjdTdb - 7 * EPH.periodDays)).toBe(-7);
-    expect(tcAtEpochBjd(EPH, -7)).toBeCloseTo(EPH.tcBjdTdb - 7 * 3.41872, 9);
+    expect(tcAtEpochBjdTdb(EPH, -7)).toBeCloseTo(EPH.tcBjdTdb - 7 * 3.41872, 9);
   });
 
   it('grows σ_Tc(n) as √(σ_T0² + n² σ_P²), matching a Monte Carlo of the ephemeris', () => {
@@ -34,7 +34,7 @@ describe('ephemeris propagation', () => {
       let sumSq = 0;
       const trials = 40_000;
       for (let i = 0; i < trials; i++) {
-        const tc = tcAtEpochBjd({ ...EPH, tcBjdTdb: EPH.tcBjdTdb + EPH.tcErrDays * draw(), periodDays: EPH.periodDays + EPH.periodErrDays * draw() }, n) - tcAtEpochBjd(EPH, n);
+        const tc = tcAtEpochBjdTdb({ ...EPH, tcBjdTdb: EPH.tcBjdTdb + EPH.tcErrDays * draw(), periodDays: EPH.periodDays + EPH.periodErrDays * draw() }, n) - tcAtEpochBjdTdb(EPH, n);
         sum += tc;
         sumSq += tc * tc;
       }
@@ -60,8 +60,8 @@ describe('ephemeris propagation', () => {
   it('gives the phase error σ_Tc(n) / P at a transit epoch, and more between epochs later on', () => {
     // Property: at an integer epoch the phase error is the transit-time error in cycles.
     for (const n of [-40, 0, 250]) {
-      expect(phaseErrCycles(EPH, tcAtEpochBjd(EPH, n))).toBeCloseTo(tcErrAtEpochDays(EPH, n) / EPH.periodDays, 12);
+      expect(phaseErrCycles(EPH, tcAtEpochBjdTdb(EPH, n))).toBeCloseTo(tcErrAtEpochDays(EPH, n) / EPH.periodDays, 12);
     }
-    expect(phaseErrCycles(EPH, tcAtEpochBjd(EPH, 250.5))).toBeGreaterThan(phaseErrCycles(EPH, tcAtEpochBjd(EPH, 250)));
+    expect(phaseErrCycles(EPH, tcAtEpochBjdTdb(EPH, 250.5))).toBeGreaterThan(phaseErrCycles(EPH, tcAtEpochBjdTdb(EPH, 250)));
   });
 });

@@ -1,12 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { periastronFromConjunctionBjd } from '../../src/orbit/periastron-time.js';
+import { periastronFromConjunctionBjdTdb } from '../../src/orbit/periastron-time.js';
 import { radialVelocityMps, trueAnomalyAtRad, type RvOrbit } from '../../src/orbit/rv-curve.js';
 
 const DEG = Math.PI / 180;
 const TC = 2_461_400.25;
 
-function orbitFromTc(ecc: number, omegaDeg: number, tcBjd = TC, periodDays = 6.3, kMps = 12): RvOrbit {
-  return { kMps, periodDays, ecc, omegaDeg, gammaMps: -3.5, periastronBjd: periastronFromConjunctionBjd({ tcBjd, periodDays, ecc, omegaDeg }) };
+function orbitFromTc(ecc: number, omegaDeg: number, tcBjdTdb = TC, periodDays = 6.3, kMps = 12): RvOrbit {
+  return { kMps, periodDays, ecc, omegaDeg, gammaMps: -3.5, periastronBjdTdb: periastronFromConjunctionBjdTdb({ tcBjdTdb, periodDays, ecc, omegaDeg }) };
 }
 
 /**

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { radialVelocityMps } from '../../src/orbit/rv-curve.js';
-import { periastronFromConjunctionBjd } from '../../src/orbit/periastron-time.js';
+import { periastronFromConjunctionBjdTdb } from '../../src/orbit/periastron-time.js';
 import { signalShape } from '../../src/orbit/signal-shape.js';
 
 
@@ -18,7 +18,7 @@ describe('signal shape of a Keplerian orbit against phase from transit', () => {
       const shape = signalShape(ecc, omegaDeg);
       const tc = 2461400.25;
       const periodDays = 7.3;
-      const orbit = { kMps: 1, periodDays, ecc, omegaDeg, periastronBjd: periastronFromConjunctionBjd({ tcBjd: tc, periodDays, ecc, omegaDeg }) };
+      const orbit = { kMps: 1, periodDays, ecc, omegaDeg, periastronBjdTdb: periastronFromConjunctionBjdTdb({ tcBjdTdb: tc, periodDays, ecc, omegaDeg }) };
       for (const phase of [0.05, 0.3, 0.55, 0.8]) expect(shape.at(phase)).toBeCloseTo(radialVelocityMps(orbit, tc + phase * periodDays), 9);
       // At conjunction nu + omega = pi/2, so v = K e cos(omega), and dv/dnu = -K sin(nu + omega) = -K (geometry).
       expect(shape.at(0)).toBeCloseTo(ecc * Math.cos((omegaDeg * Math.PI) / 180), 9);
@@ -29,7 +29,7 @@ describe('signal shape of a Keplerian orbit against phase from transit', () => {
   it('has a slope equal to a central difference of the RV curve (e up to 0.8)', () => {
     for (const [ecc, omegaDeg] of [[0.5, 120], [0.8, 300], [0.05, 10]] as const) {
       const periodDays = 3.1;
-      const orbit = { kMps: 1, periodDays, ecc, omegaDeg, periastronBjd: periastronFromConjunctionBjd({ tcBjd: 0, periodDays, ecc, omegaDeg }) };
+      const orbit = { kMps: 1, periodDays, ecc, omegaDeg, periastronBjdTdb: periastronFromConjunctionBjdTdb({ tcBjdTdb: 0, periodDays, ecc, omegaDeg }) };
       const shape = signalShape(ecc, omegaDeg);
       const h = 1e-6;
       for (const phase of [0.02, 0.37, 0.71, 0.9]) {

@@ -16,7 +16,7 @@ describe('orbit summary', () => {
   it('projects the mass and the star orbit with sin i', () => {
     // Property: m sin i and a★ sin i scale with sin 30° = 1/2.
     const s = summarizeOrbit({ starMassSun: 0.6, planetMassEarth: 40, periodDays: 9, inclinationDeg: 30 });
-    expect(s.massSinIEarth).toBeCloseTo(20, 12);
+    expect(s.msiniEarth).toBeCloseTo(20, 12);
     expect(s.starOrbitProjectedKm / s.starOrbitRadiusKm).toBeCloseTo(0.5, 12);
   });
 });

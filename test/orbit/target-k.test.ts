@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { parseTargets } from '../../src/io/targets.js';
 import { targetKMps } from '../../src/orbit/target-k.js';
 
-const HEADER = 'id,ra,dec,vmag,teffK,massSun,periodDays,tcBjdTdb,planetMassEarth,planetKMps,ecc';
+const HEADER = 'id,ra,dec,vmag,teffK,massSun,periodDays,tcBjdTdb,planetMsiniEarth,planetKMps,ecc';
 
 describe('K of a target list row', () => {
   it('uses the given K, or computes it from the planet mass with the eccentricity', () => {

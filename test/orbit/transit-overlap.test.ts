@@ -6,14 +6,14 @@ import { createRng } from '../../src/rv/random.js';
 const RULE: TransitRule = { zScore: 1.96, maxOrbitFraction: 0.2 };
 
 /** Slow reference: every epoch from well before to well after the interval, each widened by z of its own errors unless that removes over 20% of the orbit. */
-function overlapsByScan(eph: Ephemeris, startBjd: number, endBjd: number): boolean {
-  const first = Math.floor((startBjd - eph.tcBjdTdb) / eph.periodDays) - 3;
-  const last = Math.ceil((endBjd - eph.tcBjdTdb) / eph.periodDays) + 3;
+function overlapsByScan(eph: Ephemeris, startBjdTdb: number, endBjdTdb: number): boolean {
+  const first = Math.floor((startBjdTdb - eph.tcBjdTdb) / eph.periodDays) - 3;
+  const last = Math.ceil((endBjdTdb - eph.tcBjdTdb) / eph.periodDays) + 3;
   for (let n = first; n <= last; n++) {
     const tc = eph.tcBjdTdb + n * eph.periodDays;
     const margin = eph.transitDurationHours! / 48 + RULE.zScore * Math.sqrt(eph.tcErrDays ** 2 + (n * eph.periodErrDays) ** 2);
     if (2 * margin > RULE.maxOrbitFraction * eph.periodDays) continue;
-    if (startBjd < tc + margin && endBjd > tc - margin) return true;
+    if (startBjdTdb < tc + margin && endBjdTdb > tc - margin) return true;
   }
   return false;
 }

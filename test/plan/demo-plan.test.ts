@@ -72,8 +72,8 @@ describe('demo plan and the site seeing', () => {
       const snr = s / Math.sqrt(s + skyElectrons + readVarianceE2);
       expect(v.snrPerPixel / snr, v.startUtc).toBeCloseTo(1, 9);
       // σ_photon ∝ 1/(S/N) at a fixed spectrum ([Bouchy2001]); the floor adds in quadrature.
-      const photonMps = (atReference.photonMps * atReference.snrPerPixel) / snr;
-      expect(v.sigmaMps / Math.hypot(photonMps, instrument.floorMps), v.startUtc).toBeCloseTo(1, 9);
+      const photonSigmaMps = (atReference.photonSigmaMps * atReference.snrPerPixel) / snr;
+      expect(v.visitSigmaMps / Math.hypot(photonSigmaMps, instrument.floorMps), v.startUtc).toBeCloseTo(1, 9);
       if (v.snrPerPixel > atReference.snrPerPixel) better++;
     }
     // 0.87 arcsec is a little better than the reference's 0.90 arcsec at the zenith: every visit gains.

@@ -39,9 +39,9 @@ describe('crest next against brute force', () => {
     for (const star of inputs.stars.filter((s) => s.scheduleTarget)) {
       const open = reference.some((w) => w.targetId === star.starId && w.start.getTime() <= at.getTime() - EDGE_MIN * 60_000 && w.end.getTime() >= at.getTime() + (star.durationSec + 600 + EDGE_MIN * 60) * 1000);
       // Visits are kept out of predicted transits (candidates.ts): such a star is not open.
-      const fromBjd = starBjdTdb(at, star.star);
-      const toBjd = fromBjd + (star.durationSec + 600) / 86_400;
-      const inTransit = star.rows.some((r) => r.target.ephemeris?.transitDurationHours !== undefined && overlapsTransit(r.target.ephemeris, fromBjd, toBjd, transitRule(inputs.campaign)));
+      const fromBjdTdb = starBjdTdb(at, star.star);
+      const toBjdTdb = fromBjdTdb + (star.durationSec + 600) / 86_400;
+      const inTransit = star.rows.some((r) => r.target.ephemeris?.transitDurationHours !== undefined && overlapsTransit(r.target.ephemeris, fromBjdTdb, toBjdTdb, transitRule(inputs.campaign)));
       if (open && !inTransit) expect(offered.has(star.starId), `${star.starId} open at ${iso}`).toBe(true);
     }
     if (answer.now.length === 0) return;

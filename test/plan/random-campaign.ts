@@ -50,13 +50,13 @@ function ephemerisTarget(rng: Rng, id: string, site: Site, windowStartJd: number
     tcBjdTdb: windowStartJd - between(rng, 10, 400),
     tcErrDays: between(rng, 0.0005, 0.005),
   };
-  target.planet = rng.uniform() < 0.7 ? { massEarth: between(rng, 5, 150), ecc: 0, omegaDeg: 90 } : { kMps: between(rng, 2, 30), ecc: 0, omegaDeg: 90 };
+  target.planet = rng.uniform() < 0.7 ? { msiniEarth: between(rng, 5, 150), ecc: 0, omegaDeg: 90 } : { kMps: between(rng, 2, 30), ecc: 0, omegaDeg: 90 };
   return target;
 }
 
 function searchTarget(rng: Rng, id: string, site: Site, windowStart: string): Target {
   const target = star(rng, id, site, windowStart);
-  target.search = { periodMinDays: between(rng, 1, 4), periodMaxDays: between(rng, 8, 60), massEarth: between(rng, 5, 30) };
+  target.search = { periodMinDays: between(rng, 1, 4), periodMaxDays: between(rng, 8, 60), msiniEarth: between(rng, 5, 30) };
   return target;
 }
 

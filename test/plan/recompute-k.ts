@@ -16,7 +16,7 @@ export interface CsvVisit {
   midBjdTdb: number;
   /** Per planet: phase and its error, from the `phases` column. */
   phases: Map<string, { phase: number; phaseErr: number }>;
-  sigmaWhiteMps: number;
+  whiteSigmaMps: number;
 }
 
 /**
@@ -50,7 +50,7 @@ export function csvVisits(rows: Record<string, string>[]): CsvVisit[] {
     startUtc: r.startUtc!,
     midBjdTdb: Number(r.midBjdTdb),
     phases: parsePhases(r.phases!),
-    sigmaWhiteMps: Number(r.sigmaWhiteMps),
+    whiteSigmaMps: Number(r.whiteSigmaMps),
   }));
 }
 
@@ -63,7 +63,7 @@ export function kOverSigmaKFromCsv(plan: Plan, summary: TargetSummary, visits: C
   if (mine.length === 0) return 0;
   const variance = denseKVariances(
     model,
-    mine.map((v) => ({ bjd: v.midBjdTdb, sigmaMps: v.sigmaWhiteMps, night: nightPos.get(v.localDate)!, nightBjd: nightMiddleJd(plan.nights[nightPos.get(v.localDate)!]) })),
+    mine.map((v) => ({ bjdTdb: v.midBjdTdb, whiteSigmaMps: v.whiteSigmaMps, night: nightPos.get(v.localDate)!, nightBjdTdb: nightMiddleJd(plan.nights[nightPos.get(v.localDate)!]) })),
   )[model.planets.findIndex((p) => p.input.id === summary.targetId)]!;
   return variance === Infinity ? 0 : summary.kMps! / Math.sqrt(variance);
 }

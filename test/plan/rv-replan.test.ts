@@ -6,7 +6,7 @@
 // would lie about 0.2 cycles off. Seeded; every value invented.
 import { describe, expect, it } from 'vitest';
 import { radialVelocityMps } from '../../src/orbit/rv-curve.js';
-import { periastronFromConjunctionBjd } from '../../src/orbit/periastron-time.js';
+import { periastronFromConjunctionBjdTdb } from '../../src/orbit/periastron-time.js';
 import { buildStarModel } from '../../src/rv/information-model.js';
 import { fitOrbits, type FitPoint } from '../../src/rv/orbit-fit.js';
 import { createRng, type Rng } from '../../src/rv/random.js';
@@ -24,8 +24,8 @@ const NIGHTS = 35;
 const PLANNED_VISITS = 10;
 
 /** Candidate slots every 20 min in an 8-hour window a night. */
-function nightSlots(n: number): { midDays: number }[] {
-  return Array.from({ length: 24 }, (_, k) => ({ midDays: BJD0 + n + 0.05 + k / 72 }));
+function nightSlots(n: number): { midBjdTdb: number }[] {
+  return Array.from({ length: 24 }, (_, k) => ({ midBjdTdb: BJD0 + n + 0.05 + k / 72 }));
 }
 
 /** Distance of a phase (cycles) to the nearer quadrature, 0.25 or 0.75. */
@@ -37,28 +37,28 @@ const fromQuadrature = (phase: number) => {
 function trial(rng: Rng, fitted: boolean): number {
   const tcCatalogue = BJD0 - 20 * PERIOD_DAYS;
   const tcTrue = tcCatalogue + 2 * TC_ERR_DAYS * (rng.uniform() < 0.5 ? 1 : -1);
-  const orbit = { kMps: K_MPS, periodDays: PERIOD_DAYS, ecc: 0, omegaDeg: 90, periastronBjd: periastronFromConjunctionBjd({ tcBjd: tcTrue, periodDays: PERIOD_DAYS, ecc: 0, omegaDeg: 90 }) };
+  const orbit = { kMps: K_MPS, periodDays: PERIOD_DAYS, ecc: 0, omegaDeg: 90, periastronBjdTdb: periastronFromConjunctionBjdTdb({ tcBjdTdb: tcTrue, periodDays: PERIOD_DAYS, ecc: 0, omegaDeg: 90 }) };
   // One visit on each of the first week's nights at a random time of its window.
   const points: FitPoint[] = Array.from({ length: FIRST_WEEK }, (_, n) => {
     const bjd = BJD0 + n + 0.05 + 0.33 * rng.uniform();
-    return { bjd, rvMps: radialVelocityMps(orbit, bjd) + SIGMA_MPS * rng.normal() - 4.2, rvErrMps: SIGMA_MPS, instrument: 'spec' };
+    return { bjdTdb: bjd, rvMps: radialVelocityMps(orbit, bjd) + SIGMA_MPS * rng.normal() - 4.2, rvErrorMps: SIGMA_MPS, instrument: 'spec' };
   });
   const catalogue = { id: 'b', periodDays: PERIOD_DAYS, periodErrDays: 0, tcBjdTdb: tcCatalogue, tcErrDays: TC_ERR_DAYS, kMps: K_MPS, ecc: 0, omegaDeg: 90 };
   const fit = fitOrbits([catalogue], points, 0).planets[0]!;
-  const eph = fitted ? { tcBjd: fit.tcBjdTdb, tcErrDays: fit.tcErrDays, kMps: fit.kMps } : { tcBjd: tcCatalogue, tcErrDays: TC_ERR_DAYS, kMps: K_MPS };
+  const eph = fitted ? { tcBjdTdb: fit.tcBjdTdb, tcErrDays: fit.tcErrDays, kMps: fit.kMps } : { tcBjdTdb: tcCatalogue, tcErrDays: TC_ERR_DAYS, kMps: K_MPS };
   const model = buildStarModel({
-    planets: [{ id: 'b', kMps: eph.kMps, periodDays: PERIOD_DAYS, tcBjd: eph.tcBjd, periodErrDays: 0, tcErrDays: eph.tcErrDays, ecc: 0, omegaDeg: 90 }],
+    planets: [{ id: 'b', kMps: eph.kMps, periodDays: PERIOD_DAYS, tcBjdTdb: eph.tcBjdTdb, periodErrDays: 0, tcErrDays: eph.tcErrDays, ecc: 0, omegaDeg: 90 }],
     nightlyJitterMps: 0,
-    spanBjd: [BJD0 + FIRST_WEEK, BJD0 + NIGHTS],
+    spanBjdTdb: [BJD0 + FIRST_WEEK, BJD0 + NIGHTS],
   });
   const slots: CandidateSlot[] = [];
   for (let n = FIRST_WEEK; n < NIGHTS; n++) {
-    nightSlots(n).forEach(({ midDays }, k) => slots.push({ slotId: `${n}/${k}`, targetId: 'S', nightIndex: n, startMs: (midDays - 2440587.5) * 86_400_000, durationSec: 900, sigmaWhiteMps: SIGMA_MPS, midDays }));
+    nightSlots(n).forEach(({ midBjdTdb }, k) => slots.push({ slotId: `${n}/${k}`, targetId: 'S', nightIndex: n, startMs: (midBjdTdb - 2440587.5) * 86_400_000, durationSec: 900, whiteSigmaMps: SIGMA_MPS, midBjdTdb }));
   }
-  const prior: PriorVisit[] = points.map((p, n) => ({ targetId: 'S', localDate: `week1-${n}`, midDays: p.bjd, sigmaWhiteMps: SIGMA_MPS, ...(fitted ? { phaseInPrior: true } : {}) }));
+  const prior: PriorVisit[] = points.map((p, n) => ({ targetId: 'S', localDate: `week1-${n}`, midBjdTdb: p.bjdTdb, whiteSigmaMps: SIGMA_MPS, ...(fitted ? { phaseInPrior: true } : {}) }));
   const problem: ScheduleProblem = {
-    nights: Array.from({ length: NIGHTS - FIRST_WEEK }, (_, i) => ({ index: FIRST_WEEK + i, localDate: `n${FIRST_WEEK + i}`, clearProbability: 1, hoursAvailable: 8, midDays: BJD0 + FIRST_WEEK + i + 0.2 })),
-    targets: [{ id: 'S', planets: [{ id: 'b', priority: 1, kMps: eph.kMps, goal: 50 }], model }],
+    nights: Array.from({ length: NIGHTS - FIRST_WEEK }, (_, i) => ({ index: FIRST_WEEK + i, localDate: `n${FIRST_WEEK + i}`, clearProbability: 1, hoursAvailable: 8, midBjdTdb: BJD0 + FIRST_WEEK + i + 0.2 })),
+    targets: [{ id: 'S', planets: [{ id: 'b', priority: 1, kMps: eph.kMps, goalSignificance: 50 }], model }],
     slots,
     time: { mode: 'hours', hours: (PLANNED_VISITS * 900) / 3600 + 1e-6 },
     constraints: { minSpacingHours: 20, onePerNight: true },
@@ -67,7 +67,7 @@ function trial(rng: Rng, fitted: boolean): number {
   const byId = new Map(slots.map((s) => [s.slotId, s]));
   const chosen = optimiseSchedule(problem, { seed: 1, restarts: 2 }).slotIds.map((id) => byId.get(id)!);
   expect(chosen.length).toBe(PLANNED_VISITS);
-  return chosen.reduce((sum, s) => sum + fromQuadrature((s.midDays - tcTrue) / PERIOD_DAYS), 0) / chosen.length;
+  return chosen.reduce((sum, s) => sum + fromQuadrature((s.midBjdTdb - tcTrue) / PERIOD_DAYS), 0) / chosen.length;
 }
 
 describe('re-planning with the fitted ephemeris', () => {

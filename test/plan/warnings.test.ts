@@ -60,7 +60,7 @@ describe('phase lost by the window\'s end', () => {
     // N K^2 / (2 sigma^2) (common practice), so sigma_phi = 0.05 cycle takes N = 2 sigma^2 / (2 pi K 0.05)^2.
     const target = campaign.targets.find((t) => t.id === 'Vago-2')!;
     const exposureSec = plan.visits.find((v) => v.starId === 'Vago-2')?.exposureSec ?? 600;
-    const sigma = visitPrecision(campaign.instrument, target, exposureSec, 1.2).effMps;
+    const sigma = visitPrecision(campaign.instrument, target, exposureSec, 1.2).effectiveSigmaMps;
     const n = Math.max(3, Math.ceil((2 * sigma ** 2) / (2 * Math.PI * summary.kMps! * 0.05) ** 2));
     expect(warningsOf('Vago-2').some((w) => w.includes('phase must be recovered first') && w.includes(`about ${n} visits spread in phase`))).toBe(true);
   });
@@ -75,13 +75,13 @@ describe('goal not reached on the demo cut to 7 nights', () => {
   it('names the visits at quadratures that would reach it: N = ceil((n sigma / K)^2) (docs/references.md [Visits-needed])', () => {
     const demo = { ...readCampaign(DEMO_CAMPAIGN), time: { mode: 'choose-nights', nights: 7 } as const };
     const demoPlan = buildPlan(demo, { weatherTrials: 10 });
-    const short = demoPlan.targets.filter((t) => t.kind === 'ephemeris' && t.kOverSigmaK! < t.goal!);
+    const short = demoPlan.targets.filter((t) => t.kind === 'ephemeris' && t.kOverSigmaK! < t.goalSignificance!);
     expect(short.length).toBeGreaterThan(0);
     for (const t of short) {
       const target = demo.targets.find((x) => x.id === t.targetId)!;
       const exposureSec = demoPlan.visits.find((v) => v.starId === t.starId)!.exposureSec;
-      const sigma = visitPrecision(demo.instrument, target, exposureSec, 1.2).effMps;
-      const n = Math.ceil((t.goal! * sigma / t.kMps!) ** 2);
+      const sigma = visitPrecision(demo.instrument, target, exposureSec, 1.2).effectiveSigmaMps;
+      const n = Math.ceil((t.goalSignificance! * sigma / t.kMps!) ** 2);
       expect(t.warnings.join(' ')).toContain(`about ${n} visits at quadratures`);
     }
   });
@@ -90,7 +90,7 @@ describe('goal not reached on the demo cut to 7 nights', () => {
 describe('a window without darkness', () => {
   it('78 deg N in June: no dark span on any night, no visit, and both plan-wide warnings', () => {
     const dir = mkdtempSync(path.join(tmpdir(), 'crest-arctic-'));
-    writeFileSync(path.join(dir, 'targets.csv'), 'id,ra,dec,vmag,teffK,periodDays,tcBjdTdb,planetMassEarth\nNorda-1,18:00:00,+60:00:00,9,5200,4.2,2461500.3,20\n');
+    writeFileSync(path.join(dir, 'targets.csv'), 'id,ra,dec,vmag,teffK,periodDays,tcBjdTdb,planetMsiniEarth\nNorda-1,18:00:00,+60:00:00,9,5200,4.2,2461500.3,20\n');
     writeFileSync(
       path.join(dir, 'campaign.yaml'),
       `name: Arctic\nsite: ${path.resolve('test/fixtures/sites/high-arctic.json')}\ninstrument: stable-2m\ntargets: targets.csv\nwindow: { start: 2027-06-15, end: 2027-06-18 }\ntime: { mode: choose-nights, nights: 2 }\n`,

@@ -133,7 +133,7 @@ describe('normal distribution function', () => {
 
 describe('mass limits', () => {
   it('the smallest detectable mass gives back K = n σ_K through the forward K (round trip)', () => {
-    const rows = massLimitTable({ starMassSun: 0.8, sigmaMps: 2.2, visits: 40, significance: 5, periodsDays: [1, 20, 700], ecc: 0.3 });
+    const rows = massLimitTable({ starMassSun: 0.8, whiteSigmaMps: 2.2, visits: 40, goalSignificance: 5, periodsDays: [1, 20, 700], ecc: 0.3 });
     for (const row of rows) {
       expect(row.kMinRandomMps).toBeCloseTo(5 * 2.2 * Math.sqrt(2 / 39), 12);
       expect(row.kMinQuadratureMps).toBeCloseTo(5 * 2.2 / Math.sqrt(40), 12);

@@ -18,17 +18,17 @@ const within20 = (value: number, published: number) => expect(Math.abs(value / p
 describe('the 1 m/s class against published figures', () => {
   it('G2 dwarf, V = 6, 60 s, airmass 1.2, 1" seeing: 0.90 m/s and S/N 110 per pixel at 550 nm [HARPSOverview]', () => {
     const b = photonNoise(stable4m, g2, 60, 1.2, { seeingArcsec: 1.0 / 1.2 ** 0.6 });
-    expect(b.photonMps).toBeGreaterThanOrEqual(0.7);
-    expect(b.photonMps).toBeLessThanOrEqual(1.15);
-    within20(b.photonMps, 0.9);
+    expect(b.photonSigmaMps).toBeGreaterThanOrEqual(0.7);
+    expect(b.photonSigmaMps).toBeLessThanOrEqual(1.15);
+    within20(b.photonSigmaMps, 0.9);
     within20(b.snrPerPixel, 110);
   });
 
   it('K dwarf, V = 7.5, 60 s: about 1 m/s [Dumusque2011, section 1]', () => {
     const b = photonNoise(stable4m, { ...g2, vmag: 7.5, teffK: 5000 }, 60, 1.2);
-    expect(b.photonMps).toBeGreaterThanOrEqual(0.75);
-    expect(b.photonMps).toBeLessThanOrEqual(1.3);
-    within20(b.photonMps, 1.0);
+    expect(b.photonSigmaMps).toBeGreaterThanOrEqual(0.75);
+    expect(b.photonSigmaMps).toBeLessThanOrEqual(1.3);
+    within20(b.photonSigmaMps, 1.0);
   });
 
   it('G2 dwarf at S/N 100 per pixel at 550 nm: about 1 m/s photon noise [HARPSManual]', () => {
@@ -40,7 +40,7 @@ describe('the 1 m/s class against published figures', () => {
       if (photonNoise(stable4m, { ...g2, vmag: 8 }, mid, 1.2).snrPerPixel < 100) lo = mid;
       else hi = mid;
     }
-    within20(photonNoise(stable4m, { ...g2, vmag: 8 }, hi, 1.2).photonMps, 1.0);
+    within20(photonNoise(stable4m, { ...g2, vmag: 8 }, hi, 1.2).photonSigmaMps, 1.0);
   });
 });
 
@@ -72,11 +72,11 @@ describe('classes estimated from a published efficiency and the 1 m/s class (an 
     const electrons = electronsPerPixel(b, ref.mag, ref.exposureSec, ref.airmass, ref.seeingArcsec, 0.06 / couplingOnly);
     const snr = electrons / Math.sqrt(electrons + readVariance(b));
     within20(ref.snrPerPixel, snr);
-    within20(ref.sigmaMps, transferSigmaMps(view(stable4m), ref4.sigmaMps, ref4.snrPerPixel, view(b), snr));
+    within20(ref.photonSigmaMps, transferSigmaMps(view(stable4m), ref4.photonSigmaMps, ref4.snrPerPixel, view(b), snr));
   });
 
   it('the 10 m/s class at V = 8, 1200 s, K0 dwarf: photon noise 1-5 m/s, the old 10 m/s was 2-7x pessimistic (issue 11)', () => {
-    const p = photonNoise(load('compact-1m'), { ...g2, vmag: 8, teffK: 5300 }, 1200, 1.2).photonMps;
+    const p = photonNoise(load('compact-1m'), { ...g2, vmag: 8, teffK: 5300 }, 1200, 1.2).photonSigmaMps;
     expect(p).toBeGreaterThan(1);
     expect(p).toBeLessThan(5);
   });
@@ -94,17 +94,17 @@ describe('photon-noise scaling laws: σ ∝ 10^(0.2 m) t^(-1/2) D^(-1) in the ph
 
   it('fitted exponents over bright grids: 0.2 in magnitude, -1/2 in exposure, -1 in aperture', () => {
     const mags = grid(3, 7, 9);
-    expect(slope(mags, mags.map((m) => log(photonNoise(stable4m, { ...g2, vmag: m }, 300, 1.2).photonMps)))).toBeCloseTo(0.2, 2);
+    expect(slope(mags, mags.map((m) => log(photonNoise(stable4m, { ...g2, vmag: m }, 300, 1.2).photonSigmaMps)))).toBeCloseTo(0.2, 2);
     const times = grid(60, 900, 9);
-    expect(slope(times.map(log), times.map((t) => log(photonNoise(stable4m, g2, t, 1.2).photonMps)))).toBeCloseTo(-0.5, 2);
+    expect(slope(times.map(log), times.map((t) => log(photonNoise(stable4m, g2, t, 1.2).photonSigmaMps)))).toBeCloseTo(-0.5, 2);
     const apertures = grid(2, 8, 7);
-    expect(slope(apertures.map(log), apertures.map((d) => log(photonNoise(stable4m, g2, 300, 1.2, { apertureM: d }).photonMps)))).toBeCloseTo(-1, 2);
+    expect(slope(apertures.map(log), apertures.map((d) => log(photonNoise(stable4m, g2, 300, 1.2, { apertureM: d }).photonSigmaMps)))).toBeCloseTo(-1, 2);
   });
 
   it('read noise and sky take over at the faint end: the slope in magnitude rises well above 0.2 (1 m class, 900 s)', () => {
     const compact = load('compact-1m');
     const faint = grid(15, 17, 5);
-    const s = slope(faint, faint.map((m) => log(photonNoise(compact, { ...g2, vmag: m }, 900, 1.2).photonMps)));
+    const s = slope(faint, faint.map((m) => log(photonNoise(compact, { ...g2, vmag: m }, 900, 1.2).photonSigmaMps)));
     expect(s).toBeGreaterThan(0.3);
     expect(photonNoise(compact, { ...g2, vmag: 14 }, 900, 1.2).factors.detector).toBeGreaterThan(1.3);
   });
@@ -140,7 +140,7 @@ describe('airmass: extinction at the instrument wavelength and entrance losses w
     const b2 = photonNoise(stable4m, g2, 300, 2);
     expect(b2.factors.extinction / b1.factors.extinction).toBeCloseTo(10 ** (0.2 * stable4m.extinctionMagPerAirmass), 12);
     expect(b2.factors.entrance).toBeGreaterThan(b1.factors.entrance);
-    expect(b2.photonMps / b1.photonMps).toBeGreaterThan(1.2);
+    expect(b2.photonSigmaMps / b1.photonSigmaMps).toBeGreaterThan(1.2);
   });
 });
 
@@ -206,10 +206,10 @@ describe('the budget (common practice)', () => {
     const star = { vmag: 10.7, teffK: 4900, vsiniKms: 6, jitterMps: 2.1 };
     const b = visitPrecision(stable4m, star, 900, 1.4);
     const product = Object.values(b.factors).reduce((a, x) => a * x, 1);
-    expect(b.photonMps).toBeCloseTo(stable4m.reference.sigmaMps * product, 12);
-    expect(b.visitMps ** 2).toBeCloseTo(b.photonMps ** 2 + stable4m.floorMps ** 2, 12);
-    expect(b.effMps ** 2).toBeCloseTo(b.visitMps ** 2 + 2.1 ** 2, 12);
-    expect(b.whiteMps ** 2).toBeCloseTo(b.photonMps ** 2 + 2.1 ** 2, 12);
+    expect(b.photonSigmaMps).toBeCloseTo(stable4m.reference.photonSigmaMps * product, 12);
+    expect(b.visitSigmaMps ** 2).toBeCloseTo(b.photonSigmaMps ** 2 + stable4m.floorMps ** 2, 12);
+    expect(b.effectiveSigmaMps ** 2).toBeCloseTo(b.visitSigmaMps ** 2 + 2.1 ** 2, 12);
+    expect(b.whiteSigmaMps ** 2).toBeCloseTo(b.photonSigmaMps ** 2 + 2.1 ** 2, 12);
   });
 
   it('the red class takes J: a missing J comes from V and the dwarf colours, flagged', () => {
@@ -220,6 +220,6 @@ describe('the budget (common practice)', () => {
     expect(estimated.magEstimated).toBe(true);
     const given = photonNoise(red, { ...m2, mags: { J: estimated.mag } }, 900, 1.2);
     expect(given.magEstimated).toBe(false);
-    expect(given.photonMps).toBeCloseTo(estimated.photonMps, 12);
+    expect(given.photonSigmaMps).toBeCloseTo(estimated.photonSigmaMps, 12);
   });
 });

@@ -54,11 +54,11 @@ export const MIRADOR_RVS: [number, string, string, number][] = [
 const circular = (k: number, eph: { tcBjdTdb: number; periodDays: number }, bjd: number) => -k * Math.sin((2 * Math.PI * (bjd - eph.tcBjdTdb)) / eph.periodDays);
 
 function observed(starId: string, signal: (bjd: number) => number) {
-  return ([bjd, localDate, instrument, rvErrMps]: [number, string, string, number], i: number): ObservedVisit => ({
+  return ([bjd, localDate, instrument, rvErrorMps]: [number, string, string, number], i: number): ObservedVisit => ({
     targetId: starId, starId, midBjdTdb: bjd, midUtc: new Date((bjd - 2440587.5) * 86_400_000).toISOString(), localDate, instrument,
     // The fixture's exact data: offset plus the star's planets, no noise.
-    rvMps: GAMMA[instrument]! + signal(bjd), rvErrMps,
-    sigmaWhiteMps: Math.hypot(rvErrMps, 1.5 * Math.SQRT1_2), source: `fixture ${starId} row ${i + 1}`,
+    rvMps: GAMMA[instrument]! + signal(bjd), rvErrorMps,
+    whiteSigmaMps: Math.hypot(rvErrorMps, 1.5 * Math.SQRT1_2), source: `fixture ${starId} row ${i + 1}`,
   });
 }
 

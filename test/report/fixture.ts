@@ -30,7 +30,7 @@ const instrument: Instrument = {
   wavelengthNm: 550,
   coverageNm: [380, 690],
   spectralRegion: 'optical',
-  reference: { sigmaMps: 1, mag: 8, exposureSec: 600, airmass: 1.2, seeingArcsec: 1, snrPerPixel: 100, teffK: 5300, vsiniKms: 2 },
+  reference: { photonSigmaMps: 1, mag: 8, exposureSec: 600, airmass: 1.2, seeingArcsec: 1, snrPerPixel: 100, teffK: 5300, vsiniKms: 2 },
   readNoiseE: 4,
   pixelsPerResolutionElement: 3.5,
   spatialPixels: 6,
@@ -57,14 +57,14 @@ function target(id: string, raDeg: number, decDeg: number, vmag: number, extra: 
 export const TARGETS: Target[] = [
   target('Teyu-3', 160.5, -35.1, 10.2, {
     ephemeris: { periodDays: 3.2174, periodErrDays: 0.0004, tcBjdTdb: 2461480.3121, tcErrDays: 0.002 },
-    planet: { massEarth: 14, ecc: 0, omegaDeg: 90 },
+    planet: { msiniEarth: 14, ecc: 0, omegaDeg: 90 },
   }),
   target('Mirador-7', 185.2, -22.4, 9.4, {
     massSun: 1.02, teffK: 5800,
     ephemeris: { periodDays: 8.7032, periodErrDays: 0.004, tcBjdTdb: 2461472.905, tcErrDays: 0.004 },
-    planet: { massEarth: 30, ecc: 0, omegaDeg: 90 },
+    planet: { msiniEarth: 30, ecc: 0, omegaDeg: 90 },
   }),
-  target('Alba', 201.7, -41.8, 7.1, { search: { periodMinDays: 2, periodMaxDays: 40, massEarth: 8 } }),
+  target('Alba', 201.7, -41.8, 7.1, { search: { periodMinDays: 2, periodMaxDays: 40, msiniEarth: 8 } }),
   target('Quena-2', 75.3, 12.5, 11.0, { priority: 0.5 }),
 ];
 
@@ -111,7 +111,7 @@ export const NIGHTS: Night[] = Array.from({ length: 12 }, (_, i) => {
 const JD_UNIX_EPOCH = 2440587.5;
 
 /** A visit as the scheduler would write it (BJD taken as JD(UTC) here: a fixture, not a reduction). */
-function visit(starId: string, start: Date, exposureSec: number, airmass: number, sigmaMps: number): PlannedVisit {
+function visit(starId: string, start: Date, exposureSec: number, airmass: number, visitSigmaMps: number): PlannedVisit {
   const t = TARGETS.find((x) => x.id === starId)!;
   const mid = new Date(start.getTime() + (exposureSec / 2) * 1000);
   const midBjdTdb = mid.getTime() / 86_400_000 + JD_UNIX_EPOCH;
@@ -120,10 +120,10 @@ function visit(starId: string, start: Date, exposureSec: number, airmass: number
   const phases = t.ephemeris ? [{ targetId: starId, phase: phaseAt(t.ephemeris, midBjdTdb), phaseErr: phaseErrCycles(t.ephemeris, midBjdTdb) }] : [];
   return {
     starId, localDate, startUtc: start.toISOString(), startLocal: local, midBjdTdb, exposureSec,
-    durationSec: exposureSec + 150, airmass, moonSeparationDeg: 60, phases, sigmaMps,
-    sigmaEffMps: Math.hypot(sigmaMps, t.jitterMps),
-    sigmaWhiteMps: Math.hypot(sigmaMps, t.jitterMps * Math.SQRT1_2),
-    snrPerPixel: 100 / sigmaMps,
+    durationSec: exposureSec + 150, airmass, moonSeparationDeg: 60, phases, visitSigmaMps,
+    effectiveSigmaMps: Math.hypot(visitSigmaMps, t.jitterMps),
+    whiteSigmaMps: Math.hypot(visitSigmaMps, t.jitterMps * Math.SQRT1_2),
+    snrPerPixel: 100 / visitSigmaMps,
   };
 }
 
@@ -145,9 +145,9 @@ const hours = (id: string) => VISITS.filter((v) => v.starId === id).reduce((s, v
 const count = (id: string) => VISITS.filter((v) => v.starId === id).length;
 
 export const SUMMARIES: TargetSummary[] = [
-  { targetId: 'Teyu-3', starId: 'Teyu-3', kind: 'ephemeris', priority: 1, kMps: 5.9, visits: count('Teyu-3'), hours: hours('Teyu-3'), sigmaKMps: 4.5, kOverSigmaK: 1.3, goal: 5, goalProbability: 0.0, informationEfficiency: 0.1, phaseErrAtEnd: 0.0009, warnings: [] },
-  { targetId: 'Mirador-7', starId: 'Mirador-7', kind: 'ephemeris', priority: 1, kMps: 8.5, visits: count('Mirador-7'), hours: hours('Mirador-7'), sigmaKMps: 2.0, kOverSigmaK: 4.2, goal: 5, goalProbability: 0.2, informationEfficiency: 0.55, phaseErrAtEnd: 0.002, warnings: [] },
-  { targetId: 'Alba', starId: 'Alba', kind: 'search', priority: 1, kMps: 3.1, visits: count('Alba'), hours: hours('Alba'), sigmaKMps: 1.2, kOverSigmaK: 2.6, goal: 5, goalProbability: 0.05, warnings: [] },
+  { targetId: 'Teyu-3', starId: 'Teyu-3', kind: 'ephemeris', priority: 1, kMps: 5.9, visits: count('Teyu-3'), hours: hours('Teyu-3'), sigmaKMps: 4.5, kOverSigmaK: 1.3, goalSignificance: 5, goalProbability: 0.0, informationEfficiency: 0.1, phaseErrAtEnd: 0.0009, warnings: [] },
+  { targetId: 'Mirador-7', starId: 'Mirador-7', kind: 'ephemeris', priority: 1, kMps: 8.5, visits: count('Mirador-7'), hours: hours('Mirador-7'), sigmaKMps: 2.0, kOverSigmaK: 4.2, goalSignificance: 5, goalProbability: 0.2, informationEfficiency: 0.55, phaseErrAtEnd: 0.002, warnings: [] },
+  { targetId: 'Alba', starId: 'Alba', kind: 'search', priority: 1, kMps: 3.1, visits: count('Alba'), hours: hours('Alba'), sigmaKMps: 1.2, kOverSigmaK: 2.6, goalSignificance: 5, goalProbability: 0.05, warnings: [] },
   { targetId: 'Quena-2', starId: 'Quena-2', kind: 'monitor', priority: 0.5, visits: 0, hours: 0, warnings: ['never observable in the window'] },
 ];
 

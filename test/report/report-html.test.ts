@@ -111,7 +111,7 @@ describe('numbers recomputed from the visits', () => {
   function referenceKOverSigmaK(kMps: number, n: number, targetId: string): number {
     let sw = 0, sws = 0, swss = 0;
     for (const v of visitsOf(targetId).slice(0, n)) {
-      const w = 1 / v.sigmaEffMps ** 2;
+      const w = 1 / v.effectiveSigmaMps ** 2;
       const s = -Math.sin(2 * Math.PI * v.phases[0]!.phase);
       sw += w; sws += w * s; swss += w * s * s;
     }

@@ -16,15 +16,15 @@ describe('chooseExposureSec', () => {
     expect(choice.goal).toBe('photon-at-noise-floor');
     expect(choice.goalMps).toBeCloseTo(level, 12);
     expect(choice.clippedTo).toBeNull();
-    expect(choice.budget.photonMps).toBeLessThanOrEqual(level);
-    expect(photonNoise(stable4m, kDwarf, choice.exposureSec - 1, 1.3).photonMps).toBeGreaterThan(level);
+    expect(choice.budget.photonSigmaMps).toBeLessThanOrEqual(level);
+    expect(photonNoise(stable4m, kDwarf, choice.exposureSec - 1, 1.3).photonSigmaMps).toBeGreaterThan(level);
   });
 
   it('reaches a requested σ per visit (photon and floor), and no shorter exposure does', () => {
     const choice = chooseExposureSec(stable4m, kDwarf, 1.1, 1.2);
-    expect(choice.budget.visitMps).toBeLessThanOrEqual(1.2);
-    expect(visitPrecision(stable4m, kDwarf, choice.exposureSec - 1, 1.1).visitMps).toBeGreaterThan(1.2);
-    expect(choice.budget.effMps).toBeGreaterThan(choice.budget.visitMps); // jitter is not an exposure's to beat
+    expect(choice.budget.visitSigmaMps).toBeLessThanOrEqual(1.2);
+    expect(visitPrecision(stable4m, kDwarf, choice.exposureSec - 1, 1.1).visitSigmaMps).toBeGreaterThan(1.2);
+    expect(choice.budget.effectiveSigmaMps).toBeGreaterThan(choice.budget.visitSigmaMps); // jitter is not an exposure's to beat
   });
 
   it('clips to the minimum for a bright star: the p-mode period for a K dwarf, above the instrument minimum', () => {
@@ -48,7 +48,7 @@ describe('chooseExposureSec', () => {
     const choice = chooseExposureSec(stable4m, { ...kDwarf, vmag: 14 }, 1.5);
     expect(choice.exposureSec).toBe(stable4m.maxExposureSec);
     expect(choice.tooFaint).toBe(true);
-    expect(choice.budget.photonMps).toBeGreaterThan(choice.goalMps);
+    expect(choice.budget.photonSigmaMps).toBeGreaterThan(choice.goalMps);
     expect(choice.warning).toMatch(/photon-limited: the maximum exposure of 3600 s leaves photon noise at [\d.]+ m\/s, above jitter and floor/);
   });
 
@@ -91,23 +91,23 @@ describe('oscillations: the shortest exposure is one p-mode period 1/nu_max ([Ch
 
 describe('exposure for the fewest hours given K', () => {
   const hoursAt = (star: typeof kDwarf, k: number, sec: number) => {
-    const white = Math.hypot(photonNoise(stable4m, star, sec, 1.2).photonMps, star.jitterMps);
+    const white = Math.hypot(photonNoise(stable4m, star, sec, 1.2).photonSigmaMps, star.jitterMps);
     return visitsExact(k, white, 5, 'random', stable4m.floorMps) * visitCostSec(stable4m, sec);
   };
 
   it('a hot Jupiter (K = 127 m/s) gets the shortest exposure; a small K a longer one', () => {
     const star = { ...kDwarf, vmag: 9 };
-    const hot = chooseExposureSec(stable4m, star, 1.2, undefined, { kMps: 127, significance: 5 });
+    const hot = chooseExposureSec(stable4m, star, 1.2, undefined, { kMps: 127, goalSignificance: 5 });
     expect(hot.goal).toBe('fewest-hours');
     expect(hot.exposureSec).toBe(hot.minimumSec);
-    const small = chooseExposureSec(stable4m, { ...star, vmag: 11.5 }, 1.2, undefined, { kMps: 3, significance: 5 });
+    const small = chooseExposureSec(stable4m, { ...star, vmag: 11.5 }, 1.2, undefined, { kMps: 3, goalSignificance: 5 });
     expect(small.exposureSec).toBeGreaterThan(hot.exposureSec);
   });
 
   it('is within 1% of the best whole-second exposure found by brute force (slow reference)', () => {
     for (const [vmag, k] of [[11.5, 3], [12.5, 8], [10, 0.6]] as const) {
       const star = { ...kDwarf, vmag };
-      const choice = chooseExposureSec(stable4m, star, 1.2, undefined, { kMps: k, significance: 5 });
+      const choice = chooseExposureSec(stable4m, star, 1.2, undefined, { kMps: k, goalSignificance: 5 });
       let best = Infinity;
       for (let sec = choice.minimumSec; sec <= stable4m.maxExposureSec; sec++) best = Math.min(best, hoursAt(star, k, sec));
       expect(hoursAt(star, k, choice.exposureSec) / best).toBeLessThan(1.01);
@@ -116,16 +116,16 @@ describe('exposure for the fewest hours given K', () => {
 
   it('with a cap on visits (one a night over the campaign), the cheapest exposure that fits under it', () => {
     const star = { ...kDwarf, vmag: 11.5 };
-    const free = chooseExposureSec(stable4m, star, 1.2, undefined, { kMps: 3, significance: 5 });
-    const visitsAt = (sec: number) => visitsExact(3, Math.hypot(photonNoise(stable4m, star, sec, 1.2).photonMps, star.jitterMps), 5, 'random', stable4m.floorMps);
+    const free = chooseExposureSec(stable4m, star, 1.2, undefined, { kMps: 3, goalSignificance: 5 });
+    const visitsAt = (sec: number) => visitsExact(3, Math.hypot(photonNoise(stable4m, star, sec, 1.2).photonSigmaMps, star.jitterMps), 5, 'random', stable4m.floorMps);
     const cap = Math.floor(visitsAt(free.exposureSec) / 2);
-    const capped = chooseExposureSec(stable4m, star, 1.2, undefined, { kMps: 3, significance: 5, maxVisits: cap });
+    const capped = chooseExposureSec(stable4m, star, 1.2, undefined, { kMps: 3, goalSignificance: 5, maxVisits: cap });
     expect(capped.exposureSec).toBeGreaterThan(free.exposureSec);
     expect(visitsAt(capped.exposureSec)).toBeLessThanOrEqual(cap);
   });
 
   it('K at or below the floor: no exposure helps, the default goal is kept', () => {
-    const choice = chooseExposureSec(stable4m, kDwarf, 1.2, undefined, { kMps: 0.9 * stable4m.floorMps, significance: 5 });
+    const choice = chooseExposureSec(stable4m, kDwarf, 1.2, undefined, { kMps: 0.9 * stable4m.floorMps, goalSignificance: 5 });
     expect(choice.goal).toBe('photon-at-noise-floor');
   });
 });

@@ -21,22 +21,22 @@ const BJD0 = 2460500.5;
  * σ_φ(end)² = (σ_Tc² + N² σ_P²) / P², N the orbits from Tc to the end (common practice).
  */
 function stalePlanet(id: string, kMps: number, periodDays: number, phaseErrEnd: number, span: [number, number], ageDays: number, offset: number): PlanetInput {
-  const tcBjd = span[0] - ageDays + offset * periodDays;
+  const tcBjdTdb = span[0] - ageDays + offset * periodDays;
   const tcErrDays = 0.004 * periodDays;
-  const orbits = (span[1] - tcBjd) / periodDays;
+  const orbits = (span[1] - tcBjdTdb) / periodDays;
   const periodErrDays = Math.sqrt((phaseErrEnd * periodDays) ** 2 - tcErrDays ** 2) / orbits;
-  return { id, kMps, periodDays, tcBjd, tcErrDays, periodErrDays, ecc: 0, omegaDeg: 90 };
+  return { id, kMps, periodDays, tcBjdTdb, tcErrDays, periodErrDays, ecc: 0, omegaDeg: 90 };
 }
 
 /** One visit per night on `nights` distinct random nights of the span, at a random time in each. */
-function onePerNight(rng: Rng, span: [number, number], nights: number, sigmaMps: number): FitVisit[] {
+function onePerNight(rng: Rng, span: [number, number], nights: number, whiteSigmaMps: number): FitVisit[] {
   const days = new Set<number>();
   while (days.size < nights) days.add(Math.floor(span[0] - BJD0 + rng.uniform() * (span[1] - span[0] - 1)));
   return [...days]
     .sort((a, b) => a - b)
     .map((night) => {
       const bjd = BJD0 + night + 0.1 + 0.3 * rng.uniform();
-      return { bjd, sigmaMps, night, nightBjd: BJD0 + night + 0.25 };
+      return { bjdTdb: bjd, whiteSigmaMps, night, nightBjdTdb: BJD0 + night + 0.25 };
     });
 }
 
@@ -76,7 +76,7 @@ describe('claimed σ_K against Monte Carlo fits (2,000 data sets each)', () => {
   for (const [c, phaseErr] of [0.05, 0.1, 0.15].entries()) {
     it(`(a) one circular planet, phase error ${phaseErr} cycles at the span's end, 20 visits one per night`, () => {
       const span: [number, number] = [BJD0, BJD0 + 120];
-      const star: StarInput = { planets: [stalePlanet('b', 5, 7.31, phaseErr, span, 900, 0)], nightlyJitterMps: 0, spanBjd: span };
+      const star: StarInput = { planets: [stalePlanet('b', 5, 7.31, phaseErr, span, 900, 0)], nightlyJitterMps: 0, spanBjdTdb: span };
       // The same 20 visits for the three phase errors.
       const visits = onePerNight(createRng(40), span, 20, 3);
       expectAgreement(compare(`(a) phase error ${phaseErr}`, star, visits, 400 + c));
@@ -85,11 +85,11 @@ describe('claimed σ_K against Monte Carlo fits (2,000 data sets each)', () => {
 
   it('(b) shared nightly jitter: 4 visits per night on 6 nights', () => {
     const span: [number, number] = [BJD0, BJD0 + 80];
-    const star: StarInput = { planets: [stalePlanet('b', 10, 3.17, 0.1, span, 700, 0)], nightlyJitterMps: 3, spanBjd: span };
+    const star: StarInput = { planets: [stalePlanet('b', 10, 3.17, 0.1, span, 700, 0)], nightlyJitterMps: 3, spanBjdTdb: span };
     const rng = createRng(51);
     const visits = onePerNight(rng, span, 6, 2).flatMap((v) =>
       // Four visits spread over about five hours of the night.
-      [0, 1, 2, 3].map((k) => ({ ...v, bjd: BJD0 + v.night + 0.12 + 0.07 * k + 0.01 * rng.uniform() })),
+      [0, 1, 2, 3].map((k) => ({ ...v, bjdTdb: BJD0 + v.night + 0.12 + 0.07 * k + 0.01 * rng.uniform() })),
     );
     expectAgreement(compare('(b) nightly jitter', star, visits, 500));
   });
@@ -99,7 +99,7 @@ describe('claimed σ_K against Monte Carlo fits (2,000 data sets each)', () => {
     const star: StarInput = {
       planets: [stalePlanet('b', 7, 4.73, 0.1, span, 800, 0), stalePlanet('c', 5, 17.3, 0.08, span, 600, 0.37)],
       nightlyJitterMps: 0,
-      spanBjd: span,
+      spanBjdTdb: span,
     };
     const visits = onePerNight(createRng(61), span, 30, 2.5);
     expectAgreement(compare('(c) two planets', star, visits, 600));
@@ -111,7 +111,7 @@ describe('claimed σ_K against Monte Carlo fits (2,000 data sets each)', () => {
       planets: [stalePlanet('b', 6, 5.53, 0.1, span, 800, 0)],
       nightlyJitterMps: 1,
       activity: { amplitudeMps: 3, rotationDays: 24, coherenceDays: 40 },
-      spanBjd: span,
+      spanBjdTdb: span,
     };
     const visits = onePerNight(createRng(71), span, 24, 2);
     expectAgreement(compare('(d) activity', star, visits, 700));
@@ -120,7 +120,7 @@ describe('claimed σ_K against Monte Carlo fits (2,000 data sets each)', () => {
   it('(e) an eccentric planet (e = 0.3) with e cos ω, e sin ω fitted', () => {
     const span: [number, number] = [BJD0, BJD0 + 120];
     const planet = { ...stalePlanet('b', 8, 9.7, 0.08, span, 700, 0), ecc: 0.3, omegaDeg: 40, eccPriorSigma: 0.1 };
-    const star: StarInput = { planets: [planet], nightlyJitterMps: 0, spanBjd: span };
+    const star: StarInput = { planets: [planet], nightlyJitterMps: 0, spanBjdTdb: span };
     const visits = onePerNight(createRng(81), span, 25, 2);
     expectAgreement(compare('(e) eccentric', star, visits, 800));
   });

@@ -14,30 +14,30 @@ function randomPlanet(rng: Rng, id: string, span: [number, number]): PlanetInput
   const periodDays = Math.exp(between(rng, Math.log(1.5), Math.log(60)));
   const ecc = rng.uniform() < 0.4 ? 0 : between(rng, 0.02, 0.6);
   const kind = rng.uniform();
-  let tcBjd: number;
+  let tcBjdTdb: number;
   let tcErrDays: number;
   let periodErrDays: number;
   if (kind < 0.35) {
     // Fresh: a transit inside the span, small errors.
-    tcBjd = between(rng, span[0], span[1]);
+    tcBjdTdb = between(rng, span[0], span[1]);
     tcErrDays = between(rng, 0.0005, 0.005) * periodDays;
     periodErrDays = between(rng, 1e-6, 1e-5) * periodDays;
   } else if (kind < 0.8) {
     // Stale: measured years before, phase errors up to ~0.3 cycles by the span.
-    tcBjd = span[0] - between(rng, 500, 3000);
+    tcBjdTdb = span[0] - between(rng, 500, 3000);
     tcErrDays = between(rng, 0.001, 0.01) * periodDays;
-    const epochs = (span[1] - tcBjd) / periodDays;
+    const epochs = (span[1] - tcBjdTdb) / periodDays;
     periodErrDays = (between(rng, 0.02, 0.3) * periodDays) / epochs;
   } else if (kind < 0.9) {
-    tcBjd = span[0] - between(rng, 0, 500);
+    tcBjdTdb = span[0] - between(rng, 0, 500);
     tcErrDays = between(rng, 0.001, 0.05) * periodDays;
     periodErrDays = 0;
   } else {
-    tcBjd = span[0] - between(rng, 0, 500);
+    tcBjdTdb = span[0] - between(rng, 0, 500);
     tcErrDays = 0;
     periodErrDays = 0;
   }
-  const planet: PlanetInput = { id, kMps: between(rng, 2, 20), periodDays, tcBjd, periodErrDays, tcErrDays, ecc, omegaDeg: between(rng, 0, 360) };
+  const planet: PlanetInput = { id, kMps: between(rng, 2, 20), periodDays, tcBjdTdb, periodErrDays, tcErrDays, ecc, omegaDeg: between(rng, 0, 360) };
   if (rng.uniform() < 0.5) planet.eccPriorSigma = between(rng, 0.03, 0.2);
   return planet;
 }
@@ -48,7 +48,7 @@ function randomStar(rng: Rng, planets: number, opts: { jitter: boolean; activity
   const star: StarInput = {
     planets: Array.from({ length: planets }, (_, i) => randomPlanet(rng, `p${i}`, span)),
     nightlyJitterMps: opts.jitter ? between(rng, 0.5, 4) : 0,
-    spanBjd: span,
+    spanBjdTdb: span,
   };
   if (opts.activity) star.activity = { amplitudeMps: between(rng, 1, 5), rotationDays: between(rng, 8, 40), coherenceDays: between(rng, 15, 60) };
   return star;
@@ -56,17 +56,17 @@ function randomStar(rng: Rng, planets: number, opts: { jitter: boolean; activity
 
 /** count visits on distinct-or-shared nights within the span; about a third of the nights get 2–4 visits. */
 function randomVisits(rng: Rng, star: StarInput, count: number): DenseVisit[] {
-  const [start, end] = star.spanBjd;
+  const [start, end] = star.spanBjdTdb;
   const visits: DenseVisit[] = [];
   const usedNights = new Set<number>();
   while (visits.length < count) {
     let night = Math.floor(between(rng, start, end - 0.3) - BJD0);
     while (usedNights.has(night)) night = Math.floor(between(rng, start, end - 0.3) - BJD0);
     usedNights.add(night);
-    const nightBjd = BJD0 + night + 0.2;
+    const nightBjdTdb = BJD0 + night + 0.2;
     const n = rng.uniform() < 0.35 ? 2 + Math.floor(rng.uniform() * 3) : 1;
     for (let k = 0; k < n && visits.length < count; k++) {
-      visits.push({ bjd: nightBjd + between(rng, -0.15, 0.15), sigmaMps: between(rng, 1, 5), night, nightBjd });
+      visits.push({ bjdTdb: nightBjdTdb + between(rng, -0.15, 0.15), whiteSigmaMps: between(rng, 1, 5), night, nightBjdTdb });
     }
   }
   return visits;
@@ -118,8 +118,8 @@ describe('StarInformation against a dense Cramér–Rao reference (test/support/
 
 /** A star with one circular planet whose ephemeris is exactly known: only γ and K are fitted. */
 function knownPlanetStar(nightlyJitterMps: number, activity?: StarInput['activity']): StarInput {
-  const planet: PlanetInput = { id: 'b', kMps: 7, periodDays: 5, tcBjd: BJD0, periodErrDays: 0, tcErrDays: 0, ecc: 0, omegaDeg: 90 };
-  const star: StarInput = { planets: [planet], nightlyJitterMps, spanBjd: [BJD0, BJD0 + 100] };
+  const planet: PlanetInput = { id: 'b', kMps: 7, periodDays: 5, tcBjdTdb: BJD0, periodErrDays: 0, tcErrDays: 0, ecc: 0, omegaDeg: 90 };
+  const star: StarInput = { planets: [planet], nightlyJitterMps, spanBjdTdb: [BJD0, BJD0 + 100] };
   if (activity) star.activity = activity;
   return star;
 }
@@ -129,8 +129,8 @@ function quadratureVisits(nA: number, sigmaA: number, nB: number, sigmaB: number
   const tA = BJD0 + 10 * 5 + 0.75 * 5;
   const tB = BJD0 + 14 * 5 + 0.25 * 5;
   return [
-    ...Array.from({ length: nA }, () => ({ bjd: tA, sigmaMps: sigmaA, night: 1, nightBjd: tA })),
-    ...Array.from({ length: nB }, () => ({ bjd: tB, sigmaMps: sigmaB, night: 2, nightBjd: tB })),
+    ...Array.from({ length: nA }, () => ({ bjdTdb: tA, whiteSigmaMps: sigmaA, night: 1, nightBjdTdb: tA })),
+    ...Array.from({ length: nB }, () => ({ bjdTdb: tB, whiteSigmaMps: sigmaB, night: 2, nightBjdTdb: tB })),
   ];
 }
 
@@ -146,11 +146,11 @@ describe('analytic cases', () => {
   it('no visits or one visit: K is not determined (Infinity)', () => {
     const model = buildStarModel(randomStar(createRng(7), 1, { jitter: true, activity: false }));
     expect(kVariances(model, [])[0]).toBe(Infinity);
-    const one = informationVisits(model, [{ bjd: model.input.spanBjd[0] + 3.3, sigmaMps: 2, night: 3, nightBjd: model.input.spanBjd[0] + 3 }]);
+    const one = informationVisits(model, [{ bjdTdb: model.input.spanBjdTdb[0] + 3.3, whiteSigmaMps: 2, night: 3, nightBjdTdb: model.input.spanBjdTdb[0] + 3 }]);
     // One number cannot separate γ from K.
     expect(kVariances(model, one)[0]).toBe(Infinity);
     const two = buildStarModel({ ...model.input, planets: [model.input.planets[0]!, { ...model.input.planets[0]!, id: 'c', periodDays: 13.1 }] });
-    expect(Array.from(kVariances(two, informationVisits(two, [{ bjd: two.input.spanBjd[0] + 3.3, sigmaMps: 2, night: 3, nightBjd: two.input.spanBjd[0] + 3 }])))).toEqual([Infinity, Infinity]);
+    expect(Array.from(kVariances(two, informationVisits(two, [{ bjdTdb: two.input.spanBjdTdb[0] + 3.3, whiteSigmaMps: 2, night: 3, nightBjdTdb: two.input.spanBjdTdb[0] + 3 }])))).toEqual([Infinity, Infinity]);
   });
 
   it('one visit per quadrature, white noise only: Var(K) = σ²/2', () => {
@@ -187,8 +187,8 @@ describe('analytic cases', () => {
     const tau = 1.2;
     const model = buildStarModel(knownPlanetStar(tau));
     const visits = quadratureVisits(3, 2, 2, 5);
-    visits[1]!.sigmaMps = 3;
-    visits[2]!.sigmaMps = 6;
+    visits[1]!.whiteSigmaMps = 3;
+    visits[2]!.whiteSigmaMps = 6;
     const wA = 1 / 4 + 1 / 9 + 1 / 36;
     const got = kVariances(model, informationVisits(model, visits))[0]!;
     expect(relDiff(got, analytic(1 / wA + tau * tau, 25 / 2 + tau * tau))).toBeLessThan(1e-10);
@@ -199,7 +199,7 @@ describe('analytic cases', () => {
     const activity = { amplitudeMps: 3, rotationDays: 23, coherenceDays: 40 };
     const model = buildStarModel(knownPlanetStar(tau, activity));
     const visits = quadratureVisits(4, 2.5, 3, 3.5);
-    const dt = visits[0]!.nightBjd - visits[visits.length - 1]!.nightBjd;
+    const dt = visits[0]!.nightBjdTdb - visits[visits.length - 1]!.nightBjdTdb;
     // k(Δt) = h² exp(−Δt²/2λ² − sin²(πΔt/P_rot)/(2 · 0.5²)) written out here (Haywood et al. 2014 form).
     const h2 = 9;
     const kAB = h2 * Math.exp(-(dt * dt) / (2 * 40 * 40) - (2 * Math.sin((Math.PI * dt) / 23) ** 2));
@@ -280,13 +280,13 @@ describe('model layout read by the dense reference', () => {
     for (let trial = 0; trial < 20; trial++) {
       const star = randomStar(rng, 2, { jitter: false, activity: false });
       const model = buildStarModel(star);
-      const mid = (star.spanBjd[0] + star.spanBjd[1]) / 2;
+      const mid = (star.spanBjdTdb[0] + star.spanBjdTdb[1]) / 2;
       star.planets.forEach((pl, i) => {
-        const ref = model.planets[i]!.tcRefBjd;
-        const epochs = (ref - pl.tcBjd) / pl.periodDays;
+        const ref = model.planets[i]!.tcRefBjdTdb;
+        const epochs = (ref - pl.tcBjdTdb) / pl.periodDays;
         expect(Math.abs(epochs - Math.round(epochs))).toBeLessThan(1e-6);
         expect(Math.abs(ref - mid)).toBeLessThanOrEqual(pl.periodDays / 2 + 1e-6);
-        const u = Math.max(1, (ref - star.spanBjd[0]) / pl.periodDays, (star.spanBjd[1] - ref) / pl.periodDays);
+        const u = Math.max(1, (ref - star.spanBjdTdb[0]) / pl.periodDays, (star.spanBjdTdb[1] - ref) / pl.periodDays);
         expect(relDiff(model.planets[i]!.orbitsScale, u)).toBeLessThan(1e-12);
       });
     }
@@ -297,9 +297,9 @@ describe('model layout read by the dense reference', () => {
     // (α, β) exceed the 0.01-cycle sampling threshold. Cov from Tc_ref = Tc + n P (common practice): Var δTc_ref =
     // σ_Tc² + n² σ_P², Cov(δTc_ref, δP) = n σ_P²; α = δTc_ref / P, β = δP U / P.
     const span: [number, number] = [BJD0, BJD0 + 90];
-    const pl: PlanetInput = { id: 'b', kMps: 5, periodDays: 6.2, tcBjd: BJD0 - 150, tcErrDays: 0.31, periodErrDays: 0.02, ecc: 0, omegaDeg: 90 };
-    const model = buildStarModel({ planets: [pl], nightlyJitterMps: 0, spanBjd: span });
-    const n = Math.round((model.planets[0]!.tcRefBjd - pl.tcBjd) / pl.periodDays);
+    const pl: PlanetInput = { id: 'b', kMps: 5, periodDays: 6.2, tcBjdTdb: BJD0 - 150, tcErrDays: 0.31, periodErrDays: 0.02, ecc: 0, omegaDeg: 90 };
+    const model = buildStarModel({ planets: [pl], nightlyJitterMps: 0, spanBjdTdb: span });
+    const n = Math.round((model.planets[0]!.tcRefBjdTdb - pl.tcBjdTdb) / pl.periodDays);
     const u = model.planets[0]!.orbitsScale;
     const P = pl.periodDays;
     const aa = (pl.tcErrDays ** 2 + n * n * pl.periodErrDays ** 2) / P ** 2;

@@ -36,8 +36,8 @@ describe('detection level along a row', () => {
     const m50 = levelMass(masses, row, 0.5);
     const m90 = levelMass(masses, row, 0.9);
     expect(m50.where).toBe('inside');
-    expect(m50.where === 'inside' && m50.massEarth).toBeCloseTo(20, 1);
-    expect(m90.where === 'inside' && m90.massEarth / (20 * Math.exp(0.4 * 1.2816))).toBeCloseTo(1, 2);
+    expect(m50.where === 'inside' && m50.msiniEarth).toBeCloseTo(20, 1);
+    expect(m90.where === 'inside' && m90.msiniEarth / (20 * Math.exp(0.4 * 1.2816))).toBeCloseTo(1, 2);
   });
 
   it('says when a level lies off the grid', () => {
@@ -49,16 +49,16 @@ describe('detection level along a row', () => {
 });
 
 /** 14 visits on random nights over 60 days, σ_eff 1.5–2.5 m/s (invented). */
-function visits(): Pick<InjectionInput, 'timesBjd' | 'sigmaMps'> {
+function visits(): Pick<InjectionInput, 'timesBjdTdb' | 'rvErrorsMps'> {
   const rng = createRng(11);
   const nights = new Set<number>();
   while (nights.size < 14) nights.add(Math.floor(60 * rng.uniform()));
-  const timesBjd = [...nights].sort((a, b) => a - b).map((n) => 2_461_300.6 + n + 0.2 * rng.uniform());
-  return { timesBjd, sigmaMps: timesBjd.map(() => 1.5 + rng.uniform()) };
+  const timesBjdTdb = [...nights].sort((a, b) => a - b).map((n) => 2_461_300.6 + n + 0.2 * rng.uniform());
+  return { timesBjdTdb, rvErrorsMps: timesBjdTdb.map(() => 1.5 + rng.uniform()) };
 }
 
 describe.skipIf(!existsSync(POOL))('parallel injection–recovery (worker threads)', () => {
-  const input: InjectionInput = { ...visits(), periodsDays: [3.1, 8.7], massesEarth: [2, 6, 12, 25, 50], starMassSun: 0.85, trialsPerCell: 60, seed: 21 };
+  const input: InjectionInput = { ...visits(), periodsDays: [3.1, 8.7], msinisEarth: [2, 6, 12, 25, 50], starMassSun: 0.85, trialsPerCell: 60, seed: 21 };
 
   it('gives the same map with 1 and 2 threads, equal to the one-thread core', async () => {
     const pool = (await import(pathToFileURL(POOL.pathname).href)) as Pool;

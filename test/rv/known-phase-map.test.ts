@@ -11,21 +11,21 @@ import { createRng } from '../../src/rv/random.js';
 // its reference transit; σ_eff 2 to 3.5 m/s.
 const EPH: Ephemeris = { periodDays: 4.7731, periodErrDays: 0.0004, tcBjdTdb: 2_461_180.3342, tcErrDays: 0.0015 };
 
-function visits(): Pick<KnownPhaseInput, 'timesBjd' | 'sigmaMps'> {
+function visits(): Pick<KnownPhaseInput, 'timesBjdTdb' | 'rvErrorsMps'> {
   const rng = createRng(8);
   const nights = new Set<number>();
   while (nights.size < 12) nights.add(Math.floor(70 * rng.uniform()));
-  const timesBjd = [...nights].sort((a, b) => a - b).map((n) => 2_461_300.55 + n + 0.25 * rng.uniform());
-  return { timesBjd, sigmaMps: timesBjd.map(() => 2 + 1.5 * rng.uniform()) };
+  const timesBjdTdb = [...nights].sort((a, b) => a - b).map((n) => 2_461_300.55 + n + 0.25 * rng.uniform());
+  return { timesBjdTdb, rvErrorsMps: timesBjdTdb.map(() => 2 + 1.5 * rng.uniform()) };
 }
 
 const input: KnownPhaseInput = {
   ...visits(),
   ephemeris: EPH,
   periodsDays: logSpaced(EPH.periodDays / 1.6, EPH.periodDays * 1.6, 6),
-  massesEarth: logSpaced(4, 40, 7),
+  msinisEarth: logSpaced(4, 40, 7),
   starMassSun: 0.82,
-  significance: 4,
+  goalSignificance: 4,
 };
 
 describe('known-phase detection map', () => {
@@ -50,23 +50,23 @@ describe('known-phase detection map', () => {
   it('expected σ_K equals the direct least-squares σ_K on the predicted phases, whatever the catalogue errors', () => {
     const exact = { ...EPH, periodErrDays: 0, tcErrDays: 0 };
     // Direct reference: σ_K = 1/√(Σ w (s − s̄)²), s = −sin 2π(t − Tc)/P, weighted mean s̄ (docs/references.md [Visits-needed]).
-    const { timesBjd, sigmaMps } = input;
-    const w = sigmaMps.map((s) => 1 / (s * s));
-    const s = timesBjd.map((t) => -Math.sin((2 * Math.PI * (t - EPH.tcBjdTdb)) / EPH.periodDays));
+    const { timesBjdTdb, rvErrorsMps } = input;
+    const w = rvErrorsMps.map((s) => 1 / (s * s));
+    const s = timesBjdTdb.map((t) => -Math.sin((2 * Math.PI * (t - EPH.tcBjdTdb)) / EPH.periodDays));
     const mean = s.reduce((a, v, n) => a + w[n]! * v, 0) / w.reduce((a, b) => a + b, 0);
     const reference = 1 / Math.sqrt(s.reduce((a, v, n) => a + w[n]! * (v - mean) ** 2, 0));
-    expect(expectedSigmaKMps(timesBjd, sigmaMps, exact)).toBeCloseTo(reference, 9);
+    expect(expectedSigmaKMps(timesBjdTdb, rvErrorsMps, exact)).toBeCloseTo(reference, 9);
     // A known-phase fit does not fit Tc or P, so their catalogue errors do not enter its σ_K.
-    expect(expectedSigmaKMps(timesBjd, sigmaMps, { ...EPH, tcErrDays: 10 * EPH.periodDays })).toBeCloseTo(reference, 9);
+    expect(expectedSigmaKMps(timesBjdTdb, rvErrorsMps, { ...EPH, tcErrDays: 10 * EPH.periodDays })).toBeCloseTo(reference, 9);
   });
 
   it('at 50% detection K/σ_K equals n (Φ(0) = 1/2)', () => {
     // One cell at the ephemeris period, the mass whose K is exactly n σ_K.
-    const sigmaK = expectedSigmaKMps(input.timesBjd, input.sigmaMps, EPH);
+    const sigmaK = expectedSigmaKMps(input.timesBjdTdb, input.rvErrorsMps, EPH);
     const kOf = (m: number) => semiAmplitudeMps({ starMassSun: input.starMassSun, planetMassEarth: m, periodDays: EPH.periodDays });
     let lo = 0.1, hi = 1000;
-    for (let k = 0; k < 100; k++) { const mid = Math.sqrt(lo * hi); if (kOf(mid) < input.significance * sigmaK) lo = mid; else hi = mid; }
-    const map = knownPhaseMapAnalytic({ ...input, periodsDays: [EPH.periodDays], massesEarth: [lo] });
+    for (let k = 0; k < 100; k++) { const mid = Math.sqrt(lo * hi); if (kOf(mid) < input.goalSignificance * sigmaK) lo = mid; else hi = mid; }
+    const map = knownPhaseMapAnalytic({ ...input, periodsDays: [EPH.periodDays], msinisEarth: [lo] });
     expect(map.detection[0]![0]).toBeCloseTo(0.5, 6);
   });
 });

@@ -10,18 +10,18 @@ const crest = (...args: string[]) => runCliInProcess(args);
 
 describe('RV series reader', () => {
   it('reads a series with comments and any header case and order', () => {
-    const text = '# a comment\nSIGMAMPS,bjd,RvMps\n1.5,2461000.1,3\n2,2461001.2,-1\n1,2461003.3,0\n1,2461004.4,2\n1,2461007.5,1\n';
+    const text = '# a comment\nRVERRORMPS,BJDtdb,RvMps\n1.5,2461000.1,3\n2,2461001.2,-1\n1,2461003.3,0\n1,2461004.4,2\n1,2461007.5,1\n';
     const s = parseRvSeries(text, 's.csv');
-    expect(s.timesBjd).toEqual([2461000.1, 2461001.2, 2461003.3, 2461004.4, 2461007.5]);
+    expect(s.timesBjdTdb).toEqual([2461000.1, 2461001.2, 2461003.3, 2461004.4, 2461007.5]);
     expect(s.rvMps[1]).toBe(-1);
-    expect(s.sigmaMps[0]).toBe(1.5);
+    expect(s.rvErrorsMps[0]).toBe(1.5);
   });
 
   it.each([
-    ['reduced BJD', 'bjd,rvMps,sigmaMps\n61000.1,1,1\n', /s\.csv: row 1 \(line 2\): bjd = "61000\.1": a full BJD_TDB/],
-    ['zero sigma', 'bjd,rvMps,sigmaMps\n2461000.1,1,0\n', /row 1 \(line 2\): sigmaMps = "0": uncertainty in m\/s/],
-    ['unknown column', 'bjd,rv,sigmaMps\n2461000.1,1,1\n', /header: columns = "bjd,rv,sigmaMps"/],
-    ['too few rows', 'bjd,rvMps,sigmaMps\n2461000.1,1,1\n2461001.1,1,1\n', /rows = 2: at least 5 visits/],
+    ['reduced BJD', 'bjdTdb,rvMps,rvErrorMps\n61000.1,1,1\n', /s\.csv: row 1 \(line 2\): bjdTdb = "61000\.1": a full BJD_TDB/],
+    ['zero sigma', 'bjdTdb,rvMps,rvErrorMps\n2461000.1,1,0\n', /row 1 \(line 2\): rvErrorMps = "0": uncertainty in m\/s/],
+    ['unknown column', 'bjdTdb,rv,rvErrorMps\n2461000.1,1,1\n', /header: columns = "bjdTdb,rv,rvErrorMps"/],
+    ['too few rows', 'bjdTdb,rvMps,rvErrorMps\n2461000.1,1,1\n2461001.1,1,1\n', /rows = 2: at least 5 visits/],
   ])('names the place of bad input: %s', (_name, text, pattern) => {
     expect(() => parseRvSeries(text, 's.csv')).toThrow(pattern);
   });
@@ -56,7 +56,7 @@ describe('crest periodogram', () => {
   it('exits 2 with one line for a bad row and for a bad flag', async () => {
     const dir = mkdtempSync(join(tmpdir(), 'crest-pg-'));
     const file = join(dir, 'bad.csv');
-    writeFileSync(file, 'bjd,rvMps,sigmaMps\n2461000.1,3,1\n2461001.1,fast,1\n');
+    writeFileSync(file, 'bjdTdb,rvMps,rvErrorMps\n2461000.1,3,1\n2461001.1,fast,1\n');
     const bad = await crest('periodogram', file);
     expect(bad.status).toBe(2);
     expect(bad.stderr.trim().split('\n')).toHaveLength(1);

@@ -9,11 +9,11 @@ describe('crest precision', () => {
     const out = JSON.parse(r.stdout);
     const b = out.exposure.budget;
     const product = Object.values(b.factors as Record<string, number>).reduce((a, x) => a * x, 1);
-    expect(b.photonMps).toBeCloseTo(1.43 * product, 10); // stable-2m reference sigma 1.43 m/s
+    expect(b.photonSigmaMps).toBeCloseTo(1.43 * product, 10); // stable-2m reference sigma 1.43 m/s
     expect(b.factors.magnitude).toBeCloseTo(10 ** (0.2 * 2.5), 12);
     expect(b.factors.exposure).toBeCloseTo(Math.sqrt(600 / 1200), 12);
     expect(b.snrPerPixel).toBeGreaterThan(0);
-    expect(b.effMps).toBeCloseTo(Math.hypot(b.photonMps, 1.5, 2.5), 10);
+    expect(b.effectiveSigmaMps).toBeCloseTo(Math.hypot(b.photonSigmaMps, 1.5, 2.5), 10);
     expect(out.exposure.goal).toBe('fixed');
     expect(out.visitCostSec).toBe(1200 + 40 + 180);
   });

@@ -14,7 +14,7 @@ const SIGMA_WHITE = 2;
 const SIGMA_NIGHT = 1.5;
 
 interface Visit {
-  bjd: number;
+  bjdTdb: number;
   night: number;
 }
 
@@ -40,7 +40,7 @@ function solve(a: number[][], b: number[][]): number[][] {
 /** σ_K by dense GLS. */
 function denseSigmaK(visits: Visit[]): number {
   const cov = visits.map((a, i) => visits.map((b, k) => (i === k ? SIGMA_WHITE ** 2 : 0) + (a.night === b.night ? SIGMA_NIGHT ** 2 : 0)));
-  const x = visits.map((v) => [1, Math.sin((2 * Math.PI * (v.bjd - TC)) / P)]);
+  const x = visits.map((v) => [1, Math.sin((2 * Math.PI * (v.bjdTdb - TC)) / P)]);
   const cInvX = solve(cov, x);
   const fisher = [0, 1].map((r) => [0, 1].map((c) => x.reduce((sum, row, i) => sum + row[r]! * cInvX[i]![c]!, 0)));
   const inverse = solve(fisher, [[1, 0], [0, 1]]);
@@ -49,21 +49,21 @@ function denseSigmaK(visits: Visit[]): number {
 
 function modelSigmaK(visits: Visit[]): number {
   const model = buildStarModel({
-    planets: [{ id: 'b', kMps: 3, periodDays: P, tcBjd: TC, periodErrDays: 0, tcErrDays: 0, ecc: 0, omegaDeg: 90 }],
+    planets: [{ id: 'b', kMps: 3, periodDays: P, tcBjdTdb: TC, periodErrDays: 0, tcErrDays: 0, ecc: 0, omegaDeg: 90 }],
     nightlyJitterMps: SIGMA_NIGHT,
-    spanBjd: [0, 30],
+    spanBjdTdb: [0, 30],
   });
-  const input = visits.map((v) => ({ bjd: v.bjd, sigmaMps: SIGMA_WHITE, night: v.night, nightBjd: v.night + 0.5 }));
+  const input = visits.map((v) => ({ bjdTdb: v.bjdTdb, whiteSigmaMps: SIGMA_WHITE, night: v.night, nightBjdTdb: v.night + 0.5 }));
   return Math.sqrt(kVariances(model, informationVisits(model, input))[0]!);
 }
 
 describe('several visits in one night', () => {
   // Six nights, one visit each, at assorted phases; then one more visit 2 h after the first
   // night's, or the same phase three orbits later on a night of its own.
-  const base: Visit[] = [0.1, 1.3, 2.2, 4.05, 5.4, 7.15].map((bjd) => ({ bjd, night: Math.floor(bjd) }));
-  const later = base[0]!.bjd + 2 / 24;
-  const sameNight = [...base, { bjd: later, night: base[0]!.night }];
-  const newNight = [...base, { bjd: later + 3 * P, night: Math.floor(later + 3 * P) }];
+  const base: Visit[] = [0.1, 1.3, 2.2, 4.05, 5.4, 7.15].map((bjd) => ({ bjdTdb: bjd, night: Math.floor(bjd) }));
+  const later = base[0]!.bjdTdb + 2 / 24;
+  const sameNight = [...base, { bjdTdb: later, night: base[0]!.night }];
+  const newNight = [...base, { bjdTdb: later + 3 * P, night: Math.floor(later + 3 * P) }];
 
   it('the information model gives the dense GLS sigma_K for visits sharing nights', () => {
     for (const visits of [base, sameNight, newNight]) expect(modelSigmaK(visits)).toBeCloseTo(denseSigmaK(visits), 10);

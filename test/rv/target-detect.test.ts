@@ -7,7 +7,7 @@ import { semiAmplitudeMps } from '../../src/orbit/semi-amplitude.js';
 import { OUT_OF_REACH_VISITS, planetOfTarget, targetDetectability } from '../../src/rv/target-detect.js';
 
 const stable4m = readInstrument(path.join(INSTRUMENTS_DIR, 'stable-4m.json'));
-const header = 'id,ra,dec,vmag,teffK,massSun,jitterMps,periodDays,tcBjdTdb,planetMassEarth,planetKMps,ecc,searchPeriodMinDays,searchPeriodMaxDays,searchMassEarth';
+const header = 'id,ra,dec,vmag,teffK,massSun,jitterMps,periodDays,tcBjdTdb,planetMsiniEarth,planetKMps,ecc,searchPeriodMinDays,searchPeriodMaxDays,searchMsiniEarth';
 const [given, byK, search, bare, tiny] = parseTargets(
   [
     header,
@@ -41,24 +41,24 @@ describe('planetOfTarget', () => {
   });
 
   it('a hypothetical planet replaces the target\'s own, and nothing gives nothing', () => {
-    expect(planetOfTarget(given, { massEarth: 10, periodDays: 20 })!.source).toBe('hypothetical');
+    expect(planetOfTarget(given, { msiniEarth: 10, periodDays: 20 })!.source).toBe('hypothetical');
     expect(planetOfTarget(bare)).toBeUndefined();
   });
 });
 
 describe('targetDetectability', () => {
   it('reports visits for 3σ, 5σ and the goal, and hours from the visit cost', () => {
-    const d = targetDetectability(given, stable4m, { significance: 4, airmass: 1.2 });
-    expect(d.needed.map((v) => v.significance)).toEqual([3, 4, 5]);
+    const d = targetDetectability(given, stable4m, { goalSignificance: 4, airmass: 1.2 });
+    expect(d.needed.map((v) => v.goalSignificance)).toEqual([3, 4, 5]);
     for (const v of d.needed) expect(v.hoursRandom).toBeCloseTo((v.random * d.visitCostSec) / 3600, 12);
-    expect(d.sigmaMps).toBe(d.exposure.budget.effMps);
+    expect(d.effectiveSigmaMps).toBe(d.exposure.budget.effectiveSigmaMps);
   });
 
   it('at a planned N: Φ(K/σ_K − n) and the smallest detectable mass at the planet\'s period', () => {
-    const d = targetDetectability(given, stable4m, { significance: 5, airmass: 1.2, visits: 30, periodsDays: [1, 10] });
+    const d = targetDetectability(given, stable4m, { goalSignificance: 5, airmass: 1.2, visits: 30, periodsDays: [1, 10] });
     const at = d.atPlannedVisits!;
     // σ_K² = σ_white² / E[S] + (floor/n)², E[S] = (N − 1)/2 at random phases.
-    expect(at.sigmaKRandomMps).toBeCloseTo(Math.sqrt((2 * d.whiteMps ** 2) / 29 + (stable4m.floorMps / 5) ** 2), 12);
+    expect(at.sigmaKRandomMps).toBeCloseTo(Math.sqrt((2 * d.whiteSigmaMps ** 2) / 29 + (stable4m.floorMps / 5) ** 2), 12);
     expect(at.mass50RandomEarth!).toBeLessThan(at.mass90RandomEarth!);
     expect(at.massLimits).toHaveLength(2);
     const kMin = semiAmplitudeMps({ starMassSun: 0.85, planetMassEarth: at.massMinRandomEarth!, periodDays: 6.5, ecc: 0.3 });
@@ -66,7 +66,7 @@ describe('targetDetectability', () => {
   });
 
   it('says plainly when K is below the instrument floor', () => {
-    const d = targetDetectability(tiny, stable4m, { significance: 5, airmass: 1.2 });
+    const d = targetDetectability(tiny, stable4m, { goalSignificance: 5, airmass: 1.2 });
     expect(d.planet!.kMps).toBeLessThan(stable4m.floorMps);
     expect(d.verdict.level).toBe('out of reach');
     expect(d.verdict.text).toMatch(/below the instrument floor of 0.44 m\/s, which does not average down/);
@@ -74,10 +74,10 @@ describe('targetDetectability', () => {
 
   it('the floor one way everywhere: no out-of-reach verdict beside a mass limit below the planet (issue 11)', () => {
     for (const visits of [10, 100, 10_000]) {
-      const d = targetDetectability(tiny, stable4m, { significance: 5, airmass: 1.2, visits });
+      const d = targetDetectability(tiny, stable4m, { goalSignificance: 5, airmass: 1.2, visits });
       expect(d.verdict.level).toBe('out of reach');
-      expect(d.atPlannedVisits!.massMinRandomEarth!).toBeGreaterThan(d.planet!.massEarth!);
-      expect(d.atPlannedVisits!.mass50RandomEarth!).toBeGreaterThan(d.planet!.massEarth!);
+      expect(d.atPlannedVisits!.massMinRandomEarth!).toBeGreaterThan(d.planet!.msiniEarth!);
+      expect(d.atPlannedVisits!.mass50RandomEarth!).toBeGreaterThan(d.planet!.msiniEarth!);
       expect(d.atPlannedVisits!.probabilityRandom!).toBeLessThan(0.01);
       expect(5 * d.atPlannedVisits!.sigmaKRandomMps).toBeGreaterThan(stable4m.floorMps);
       expect(d.needed.every((v) => v.random === Infinity)).toBe(true);
@@ -85,15 +85,15 @@ describe('targetDetectability', () => {
   });
 
   it(`says plainly when more than ${OUT_OF_REACH_VISITS} visits are needed`, () => {
-    const d = targetDetectability(bare, stable4m, { significance: 5, airmass: 1.2, hypothetical: { massEarth: 2.5, periodDays: 30 } });
+    const d = targetDetectability(bare, stable4m, { goalSignificance: 5, airmass: 1.2, hypothetical: { msiniEarth: 2.5, periodDays: 30 } });
     expect(d.planet!.kMps).toBeGreaterThan(stable4m.floorMps);
-    expect(d.needed.find((v) => v.significance === 5)!.random).toBeGreaterThan(OUT_OF_REACH_VISITS);
+    expect(d.needed.find((v) => v.goalSignificance === 5)!.random).toBeGreaterThan(OUT_OF_REACH_VISITS);
     expect(d.verdict.level).toBe('out of reach');
     expect(d.verdict.text).toMatch(/more than 200/);
   });
 
   it('without a planet: precision only', () => {
-    const d = targetDetectability(bare, stable4m, { significance: 5, airmass: 1.2 });
+    const d = targetDetectability(bare, stable4m, { goalSignificance: 5, airmass: 1.2 });
     expect(d.needed).toEqual([]);
     expect(d.verdict.level).toBe('no planet');
   });

@@ -23,8 +23,8 @@ describe('the plan state against a recomputation from scratch', () => {
     const expected = referenceKOverSigmaK(problem, kept, { searchGridSize: 16, overshootWeight: 0.1 });
     let k = 0;
     problem.targets.forEach((target, t) => {
-      target.planets.forEach((planet, i) => expect(state.planetFractionOfGoal(c.planetFrom[t]! + i) * planet.goal).toBeCloseTo(expected[k++]!, 8));
-      if (target.search) expect(state.searchFractionOfGoal(t, 0, 0) * target.search.goal).toBeCloseTo(expected[k++]!, 8);
+      target.planets.forEach((planet, i) => expect(state.planetFractionOfGoal(c.planetFrom[t]! + i) * planet.goalSignificance).toBeCloseTo(expected[k++]!, 8));
+      if (target.search) expect(state.searchFractionOfGoal(t, 0, 0) * target.search.goalSignificance).toBeCloseTo(expected[k++]!, 8);
     });
     expect(k).toBe(expected.length);
   });
@@ -39,11 +39,11 @@ describe('search coverage', () => {
     const stats = new Float64Array(searchStatsLength(grid));
     let score = searchLogScore(stats, 0, grid);
     for (let j = 0; j < c.slotCount; j += 3) {
-      const next = searchLogScore(stats, 0, grid, 1, c.weight[j]!, c.midDays[j]!);
+      const next = searchLogScore(stats, 0, grid, 1, c.weight[j]!, c.midBjdTdb[j]!);
       expect(next).toBeGreaterThanOrEqual(score - 1e-12);
-      updateSearchStats(stats, 0, grid, c.weight[j]!, c.midDays[j]!, 1);
+      updateSearchStats(stats, 0, grid, c.weight[j]!, c.midBjdTdb[j]!, 1);
       expect(searchLogScore(stats, 0, grid)).toBeCloseTo(next, 10);
-      expect(searchLogScore(stats, 0, grid, -1, c.weight[j]!, c.midDays[j]!)).toBeCloseTo(score, 9);
+      expect(searchLogScore(stats, 0, grid, -1, c.weight[j]!, c.midBjdTdb[j]!)).toBeCloseTo(score, 9);
       score = next;
     }
   });

@@ -95,12 +95,12 @@ function singleTarget(periodDays: number, nights: number, hoursPerNight: number)
   for (let n = 0; n < nights; n++) {
     for (let k = 0; k < hoursPerNight * 3; k++) {
       const startMs = t0 + n * 86_400_000 + k * 1_200_000;
-      slots.push({ slotId: `n${n}k${k}`, targetId: 'LONE-1', nightIndex: n, startMs, durationSec: 1200, sigmaWhiteMps: 2, midDays: (startMs + 600_000 - t0) / 86_400_000 });
+      slots.push({ slotId: `n${n}k${k}`, targetId: 'LONE-1', nightIndex: n, startMs, durationSec: 1200, whiteSigmaMps: 2, midBjdTdb: (startMs + 600_000 - t0) / 86_400_000 });
     }
   }
   return {
     nights: Array.from({ length: nights }, (_, n) => ({ index: n, localDate: `2027-04-${String(n + 1).padStart(2, '0')}`, clearProbability: 0.8, hoursAvailable: hoursPerNight })),
-    targets: [onePlanetStar('LONE-1', { kMps: 3, periodDays, tcDays: 0, goal: 100 }, [0, nights])],
+    targets: [onePlanetStar('LONE-1', { kMps: 3, periodDays, tcBjdTdb: 0, goalSignificance: 100 }, [0, nights])],
     slots,
     time: { mode: 'given-nights' },
     constraints: { minSpacingHours: 0, onePerNight: true },
@@ -131,7 +131,7 @@ describe('what the utility asks of a plan', () => {
     const busiest = relaxed.targets.filter((t) => t.kind === 'ephemeris').sort((a, b) => b.visits - a.visits)[0]!;
     const easy = problem.targets.find((t) => t.id === busiest.starId)!;
     // Make the first target's goal tiny: it should keep few visits and give the rest away.
-    const lowered = { ...problem, targets: problem.targets.map((t) => (t === easy ? { ...t, planets: t.planets.map((p) => ({ ...p, goal: 0.5 })) } : t)) };
+    const lowered = { ...problem, targets: problem.targets.map((t) => (t === easy ? { ...t, planets: t.planets.map((p) => ({ ...p, goalSignificance: 0.5 })) } : t)) };
     const capped = optimiseSchedule(lowered, { seed: 1 });
     const before = relaxed.targets.find((t) => t.starId === easy.id)!;
     const after = capped.targets.find((t) => t.starId === easy.id)!;
@@ -144,11 +144,11 @@ describe('what the utility asks of a plan', () => {
   it('spends visits away from the quadratures when the ephemeris is stale, and none when it is fresh', () => {
     // The same slots; a catalogue Tc and P whose phase error reaches 0.15 cycles by the window's end.
     const fresh = { ...singleTarget(3.3, 40, 9), time: { mode: 'choose-nights' as const, nights: 12 } };
-    const stale = { ...fresh, targets: [onePlanetStar('LONE-1', { kMps: 3, periodDays: 3.3, tcDays: -300, tcErrDays: 0.05, periodErrDays: 0.0015, goal: 100 }, [0, 40])] };
+    const stale = { ...fresh, targets: [onePlanetStar('LONE-1', { kMps: 3, periodDays: 3.3, tcBjdTdb: -300, tcErrDays: 0.05, periodErrDays: 0.0015, goalSignificance: 100 }, [0, 40])] };
     // |sin 2 pi phi| below 0.7: more than 0.125 cycles from both quadratures (common practice).
     const offQuadrature = (problem: ScheduleProblem) => {
       const visits = visitsOf(problem, optimiseSchedule(problem, { seed: 2 }));
-      return visits.filter((v) => Math.abs(Math.sin((2 * Math.PI * v.midDays) / 3.3)) < 0.7).length / visits.length;
+      return visits.filter((v) => Math.abs(Math.sin((2 * Math.PI * v.midBjdTdb) / 3.3)) < 0.7).length / visits.length;
     };
     expect(offQuadrature(fresh)).toBe(0);
     expect(offQuadrature(stale)).toBeGreaterThan(0.1);

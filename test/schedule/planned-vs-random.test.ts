@@ -26,25 +26,25 @@ function slots(starId: string): CandidateSlot[] {
   for (let n = 0; n < NIGHTS; n++) {
     const opens = 0.08 - (4 / 1440) * n;
     for (let k = 0; k < 16; k++) {
-      const midDays = BJD0 + n + opens + (k * 30 + 10) / 1440;
-      out.push({ slotId: `${n}/${k}`, targetId: starId, nightIndex: n, startMs: (midDays - 2440587.5) * 86_400_000 - 600_000, durationSec: SLOT_SEC, sigmaWhiteMps: SIGMA_MPS, midDays });
+      const midBjdTdb = BJD0 + n + opens + (k * 30 + 10) / 1440;
+      out.push({ slotId: `${n}/${k}`, targetId: starId, nightIndex: n, startMs: (midBjdTdb - 2440587.5) * 86_400_000 - 600_000, durationSec: SLOT_SEC, whiteSigmaMps: SIGMA_MPS, midBjdTdb });
     }
   }
   return out;
 }
 
-function problemOf(star: StarInput, visits: number, onePerNight: boolean, goal: number): ScheduleProblem {
+function problemOf(star: StarInput, visits: number, onePerNight: boolean, goalSignificance: number): ScheduleProblem {
   const model = buildStarModel(star);
   return {
-    nights: Array.from({ length: NIGHTS }, (_, n) => ({ index: n, localDate: `n${n}`, clearProbability: 1, hoursAvailable: 8, midDays: BJD0 + n + 0.25 })),
-    targets: [{ id: 'S', planets: star.planets.map((p) => ({ id: p.id, priority: 1, kMps: p.kMps, goal })), model }],
+    nights: Array.from({ length: NIGHTS }, (_, n) => ({ index: n, localDate: `n${n}`, clearProbability: 1, hoursAvailable: 8, midBjdTdb: BJD0 + n + 0.25 })),
+    targets: [{ id: 'S', planets: star.planets.map((p) => ({ id: p.id, priority: 1, kMps: p.kMps, goalSignificance })), model }],
     slots: slots('S'),
     time: { mode: 'hours', hours: (visits * SLOT_SEC) / 3600 + 1e-6 },
     constraints: { minSpacingHours: onePerNight ? 0 : 1, onePerNight },
   };
 }
 
-const asFit = (s: CandidateSlot): FitVisit => ({ bjd: s.midDays, sigmaMps: s.sigmaWhiteMps, night: s.nightIndex, nightBjd: BJD0 + s.nightIndex + 0.25 });
+const asFit = (s: CandidateSlot): FitVisit => ({ bjdTdb: s.midBjdTdb, whiteSigmaMps: s.whiteSigmaMps, night: s.nightIndex, nightBjdTdb: BJD0 + s.nightIndex + 0.25 });
 
 function plannedVisits(problem: ScheduleProblem): FitVisit[] {
   const byId = new Map(problem.slots.map((s) => [s.slotId, s]));
@@ -56,10 +56,10 @@ function randomVisits(problem: ScheduleProblem, count: number, rng: Rng): FitVis
   const chosen: CandidateSlot[] = [];
   while (chosen.length < count) {
     const s = problem.slots[Math.floor(rng.uniform() * problem.slots.length)]!;
-    const clash = chosen.some((c) => (problem.constraints.onePerNight ? c.nightIndex === s.nightIndex : Math.abs(c.midDays - s.midDays) < 1 / 24));
+    const clash = chosen.some((c) => (problem.constraints.onePerNight ? c.nightIndex === s.nightIndex : Math.abs(c.midBjdTdb - s.midBjdTdb) < 1 / 24));
     if (!clash) chosen.push(s);
   }
-  return chosen.sort((a, b) => a.midDays - b.midDays).map(asFit);
+  return chosen.sort((a, b) => a.midBjdTdb - b.midBjdTdb).map(asFit);
 }
 
 function claimedSigmaK(star: StarInput, visits: FitVisit[]): number[] {
@@ -79,19 +79,19 @@ function measuredSigmaK(star: StarInput, visitSets: FitVisit[][], seed: number):
 
 /** A catalogue ephemeris measured `ageDays` before the window, with the phase error `phaseErrEnd` cycles at the window's end. */
 function planet(id: string, kMps: number, periodDays: number, phaseErrEnd: number, ageDays: number): PlanetInput {
-  const tcBjd = BJD0 - ageDays + 0.37 * periodDays;
+  const tcBjdTdb = BJD0 - ageDays + 0.37 * periodDays;
   const tcErrDays = 0.002 * periodDays;
-  const orbits = (BJD0 + NIGHTS - tcBjd) / periodDays;
+  const orbits = (BJD0 + NIGHTS - tcBjdTdb) / periodDays;
   const periodErrDays = Math.sqrt(Math.max(0, (phaseErrEnd * periodDays) ** 2 - tcErrDays ** 2)) / orbits;
-  return { id, kMps, periodDays, tcBjd, tcErrDays, periodErrDays, ecc: 0, omegaDeg: 90 };
+  return { id, kMps, periodDays, tcBjdTdb, tcErrDays, periodErrDays, ecc: 0, omegaDeg: 90 };
 }
 
 const span: [number, number] = [BJD0, BJD0 + NIGHTS];
 
 const CASES: { name: string; star: StarInput; visits: number; onePerNight: boolean; margin: number }[] = [
-  { name: 'phase error 0.15 cycles at the end', star: { planets: [planet('b', 4, 3.71, 0.15, 700)], nightlyJitterMps: 0, spanBjd: span }, visits: 20, onePerNight: true, margin: 1 },
-  { name: 'nightly jitter 2 m/s, several visits a night', star: { planets: [planet('b', 4, 5.93, 0.01, 200)], nightlyJitterMps: 2, spanBjd: span }, visits: 24, onePerNight: false, margin: 0.85 },
-  { name: 'two planets', star: { planets: [planet('b', 4, 3.71, 0.02, 300), planet('c', 3, 11.2, 0.03, 300)], nightlyJitterMps: 0, spanBjd: span }, visits: 24, onePerNight: true, margin: 0.9 },
+  { name: 'phase error 0.15 cycles at the end', star: { planets: [planet('b', 4, 3.71, 0.15, 700)], nightlyJitterMps: 0, spanBjdTdb: span }, visits: 20, onePerNight: true, margin: 1 },
+  { name: 'nightly jitter 2 m/s, several visits a night', star: { planets: [planet('b', 4, 5.93, 0.01, 200)], nightlyJitterMps: 2, spanBjdTdb: span }, visits: 24, onePerNight: false, margin: 0.85 },
+  { name: 'two planets', star: { planets: [planet('b', 4, 3.71, 0.02, 300), planet('c', 3, 11.2, 0.03, 300)], nightlyJitterMps: 0, spanBjdTdb: span }, visits: 24, onePerNight: true, margin: 0.9 },
 ];
 
 describe('planned visits, fitted as an astronomer would', () => {
@@ -118,7 +118,7 @@ describe('planned visits, fitted as an astronomer would', () => {
 
 describe('visits needed on a fresh ephemeris', () => {
   it('the plan reaches K/σ_K = 5 with at most 0.55 times the visits random nights need', () => {
-    const star: StarInput = { planets: [planet('b', 3, 3.3, 0, 100)], nightlyJitterMps: 0, spanBjd: span };
+    const star: StarInput = { planets: [planet('b', 3, 3.3, 0, 100)], nightlyJitterMps: 0, spanBjdTdb: span };
     const reachesWithPlan = (n: number) => 3 / claimedSigmaK(star, plannedVisits(problemOf(star, n, true, 5)))[0]! >= 5;
     let planned = 2;
     while (!reachesWithPlan(planned)) planned++;

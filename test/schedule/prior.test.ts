@@ -21,12 +21,12 @@ function withPrior(seed: number, sharedNight: boolean): ScheduleProblem {
   const past = new Set([0, 1, 2]);
   const prior: PriorVisit[] = problem.slots
     .filter((s) => past.has(s.nightIndex) && rng.uniform() < 0.3)
-    .map((s) => ({ targetId: s.targetId, localDate: problem.nights[s.nightIndex]!.localDate, midDays: s.midDays, sigmaWhiteMps: s.sigmaWhiteMps }));
+    .map((s) => ({ targetId: s.targetId, localDate: problem.nights[s.nightIndex]!.localDate, midBjdTdb: s.midBjdTdb, whiteSigmaMps: s.whiteSigmaMps }));
   // With `sharedNight`, night 3 stays in the problem and also holds a prior visit of every star.
   const keep = (s: CandidateSlot) => !past.has(s.nightIndex);
   if (sharedNight) {
     for (const s of problem.slots.filter((x) => x.nightIndex === 3 && x.slotId.endsWith('/0'))) {
-      prior.push({ targetId: s.targetId, localDate: problem.nights[3]!.localDate, midDays: s.midDays - 0.01, sigmaWhiteMps: s.sigmaWhiteMps });
+      prior.push({ targetId: s.targetId, localDate: problem.nights[3]!.localDate, midBjdTdb: s.midBjdTdb - 0.01, whiteSigmaMps: s.whiteSigmaMps });
     }
   }
   return { ...problem, nights: problem.nights.filter((n) => !past.has(n.index)), slots: problem.slots.filter(keep), prior };
@@ -76,18 +76,18 @@ describe('prior visits in the optimiser', () => {
   });
 
   it('a planet whose past visits already reach its goal gets no further visits, even with nights to spare', () => {
-    const nights = Array.from({ length: 6 }, (_, n) => ({ index: n, localDate: `2027-03-0${n + 1}`, clearProbability: 1, hoursAvailable: 8, midDays: 100 + n + 0.25 }));
+    const nights = Array.from({ length: 6 }, (_, n) => ({ index: n, localDate: `2027-03-0${n + 1}`, clearProbability: 1, hoursAvailable: 8, midBjdTdb: 100 + n + 0.25 }));
     const star = (id: string, periodDays: number) => ({
       id,
-      planets: [{ id: `${id} b`, priority: 1, kMps: 8, goal: 5 }],
-      model: buildStarModel({ planets: [{ id: `${id} b`, kMps: 8, periodDays, tcBjd: 99.3, periodErrDays: 0, tcErrDays: 0, ecc: 0, omegaDeg: 90 }], nightlyJitterMps: 0, spanBjd: [100, 106] }),
+      planets: [{ id: `${id} b`, priority: 1, kMps: 8, goalSignificance: 5 }],
+      model: buildStarModel({ planets: [{ id: `${id} b`, kMps: 8, periodDays, tcBjdTdb: 99.3, periodErrDays: 0, tcErrDays: 0, ecc: 0, omegaDeg: 90 }], nightlyJitterMps: 0, spanBjdTdb: [100, 106] }),
     });
     const slots: CandidateSlot[] = [];
     for (const id of ['DONE', 'OPEN']) {
       for (const n of nights) {
         for (let k = 0; k < 8; k++) {
-          const midDays = n.midDays - 0.15 + k * 0.04;
-          slots.push({ slotId: `${id}/${n.index}/${k}`, targetId: id, nightIndex: n.index, startMs: (midDays - 2440587.5) * 86_400_000, durationSec: 900, sigmaWhiteMps: 2, midDays });
+          const midBjdTdb = n.midBjdTdb - 0.15 + k * 0.04;
+          slots.push({ slotId: `${id}/${n.index}/${k}`, targetId: id, nightIndex: n.index, startMs: (midBjdTdb - 2440587.5) * 86_400_000, durationSec: 900, whiteSigmaMps: 2, midBjdTdb });
         }
       }
     }
@@ -95,8 +95,8 @@ describe('prior visits in the optimiser', () => {
     const prior: PriorVisit[] = Array.from({ length: 12 }, (_, i) => ({
       targetId: 'DONE',
       localDate: `2027-02-${10 + i}`,
-      midDays: 99.3 - 3.1 * (10 - Math.floor(i / 2)) + 3.1 * (i % 2 ? 0.75 : 0.25),
-      sigmaWhiteMps: 1,
+      midBjdTdb: 99.3 - 3.1 * (10 - Math.floor(i / 2)) + 3.1 * (i % 2 ? 0.75 : 0.25),
+      whiteSigmaMps: 1,
     }));
     const problem: ScheduleProblem = {
       nights,

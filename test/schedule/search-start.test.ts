@@ -19,16 +19,16 @@ function problem(): ScheduleProblem {
   const nights = Array.from({ length: 30 }, (_, n) => ({ index: n, localDate: `n${n}`, clearProbability: 1, hoursAvailable: 8 }));
   for (let n = 0; n < 30; n++) {
     const eStart = T0 + n * DAY_MS;
-    slots.push({ slotId: `e${n}`, targetId: 'E', nightIndex: n, startMs: eStart, durationSec: 3600, sigmaWhiteMps: 2, midDays: (eStart - T0) / DAY_MS });
+    slots.push({ slotId: `e${n}`, targetId: 'E', nightIndex: n, startMs: eStart, durationSec: 3600, whiteSigmaMps: 2, midBjdTdb: (eStart - T0) / DAY_MS });
     const sStart = eStart + 2 * 3_600_000;
-    slots.push({ slotId: `s${n}`, targetId: 'S', nightIndex: n, startMs: sStart, durationSec: 300, sigmaWhiteMps: 2, midDays: (sStart - T0) / DAY_MS });
+    slots.push({ slotId: `s${n}`, targetId: 'S', nightIndex: n, startMs: sStart, durationSec: 300, whiteSigmaMps: 2, midBjdTdb: (sStart - T0) / DAY_MS });
   }
   return {
     nights,
     targets: [
       // One day a night, 1/0.37 days per cycle: the phase steps by 0.37 cycles a night, as before.
-      onePlanetStar('E', { kMps: 2, periodDays: 1 / 0.37, tcDays: 0 }, [0, 30]),
-      { id: 'S', planets: [], search: { id: 'S', priority: 1, kMps: 3, goal: 5, periodMinDays: 2, periodMaxDays: 20 } },
+      onePlanetStar('E', { kMps: 2, periodDays: 1 / 0.37, tcBjdTdb: 0 }, [0, 30]),
+      { id: 'S', planets: [], search: { id: 'S', priority: 1, kMps: 3, goalSignificance: 5, periodMinDays: 2, periodMaxDays: 20 } },
     ],
     slots,
     time: { mode: 'hours', hours: 6 },

@@ -19,7 +19,7 @@ describe('simulateWeather', () => {
     const outcome = simulateWeather(problem, result, 50, 9, settings);
     outcome.targets.forEach((t, i) => {
       const planned = result.targets[i]!;
-      expect(t.goalProbability).toBe(planned.kOverSigmaK >= planned.goal * (1 - 1e-9) ? 1 : 0);
+      expect(t.goalProbability).toBe(planned.kOverSigmaK >= planned.goalSignificance * (1 - 1e-9) ? 1 : 0);
       expect(t.meanKOverSigmaK).toBeCloseTo(planned.kOverSigmaK, 8);
     });
     expect(outcome.meanUtility).toBeCloseTo(result.utility, 8);
@@ -36,7 +36,7 @@ describe('simulateWeather', () => {
   it('agrees with an exact sum over every weather outcome, within Monte Carlo error', () => {
     const problem = problemWith(0.6, 5);
     // Low goals so that reaching them is a matter of luck with the weather.
-    const lowered = { ...problem, targets: problem.targets.map((t) => ({ ...t, planets: t.planets.map((p) => ({ ...p, goal: 1 })), ...(t.search ? { search: { ...t.search, goal: 1 } } : {}) })) };
+    const lowered = { ...problem, targets: problem.targets.map((t) => ({ ...t, planets: t.planets.map((p) => ({ ...p, goalSignificance: 1 })), ...(t.search ? { search: { ...t.search, goalSignificance: 1 } } : {}) })) };
     const result = optimiseSchedule(lowered, { seed: 1, ...settings });
     const byId = new Map(lowered.slots.map((s) => [s.slotId, s]));
     const visits = result.slotIds.map((id) => byId.get(id)!);

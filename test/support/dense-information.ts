@@ -14,16 +14,16 @@
 //    (common practice), averaged over the model's sample ephemerides with their weights.
 // Only the reference epoch Tc_ref, the scale U (orbitsScale) and the sample shifts and weights
 // are read from the model object.
-import { periastronFromConjunctionBjd } from '../../src/orbit/periastron-time.js';
+import { periastronFromConjunctionBjdTdb } from '../../src/orbit/periastron-time.js';
 import { radialVelocityMps } from '../../src/orbit/rv-curve.js';
 import { activityCovariance } from '../../src/rv/activity-kernel.js';
 import type { StarModel } from '../../src/rv/information-model.js';
 
 export interface DenseVisit {
-  bjd: number;
-  sigmaMps: number;
+  bjdTdb: number;
+  whiteSigmaMps: number;
   night: number;
-  nightBjd: number;
+  nightBjdTdb: number;
 }
 
 /** The floor information-model.ts puts on σ_Tc when only the period is uncertain (days). */
@@ -52,8 +52,8 @@ function velocity(gamma: number, planets: PlanetState[], tRel: number): number {
       ecc = Math.hypot(pl.x, pl.y);
       omegaDeg = ecc > 0 ? (Math.atan2(pl.y, pl.x) * 180) / Math.PI : 90;
     }
-    const periastronBjd = periastronFromConjunctionBjd({ tcBjd: pl.tc, periodDays: pl.period, ecc, omegaDeg });
-    v += radialVelocityMps({ kMps: pl.k, periodDays: pl.period, ecc, omegaDeg, periastronBjd }, tRel);
+    const periastronBjdTdb = periastronFromConjunctionBjdTdb({ tcBjdTdb: pl.tc, periodDays: pl.period, ecc, omegaDeg });
+    v += radialVelocityMps({ kMps: pl.k, periodDays: pl.period, ecc, omegaDeg, periastronBjdTdb }, tRel);
   }
   return v;
 }
@@ -103,9 +103,9 @@ export function denseCovariance(model: StarModel, visits: DenseVisit[]): number[
   const act = model.input.activity;
   return visits.map((vi, i) =>
     visits.map((vj, j) => {
-      let c = i === j ? vi.sigmaMps * vi.sigmaMps : 0;
+      let c = i === j ? vi.whiteSigmaMps * vi.whiteSigmaMps : 0;
       if (vi.night === vj.night) c += tau2;
-      if (act) c += activityCovariance(act, vi.nightBjd - vj.nightBjd);
+      if (act) c += activityCovariance(act, vi.nightBjdTdb - vj.nightBjdTdb);
       return c;
     }),
   );
@@ -115,8 +115,8 @@ export function denseCovariance(model: StarModel, visits: DenseVisit[]): number[
 export function denseKVariances(model: StarModel, visits: DenseVisit[]): Float64Array {
   const input = model.input;
   const planets = input.planets;
-  const origin = model.planets[0]!.tcRefBjd;
-  const tRel = visits.map((v) => v.bjd - origin);
+  const origin = model.planets[0]!.tcRefBjdTdb;
+  const tRel = visits.map((v) => v.bjdTdb - origin);
   // Own parameter order: γ, per planet [α][β][x y], then the K's.
   type Slot = { kind: 'gamma' } | { kind: 'alpha' | 'beta' | 'x' | 'y' | 'k'; planet: number };
   const slots: Slot[] = [{ kind: 'gamma' }];
@@ -138,7 +138,7 @@ export function denseKVariances(model: StarModel, visits: DenseVisit[]): Float64
     const ib = slots.findIndex((s) => s.kind === 'beta' && s.planet === i);
     const ix = slots.findIndex((s) => s.kind === 'x' && s.planet === i);
     const u = model.planets[i]!.orbitsScale;
-    const n = Math.round((model.planets[i]!.tcRefBjd - pl.tcBjd) / pl.periodDays);
+    const n = Math.round((model.planets[i]!.tcRefBjdTdb - pl.tcBjdTdb) / pl.periodDays);
     const sp = pl.periodErrDays;
     const st = sp > 0 ? Math.max(pl.tcErrDays, TC_FLOOR_DAYS) : pl.tcErrDays;
     if (ia >= 0 && ib < 0) prior[ia]![ia] = (pl.periodDays * pl.periodDays) / (st * st);
@@ -166,7 +166,7 @@ export function denseKVariances(model: StarModel, visits: DenseVisit[]): Float64
     const base: PlanetState[] = planets.map((pl, i) => {
       const om = (pl.omegaDeg * Math.PI) / 180;
       return {
-        tc: model.planets[i]!.tcRefBjd - origin + sample.alpha[i]! * pl.periodDays,
+        tc: model.planets[i]!.tcRefBjdTdb - origin + sample.alpha[i]! * pl.periodDays,
         period: pl.periodDays * (1 + sample.beta[i]! / model.planets[i]!.orbitsScale),
         x: pl.ecc * Math.cos(om),
         y: pl.ecc * Math.sin(om),

@@ -15,17 +15,17 @@
 // across nights drawn by Cholesky from src/rv/activity-kernel.ts (constant within a night).
 // Truth per data set: Tc and P of each planet drawn from their catalogue Gaussians, K and the
 // eccentricity vector at the catalogue values, γ = 0.
-import { periastronFromConjunctionBjd } from '../../src/orbit/periastron-time.js';
+import { periastronFromConjunctionBjdTdb } from '../../src/orbit/periastron-time.js';
 import { type RvOrbit, radialVelocityMps } from '../../src/orbit/rv-curve.js';
 import { activityCovariance } from '../../src/rv/activity-kernel.js';
 import type { ActivityInput, PlanetInput } from '../../src/rv/information-model.js';
 import type { Rng } from '../../src/rv/random.js';
 
 export interface FitVisit {
-  bjd: number;
-  sigmaMps: number;
+  bjdTdb: number;
+  whiteSigmaMps: number;
   night: number;
-  nightBjd: number;
+  nightBjdTdb: number;
 }
 
 export interface FitSetup {
@@ -112,7 +112,7 @@ function layout(planets: PlanetInput[], origin: number): ParamLayout {
   lay.invSigma = new Float64Array(lay.count);
   planets.forEach((pl, i) => {
     lay.centre[lay.k[i]!] = pl.kMps;
-    lay.centre[lay.tc[i]!] = pl.tcBjd - origin;
+    lay.centre[lay.tc[i]!] = pl.tcBjdTdb - origin;
     lay.invSigma[lay.tc[i]!] = 1 / pl.tcErrDays;
     lay.centre[lay.period[i]!] = pl.periodDays;
     lay.invSigma[lay.period[i]!] = 1 / pl.periodErrDays;
@@ -138,8 +138,8 @@ function planetOrbit(pl: PlanetInput, i: number, lay: ParamLayout, theta: Float6
     omegaDeg = ecc > 0 ? (Math.atan2(theta[e + 1]!, theta[e]!) * 180) / Math.PI : 90;
   }
   const periodDays = theta[lay.period[i]!]!;
-  const periastronBjd = periastronFromConjunctionBjd({ tcBjd: theta[lay.tc[i]!]!, periodDays, ecc, omegaDeg });
-  return { kMps: theta[lay.k[i]!]!, periodDays, ecc, omegaDeg, periastronBjd };
+  const periastronBjdTdb = periastronFromConjunctionBjdTdb({ tcBjdTdb: theta[lay.tc[i]!]!, periodDays, ecc, omegaDeg });
+  return { kMps: theta[lay.k[i]!]!, periodDays, ecc, omegaDeg, periastronBjdTdb };
 }
 
 /** Every planet's orbit for parameters theta. */
@@ -162,8 +162,8 @@ export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, opti
   const diagnostics = { betterFromTruth: 0 };
   const { planets, visits } = setup;
   const n = visits.length;
-  const origin = Math.floor(visits[0]!.bjd);
-  const tRel = visits.map((v) => v.bjd - origin);
+  const origin = Math.floor(visits[0]!.bjdTdb);
+  const tRel = visits.map((v) => v.bjdTdb - origin);
   const lay = layout(planets, origin);
   const p = lay.count;
 
@@ -172,15 +172,15 @@ export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, opti
   const cov = new Float64Array(n * n);
   for (let i = 0; i < n; i++)
     for (let j = 0; j < n; j++) {
-      let c = i === j ? visits[i]!.sigmaMps ** 2 : 0;
+      let c = i === j ? visits[i]!.whiteSigmaMps ** 2 : 0;
       if (visits[i]!.night === visits[j]!.night) c += tau2;
-      if (setup.activity) c += activityCovariance(setup.activity, visits[i]!.nightBjd - visits[j]!.nightBjd);
+      if (setup.activity) c += activityCovariance(setup.activity, visits[i]!.nightBjdTdb - visits[j]!.nightBjdTdb);
       cov[i * n + j] = c;
     }
   const whiten = cholesky(cov, n);
   const nightKeys = [...new Set(visits.map((v) => v.night))];
   const nightOf = visits.map((v) => nightKeys.indexOf(v.night));
-  const nightTimes = nightKeys.map((key) => visits.find((v) => v.night === key)!.nightBjd);
+  const nightTimes = nightKeys.map((key) => visits.find((v) => v.night === key)!.nightBjdTdb);
   const m = nightKeys.length;
   let activityFactor: Float64Array | null = null;
   if (setup.activity) {
@@ -192,7 +192,7 @@ export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, opti
   // Finite-difference steps (central differences) for the nonlinear parameters.
   const step = new Float64Array(p);
   planets.forEach((pl, i) => {
-    const orbits = Math.max(1, ...tRel.map((t) => Math.abs(t - (pl.tcBjd - origin)) / pl.periodDays));
+    const orbits = Math.max(1, ...tRel.map((t) => Math.abs(t - (pl.tcBjdTdb - origin)) / pl.periodDays));
     step[lay.tc[i]!] = 1e-5 * pl.periodDays;
     step[lay.period[i]!] = (1e-5 * pl.periodDays) / orbits;
     if (lay.ecc[i]! >= 0) {
@@ -247,7 +247,7 @@ export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, opti
       for (let q = 0; q < m; q++) for (let r = 0; r <= q; r++) actNoise[q] += activityFactor[q * m + r]! * z[r]!;
     }
     const truthOrbits = planetOrbits(planets, lay, truth);
-    for (let i = 0; i < n; i++) y[i] = modelVelocity(truth[0]!, truthOrbits, tRel[i]!) + visits[i]!.sigmaMps * rng.normal() + nightNoise[nightOf[i]!]! + actNoise[nightOf[i]!]!;
+    for (let i = 0; i < n; i++) y[i] = modelVelocity(truth[0]!, truthOrbits, tRel[i]!) + visits[i]!.whiteSigmaMps * rng.normal() + nightNoise[nightOf[i]!]! + actNoise[nightOf[i]!]!;
 
     const fromCatalogue = Float64Array.from(lay.centre);
     fromCatalogue[0] = y.reduce((s, v) => s + v, 0) / n;
@@ -275,7 +275,7 @@ export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, opti
     let best = fitFrom(start);
     const middle = (tRel[0]! + tRel[n - 1]!) / 2;
     planets.forEach((pl, i) => {
-      const orbits = (middle - (pl.tcBjd - origin)) / pl.periodDays;
+      const orbits = (middle - (pl.tcBjdTdb - origin)) / pl.periodDays;
       const phaseErr = Math.hypot(pl.tcErrDays, orbits * pl.periodErrDays) / pl.periodDays;
       if (phaseErr <= 0.03) return;
       for (const shift of [-2, -1, 1, 2]) {

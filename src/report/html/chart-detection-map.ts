@@ -10,11 +10,11 @@ export interface DetectionMapData {
   /** Words under the title: how the map was made (visits, trials, threshold). */
   method: string;
   periodsDays: number[];
-  massesEarth: number[];
+  msinisEarth: number[];
   /** One or two panels sharing the axes, e.g. the analytic and the simulated known-phase map. */
   panels: { label: string; detection: number[][] }[];
   /** The mass the search aims at, or the planet's, drawn as a dashed rule. */
-  markMassEarth?: number;
+  markMsiniEarth?: number;
 }
 
 /** Cell edges of a log axis: geometric midpoints between grid values, the ends mirrored. */
@@ -24,16 +24,16 @@ function logEdges(values: number[]): number[] {
   return [values[0]! ** 2 / mids[0]!, ...mids, values.at(-1)! ** 2 / mids.at(-1)!];
 }
 
-const massText = (m: LevelMass) => (m.where === 'inside' ? fmt(m.massEarth, 1) : m.where);
+const massText = (m: LevelMass) => (m.where === 'inside' ? fmt(m.msiniEarth, 1) : m.where);
 
 function panelSpec(data: DetectionMapData, panel: DetectionMapData['panels'][number], width: number) {
   const pEdges = logEdges(data.periodsDays);
-  const mEdges = logEdges(data.massesEarth);
+  const mEdges = logEdges(data.msinisEarth);
   const cells = data.periodsDays.flatMap((_, i) =>
-    data.massesEarth.map((_, j) => ({ p0: pEdges[i]!, p1: pEdges[i + 1]!, m0: mEdges[j]!, m1: mEdges[j + 1]!, probability: panel.detection[i]![j]! })),
+    data.msinisEarth.map((_, j) => ({ p0: pEdges[i]!, p1: pEdges[i + 1]!, m0: mEdges[j]!, m1: mEdges[j + 1]!, probability: panel.detection[i]![j]! })),
   );
-  const contour = levelRows(data.periodsDays, data.massesEarth, panel.detection).flatMap((row) =>
-    row.levels.map(({ level, mass }) => ({ periodDays: row.periodDays, level: `${Math.round(level * 100)}%`, massEarth: mass.where === 'inside' ? mass.massEarth : null })),
+  const contour = levelRows(data.periodsDays, data.msinisEarth, panel.detection).flatMap((row) =>
+    row.levels.map(({ level, mass }) => ({ periodDays: row.periodDays, level: `${Math.round(level * 100)}%`, msiniEarth: mass.where === 'inside' ? mass.msiniEarth : null })),
   );
   const x = { type: 'quantitative' as const, title: 'Orbital period (days)', scale: { type: 'log', domain: [pEdges[0], pEdges.at(-1)], nice: false } };
   const y = { type: 'quantitative' as const, title: 'm sin i (M⊕)', scale: { type: 'log', domain: [mEdges[0], mEdges.at(-1)], nice: false } };
@@ -52,13 +52,13 @@ function panelSpec(data: DetectionMapData, panel: DetectionMapData['panels'][num
       name: 'map_contours',
       mark: { type: 'line', color: INK, strokeWidth: 2, invalid: 'break-paths-filter-domains' },
       encoding: {
-        x: { ...x, field: 'periodDays' }, y: { ...y, field: 'massEarth' },
+        x: { ...x, field: 'periodDays' }, y: { ...y, field: 'msiniEarth' },
         strokeDash: { field: 'level', type: 'nominal', title: 'detected', scale: { domain: ['50%', '90%'], range: [[1, 0], [6, 3]] } },
       },
     },
   ];
-  if (data.markMassEarth !== undefined) {
-    layers.push({ data: { values: [{ massEarth: data.markMassEarth }] }, name: 'map_mark', mark: { type: 'rule', color: MUTED, strokeDash: [2, 2] }, encoding: { y: { ...y, field: 'massEarth' } } });
+  if (data.markMsiniEarth !== undefined) {
+    layers.push({ data: { values: [{ msiniEarth: data.markMsiniEarth }] }, name: 'map_mark', mark: { type: 'rule', color: MUTED, strokeDash: [2, 2] }, encoding: { y: { ...y, field: 'msiniEarth' } } });
   }
   return { title: { text: panel.label, fontSize: 12, fontWeight: 500 }, width, height: 240, layer: layers };
 }
@@ -74,12 +74,12 @@ export function detectionMapFigure(data: DetectionMapData): ChartFigure {
   const panels = data.panels.map((panel) => panelSpec(data, panel, width));
   const spec = (panels.length === 1 ? panels[0] : { hconcat: panels, resolve: { scale: { color: 'shared', strokeDash: 'shared' } } }) as unknown as TopLevelSpec;
   const first = data.panels[0]!;
-  const rows = levelRows(data.periodsDays, data.massesEarth, first.detection);
+  const rows = levelRows(data.periodsDays, data.msinisEarth, first.detection);
   return {
     id: `detection-map-${data.targetId}`,
     kind: 'detection-map',
     title: `${data.targetId}: detection probability against period and m sin i`,
-    caption: `${data.method} Solid line: 50% detected; dashed: 90%.${data.markMassEarth !== undefined ? ` Dotted rule: ${fmt(data.markMassEarth, 1)} M⊕.` : ''}`,
+    caption: `${data.method} Solid line: 50% detected; dashed: 90%.${data.markMsiniEarth !== undefined ? ` Dotted rule: ${fmt(data.markMsiniEarth, 1)} M⊕.` : ''}`,
     spec,
     columns: [{ header: 'period (d)', align: 'right' }, { header: `50% mass (M⊕, ${first.label})`, align: 'right' }, { header: '90% mass (M⊕)', align: 'right' }],
     rows: rows.map((r) => [fmt(r.periodDays, 2), massText(r.levels[0]!.mass), massText(r.levels[1]!.mass)]),

@@ -47,7 +47,7 @@ export function kGrowthSeries(plan: Plan, summary: TargetSummary & { kMps: numbe
 
 /** K/σ_K growing with each planned visit of one ephemeris target, against its goal. */
 export function kGrowthFigure(plan: Plan, summary: TargetSummary & { kMps: number }): ChartFigure {
-  const goal = summary.goal ?? plan.campaign.goals.significance;
+  const goal = summary.goalSignificance ?? plan.campaign.goals.significance;
   const series = kGrowthSeries(plan, summary);
   const done = series.find((p) => p.visit === 0);
   const ahead = series.filter((p) => p.visit > 0);

@@ -16,9 +16,9 @@ function logGridDays(minDays: number, maxDays: number): number[] {
 }
 
 export interface MassLimit {
-  sigmaMps: number;
+  effectiveSigmaMps: number;
   visits: number;
-  significance: number;
+  goalSignificance: number;
   rows: MassLimitRow[];
 }
 
@@ -31,24 +31,24 @@ export interface MassLimit {
  */
 export function searchMassLimit(plan: Plan, summary: TargetSummary, target: Target, periodsDays: number[]): MassLimit | undefined {
   const visits = visitsOf(plan, summary.starId);
-  const sigmaMps = equivalentSigmaMps(visits);
-  if (sigmaMps === undefined || visits.length < MIN_VISITS) return undefined;
-  const significance = summary.goal ?? plan.campaign.goals.significance;
+  const effectiveSigmaMps = equivalentSigmaMps(visits);
+  if (effectiveSigmaMps === undefined || visits.length < MIN_VISITS) return undefined;
+  const goalSignificance = summary.goalSignificance ?? plan.campaign.goals.significance;
   // The floor does not average down: it is taken out of the per-visit σ and given apart (src/rv/detect.ts).
-  const floorMps = Math.min(plan.campaign.instrument.floorMps, sigmaMps);
-  const whiteMps = Math.sqrt(sigmaMps ** 2 - floorMps ** 2);
-  const rows = massLimitTable({ starMassSun: target.massSun, sigmaMps: whiteMps, floorMps, visits: visits.length, significance, periodsDays });
-  return { sigmaMps, visits: visits.length, significance, rows };
+  const floorMps = Math.min(plan.campaign.instrument.floorMps, effectiveSigmaMps);
+  const whiteSigmaMps = Math.sqrt(effectiveSigmaMps ** 2 - floorMps ** 2);
+  const rows = massLimitTable({ starMassSun: target.massSun, whiteSigmaMps, floorMps, visits: visits.length, goalSignificance, periodsDays });
+  return { effectiveSigmaMps, visits: visits.length, goalSignificance, rows };
 }
 
 /** The minimum detectable m sin i against period (log axis) with the search's target mass; undefined without enough visits. */
 export function massLimitFigure(plan: Plan, summary: TargetSummary, target: Target & { search: SearchSpec }): ChartFigure | undefined {
-  const { periodMinDays, periodMaxDays, massEarth } = target.search;
+  const { periodMinDays, periodMaxDays, msiniEarth } = target.search;
   const limit = searchMassLimit(plan, summary, target, logGridDays(periodMinDays, periodMaxDays));
   if (!limit) return undefined;
-  const { rows, significance, sigmaMps } = limit;
-  const yMax = Math.max(massEarth, ...rows.map((r) => r.massMinRandomEarth)) * 1.15;
-  const curve = rows.map((r) => ({ periodDays: r.periodDays, massEarth: r.massMinRandomEarth, top: yMax }));
+  const { rows, goalSignificance, effectiveSigmaMps } = limit;
+  const yMax = Math.max(msiniEarth, ...rows.map((r) => r.massMinRandomEarth)) * 1.15;
+  const curve = rows.map((r) => ({ periodDays: r.periodDays, msiniEarth: r.massMinRandomEarth, top: yMax }));
   const x = { field: 'periodDays', type: 'quantitative' as const, title: 'Orbital period (days)', scale: { type: 'log', domain: [periodMinDays, periodMaxDays], nice: false } };
   const spec = {
     width: 380,
@@ -57,20 +57,20 @@ export function massLimitFigure(plan: Plan, summary: TargetSummary, target: Targ
       {
         data: { values: curve },
         name: 'detectable_area', mark: { type: 'area', color: OKABE_ITO.bluishGreen, opacity: 0.12 },
-        encoding: { x, y: { field: 'massEarth', type: 'quantitative' }, y2: { field: 'top' } },
+        encoding: { x, y: { field: 'msiniEarth', type: 'quantitative' }, y2: { field: 'top' } },
       },
       {
         data: { values: curve },
         name: 'mass_limit_line', mark: { type: 'line', color: OKABE_ITO.bluishGreen, strokeWidth: 2 },
-        encoding: { x, y: { field: 'massEarth', type: 'quantitative', title: 'Smallest m sin i (M⊕)', scale: { domain: [0, yMax], nice: false } } },
+        encoding: { x, y: { field: 'msiniEarth', type: 'quantitative', title: 'Smallest m sin i (M⊕)', scale: { domain: [0, yMax], nice: false } } },
       },
       {
-        data: { values: [{ massEarth, periodDays: periodMinDays, label: `target mass ${fmt(massEarth, 1)} M⊕` }] },
+        data: { values: [{ msiniEarth, periodDays: periodMinDays, label: `target mass ${fmt(msiniEarth, 1)} M⊕` }] },
         layer: [
-          { name: 'goal_mass', mark: { type: 'rule', color: MUTED, strokeDash: [5, 3], strokeWidth: 1.5 }, encoding: { y: { field: 'massEarth', type: 'quantitative' } } },
+          { name: 'goal_mass', mark: { type: 'rule', color: MUTED, strokeDash: [5, 3], strokeWidth: 1.5 }, encoding: { y: { field: 'msiniEarth', type: 'quantitative' } } },
           {
             mark: { type: 'text', align: 'left', dx: 4, dy: -7, color: MUTED, fontSize: 11 },
-            encoding: { x, y: { field: 'massEarth', type: 'quantitative' }, text: { field: 'label' } },
+            encoding: { x, y: { field: 'msiniEarth', type: 'quantitative' }, text: { field: 'label' } },
           },
         ],
       },
@@ -82,8 +82,8 @@ export function massLimitFigure(plan: Plan, summary: TargetSummary, target: Targ
     kind: 'mass-limit',
     title: `${summary.targetId}: detectable planet mass against period`,
     caption:
-      `Planets above the line (shaded) reach K/σ_K ≥ ${fmt(significance, 1)} with the ${limit.visits} planned visits ` +
-      `(equivalent σ = ${fmt(sigmaMps, 2)} m/s per visit, star ${fmt(target.massSun, 2)} M☉, circular orbits). ` +
+      `Planets above the line (shaded) reach K/σ_K ≥ ${fmt(goalSignificance, 1)} with the ${limit.visits} planned visits ` +
+      `(equivalent σ = ${fmt(effectiveSigmaMps, 2)} m/s per visit, star ${fmt(target.massSun, 2)} M☉, circular orbits). ` +
       'It uses the random-phase rule σ_K ≈ σ√(2/N) and the exact inverse of K; the dashed line is the mass the search aims at.',
     spec,
     columns: [{ header: 'period (d)', align: 'right' }, { header: 'K min (m/s)', align: 'right' }, { header: 'm sin i min (Earth masses)', align: 'right' }],

@@ -47,7 +47,7 @@ export function rvPhaseFigure(plan: Plan, summary: TargetSummary & { kMps: numbe
     const rv = rvAt(phase);
     return {
       n: i + 1, date: v.kept ? `${v.localDate} (kept)` : v.localDate, phase, rv,
-      rvLo: rv - v.sigmaEffMps, rvHi: rv + v.sigmaEffMps,
+      rvLo: rv - v.effectiveSigmaMps, rvHi: rv + v.effectiveSigmaMps,
       phaseLo: phase - phaseErr, phaseHi: phase + phaseErr,
     };
   });

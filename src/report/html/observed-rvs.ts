@@ -8,7 +8,7 @@ import { starsOf } from '../../plan/star-model.js';
 export interface FoldedRv {
   date: string;
   instrument: string;
-  bjd: number;
+  bjdTdb: number;
   phase: number;
   /** RV − γ(instrument) − the star's other planets (m/s), and its ±1σ ends. */
   rv: number;
@@ -47,7 +47,7 @@ export function foldedRvs(plan: Plan, summary: TargetSummary): { points: FoldedR
   const model = (bjd: number) => signals.reduce((sum, p) => sum + p.at(bjd), 0);
   const others = (bjd: number) => signals.reduce((sum, p) => sum + (p.id === summary.targetId ? 0 : p.at(bjd)), 0);
   const points = (plan.observed ?? []).flatMap((v) =>
-    v.starId === summary.starId && v.rvMps !== undefined ? [{ v, rv: v.rvMps, err: Math.hypot(v.rvErrMps ?? 0, jitter) }] : [],
+    v.starId === summary.starId && v.rvMps !== undefined ? [{ v, rv: v.rvMps, err: Math.hypot(v.rvErrorMps ?? 0, jitter) }] : [],
   );
   const gamma = new Map<string, number>();
   for (const instrument of new Set(points.map((p) => p.v.instrument))) {
@@ -58,7 +58,7 @@ export function foldedRvs(plan: Plan, summary: TargetSummary): { points: FoldedR
   const folded = points.map(({ v, rv, err }) => {
     const g = gamma.get(v.instrument)!;
     const y = rv - g - others(v.midBjdTdb);
-    return { date: v.localDate, instrument: v.instrument, bjd: v.midBjdTdb, phase: phaseAt(self.ephemeris!, v.midBjdTdb), rv: y, rvLo: y - err, rvHi: y + err, errMps: err, gammaMps: g };
+    return { date: v.localDate, instrument: v.instrument, bjdTdb: v.midBjdTdb, phase: phaseAt(self.ephemeris!, v.midBjdTdb), rv: y, rvLo: y - err, rvHi: y + err, errMps: err, gammaMps: g };
   });
   return { points: folded, othersRemoved: signals.map((p) => p.id).filter((id) => id !== summary.targetId) };
 }

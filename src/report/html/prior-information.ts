@@ -21,15 +21,15 @@ export function priorInformationVisits(plan: Plan, starId: string, model: StarMo
   const otherDates = [...new Set(prior.map((v) => v.localDate).filter((d) => !nightPos.has(d)))];
   const meanMiddle = (date: string) => {
     const same = prior.filter((v) => v.localDate === date);
-    return same.reduce((sum, v) => sum + (v.nightMidDays ?? v.midDays), 0) / same.length;
+    return same.reduce((sum, v) => sum + (v.nightMidBjdTdb ?? v.midBjdTdb), 0) / same.length;
   };
   const visits = informationVisits(
     model,
     prior.map((v) => {
       const at = nightPos.get(v.localDate);
       return at !== undefined
-        ? { bjd: v.midDays, sigmaMps: v.sigmaWhiteMps, night: at, nightBjd: nights[at]!.midDays ?? 0 }
-        : { bjd: v.midDays, sigmaMps: v.sigmaWhiteMps, night: nights.length + otherDates.indexOf(v.localDate), nightBjd: meanMiddle(v.localDate) };
+        ? { bjdTdb: v.midBjdTdb, whiteSigmaMps: v.whiteSigmaMps, night: at, nightBjdTdb: nights[at]!.midBjdTdb ?? 0 }
+        : { bjdTdb: v.midBjdTdb, whiteSigmaMps: v.whiteSigmaMps, night: nights.length + otherDates.indexOf(v.localDate), nightBjdTdb: meanMiddle(v.localDate) };
     }),
   );
   visits.forEach((v, i) => {

@@ -52,7 +52,7 @@ function clearText(clear: number | number[]): string {
 
 function ephemerisSentence(plan: Plan, summaries: TargetSummary[]): string {
   const ratios = summaries.map((s) => s.kOverSigmaK ?? 0);
-  const met = summaries.filter((s) => (s.kOverSigmaK ?? 0) >= (s.goal ?? plan.campaign.goals.significance)).length;
+  const met = summaries.filter((s) => (s.kOverSigmaK ?? 0) >= (s.goalSignificance ?? plan.campaign.goals.significance)).length;
   return (
     `For the ${summaries.length === 1 ? 'planet' : `${summaries.length} planets`} with a transit ephemeris (${list(summaries.map((s) => s.targetId))}), ` +
     'the visits are placed at the predicted orbital phases that constrain the semi-amplitude K best, allowing for the growing ' +
@@ -89,7 +89,7 @@ export function proposalParagraph(plan: Plan): string {
   const c = plan.campaign;
   const t = plan.totals;
   const observed = plan.targets.filter((s) => s.visits > 0);
-  const sigmas = plan.visits.map((v) => v.sigmaEffMps);
+  const sigmas = plan.visits.map((v) => v.effectiveSigmaMps);
   const exposures = plan.visits.map((v) => v.exposureSec);
   const ephemeris = observed.filter((s) => s.kind === 'ephemeris');
   const search = observed.filter((s) => s.kind === 'search');

@@ -17,6 +17,6 @@ export function targetOf(plan: Plan, targetId: string): Target | undefined {
  */
 export function equivalentSigmaMps(visits: PlannedVisit[]): number | undefined {
   if (!visits.length) return undefined;
-  const weight = visits.reduce((sum, v) => sum + 1 / (v.sigmaEffMps * v.sigmaEffMps), 0);
+  const weight = visits.reduce((sum, v) => sum + 1 / (v.effectiveSigmaMps * v.effectiveSigmaMps), 0);
   return Math.sqrt(visits.length / weight);
 }
