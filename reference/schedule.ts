@@ -45,6 +45,15 @@ interface Ratio {
 }
 
 function kOverSigmaKOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], grids: (SearchGrid | null)[]): Ratio[] {
+  const ratios = targetRatios(problem, grids);
+  return problem.targets.flatMap((target, t) => ratios(t, visits.filter((v) => v.targetId === target.id)));
+}
+
+/**
+ * The ratios of target t (its planets' K/σ_K, then its search's) for its visits `own` (in the
+ * order given), from scratch: what depends on the problem alone is found once.
+ */
+function targetRatios(problem: ScheduleProblem, grids: (SearchGrid | null)[]): (t: number, own: CandidateSlot[]) => Ratio[] {
   const nightMid = nightMiddles(problem);
   // A prior visit shares the night of a problem night with its date; other dates get keys below 0.
   const priorKey = new Map<string, number>();
@@ -58,9 +67,10 @@ function kOverSigmaKOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], g
     const same = (problem.prior ?? []).filter((v) => v.localDate === date);
     return same.reduce((sum, v) => sum + (v.nightMidBjdTdb ?? v.midBjdTdb), 0) / same.length;
   };
-  return problem.targets.flatMap((target, t) => {
+  return (t, own) => {
+    const target = problem.targets[t]!;
     const prior = (problem.prior ?? []).filter((v) => v.targetId === target.id);
-    const mine = [...visits.filter((v) => v.targetId === target.id), ...prior];
+    const mine = [...own, ...prior];
     const out: Ratio[] = [];
     if (target.model) {
       // A fresh accumulator over the visits: no running state from earlier moves.
@@ -97,7 +107,7 @@ function kOverSigmaKOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], g
       out.push({ ratio: Math.exp(total / grid.angularFreq.length), goalSignificance: target.search.goalSignificance, priority: target.search.priority });
     }
     return out;
-  });
+  };
 }
 
 /** Each night's middle as the scheduler takes it (compile.ts): given, or the mean of its slots. */
@@ -116,55 +126,66 @@ export function referenceUtility(problem: ScheduleProblem, visits: CandidateSlot
 }
 
 function utilityOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], grids: (SearchGrid | null)[], overshootWeight: number): number {
-  const prior = kOverSigmaKOnGrids(problem, [], grids);
-  return kOverSigmaKOnGrids(problem, visits, grids).reduce((sum, r, i) => sum + r.priority * goalValue(r.ratio / r.goalSignificance, overshootAfterPrior(prior[i]!.ratio / r.goalSignificance, overshootWeight)), 0);
+  return utilityOfRatios(kOverSigmaKOnGrids(problem, visits, grids), kOverSigmaKOnGrids(problem, [], grids), overshootWeight);
+}
+
+/** Total utility from the ratios with the visits and without them (the prior's), in ScheduleResult.targets order. */
+function utilityOfRatios(ratios: Ratio[], prior: Ratio[], overshootWeight: number): number {
+  return ratios.reduce((sum, r, i) => sum + r.priority * goalValue(r.ratio / r.goalSignificance, overshootAfterPrior(prior[i]!.ratio / r.goalSignificance, overshootWeight)), 0);
 }
 
 /** Every constraint of the problem, checked pairwise: an empty list means feasible. */
 export function scheduleViolations(problem: ScheduleProblem, visits: CandidateSlot[]): string[] {
-  const problems: string[] = [];
+  return violationsOf(problem)(visits);
+}
+
+/** scheduleViolations for one problem, with the tables that depend on the problem alone made once. */
+function violationsOf(problem: ScheduleProblem): (visits: CandidateSlot[]) => string[] {
   const known = new Set(problem.slots);
   const nights = new Map(problem.nights.map((n) => [n.index, n]));
-  const ids = new Set<string>();
-  for (const v of visits) {
-    if (!known.has(v)) problems.push(`${v.slotId} is not a candidate slot`);
-    if (ids.has(v.slotId)) problems.push(`${v.slotId} chosen twice`);
-    ids.add(v.slotId);
-  }
-  const { onePerNight } = problem.constraints;
-  const spacingHours = (a: CandidateSlot, b: CandidateSlot) =>
-    onePerNight && a.nightIndex === b.nightIndex ? (problem.constraints.sameNightSpacingHours ?? 0) : problem.constraints.minSpacingHours;
-  for (let i = 0; i < visits.length; i++) {
-    for (let k = i + 1; k < visits.length; k++) {
-      const a = visits[i]!;
-      const b = visits[k]!;
-      const sameNight = a.nightIndex === b.nightIndex;
-      if (sameNight && a.startMs < b.startMs + b.durationSec * 1000 && b.startMs < a.startMs + a.durationSec * 1000) problems.push(`${a.slotId} overlaps ${b.slotId}`);
-      if (a.targetId === b.targetId && Math.abs(a.startMs - b.startMs) < spacingHours(a, b) * 3_600_000) problems.push(`${a.slotId} and ${b.slotId} closer than the spacing`);
+  const cap = new Map(problem.targets.map((t) => [t.id, t.visitsPerNight ?? 1]));
+  const dateOf = new Map(problem.nights.map((n) => [n.index, n.localDate]));
+  return (visits) => {
+    const problems: string[] = [];
+    const ids = new Set<string>();
+    for (const v of visits) {
+      if (!known.has(v)) problems.push(`${v.slotId} is not a candidate slot`);
+      if (ids.has(v.slotId)) problems.push(`${v.slotId} chosen twice`);
+      ids.add(v.slotId);
     }
-  }
-  if (onePerNight) {
-    // A star's visits of one night, prior visits on that night's date included, against its cap.
-    const cap = new Map(problem.targets.map((t) => [t.id, t.visitsPerNight ?? 1]));
-    const dateOf = new Map(problem.nights.map((n) => [n.index, n.localDate]));
-    const count = new Map<string, number>();
-    const bump = (targetId: string, date: string) => count.set(`${targetId} ${date}`, (count.get(`${targetId} ${date}`) ?? 0) + 1);
-    for (const v of visits) bump(v.targetId, dateOf.get(v.nightIndex)!);
-    const planned = new Set(count.keys());
-    for (const p of problem.prior ?? []) bump(p.targetId, p.localDate);
-    for (const [key, n] of count) {
-      const [targetId, date] = key.split(' ') as [string, string];
-      if (planned.has(key) && n > cap.get(targetId)!) problems.push(`${targetId} has ${n} visits on ${date}, ${cap.get(targetId)!} allowed`);
+    const { onePerNight } = problem.constraints;
+    const spacingHours = (a: CandidateSlot, b: CandidateSlot) =>
+      onePerNight && a.nightIndex === b.nightIndex ? (problem.constraints.sameNightSpacingHours ?? 0) : problem.constraints.minSpacingHours;
+    for (let i = 0; i < visits.length; i++) {
+      for (let k = i + 1; k < visits.length; k++) {
+        const a = visits[i]!;
+        const b = visits[k]!;
+        const sameNight = a.nightIndex === b.nightIndex;
+        if (sameNight && a.startMs < b.startMs + b.durationSec * 1000 && b.startMs < a.startMs + a.durationSec * 1000) problems.push(`${a.slotId} overlaps ${b.slotId}`);
+        if (a.targetId === b.targetId && Math.abs(a.startMs - b.startMs) < spacingHours(a, b) * 3_600_000) problems.push(`${a.slotId} and ${b.slotId} closer than the spacing`);
+      }
     }
-  }
-  const hoursByNight = new Map<number, number>();
-  for (const v of visits) hoursByNight.set(v.nightIndex, (hoursByNight.get(v.nightIndex) ?? 0) + v.durationSec / 3600);
-  for (const [n, hours] of hoursByNight) if (hours > nights.get(n)!.hoursAvailable + 1e-9) problems.push(`night ${n} holds ${hours} h`);
-  const time = problem.time;
-  if (time.mode === 'choose-nights' && hoursByNight.size > time.nights) problems.push(`${hoursByNight.size} nights used, ${time.nights} allowed`);
-  const total = visits.reduce((sum, v) => sum + v.durationSec / 3600, 0);
-  if (time.mode === 'hours' && total > time.hours + 1e-9) problems.push(`${total} h used, ${time.hours} allowed`);
-  return problems;
+    if (onePerNight) {
+      // A star's visits of one night, prior visits on that night's date included, against its cap.
+      const count = new Map<string, number>();
+      const bump = (targetId: string, date: string) => count.set(`${targetId} ${date}`, (count.get(`${targetId} ${date}`) ?? 0) + 1);
+      for (const v of visits) bump(v.targetId, dateOf.get(v.nightIndex)!);
+      const planned = new Set(count.keys());
+      for (const p of problem.prior ?? []) bump(p.targetId, p.localDate);
+      for (const [key, n] of count) {
+        const [targetId, date] = key.split(' ') as [string, string];
+        if (planned.has(key) && n > cap.get(targetId)!) problems.push(`${targetId} has ${n} visits on ${date}, ${cap.get(targetId)!} allowed`);
+      }
+    }
+    const hoursByNight = new Map<number, number>();
+    for (const v of visits) hoursByNight.set(v.nightIndex, (hoursByNight.get(v.nightIndex) ?? 0) + v.durationSec / 3600);
+    for (const [n, hours] of hoursByNight) if (hours > nights.get(n)!.hoursAvailable + 1e-9) problems.push(`night ${n} holds ${hours} h`);
+    const time = problem.time;
+    if (time.mode === 'choose-nights' && hoursByNight.size > time.nights) problems.push(`${hoursByNight.size} nights used, ${time.nights} allowed`);
+    const total = visits.reduce((sum, v) => sum + v.durationSec / 3600, 0);
+    if (time.mode === 'hours' && total > time.hours + 1e-9) problems.push(`${total} h used, ${time.hours} allowed`);
+    return problems;
+  };
 }
 
 /** All subsets of `items` (as index lists) with at most `limit` elements. */
@@ -188,13 +209,32 @@ function combinations(n: number, k: number): number[][] {
  * The best utility over every feasible schedule, by enumeration: per night every feasible set of
  * its slots, combined over the nights (in choose-nights mode over every set of exactly N nights,
  * which suffices because the utility never falls when visits are added). Tiny problems only.
+ * Each schedule's utility is that of referenceUtility, a sum over the targets of terms that
+ * depend on the target's own visits alone: a target's ratios are computed from scratch once per
+ * list of its visits and reused by every schedule that gives it the same list.
  */
 export function exhaustiveOptimum(problem: ScheduleProblem, settings: ReferenceSettings): { utility: number; visits: CandidateSlot[] } {
   const grids = compileProblem(problem, settings.searchGridSize).grids;
-  const oneNight: ScheduleProblem = { ...problem, time: { mode: 'given-nights' } };
+  const ratios = targetRatios(problem, grids);
+  const prior = kOverSigmaKOnGrids(problem, [], grids);
+  const known = problem.targets.map(() => new Map<string, Ratio[]>());
+  const utilityOf = (chosen: CandidateSlot[]): number =>
+    utilityOfRatios(
+      problem.targets.flatMap((target, t) => {
+        const own = chosen.filter((v) => v.targetId === target.id);
+        const key = own.map((v) => v.slotId).join('\n');
+        let r = known[t]!.get(key);
+        if (!r) known[t]!.set(key, (r = ratios(t, own)));
+        return r;
+      }),
+      prior,
+      settings.overshootWeight,
+    );
+  const oneNightViolations = violationsOf({ ...problem, time: { mode: 'given-nights' } });
+  const violations = violationsOf(problem);
   const perNight = problem.nights.map((night) => {
     const mine = problem.slots.filter((s) => s.nightIndex === night.index);
-    return subsets(mine, mine.length).filter((set) => scheduleViolations(oneNight, set).length === 0);
+    return subsets(mine, mine.length).filter((set) => oneNightViolations(set).length === 0);
   });
   const time = problem.time;
   const nightSets = time.mode === 'choose-nights' ? combinations(perNight.length, Math.min(time.nights, perNight.length)) : [perNight.map((_, i) => i)];
@@ -202,8 +242,8 @@ export function exhaustiveOptimum(problem: ScheduleProblem, settings: ReferenceS
   let best = { utility: -Infinity, visits: [] as CandidateSlot[] };
   const descend = (nights: number[], at: number, chosen: CandidateSlot[], hours: number): void => {
     if (at === nights.length) {
-      if (scheduleViolations(problem, chosen).length > 0) return;
-      const utility = utilityOnGrids(problem, chosen, grids, settings.overshootWeight);
+      if (violations(chosen).length > 0) return;
+      const utility = utilityOf(chosen);
       if (utility > best.utility) best = { utility, visits: chosen };
       return;
     }

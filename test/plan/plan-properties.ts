@@ -1,4 +1,4 @@
-// The plan properties checked on every campaign (demo-plan.test.ts, random-plans.test.ts): visits
+// The plan properties checked on every campaign (demo-plan.test.ts, random-plans-*.test.ts): visits
 // inside the slow reference sampler's windows and the dark span, no overlaps, spacing and budgets;
 // K/sigma_K recomputed from plan.csv; plan.ics read back with ical.js.
 import { describe, expect, it } from 'vitest';

@@ -15,8 +15,9 @@
 // across nights drawn by Cholesky from src/rv/activity-kernel.ts (constant within a night).
 // Truth per data set: Tc and P of each planet drawn from their catalogue Gaussians, K and the
 // eccentricity vector at the catalogue values, γ = 0.
+import { trueAnomalyRad } from '../../src/orbit/anomalies.js';
+import { eccentricAnomalyRad } from '../../src/orbit/kepler-equation.js';
 import { periastronFromConjunctionBjdTdb } from '../../src/orbit/periastron-time.js';
-import { type RvOrbit, radialVelocityMps } from '../../src/orbit/rv-curve.js';
 import { activityCovariance } from '../../src/rv/activity-kernel.js';
 import type { ActivityInput, PlanetInput } from '../../src/rv/information-model.js';
 import type { Rng } from '../../src/rv/random.js';
@@ -42,9 +43,8 @@ export interface MonteCarloResult {
   failures: number;
 }
 
-/** Cholesky factor (lower, row-major n×n) of a symmetric positive-definite matrix. */
-function cholesky(a: Float64Array, n: number): Float64Array {
-  const l = new Float64Array(n * n);
+/** Cholesky factor (lower, row-major n×n) of a symmetric positive-definite matrix, into `l` when given. */
+function cholesky(a: Float64Array, n: number, l: Float64Array = new Float64Array(n * n)): Float64Array {
   for (let i = 0; i < n; i++) {
     for (let j = 0; j <= i; j++) {
       let s = a[i * n + j]!;
@@ -67,22 +67,24 @@ function forward(l: Float64Array, n: number, b: Float64Array, stride = 1, offset
   }
 }
 
-/** Solves the symmetric positive-definite system A x = b (p×p) by Cholesky; null if not positive definite. */
-function spdSolve(a: Float64Array, b: Float64Array, p: number): Float64Array | null {
-  let l: Float64Array;
+/**
+ * Solves the symmetric positive-definite system A x = b (p×p) by Cholesky into x, with `l` (p×p)
+ * for the factor; false if not positive definite.
+ */
+function spdSolve(a: Float64Array, b: Float64Array, p: number, x: Float64Array, l: Float64Array): boolean {
   try {
-    l = cholesky(a, p);
+    cholesky(a, p, l);
   } catch {
-    return null;
+    return false;
   }
-  const x = Float64Array.from(b);
+  x.set(b);
   forward(l, p, x);
   for (let i = p - 1; i >= 0; i--) {
     let s = x[i]!;
     for (let k = i + 1; k < p; k++) s -= l[k * p + i]! * x[k]!;
     x[i] = s / l[i * p + i]!;
   }
-  return x;
+  return true;
 }
 
 interface ParamLayout {
@@ -128,8 +130,19 @@ function layout(planets: PlanetInput[], origin: number): ParamLayout {
   return lay;
 }
 
-/** Planet i's orbit for parameters theta (periastron in days from the origin). */
-function planetOrbit(pl: PlanetInput, i: number, lay: ParamLayout, theta: Float64Array): RvOrbit {
+/** One planet's orbit for a parameter vector, as its velocity curve needs it (times in days from the origin). */
+interface Curve {
+  kMps: number;
+  periodDays: number;
+  periastronDays: number;
+  ecc: number;
+  omegaRad: number;
+  /** e cos ω. */
+  eccCosOmega: number;
+}
+
+/** Planet i's orbit for parameters theta, into `out`. */
+function planetCurve(pl: PlanetInput, i: number, lay: ParamLayout, theta: Float64Array, out: Curve): void {
   let ecc = pl.ecc;
   let omegaDeg = pl.omegaDeg;
   const e = lay.ecc[i]!;
@@ -137,21 +150,32 @@ function planetOrbit(pl: PlanetInput, i: number, lay: ParamLayout, theta: Float6
     ecc = Math.min(Math.hypot(theta[e]!, theta[e + 1]!), 0.95);
     omegaDeg = ecc > 0 ? (Math.atan2(theta[e + 1]!, theta[e]!) * 180) / Math.PI : 90;
   }
-  const periodDays = theta[lay.period[i]!]!;
-  const periastronBjdTdb = periastronFromConjunctionBjdTdb({ tcBjdTdb: theta[lay.tc[i]!]!, periodDays, ecc, omegaDeg });
-  return { kMps: theta[lay.k[i]!]!, periodDays, ecc, omegaDeg, periastronBjdTdb };
+  out.kMps = theta[lay.k[i]!]!;
+  out.periodDays = theta[lay.period[i]!]!;
+  out.periastronDays = periastronFromConjunctionBjdTdb({ tcBjdTdb: theta[lay.tc[i]!]!, periodDays: out.periodDays, ecc, omegaDeg });
+  out.ecc = ecc;
+  out.omegaRad = (omegaDeg * Math.PI) / 180;
+  out.eccCosOmega = ecc * Math.cos(out.omegaRad);
 }
 
-/** Every planet's orbit for parameters theta. */
-function planetOrbits(planets: PlanetInput[], lay: ParamLayout, theta: Float64Array): RvOrbit[] {
-  return planets.map((pl, i) => planetOrbit(pl, i, lay, theta));
-}
+const newCurve = (): Curve => ({ kMps: 0, periodDays: 1, periastronDays: 0, ecc: 0, omegaRad: 0, eccCosOmega: 0 });
 
-/** The Keplerian model at time tRel (days from the origin): γ plus each orbit's velocity, in planet order. */
-function modelVelocity(gammaMps: number, orbits: RvOrbit[], tRel: number): number {
-  let v = gammaMps;
-  for (const orbit of orbits) v += radialVelocityMps(orbit, tRel);
-  return v;
+/**
+ * The curve of K = 1 m/s at every time of tRel, into out from `offset`: cos(ν + ω) + e cos ω
+ * (docs/references.md [Kepler-RV]), ν from the mean anomaly M = 2π (t − T_p) / P through Kepler's
+ * equation, as src/orbit/rv-curve.ts computes it (the same operations in the same order, so the
+ * same numbers), with what depends on the orbit alone computed once. For e = 0 Kepler's equation
+ * gives E = M, which eccentricAnomalyRad returns unchanged, so it is not called. (ν = M for e = 0
+ * would save the true anomaly too, but it is M only to rounding, about 1e-13 rad here, and the
+ * fits' results follow such differences to 1e-6 m/s through the accept-or-refuse tests of the
+ * Levenberg–Marquardt steps.)
+ */
+function shapeInto(c: Curve, tRel: Float64Array, out: Float64Array, offset = 0): void {
+  for (let i = 0; i < tRel.length; i++) {
+    const meanRad = (2 * Math.PI * (tRel[i]! - c.periastronDays)) / c.periodDays;
+    const nu = trueAnomalyRad(c.ecc === 0 ? meanRad : eccentricAnomalyRad(meanRad, c.ecc), c.ecc);
+    out[offset + i] = Math.cos(nu + c.omegaRad) + c.eccCosOmega;
+  }
 }
 
 /**
@@ -163,7 +187,7 @@ export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, opti
   const { planets, visits } = setup;
   const n = visits.length;
   const origin = Math.floor(visits[0]!.bjdTdb);
-  const tRel = visits.map((v) => v.bjdTdb - origin);
+  const tRel = Float64Array.from(visits, (v) => v.bjdTdb - origin);
   const lay = layout(planets, origin);
   const p = lay.count;
 
@@ -192,7 +216,7 @@ export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, opti
   // Finite-difference steps (central differences) for the nonlinear parameters.
   const step = new Float64Array(p);
   planets.forEach((pl, i) => {
-    const orbits = Math.max(1, ...tRel.map((t) => Math.abs(t - (pl.tcBjdTdb - origin)) / pl.periodDays));
+    const orbits = Math.max(1, ...Array.from(tRel, (t) => Math.abs(t - (pl.tcBjdTdb - origin)) / pl.periodDays));
     step[lay.tc[i]!] = 1e-5 * pl.periodDays;
     step[lay.period[i]!] = (1e-5 * pl.periodDays) / orbits;
     if (lay.ecc[i]! >= 0) {
@@ -213,6 +237,17 @@ export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, opti
   const actNoise = new Float64Array(m);
   const velocities = new Float64Array(planets.length * n);
   const shapes = new Float64Array(planets.length * n);
+  const upShape = new Float64Array(n);
+  const downShape = new Float64Array(n);
+  const curves = planets.map(newCurve);
+  const up = newCurve();
+  const down = newCurve();
+  // Scratch for the Levenberg–Marquardt steps.
+  const damped = new Float64Array(p * p);
+  const factor = new Float64Array(p * p);
+  const delta = new Float64Array(p);
+  const trial = new Float64Array(p);
+  const trialResid = new Float64Array(n);
   // The planet each parameter belongs to (γ, index 0, to none).
   const planetOfParam = new Int32Array(p).fill(-1);
   planets.forEach((_, i) => {
@@ -220,10 +255,29 @@ export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, opti
     if (lay.ecc[i]! >= 0) planetOfParam[lay.ecc[i]!] = planetOfParam[lay.ecc[i]! + 1] = i;
   });
 
-  /** Whitened residual vector at theta into resid; returns the penalised χ². */
+  /**
+   * Every planet's curve for theta into curves and shapes, its velocities (K times the shape)
+   * into velocities.
+   */
+  const curvesAt = (theta: Float64Array): void => {
+    for (let q = 0; q < planets.length; q++) {
+      planetCurve(planets[q]!, q, lay, theta, curves[q]!);
+      shapeInto(curves[q]!, tRel, shapes, q * n);
+      for (let i = 0; i < n; i++) velocities[q * n + i] = curves[q]!.kMps * shapes[q * n + i]!;
+    }
+  };
+
+  /** The Keplerian model at visit i from velocities: γ plus each planet's velocity, in planet order. */
+  const modelVelocity = (gammaMps: number, i: number): number => {
+    let v = gammaMps;
+    for (let q = 0; q < planets.length; q++) v += velocities[q * n + i]!;
+    return v;
+  };
+
+  /** Whitened residual vector at theta into out; returns the penalised χ². */
   const chi2 = (theta: Float64Array, out: Float64Array): number => {
-    const orbits = planetOrbits(planets, lay, theta);
-    for (let i = 0; i < n; i++) out[i] = y[i]! - modelVelocity(theta[0]!, orbits, tRel[i]!);
+    curvesAt(theta);
+    for (let i = 0; i < n; i++) out[i] = y[i]! - modelVelocity(theta[0]!, i);
     forward(whiten, n, out);
     let c = 0;
     for (let i = 0; i < n; i++) c += out[i]! * out[i]!;
@@ -246,8 +300,8 @@ export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, opti
       const z = Array.from({ length: m }, () => rng.normal());
       for (let q = 0; q < m; q++) for (let r = 0; r <= q; r++) actNoise[q] += activityFactor[q * m + r]! * z[r]!;
     }
-    const truthOrbits = planetOrbits(planets, lay, truth);
-    for (let i = 0; i < n; i++) y[i] = modelVelocity(truth[0]!, truthOrbits, tRel[i]!) + visits[i]!.whiteSigmaMps * rng.normal() + nightNoise[nightOf[i]!]! + actNoise[nightOf[i]!]!;
+    curvesAt(truth);
+    for (let i = 0; i < n; i++) y[i] = modelVelocity(truth[0]!, i) + visits[i]!.whiteSigmaMps * rng.normal() + nightNoise[nightOf[i]!]! + actNoise[nightOf[i]!]!;
 
     const fromCatalogue = Float64Array.from(lay.centre);
     fromCatalogue[0] = y.reduce((s, v) => s + v, 0) / n;
@@ -292,18 +346,15 @@ export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, opti
     const theta = Float64Array.from(start);
     let lambda = 1e-3;
     let current = chi2(theta, resid);
+    // Whether curves, shapes and velocities hold theta's (chi2 leaves those of its argument).
+    let curvesHoldTheta = true;
     let converged = false;
     for (let iter = 0; iter < 60 && !converged; iter++) {
       // Whitened Jacobian: the γ column exact, the others central differences (exact to rounding
       // for K, which enters linearly). A parameter moves one planet's orbit only, so the other
       // planets' velocities at the current theta are computed once and reused. K multiplies the
-      // curve of K = 1 m/s (radialVelocityMps forms the same product), so K ± h needs no new curve.
-      const orbits = planetOrbits(planets, lay, theta);
-      for (let q = 0; q < planets.length; q++)
-        for (let i = 0; i < n; i++) {
-          shapes[q * n + i] = radialVelocityMps({ ...orbits[q]!, kMps: 1 }, tRel[i]!);
-          velocities[q * n + i] = orbits[q]!.kMps * shapes[q * n + i]!;
-        }
+      // curve of K = 1 m/s, so K ± h needs no new curve.
+      if (!curvesHoldTheta) curvesAt(theta);
       for (let j = 0; j < p; j++) {
         if (j === 0) for (let i = 0; i < n; i++) jac[i * p] = 1;
         else {
@@ -311,11 +362,15 @@ export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, opti
           const h = step[j]! || 1e-4 * Math.max(1, Math.abs(theta[j]!));
           const saved = theta[j]!;
           theta[j] = saved + h;
-          const up = planetOrbit(planets[q]!, q, lay, theta);
+          planetCurve(planets[q]!, q, lay, theta, up);
           theta[j] = saved - h;
-          const down = planetOrbit(planets[q]!, q, lay, theta);
+          planetCurve(planets[q]!, q, lay, theta, down);
           theta[j] = saved;
           const isK = j === lay.k[q];
+          if (!isK) {
+            shapeInto(up, tRel, upShape);
+            shapeInto(down, tRel, downShape);
+          }
           for (let i = 0; i < n; i++) {
             // The sum in modelVelocity's order (γ, then planet by planet), the moved planet recomputed.
             let vUp = theta[0]!;
@@ -328,8 +383,8 @@ export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, opti
                 vUp += up.kMps * shapes[q * n + i]!;
                 vDown += down.kMps * shapes[q * n + i]!;
               } else {
-                vUp += radialVelocityMps(up, tRel[i]!);
-                vDown += radialVelocityMps(down, tRel[i]!);
+                vUp += up.kMps * upShape[i]!;
+                vDown += down.kMps * downShape[i]!;
               }
             }
             jac[i * p + j] = (vUp - vDown) / (2 * h);
@@ -342,29 +397,29 @@ export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, opti
         let s = 0;
         for (let i = 0; i < n; i++) s += jac[i * p + r]! * resid[i]!;
         g[r] = s - (theta[r]! - lay.centre[r]!) * lay.invSigma[r]! ** 2;
-        for (let c = 0; c < p; c++) {
+        // The matrix is symmetric: each product sum once, for c <= r.
+        for (let c = 0; c <= r; c++) {
           let t = 0;
           for (let i = 0; i < n; i++) t += jac[i * p + r]! * jac[i * p + c]!;
-          a[r * p + c] = t + (r === c ? lay.invSigma[r]! ** 2 : 0);
+          a[r * p + c] = a[c * p + r] = t + (r === c ? lay.invSigma[r]! ** 2 : 0);
         }
       }
       for (let tries = 0; tries < 20; tries++) {
-        const damped = Float64Array.from(a);
+        damped.set(a);
         for (let r = 0; r < p; r++) damped[r * p + r] *= 1 + lambda;
-        const delta = spdSolve(damped, g, p);
-        if (!delta) {
+        if (!spdSolve(damped, g, p, delta, factor)) {
           lambda *= 10;
           continue;
         }
-        const trial = Float64Array.from(theta);
+        trial.set(theta);
         for (let r = 0; r < p; r++) trial[r] += delta[r]!;
         // K is an amplitude: a step to K <= 0 is refused like one that raises χ².
         if (lay.k.some((k) => !(trial[k]! > 0))) {
           lambda *= 10;
           continue;
         }
-        const trialResid = new Float64Array(n);
         const next = chi2(trial, trialResid);
+        curvesHoldTheta = false;
         // Converged when the step is tiny against each parameter's scale (1e-5 m/s for γ and K,
         // 1e-5 of the prior width otherwise).
         let small = true;
@@ -374,6 +429,7 @@ export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, opti
         }
         if (next <= current || (small && next <= current * (1 + 1e-10))) {
           theta.set(trial);
+          curvesHoldTheta = true;
           resid.set(trialResid);
           current = next;
           lambda = Math.max(lambda / 10, 1e-9);

@@ -1,0 +1,4 @@
+// Random campaigns 10 to 19 (test/plan/random-plans.ts).
+import { describeRandomPlans } from './random-plans.js';
+
+describeRandomPlans(10);
