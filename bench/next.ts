@@ -17,10 +17,14 @@ const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[xs.length >> 1]!;
 
 /** Gains per hour of every candidate from scratch, best first (the brute-force reference). */
 function bruteForce(campaign: Campaign, at: Date, localDate: string): string[] {
-  const inputs = planInputs({ ...campaign, window: { start: localDate, end: localDate }, time: { mode: 'given-nights', dates: [localDate] }, lostDates: [] }, { now: at });
+  const inputs = planInputs(
+    { ...campaign, window: { start: localDate, end: localDate }, time: { mode: 'given-nights', dates: [localDate] }, lostDates: [] },
+    { now: at },
+  );
   const base = referenceUtility(inputs.problem, [], SETTINGS);
   const first = new Map<string, (typeof inputs.problem.slots)[number]>();
-  for (const s of [...inputs.problem.slots].sort((a, b) => a.startMs - b.startMs)) if (s.startMs < at.getTime() + 600_000 && !first.has(s.targetId)) first.set(s.targetId, s);
+  for (const s of [...inputs.problem.slots].sort((a, b) => a.startMs - b.startMs))
+    if (s.startMs < at.getTime() + 600_000 && !first.has(s.targetId)) first.set(s.targetId, s);
   return [...first.values()]
     .map((s) => ({ id: s.targetId, value: (referenceUtility(inputs.problem, [s], SETTINGS) - base) / (s.durationSec / 3600) }))
     .sort((a, b) => b.value - a.value || a.id.localeCompare(b.id))
@@ -39,7 +43,13 @@ function runCase(name: string, campaign: Campaign): Record<string, unknown> {
     slow.push(reference.sec);
     if ((answer.value.now[0]?.starId ?? '') === (reference.value[0] ?? '')) agree++;
   }
-  return { case: name, instants: INSTANTS.length, medianSec: Number(median(fast).toFixed(3)), bruteForceMedianSec: Number(median(slow).toFixed(3)), firstChoiceAgrees: `${agree}/${INSTANTS.length}` };
+  return {
+    case: name,
+    instants: INSTANTS.length,
+    medianSec: Number(median(fast).toFixed(3)),
+    bruteForceMedianSec: Number(median(slow).toFixed(3)),
+    firstChoiceAgrees: `${agree}/${INSTANTS.length}`,
+  };
 }
 
 export const nextBench: BenchModule = {

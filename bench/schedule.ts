@@ -8,7 +8,19 @@ import { simulateWeather } from '../src/schedule/weather.js';
 import { timeSec, type BenchModule } from './types.js';
 
 function campaign(targets: number, nights: number, seed: number): SyntheticSpec {
-  return { targets, nights, slotsPerNight: 3, searchFraction: 0.2, visibleFraction: 0.6, time: { mode: 'choose-nights', nights: 20 }, minSpacingHours: 0, onePerNight: true, nightHours: 9, seed, phaseErrors: true };
+  return {
+    targets,
+    nights,
+    slotsPerNight: 3,
+    searchFraction: 0.2,
+    visibleFraction: 0.6,
+    time: { mode: 'choose-nights', nights: 20 },
+    minSpacingHours: 0,
+    onePerNight: true,
+    nightHours: 9,
+    seed,
+    phaseErrors: true,
+  };
 }
 
 function runCampaign(targets: number, nights: number): Record<string, unknown> {
@@ -35,7 +47,14 @@ function exhaustiveRatio(): Record<string, unknown> {
   let optimiseSec = 0;
   let exhaustiveSec = 0;
   for (let seed = 1; seed <= SMALL_PROBLEMS; seed++) {
-    const problem = syntheticProblem({ ...campaign(3, 12, seed), slotsPerNight: 1, searchFraction: seed % 3 === 0 ? 0.34 : 0, visibleFraction: 0.7, time: { mode: 'choose-nights', nights: 3 }, nightHours: 3 });
+    const problem = syntheticProblem({
+      ...campaign(3, 12, seed),
+      slotsPerNight: 1,
+      searchFraction: seed % 3 === 0 ? 0.34 : 0,
+      visibleFraction: 0.7,
+      time: { mode: 'choose-nights', nights: 3 },
+      nightHours: 3,
+    });
     const fast = timeSec(() => optimiseSchedule(problem, { seed, ...settings }));
     const slow = timeSec(() => exhaustiveOptimum(problem, settings));
     optimiseSec += fast.sec;

@@ -46,7 +46,14 @@ export const visibilityBench: BenchModule = {
     const dates = localDateRange(FIRST_NIGHT, '2099-12-31').slice(0, NIGHTS);
     const nights = computeNights(site, dates[0]!, dates[dates.length - 1]!, 'nautical');
     // minWindowMinutes 0: every piece is compared with the reference.
-    const constraints: Constraints = { twilight: 'nautical', maxAirmass: 2, moonSeparationDeg: 30, minSpacingHours: 0, sameNightSpacingHours: 0, minWindowMinutes: 0 };
+    const constraints: Constraints = {
+      twilight: 'nautical',
+      maxAirmass: 2,
+      moonSeparationDeg: 30,
+      minSpacingHours: 0,
+      sameNightSpacingHours: 0,
+      minWindowMinutes: 0,
+    };
     // The fast engine's time is the median of FAST_RUNS full runs, so the first run's JIT
     // compilation does not dominate a 0.1-second figure; every run is reported.
     const runs = Array.from({ length: FAST_RUNS }, () => timeSec(() => computeWindows(site, targets, nights, constraints)));
@@ -54,7 +61,10 @@ export const visibilityBench: BenchModule = {
     const sampleNights = nights.filter((_, i) => i % REFERENCE_EVERY === 0);
     const reference = timeSec(() => sampleNights.flatMap((n) => referenceWindows(site, targets, n, constraints)));
     const sampledDates = new Set(sampleNights.map((n) => n.localDate));
-    const comparison = compareWithReference(fast.value.windows.filter((w) => sampledDates.has(w.localDate)), reference.value);
+    const comparison = compareWithReference(
+      fast.value.windows.filter((w) => sampledDates.has(w.localDate)),
+      reference.value,
+    );
     const targetNights = TARGETS * NIGHTS;
     const referenceTargetNights = TARGETS * sampleNights.length;
     const referenceSec = (reference.sec * targetNights) / referenceTargetNights;

@@ -46,7 +46,12 @@ interface Ratio {
 
 function kOverSigmaKOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], grids: (SearchGrid | null)[]): Ratio[] {
   const ratios = targetRatios(problem, grids);
-  return problem.targets.flatMap((target, t) => ratios(t, visits.filter((v) => v.targetId === target.id)));
+  return problem.targets.flatMap((target, t) =>
+    ratios(
+      t,
+      visits.filter((v) => v.targetId === target.id),
+    ),
+  );
 }
 
 /**
@@ -90,7 +95,13 @@ function targetRatios(problem: ScheduleProblem, grids: (SearchGrid | null)[]): (
         }
       });
       const variance = kVariances(model, visits);
-      target.planets.forEach((planet, i) => out.push({ ratio: variance[i] === Infinity ? 0 : planet.kMps / Math.sqrt(variance[i]!), goalSignificance: planet.goalSignificance, priority: planet.priority }));
+      target.planets.forEach((planet, i) => {
+        out.push({
+          ratio: variance[i] === Infinity ? 0 : planet.kMps / Math.sqrt(variance[i]!),
+          goalSignificance: planet.goalSignificance,
+          priority: planet.priority,
+        });
+      });
     }
     const grid = grids[t];
     if (grid && target.search) {
@@ -131,7 +142,10 @@ function utilityOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], grids
 
 /** Total utility from the ratios with the visits and without them (the prior's), in ScheduleResult.targets order. */
 function utilityOfRatios(ratios: Ratio[], prior: Ratio[], overshootWeight: number): number {
-  return ratios.reduce((sum, r, i) => sum + r.priority * goalValue(r.ratio / r.goalSignificance, overshootAfterPrior(prior[i]!.ratio / r.goalSignificance, overshootWeight)), 0);
+  return ratios.reduce(
+    (sum, r, i) => sum + r.priority * goalValue(r.ratio / r.goalSignificance, overshootAfterPrior(prior[i]!.ratio / r.goalSignificance, overshootWeight)),
+    0,
+  );
 }
 
 /** Every constraint of the problem, checked pairwise: an empty list means feasible. */
@@ -161,8 +175,10 @@ function violationsOf(problem: ScheduleProblem): (visits: CandidateSlot[]) => st
         const a = visits[i]!;
         const b = visits[k]!;
         const sameNight = a.nightIndex === b.nightIndex;
-        if (sameNight && a.startMs < b.startMs + b.durationSec * 1000 && b.startMs < a.startMs + a.durationSec * 1000) problems.push(`${a.slotId} overlaps ${b.slotId}`);
-        if (a.targetId === b.targetId && Math.abs(a.startMs - b.startMs) < spacingHours(a, b) * 3_600_000) problems.push(`${a.slotId} and ${b.slotId} closer than the spacing`);
+        if (sameNight && a.startMs < b.startMs + b.durationSec * 1000 && b.startMs < a.startMs + a.durationSec * 1000)
+          problems.push(`${a.slotId} overlaps ${b.slotId}`);
+        if (a.targetId === b.targetId && Math.abs(a.startMs - b.startMs) < spacingHours(a, b) * 3_600_000)
+          problems.push(`${a.slotId} and ${b.slotId} closer than the spacing`);
       }
     }
     if (onePerNight) {
@@ -224,7 +240,10 @@ export function exhaustiveOptimum(problem: ScheduleProblem, settings: ReferenceS
         const own = chosen.filter((v) => v.targetId === target.id);
         const key = own.map((v) => v.slotId).join('\n');
         let r = known[t]!.get(key);
-        if (!r) known[t]!.set(key, (r = ratios(t, own)));
+        if (!r) {
+          r = ratios(t, own);
+          known[t]!.set(key, r);
+        }
         return r;
       }),
       prior,

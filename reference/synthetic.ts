@@ -50,11 +50,26 @@ function syntheticTarget(rng: Rng, i: number, search: boolean, orbit: SyntheticO
   const priority = Math.ceil(between(rng, 0, 3));
   if (search) {
     const periodMinDays = Math.exp(between(rng, Math.log(2), Math.log(20)));
-    return { id, planets: [], search: { id, priority, goalSignificance: 5, kMps: between(rng, 2, 8), periodMinDays, periodMaxDays: periodMinDays * between(rng, 2, 8) } };
+    return {
+      id,
+      planets: [],
+      search: { id, priority, goalSignificance: 5, kMps: between(rng, 2, 8), periodMinDays, periodMaxDays: periodMinDays * between(rng, 2, 8) },
+    };
   }
   const kMps = between(rng, 2, 12);
   const model = buildStarModel({
-    planets: [{ id, kMps, periodDays: orbit.periodDays, tcBjdTdb: orbit.tcBjdTdb, periodErrDays: orbit.periodErrDays, tcErrDays: orbit.tcErrDays, ecc: 0, omegaDeg: 90 }],
+    planets: [
+      {
+        id,
+        kMps,
+        periodDays: orbit.periodDays,
+        tcBjdTdb: orbit.tcBjdTdb,
+        periodErrDays: orbit.periodErrDays,
+        tcErrDays: orbit.tcErrDays,
+        ecc: 0,
+        omegaDeg: 90,
+      },
+    ],
     nightlyJitterMps: 0,
     spanBjdTdb: spanDays,
   });
@@ -97,11 +112,26 @@ export function syntheticProblem(spec: SyntheticSpec): ScheduleProblem {
       const usable = closes - opens - durationSec / 3600;
       if (usable < 0) continue;
       for (let k = 0; k < spec.slotsPerNight; k++) {
-        const startMs = FIRST_NIGHT_MS + night.index * DAY_MS + (opens + (spec.slotsPerNight === 1 ? usable / 2 : (usable * k) / (spec.slotsPerNight - 1))) * HOUR_MS;
+        const startMs =
+          FIRST_NIGHT_MS + night.index * DAY_MS + (opens + (spec.slotsPerNight === 1 ? usable / 2 : (usable * k) / (spec.slotsPerNight - 1))) * HOUR_MS;
         const midBjdTdb = (startMs + (durationSec * 1000) / 2 - FIRST_NIGHT_MS) / DAY_MS;
-        slots.push({ slotId: `${target.id}/${night.index}/${k}`, targetId: target.id, nightIndex: night.index, startMs, durationSec, whiteSigmaMps: whiteSigmaMps * between(rng, 1, 1.3), midBjdTdb });
+        slots.push({
+          slotId: `${target.id}/${night.index}/${k}`,
+          targetId: target.id,
+          nightIndex: night.index,
+          startMs,
+          durationSec,
+          whiteSigmaMps: whiteSigmaMps * between(rng, 1, 1.3),
+          midBjdTdb,
+        });
       }
     }
   });
-  return { nights, targets, slots, time: spec.time, constraints: { minSpacingHours: spec.minSpacingHours, onePerNight: spec.onePerNight, sameNightSpacingHours: spec.sameNightSpacingHours ?? 0 } };
+  return {
+    nights,
+    targets,
+    slots,
+    time: spec.time,
+    constraints: { minSpacingHours: spec.minSpacingHours, onePerNight: spec.onePerNight, sameNightSpacingHours: spec.sameNightSpacingHours ?? 0 },
+  };
 }

@@ -9,7 +9,11 @@ export const constraintsSchema = z.strictObject({
   maxAirmass: z.number({ error: 'an airmass from 1 to 5' }).min(1, 'an airmass from 1 to 5').max(5, 'an airmass from 1 to 5').default(2),
   moonSeparationDeg: z.number({ error: 'degrees from 0 to 180' }).min(0, 'degrees from 0 to 180').max(180, 'degrees from 0 to 180').default(30),
   /** Minimum spacing between two visits of one target (hours). */
-  minSpacingHours: z.number({ error: 'hours, 0 or more' }).min(0, 'hours, 0 or more').max(24 * 365, 'hours, at most a year').default(20),
+  minSpacingHours: z
+    .number({ error: 'hours, 0 or more' })
+    .min(0, 'hours, 0 or more')
+    .max(24 * 365, 'hours, at most a year')
+    .default(20),
   /** When visits are one a night (minSpacingHours >= 12): least spacing of a star's visits within one night, start to start, for stars with visitsPerNight > 1 (hours). */
   sameNightSpacingHours: z.number({ error: 'hours from 0 to 12' }).min(0, 'hours from 0 to 12').max(12, 'hours from 0 to 12').default(2),
   /** Windows shorter than this are dropped (minutes). */
@@ -21,9 +25,19 @@ export type TwilightLevel = Constraints['twilight'];
 export const timeSchema = z.discriminatedUnion(
   'mode',
   [
-    z.strictObject({ mode: z.literal('choose-nights'), nights: z.number({ error: 'a whole number of nights, 1 to 366' }).int('a whole number of nights').min(1, 'at least 1 night').max(366, 'at most 366 nights') }),
+    z.strictObject({
+      mode: z.literal('choose-nights'),
+      nights: z
+        .number({ error: 'a whole number of nights, 1 to 366' })
+        .int('a whole number of nights')
+        .min(1, 'at least 1 night')
+        .max(366, 'at most 366 nights'),
+    }),
     z.strictObject({ mode: z.literal('given-nights'), dates: z.array(isoDate).min(1, 'at least one date').superRefine(eachDateOnce) }),
-    z.strictObject({ mode: z.literal('hours'), hours: z.number({ error: 'a positive number of hours, at most 5000' }).positive('a positive number of hours').max(5000, 'at most 5000 hours') }),
+    z.strictObject({
+      mode: z.literal('hours'),
+      hours: z.number({ error: 'a positive number of hours, at most 5000' }).positive('a positive number of hours').max(5000, 'at most 5000 hours'),
+    }),
   ],
   { error: 'mode is one of choose-nights, given-nights, hours' },
 );

@@ -38,9 +38,7 @@ export const siteSchema = z.strictObject({
     error: 'a fraction from 0 to 1, or twelve monthly fractions',
   }),
   medianSeeingArcsec: z.number().min(0.2, 'arcsec from 0.2 to 5').max(5, 'arcsec from 0.2 to 5').optional(),
-  semesters: z
-    .strictObject({ A: semesterBounds, B: semesterBounds })
-    .optional(),
+  semesters: z.strictObject({ A: semesterBounds, B: semesterBounds }).optional(),
   sourceNote: z.string().min(1, 'where the coordinates come from, or "from memory"'),
 });
 

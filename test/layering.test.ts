@@ -29,11 +29,7 @@ const LAYERS: string[][] = [
 
 /** Every module a TypeScript file names: `import … from`, `export … from`, `import '…'`, `import('…')`. */
 function importsOf(source: string): string[] {
-  const patterns = [
-    /^\s*(?:import|export)\s[^;]*?\sfrom\s*['"]([^'"]+)['"]/gm,
-    /^\s*import\s*['"]([^'"]+)['"]/gm,
-    /\bimport\s*\(\s*['"]([^'"]+)['"]\s*\)/g,
-  ];
+  const patterns = [/^\s*(?:import|export)\s[^;]*?\sfrom\s*['"]([^'"]+)['"]/gm, /^\s*import\s*['"]([^'"]+)['"]/gm, /\bimport\s*\(\s*['"]([^'"]+)['"]\s*\)/g];
   return patterns.flatMap((re) => [...source.matchAll(re)].map((m) => m[1]!));
 }
 
@@ -86,9 +82,7 @@ describe('import direction in src/', () => {
   });
 
   it('never imports a higher layer', () => {
-    const upward = edges
-      .filter((e) => e.to.startsWith(SRC + path.sep) && layerOf(e.to) > layerOf(e.from))
-      .map((e) => `${rel(e.from)} -> ${rel(e.to)}`);
+    const upward = edges.filter((e) => e.to.startsWith(SRC + path.sep) && layerOf(e.to) > layerOf(e.from)).map((e) => `${rel(e.from)} -> ${rel(e.to)}`);
     expect(upward).toEqual([]);
   });
 

@@ -9,7 +9,7 @@ import { validationError } from '../errors.js';
 export function kastenYoungAirmass(apparentAltitudeDeg: number): number {
   const zDeg = 90 - apparentAltitudeDeg;
   if (zDeg >= 96.07995) return Infinity;
-  return 1 / (Math.cos((zDeg * Math.PI) / 180) + 0.50572 * Math.pow(96.07995 - zDeg, -1.6364));
+  return 1 / (Math.cos((zDeg * Math.PI) / 180) + 0.50572 * (96.07995 - zDeg) ** -1.6364);
 }
 
 /**

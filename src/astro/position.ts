@@ -30,11 +30,7 @@ export function ofDateFrame(date: Date): OfDateFrame {
 /** A J2000 vector turned to the true equator of date: the product astronomy-engine's RotateVector forms, without its allocations. */
 export function rotateToDate(frame: OfDateFrame, [x, y, z]: Vec3): Vec3 {
   const r = frame.rotation.rot;
-  return [
-    r[0]![0]! * x + r[1]![0]! * y + r[2]![0]! * z,
-    r[0]![1]! * x + r[1]![1]! * y + r[2]![1]! * z,
-    r[0]![2]! * x + r[1]![2]! * y + r[2]![2]! * z,
-  ];
+  return [r[0]![0]! * x + r[1]![0]! * y + r[2]![0]! * z, r[0]![1]! * x + r[1]![1]! * y + r[2]![1]! * z, r[0]![2]! * x + r[1]![2]! * y + r[2]![2]! * z];
 }
 
 const MAS_RAD = Math.PI / 180 / 3.6e6;

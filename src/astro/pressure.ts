@@ -9,5 +9,5 @@ const SEA_LEVEL_PRESSURE_HPA = 1013.25;
  * L = 0.0065 K/m and exponent 5.25588 (docs/references.md [USSA1976]); valid to 11 km.
  */
 export function pressureHpaAtElevation(elevationM: number): number {
-  return SEA_LEVEL_PRESSURE_HPA * Math.pow(1 - (0.0065 * elevationM) / 288.15, 5.25588);
+  return SEA_LEVEL_PRESSURE_HPA * (1 - (0.0065 * elevationM) / 288.15) ** 5.25588;
 }

@@ -56,9 +56,17 @@ export function registerAmplitude(program: Command): Command {
     .command('amplitude')
     .description("the star's reflex semi-amplitude K from a planet's mass, or the minimum mass m sin i from K")
     .option('--star-mass <msun>', 'stellar mass in solar masses', numberFlag('--star-mass', 'a stellar mass in solar masses, from 0.01 to 100', 0.01, 100))
-    .option('--planet-mass <mass>', 'planet mass, in --mass-unit', numberFlag('--planet-mass', 'a planet mass, more than 0 and at most 1e7', 0, 1e7, { exclusiveMin: true }))
+    .option(
+      '--planet-mass <mass>',
+      'planet mass, in --mass-unit',
+      numberFlag('--planet-mass', 'a planet mass, more than 0 and at most 1e7', 0, 1e7, { exclusiveMin: true }),
+    )
     .option('--mass-unit <unit>', 'unit of --planet-mass: earth or jupiter', choiceFlag('--mass-unit', MASS_UNITS), 'earth')
-    .option('--k <mps>', 'semi-amplitude K in m/s (instead of --planet-mass): gives m sin i', numberFlag('--k', 'a semi-amplitude in m/s, more than 0 and at most 1e6', 0, 1e6, { exclusiveMin: true }))
+    .option(
+      '--k <mps>',
+      'semi-amplitude K in m/s (instead of --planet-mass): gives m sin i',
+      numberFlag('--k', 'a semi-amplitude in m/s, more than 0 and at most 1e6', 0, 1e6, { exclusiveMin: true }),
+    )
     .option('--period <days>', 'orbital period in days', numberFlag('--period', 'a period in days, from 0.01 to 1e7', 0.01, 1e7))
     .option('--ecc <e>', 'eccentricity', numberFlag('--ecc', 'an eccentricity from 0 to 0.99 (e >= 1 is not a bound orbit)', 0, 0.99), 0)
     .option('--incl <deg>', 'inclination in degrees (90 = edge-on)', numberFlag('--incl', 'an inclination in degrees, from 0.1 to 90', 0.1, 90), 90)
@@ -91,6 +99,6 @@ export function registerAmplitude(program: Command): Command {
         `${inverse ? `Minimum mass from K = ${sig(opts.k!)} m/s` : 'Semi-amplitude K of the star'}: M* = ${sig(starMassSun)} Msun, P = ${sig(periodDays)} d, e = ${sig(opts.ecc)}, i = ${sig(opts.incl)} deg${opts.incl === 90 ? ' (edge-on)' : ''}`,
       );
       console.log(renderTable([{ header: 'quantity' }, { header: 'value', align: 'right' }, { header: 'unit' }], rowsFor(summary, inverse)));
-      console.log("Speeds are barycentric, where the separation equals a (exact for a circular orbit).");
+      console.log('Speeds are barycentric, where the separation equals a (exact for a circular orbit).');
     });
 }

@@ -35,7 +35,8 @@ function stars(opts: DetectFlags): DetectStar[] {
     throw inputError({ file: 'command line', field: '--targets', value: opts.targets, allowed: 'give --targets FILE or one star (--vmag, --teff), not both' });
   }
   if (opts.targets !== undefined) return readTargets(opts.targets);
-  if (!starGiven) throw inputError({ file: 'command line', field: '--targets', value: undefined, allowed: 'a target list (CSV), or one star with --vmag and --teff' });
+  if (!starGiven)
+    throw inputError({ file: 'command line', field: '--targets', value: undefined, allowed: 'a target list (CSV), or one star with --vmag and --teff' });
   return [starFromFlags(opts, opts.name)];
 }
 
@@ -77,7 +78,11 @@ function printTable(rows: TargetDetectability[], options: DetectOptions): void {
   ];
   const at = options.visits;
   if (at !== undefined) {
-    columns.push({ header: `P(${n}sig|N=${at})`, align: 'right' }, { header: `min msini (Me)`, align: 'right' }, { header: 'msini 50%/90% (Me)', align: 'right' });
+    columns.push(
+      { header: `P(${n}sig|N=${at})`, align: 'right' },
+      { header: `min msini (Me)`, align: 'right' },
+      { header: 'msini 50%/90% (Me)', align: 'right' },
+    );
   }
   columns.push({ header: 'verdict' });
   const body = rows.map((r) => {
@@ -95,13 +100,19 @@ function printTable(rows: TargetDetectability[], options: DetectOptions): void {
     ];
     if (at !== undefined) {
       const p = r.atPlannedVisits!;
-      cells.push(pair(p.probabilityRandom, p.probabilityQuadrature, 2), pair(p.massMinRandomEarth, p.massMinQuadratureEarth, 1), pair(p.mass50RandomEarth, p.mass90RandomEarth, 1));
+      cells.push(
+        pair(p.probabilityRandom, p.probabilityQuadrature, 2),
+        pair(p.massMinRandomEarth, p.massMinQuadratureEarth, 1),
+        pair(p.mass50RandomEarth, p.mass90RandomEarth, 1),
+      );
     }
     cells.push(r.verdict.level);
     return cells;
   });
   console.log(renderTable(columns, body));
-  console.log(`\nPairs a/b: at random orbital phases / at ideal quadratures. sigma per visit includes floor and jitter; the floor does not average down. "!": exposure at the maximum; "-": never.`);
+  console.log(
+    `\nPairs a/b: at random orbital phases / at ideal quadratures. sigma per visit includes floor and jitter; the floor does not average down. "!": exposure at the maximum; "-": never.`,
+  );
   if (at !== undefined) console.log(`msini 50%/90%: the m sin i detected (K/sigma_K > ${n}) in half / nine in ten of such campaigns at random phases.`);
 }
 
@@ -128,26 +139,70 @@ function printLimits(rows: TargetDetectability[], options: DetectOptions): void 
 function csvRows(rows: TargetDetectability[], options: DetectOptions): string {
   const levels = [...new Set([3, 5, options.goalSignificance])].sort((a, b) => a - b);
   const header = [
-    'target', 'vmag', 'teffK', 'massSun', 'planetSource', 'planetMsiniEarth', 'periodDays', 'ecc', 'kMps', 'exposureSec', 'tooFaint',
-    'photonSigmaMps', 'visitSigmaMps', 'effectiveSigmaMps', 'visitCostSec',
+    'target',
+    'vmag',
+    'teffK',
+    'massSun',
+    'planetSource',
+    'planetMsiniEarth',
+    'periodDays',
+    'ecc',
+    'kMps',
+    'exposureSec',
+    'tooFaint',
+    'photonSigmaMps',
+    'visitSigmaMps',
+    'effectiveSigmaMps',
+    'visitCostSec',
     ...levels.flatMap((n) => [`visits${n}Random`, `visits${n}Quadrature`, `hours${n}Random`, `hours${n}Quadrature`]),
-    'plannedVisits', 'sigmaKRandomMps', 'probabilityRandom', 'probabilityQuadrature', 'massMinRandomEarth', 'massMinQuadratureEarth', 'mass50RandomEarth', 'mass90RandomEarth',
-    'snrPerPixel', 'jitterSource',
-    'verdict', 'verdictText',
+    'plannedVisits',
+    'sigmaKRandomMps',
+    'probabilityRandom',
+    'probabilityQuadrature',
+    'massMinRandomEarth',
+    'massMinQuadratureEarth',
+    'mass50RandomEarth',
+    'mass90RandomEarth',
+    'snrPerPixel',
+    'jitterSource',
+    'verdict',
+    'verdictText',
   ];
   const body = rows.map((r) => {
     const b = r.exposure.budget;
     const p = r.atPlannedVisits;
     return [
-      r.targetId, r.vmag, r.teffK, r.massSun, r.planet?.source, r.planet?.msiniEarth, r.planet?.periodDays, r.planet?.ecc, r.planet?.kMps, r.exposure.exposureSec, String(r.exposure.tooFaint),
-      b.photonSigmaMps, b.visitSigmaMps, b.effectiveSigmaMps, r.visitCostSec,
+      r.targetId,
+      r.vmag,
+      r.teffK,
+      r.massSun,
+      r.planet?.source,
+      r.planet?.msiniEarth,
+      r.planet?.periodDays,
+      r.planet?.ecc,
+      r.planet?.kMps,
+      r.exposure.exposureSec,
+      String(r.exposure.tooFaint),
+      b.photonSigmaMps,
+      b.visitSigmaMps,
+      b.effectiveSigmaMps,
+      r.visitCostSec,
       ...levels.flatMap((n) => {
         const v = r.needed.find((x) => x.goalSignificance === n);
         return [v?.random, v?.quadrature, v?.hoursRandom, v?.hoursQuadrature];
       }),
-      p?.visits, p?.sigmaKRandomMps, p?.probabilityRandom, p?.probabilityQuadrature, p?.massMinRandomEarth, p?.massMinQuadratureEarth, p?.mass50RandomEarth, p?.mass90RandomEarth,
-      b.snrPerPixel, r.jitterSource,
-      r.verdict.level, r.verdict.text,
+      p?.visits,
+      p?.sigmaKRandomMps,
+      p?.probabilityRandom,
+      p?.probabilityQuadrature,
+      p?.massMinRandomEarth,
+      p?.massMinQuadratureEarth,
+      p?.mass50RandomEarth,
+      p?.mass90RandomEarth,
+      b.snrPerPixel,
+      r.jitterSource,
+      r.verdict.level,
+      r.verdict.text,
     ];
   });
   return toCsv(header, body);
@@ -156,13 +211,21 @@ function csvRows(rows: TargetDetectability[], options: DetectOptions): string {
 export function registerDetect(program: Command): Command {
   const command = program
     .command('detect')
-    .description('detectability of each target\'s planet (or a hypothetical one): K, sigma, visits and hours needed, verdict')
+    .description("detectability of each target's planet (or a hypothetical one): K, sigma, visits and hours needed, verdict")
     .option('--targets <FILE>', 'target list (CSV); or give one star with --vmag and --teff')
     .option('--name <NAME>', 'name of the one star given with --vmag and --teff', 'star')
     .requiredOption('--instrument <ID>', 'instrument profile: a bundled id or a path')
     .option('--significance <N>', 'K/sigma_K to reach', numberFlag('--significance', 'a number from 1 to 50', 1, 50), 5)
-    .option('--visits <N>', 'a planned number of visits: detection probability and mass limits at that N', numberFlag('--visits', 'a whole number from 2 to 100000', 2, 1e5, { integer: true }))
-    .option('--planet-mass <MEARTH>', 'hypothetical planet around every star: m sin i (Earth masses)', numberFlag('--planet-mass', 'Earth masses, more than 0 and at most 30000', 0, 3e4, { exclusiveMin: true }))
+    .option(
+      '--visits <N>',
+      'a planned number of visits: detection probability and mass limits at that N',
+      numberFlag('--visits', 'a whole number from 2 to 100000', 2, 1e5, { integer: true }),
+    )
+    .option(
+      '--planet-mass <MEARTH>',
+      'hypothetical planet around every star: m sin i (Earth masses)',
+      numberFlag('--planet-mass', 'Earth masses, more than 0 and at most 30000', 0, 3e4, { exclusiveMin: true }),
+    )
     .option('--period <DAYS>', 'hypothetical planet: orbital period (days)', numberFlag('--period', 'days, from 0.01 to 100000', 0.01, 1e5))
     .option('--ecc <E>', 'hypothetical planet: eccentricity (default 0)', numberFlag('--ecc', 'an eccentricity from 0 to 0.99', 0, 0.99));
   addStarFlags(command);

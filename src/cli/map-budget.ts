@@ -19,10 +19,20 @@ export function checkMapBudget(jobs: MapJob[], settings: MapSettings): void {
       if (work > MAX_SEARCH_WORK) {
         const periods = job.input.periodsDays;
         const value = settings.periods?.join(':') ?? `${periods[0]}:${periods[periods.length - 1]} (the plan's search range)`;
-        throw inputError({ file: 'command line', field: '--periods', value, allowed: `a map of at most ${MAX_SEARCH_WORK.toExponential(0)} frequency-trials (${job.targetId} needs ${frequencies} frequencies x ${cells} cells x ${settings.trialsPerCell} trials = ${work.toExponential(1)}); shorten --periods or lower --trials or --grid` });
+        throw inputError({
+          file: 'command line',
+          field: '--periods',
+          value,
+          allowed: `a map of at most ${MAX_SEARCH_WORK.toExponential(0)} frequency-trials (${job.targetId} needs ${frequencies} frequencies x ${cells} cells x ${settings.trialsPerCell} trials = ${work.toExponential(1)}); shorten --periods or lower --trials or --grid`,
+        });
       }
     } else if (cells * settings.trialsPerCell > MAX_KNOWN_PHASE_TRIALS) {
-      throw inputError({ file: 'command line', field: '--trials', value: String(settings.trialsPerCell), allowed: `at most ${MAX_KNOWN_PHASE_TRIALS.toExponential(0)} trials in all (${cells} cells x ${settings.trialsPerCell}); lower --trials or --grid` });
+      throw inputError({
+        file: 'command line',
+        field: '--trials',
+        value: String(settings.trialsPerCell),
+        allowed: `at most ${MAX_KNOWN_PHASE_TRIALS.toExponential(0)} trials in all (${cells} cells x ${settings.trialsPerCell}); lower --trials or --grid`,
+      });
     }
   }
 }

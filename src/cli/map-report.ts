@@ -41,4 +41,3 @@ export function savedMaps(plan: Plan, dir: string, fresh: DetectionMapData[] = [
   }
   return maps;
 }
-

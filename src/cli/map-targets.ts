@@ -68,8 +68,14 @@ function jobOf(plan: Plan, target: Target, settings: MapSettings): MapJob | unde
     const { periodMinDays, periodMaxDays, msiniEarth } = target.search;
     const { periodsDays, msinisEarth } = axes(settings, [periodMinDays, periodMaxDays], [msiniEarth / 2, msiniEarth * SEARCH_MASS_FACTOR]);
     const input: InjectionInput = {
-      timesBjdTdb, rvErrorsMps, periodsDays, msinisEarth, starMassSun: target.massSun,
-      trialsPerCell: settings.trialsPerCell, seed: settings.seed, fapThreshold: settings.fapThreshold,
+      timesBjdTdb,
+      rvErrorsMps,
+      periodsDays,
+      msinisEarth,
+      starMassSun: target.massSun,
+      trialsPerCell: settings.trialsPerCell,
+      seed: settings.seed,
+      fapThreshold: settings.fapThreshold,
     };
     if (settings.eccMax) input.eccentricity = { distribution: 'uniform', max: settings.eccMax };
     return { ...base(target, visits), kind: 'search', searchMsiniEarth: msiniEarth, input };
@@ -78,7 +84,11 @@ function jobOf(plan: Plan, target: Target, settings: MapSettings): MapJob | unde
   if (!eph) return undefined;
   const mass = planetMsiniEarth(plan, target, eph);
   const centre = mass ?? 10;
-  const { periodsDays, msinisEarth } = axes(settings, [eph.periodDays / PERIOD_FACTOR, eph.periodDays * PERIOD_FACTOR], [centre / MASS_FACTOR, centre * MASS_FACTOR]);
+  const { periodsDays, msinisEarth } = axes(
+    settings,
+    [eph.periodDays / PERIOD_FACTOR, eph.periodDays * PERIOD_FACTOR],
+    [centre / MASS_FACTOR, centre * MASS_FACTOR],
+  );
   const goalSignificance = plan.targets.find((s) => s.targetId === target.id)?.goalSignificance ?? plan.campaign.goals.significance;
   const input: KnownPhaseInput = { timesBjdTdb, rvErrorsMps, ephemeris: eph, periodsDays, msinisEarth, starMassSun: target.massSun, goalSignificance };
   return { ...base(target, visits), kind: 'ephemeris', ephemeris: eph, planetMsiniEarth: mass, input };
@@ -93,9 +103,21 @@ export function mapJobs(plan: Plan, settings: MapSettings, targetId?: string): {
   const mappable = plan.campaign.targets.filter((t) => t.search || t.ephemeris);
   if (targetId !== undefined) {
     const target = mappable.find((t) => t.id === targetId);
-    if (!target) throw inputError({ file: 'command line', field: '--target', value: targetId, allowed: `a blind-search or ephemeris target of the plan: ${mappable.map((t) => t.id).join(', ')}` });
+    if (!target)
+      throw inputError({
+        file: 'command line',
+        field: '--target',
+        value: targetId,
+        allowed: `a blind-search or ephemeris target of the plan: ${mappable.map((t) => t.id).join(', ')}`,
+      });
     const visits = visitsOf(plan, target.starId).length;
-    if (visits < MIN_MAP_VISITS) throw inputError({ file: 'command line', field: '--target', value: targetId, allowed: `a target with at least ${MIN_MAP_VISITS} planned visits (it has ${visits})` });
+    if (visits < MIN_MAP_VISITS)
+      throw inputError({
+        file: 'command line',
+        field: '--target',
+        value: targetId,
+        allowed: `a target with at least ${MIN_MAP_VISITS} planned visits (it has ${visits})`,
+      });
     return { jobs: [jobOf(plan, target, settings)!], skipped: [] };
   }
   const jobs: MapJob[] = [];

@@ -5,7 +5,10 @@ import { fmt, renderTable, type Column } from '../report/table.js';
 
 /** The detection probability of every cell in percent, periods down and masses across. */
 export function mapTableText(periodsDays: number[], msinisEarth: number[], detection: number[][]): string {
-  const columns: Column[] = [{ header: 'P (d) \\ M⊕', align: 'right' }, ...msinisEarth.map((m) => ({ header: fmt(m, m < 10 ? 1 : 0), align: 'right' as const }))];
+  const columns: Column[] = [
+    { header: 'P (d) \\ M⊕', align: 'right' },
+    ...msinisEarth.map((m) => ({ header: fmt(m, m < 10 ? 1 : 0), align: 'right' as const })),
+  ];
   const rows = periodsDays.map((p, i) => [fmt(p, p < 10 ? 2 : 1), ...detection[i]!.map((d) => String(Math.round(100 * d)))]);
   return renderTable(columns, rows);
 }
@@ -21,7 +24,10 @@ export function levelTableText(periodsDays: number[], msinisEarth: number[], map
   const suffix = (label: string) => (maps.length > 1 ? ` ${label}` : '');
   const columns: Column[] = [
     { header: 'P (d)', align: 'right' },
-    ...maps.flatMap((m) => [{ header: `50% (M⊕)${suffix(m.label)}`, align: 'right' as const }, { header: `90% (M⊕)${suffix(m.label)}`, align: 'right' as const }]),
+    ...maps.flatMap((m) => [
+      { header: `50% (M⊕)${suffix(m.label)}`, align: 'right' as const },
+      { header: `90% (M⊕)${suffix(m.label)}`, align: 'right' as const },
+    ]),
   ];
   const rows = periodsDays.map((p, i) => [fmt(p, p < 10 ? 2 : 1), ...perMap.flatMap((rowsOfMap) => rowsOfMap[i]!.levels.map((l) => levelMassText(l.mass)))]);
   return renderTable(columns, rows);

@@ -72,7 +72,6 @@ interface MapResult {
   svg: string;
 }
 
-
 async function runJob(job: MapJob, settings: MapSettings, threads: number, progress: Progress): Promise<Omit<MapResult, 'svg'>> {
   const { periodsDays, msinisEarth } = job.input;
   if (job.kind === 'search') {
@@ -81,7 +80,14 @@ async function runJob(job: MapJob, settings: MapSettings, threads: number, progr
     const method =
       `Injection–recovery: ${settings.trialsPerCell} trials a cell at the ${job.visits} planned visits (σ_eff with jitter), random phase, ${settings.eccMax ? `e uniform in [0, ${settings.eccMax}]` : 'circular orbits'}; ` +
       `detected when the highest GLS peak lies within 1/T of the injected frequency with Baluev FAP < ${settings.fapThreshold}.`;
-    const chart: DetectionMapData = { targetId: job.targetId, method, periodsDays, msinisEarth, panels: [{ label: 'simulated', detection: map.detection }], markMsiniEarth: job.searchMsiniEarth };
+    const chart: DetectionMapData = {
+      targetId: job.targetId,
+      method,
+      periodsDays,
+      msinisEarth,
+      panels: [{ label: 'simulated', detection: map.detection }],
+      markMsiniEarth: job.searchMsiniEarth,
+    };
     return { job, chart, levels: levelRows(periodsDays, msinisEarth, map.detection) };
   }
   const simulatedInput = { ...job.input, trialsPerCell: settings.trialsPerCell, seed: settings.seed };
@@ -101,12 +107,20 @@ async function runJob(job: MapJob, settings: MapSettings, threads: number, progr
     `${job.visits} planned visits, circular orbits; detected when K̂/σ_K > ${job.input.goalSignificance}. ` +
     `Left: Φ(K/σ_K − n) with the scheduler's expected information; right: ${settings.trialsPerCell} simulated least-squares fits a cell.`;
   const chart: DetectionMapData = {
-    targetId: job.targetId, method, periodsDays, msinisEarth,
-    panels: [{ label: 'analytic', detection: analytic.detection }, { label: 'simulated', detection: simulated.detection }],
+    targetId: job.targetId,
+    method,
+    periodsDays,
+    msinisEarth,
+    panels: [
+      { label: 'analytic', detection: analytic.detection },
+      { label: 'simulated', detection: simulated.detection },
+    ],
     markMsiniEarth: job.planetMsiniEarth,
   };
   return {
-    job, chart, maxDifference,
+    job,
+    chart,
+    maxDifference,
     levels: levelRows(periodsDays, msinisEarth, analytic.detection),
     atEphemeris: {
       periodDays: job.ephemeris.periodDays,
@@ -140,8 +154,13 @@ function printText(results: MapResult[], skipped: string[], written: string[], f
     for (const r of known) {
       const a = r.atEphemeris!;
       const pair = (row: LevelRow) => row.levels.map((l) => (l.mass.where === 'inside' ? fmt(l.mass.msiniEarth, 1) : l.mass.where)).join(' / ');
-      const planet = r.job.kind === 'ephemeris' && a.planet ? `; planet ${fmt(r.job.planetMsiniEarth, 1)} M⊕ detected ${percent(a.planet.analytic)} | ${percent(a.planet.simulated)}` : '';
-      console.log(`  ${r.job.targetId.padEnd(9)} P = ${fmt(a.periodDays, 3).padStart(6)} d: ${pair(a.analytic)} | ${pair(a.simulated)} M⊕${planet}; map cells differ by ${percent(r.maxDifference!)} at most`);
+      const planet =
+        r.job.kind === 'ephemeris' && a.planet
+          ? `; planet ${fmt(r.job.planetMsiniEarth, 1)} M⊕ detected ${percent(a.planet.analytic)} | ${percent(a.planet.simulated)}`
+          : '';
+      console.log(
+        `  ${r.job.targetId.padEnd(9)} P = ${fmt(a.periodDays, 3).padStart(6)} d: ${pair(a.analytic)} | ${pair(a.simulated)} M⊕${planet}; map cells differ by ${percent(r.maxDifference!)} at most`,
+      );
     }
     console.log('');
   }
@@ -164,8 +183,13 @@ const jsonLevels = (levels: LevelRow[]) =>
 async function runMap(opts: MapFlags): Promise<void> {
   const plan = readPlan(opts.plan);
   const settings: MapSettings = {
-    periods: opts.periods, masses: opts.masses, grid: opts.grid ?? DEFAULT_GRID,
-    trialsPerCell: opts.trials, fapThreshold: opts.fap, seed: opts.seed ?? plan.campaign.seed, eccMax: opts.eccMax,
+    periods: opts.periods,
+    masses: opts.masses,
+    grid: opts.grid ?? DEFAULT_GRID,
+    trialsPerCell: opts.trials,
+    fapThreshold: opts.fap,
+    seed: opts.seed ?? plan.campaign.seed,
+    eccMax: opts.eccMax,
   };
   const { jobs, skipped } = mapJobs(plan, settings, opts.target);
   checkMapBudget(jobs, settings);
@@ -217,7 +241,11 @@ async function runMap(opts: MapFlags): Promise<void> {
             goalSignificance: r.job.input.goalSignificance,
             planetMsiniEarth: r.job.planetMsiniEarth,
             maxDifference: r.maxDifference,
-            atEphemerisPeriod: { analytic: jsonLevels([r.atEphemeris!.analytic])[0], simulated: jsonLevels([r.atEphemeris!.simulated])[0], planetDetection: r.atEphemeris!.planet },
+            atEphemerisPeriod: {
+              analytic: jsonLevels([r.atEphemeris!.analytic])[0],
+              simulated: jsonLevels([r.atEphemeris!.simulated])[0],
+              planetDetection: r.atEphemeris!.planet,
+            },
           }
         : { searchMsiniEarth: r.job.searchMsiniEarth }),
       svg: path.join(outDir, r.svg),
@@ -228,18 +256,44 @@ async function runMap(opts: MapFlags): Promise<void> {
 export function registerMap(program: Command): Command {
   return program
     .command('map')
-    .description('detection probability per (period, m sin i) cell for the targets of a plan: injection-recovery for blind searches, known phase for ephemeris targets; tables and SVG heatmaps')
+    .description(
+      'detection probability per (period, m sin i) cell for the targets of a plan: injection-recovery for blind searches, known phase for ephemeris targets; tables and SVG heatmaps',
+    )
     .requiredOption('--plan <file>', 'plan.json written by crest plan')
     .option('--target <id>', 'one target (default: every blind-search and ephemeris target with at least 4 visits)')
     .option('--periods <A:B>', "period range in days (default: the search's range; ephemeris targets P/2:2P)", rangeFlag('--periods', 'periods in days', 1e5))
-    .option('--masses <A:B>', "m sin i range in Earth masses (default: half to eight times the search mass; a quarter to four times an ephemeris planet's)", rangeFlag('--masses', 'masses in Earth masses', 1e5))
+    .option(
+      '--masses <A:B>',
+      "m sin i range in Earth masses (default: half to eight times the search mass; a quarter to four times an ephemeris planet's)",
+      rangeFlag('--masses', 'masses in Earth masses', 1e5),
+    )
     .option('--grid <NxM>', `N periods by M masses, log-spaced (default: ${DEFAULT_GRID.periods}x${DEFAULT_GRID.masses})`, gridFlag)
     .option('--trials <n>', 'simulated trials per cell', numberFlag('--trials', 'a whole number from 10 to 100000', 10, 100000, { integer: true }), 200)
-    .option('--fap <p>', 'false-alarm probability a blind detection must beat', numberFlag('--fap', 'a probability above 0 and at most 0.5', 0, 0.5, { exclusiveMin: true }), DEFAULT_FAP_THRESHOLD)
-    .option('--ecc-max <e>', 'blind searches: inject eccentric orbits, e uniform in [0, e] with random ω (default: circular)', numberFlag('--ecc-max', 'an eccentricity from 0 to 0.9', 0, 0.9))
-    .option('--threads <n>', 'worker threads (default: available cores, at most one per cell)', numberFlag('--threads', 'a whole number from 1 to 256', 1, 256, { integer: true }))
-    .option('--seed <n>', "random seed (default: the campaign's seed)", numberFlag('--seed', 'a whole number, 0 or more', 0, Number.MAX_SAFE_INTEGER, { integer: true }))
-    .option('--out <dir>', "folder for the SVG maps and map-<target>.json (default: the plan's folder); a report.html there is re-rendered with the blind-search maps")
+    .option(
+      '--fap <p>',
+      'false-alarm probability a blind detection must beat',
+      numberFlag('--fap', 'a probability above 0 and at most 0.5', 0, 0.5, { exclusiveMin: true }),
+      DEFAULT_FAP_THRESHOLD,
+    )
+    .option(
+      '--ecc-max <e>',
+      'blind searches: inject eccentric orbits, e uniform in [0, e] with random ω (default: circular)',
+      numberFlag('--ecc-max', 'an eccentricity from 0 to 0.9', 0, 0.9),
+    )
+    .option(
+      '--threads <n>',
+      'worker threads (default: available cores, at most one per cell)',
+      numberFlag('--threads', 'a whole number from 1 to 256', 1, 256, { integer: true }),
+    )
+    .option(
+      '--seed <n>',
+      "random seed (default: the campaign's seed)",
+      numberFlag('--seed', 'a whole number, 0 or more', 0, Number.MAX_SAFE_INTEGER, { integer: true }),
+    )
+    .option(
+      '--out <dir>',
+      "folder for the SVG maps and map-<target>.json (default: the plan's folder); a report.html there is re-rendered with the blind-search maps",
+    )
     .option('--json', 'print one JSON document')
     .option('--csv', 'print CSV, one row per cell and method')
     .action(runMap);

@@ -23,20 +23,29 @@ function renderNext(answer: NextAnswer, zone: string, show: number): string {
     out.push('Nothing can start now: no star of the campaign is inside its window (twilight, airmass, Moon and horizon limits) in the next 10 minutes.');
   } else {
     out.push('Start now, most K/sigma_K per hour first:');
-    const columns = ['star', 'start', 'airmass', 'window left (min)', 'K/sigma_K now -> after', 'gain per hour'].map((header, i) => ({ header, align: i >= 2 ? ('right' as const) : undefined }));
-    const rows = answer.now.slice(0, show).map((c) => [
-      c.starId,
-      clock(new Date(c.startMs), zone),
-      fmt(c.airmass, 2),
-      fmt(c.windowLeftMin, 0),
-      c.effects.map((e) => `${e.before.toFixed(1)} -> ${e.after.toFixed(1)}`).join('; '),
-      c.gainPerHour.toPrecision(3),
-    ]);
+    const columns = ['star', 'start', 'airmass', 'window left (min)', 'K/sigma_K now -> after', 'gain per hour'].map((header, i) => ({
+      header,
+      align: i >= 2 ? ('right' as const) : undefined,
+    }));
+    const rows = answer.now
+      .slice(0, show)
+      .map((c) => [
+        c.starId,
+        clock(new Date(c.startMs), zone),
+        fmt(c.airmass, 2),
+        fmt(c.windowLeftMin, 0),
+        c.effects.map((e) => `${e.before.toFixed(1)} -> ${e.after.toFixed(1)}`).join('; '),
+        c.gainPerHour.toPrecision(3),
+      ]);
     out.push(renderTable(columns, rows), '', 'Why:');
     for (const c of answer.now.slice(0, show)) out.push(`- ${c.starId}: ${c.why.join('; ')}`);
   }
   out.push('', 'Rest of the night, as planned from now:');
-  out.push(answer.tonight.length ? answer.tonight.map((v) => `  ${clock(new Date(v.startMs), zone)}  ${v.starId} (${fmt(v.durationSec / 60, 0)} min)`).join('\n') : '  (nothing)');
+  out.push(
+    answer.tonight.length
+      ? answer.tonight.map((v) => `  ${clock(new Date(v.startMs), zone)}  ${v.starId} (${fmt(v.durationSec / 60, 0)} min)`).join('\n')
+      : '  (nothing)',
+  );
   out.push('', ADVISORY);
   return out.join('\n');
 }

@@ -79,16 +79,76 @@ export function registerNights(program: Command): Command {
       if (opts.json) return printJson({ site: site.id, timeZone: zone, twilight: opts.twilight, nights: nights.map((n) => nightJson(n, site, utc)) });
       const iso = (d: Date | null) => isoTime(d, site.timeZone, utc) ?? '';
       if (opts.csv) {
-        const header = ['localDate', 'sunset', 'civilDusk', 'nauticalDusk', 'astronomicalDusk', 'darkStart', 'darkEnd', 'astronomicalDawn', 'nauticalDawn', 'civilDawn', 'sunrise', 'darkHours', 'moonIllumination', 'moonRise', 'moonSet', 'moonUpDuringDark', 'note'];
-        const rows = nights.map((n) => [n.localDate, iso(n.sunset), iso(n.civil.dusk), iso(n.nautical.dusk), iso(n.astronomical.dusk), iso(n.darkStart), iso(n.darkEnd), iso(n.astronomical.dawn), iso(n.nautical.dawn), iso(n.civil.dawn), iso(n.sunrise), n.darkHours.toFixed(3), n.moon.illumination.toFixed(3), iso(n.moon.rise), iso(n.moon.set), String(n.moon.upDuringDark), n.note ?? '']);
+        const header = [
+          'localDate',
+          'sunset',
+          'civilDusk',
+          'nauticalDusk',
+          'astronomicalDusk',
+          'darkStart',
+          'darkEnd',
+          'astronomicalDawn',
+          'nauticalDawn',
+          'civilDawn',
+          'sunrise',
+          'darkHours',
+          'moonIllumination',
+          'moonRise',
+          'moonSet',
+          'moonUpDuringDark',
+          'note',
+        ];
+        const rows = nights.map((n) => [
+          n.localDate,
+          iso(n.sunset),
+          iso(n.civil.dusk),
+          iso(n.nautical.dusk),
+          iso(n.astronomical.dusk),
+          iso(n.darkStart),
+          iso(n.darkEnd),
+          iso(n.astronomical.dawn),
+          iso(n.nautical.dawn),
+          iso(n.civil.dawn),
+          iso(n.sunrise),
+          n.darkHours.toFixed(3),
+          n.moon.illumination.toFixed(3),
+          iso(n.moon.rise),
+          iso(n.moon.set),
+          String(n.moon.upDuringDark),
+          n.note ?? '',
+        ]);
         return void process.stdout.write(toCsv(header, rows));
       }
       const hm = (d: Date | null) => clockTime(d, site.timeZone, utc);
       console.log(`${site.name}: nights ${opts.from} to ${opts.to}, dark span = ${opts.twilight} twilight; times ${utc ? 'UTC' : `local (${site.timeZone})`}`);
-      const rows = nights.map((n) => [n.localDate, hm(n.sunset), hm(n.darkStart), hm(n.darkEnd), hm(n.sunrise), fmt(n.darkHours, 2), fmt(n.moon.illumination * 100, 0), hm(n.moon.rise), hm(n.moon.set), n.moon.upDuringDark ? 'yes' : 'no', n.note ?? '']);
+      const rows = nights.map((n) => [
+        n.localDate,
+        hm(n.sunset),
+        hm(n.darkStart),
+        hm(n.darkEnd),
+        hm(n.sunrise),
+        fmt(n.darkHours, 2),
+        fmt(n.moon.illumination * 100, 0),
+        hm(n.moon.rise),
+        hm(n.moon.set),
+        n.moon.upDuringDark ? 'yes' : 'no',
+        n.note ?? '',
+      ]);
       console.log(
         renderTable(
-          [{ header: 'evening' }, { header: 'sunset' }, { header: 'dark from' }, { header: 'dark to' }, { header: 'sunrise' }, { header: 'dark (h)', align: 'right' }, { header: 'moon (%)', align: 'right' }, { header: 'moonrise' }, { header: 'moonset' }, { header: 'moon in dark' }, { header: 'note' }],
+          [
+            { header: 'evening' },
+            { header: 'sunset' },
+            { header: 'dark from' },
+            { header: 'dark to' },
+            { header: 'sunrise' },
+            { header: 'dark (h)', align: 'right' },
+            { header: 'moon (%)', align: 'right' },
+            { header: 'moonrise' },
+            { header: 'moonset' },
+            { header: 'moon in dark' },
+            { header: 'note' },
+          ],
           rows,
         ),
       );

@@ -7,11 +7,7 @@ import { jsonChunks } from '../report/json-chunks.js';
 export function numberFlag(flag: string, allowed: string, min: number, max: number, opts: { exclusiveMin?: boolean; integer?: boolean } = {}) {
   return (text: string): number => {
     const value = parseDecimal(text);
-    const ok =
-      Number.isFinite(value) &&
-      (opts.exclusiveMin ? value > min : value >= min) &&
-      value <= max &&
-      (!opts.integer || Number.isInteger(value));
+    const ok = Number.isFinite(value) && (opts.exclusiveMin ? value > min : value >= min) && value <= max && (!opts.integer || Number.isInteger(value));
     if (!ok) throw inputError({ file: 'command line', field: flag, value: text, allowed });
     return value;
   };
@@ -42,7 +38,12 @@ export function instantFlag(flag: string) {
     if (text === 'now') return new Date();
     const date = DateTime.fromISO(text, { setZone: true });
     if (!date.isValid || !/(Z|[+-]\d{2}(:?\d{2})?)$/.test(text)) {
-      throw inputError({ file: 'command line', field: flag, value: text, allowed: 'an ISO 8601 time with its zone, such as 2027-03-20T02:10:00Z or 2027-03-19T23:10:00-03:00, or now' });
+      throw inputError({
+        file: 'command line',
+        field: flag,
+        value: text,
+        allowed: 'an ISO 8601 time with its zone, such as 2027-03-20T02:10:00Z or 2027-03-19T23:10:00-03:00, or now',
+      });
     }
     return date.toJSDate();
   };
@@ -53,7 +54,8 @@ export function datesFlag(flag: string) {
   return (text: string): string[] => {
     const dates = text.split(',').map((d) => d.trim());
     dates.forEach((d, i) => {
-      if (!/^\d{4}-\d{2}-\d{2}$/.test(d) || !DateTime.fromISO(d).isValid) throw inputError({ file: 'command line', field: flag, value: d, allowed: 'dates as YYYY-MM-DD, separated by commas' });
+      if (!/^\d{4}-\d{2}-\d{2}$/.test(d) || !DateTime.fromISO(d).isValid)
+        throw inputError({ file: 'command line', field: flag, value: d, allowed: 'dates as YYYY-MM-DD, separated by commas' });
       if (dates.indexOf(d) !== i) throw inputError({ file: 'command line', field: flag, value: d, allowed: 'each date once' });
     });
     return dates;

@@ -41,7 +41,12 @@ function withLost(campaign: Campaign, lost: string[] | undefined): Campaign {
 function withNights(campaign: Campaign, nights: number | undefined): Campaign {
   if (nights === undefined) return campaign;
   if (campaign.time.mode !== 'choose-nights') {
-    throw inputError({ file: 'command line', field: '--nights', value: String(nights), allowed: `only for campaigns with time.mode choose-nights (${campaign.file} has ${campaign.time.mode})` });
+    throw inputError({
+      file: 'command line',
+      field: '--nights',
+      value: String(nights),
+      allowed: `only for campaigns with time.mode choose-nights (${campaign.file} has ${campaign.time.mode})`,
+    });
   }
   return { ...campaign, time: { mode: 'choose-nights', nights } };
 }
@@ -53,9 +58,17 @@ export function registerPlan(program: Command): Command {
     .argument('[campaign]', 'campaign file (YAML or JSON)')
     .option('--out <dir>', 'output folder (default: ./crest-out/<campaign name>/)')
     .option('--seed <n>', "override the campaign's seed", numberFlag('--seed', 'a whole number, 0 or more', 0, Number.MAX_SAFE_INTEGER, { integer: true }))
-    .option('--nights <n>', 'choose this many nights instead of the campaign\'s number (choose-nights campaigns: how many nights to ask for?)', numberFlag('--nights', 'a whole number of nights from 1 to 366', 1, 366, { integer: true }))
-    .option('--now <time>', 're-plan from this instant (ISO 8601 with zone, or "now"): visits before it stay as planned in the --out folder\'s plan.json or as observed', instantFlag('--now'))
-    .option('--lost <dates>', 'nights lost to weather or faults, YYYY-MM-DD,... (added to the campaign\'s lost list)', datesFlag('--lost'))
+    .option(
+      '--nights <n>',
+      "choose this many nights instead of the campaign's number (choose-nights campaigns: how many nights to ask for?)",
+      numberFlag('--nights', 'a whole number of nights from 1 to 366', 1, 366, { integer: true }),
+    )
+    .option(
+      '--now <time>',
+      're-plan from this instant (ISO 8601 with zone, or "now"): visits before it stay as planned in the --out folder\'s plan.json or as observed',
+      instantFlag('--now'),
+    )
+    .option('--lost <dates>', "nights lost to weather or faults, YYYY-MM-DD,... (added to the campaign's lost list)", datesFlag('--lost'))
     .option('--json', 'print plan.json on stdout instead of the summary')
     .action(async (file: string | undefined, opts: PlanFlags) => {
       const campaignFile = file ?? path.relative(process.cwd(), DEMO_CAMPAIGN);
@@ -72,7 +85,13 @@ export function registerPlan(program: Command): Command {
       const ics = renderPlanIcs(plan, { previous, stampMs });
       const written = writeOutputSet(
         outDir,
-        { 'plan.md': renderPlanMarkdown(plan), 'plan.csv': renderPlanCsv(plan), 'plan.json': json, 'plan.ics': ics, 'report.html': await renderReportHtml(plan) },
+        {
+          'plan.md': renderPlanMarkdown(plan),
+          'plan.csv': renderPlanCsv(plan),
+          'plan.json': json,
+          'plan.ics': ics,
+          'report.html': await renderReportHtml(plan),
+        },
         inputs,
       );
       if (opts.json) return void process.stdout.write(json);

@@ -12,7 +12,7 @@ export function registerReport(program: Command): Command {
     .command('report')
     .description('re-render report.html (charts and proposal summary) from a saved plan.json')
     .argument('<plan>', 'plan.json written by crest plan')
-    .option('--out <dir>', 'folder for report.html (default: the plan file\'s folder)')
+    .option('--out <dir>', "folder for report.html (default: the plan file's folder)")
     .option('--json', 'print one JSON document')
     .action(async (file: string, opts: { out?: string; json?: boolean }) => {
       const plan = readPlan(file);

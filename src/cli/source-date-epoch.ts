@@ -11,7 +11,12 @@ const MAX_SECONDS = 8.64e12;
 export function sourceDateEpochMs(value: string | undefined): number | undefined {
   if (value === undefined || value === '') return undefined;
   if (!/^\d+$/.test(value) || Number(value) > MAX_SECONDS) {
-    throw inputError({ file: 'environment', field: 'SOURCE_DATE_EPOCH', value, allowed: 'whole seconds since 1970-01-01 UTC (digits only, as `date +%s` prints)' });
+    throw inputError({
+      file: 'environment',
+      field: 'SOURCE_DATE_EPOCH',
+      value,
+      allowed: 'whole seconds since 1970-01-01 UTC (digits only, as `date +%s` prints)',
+    });
   }
   return Number(value) * 1000;
 }

@@ -31,7 +31,10 @@ export const campaignSchema = z.strictObject({
       z
         .strictObject({ start: isoDate, end: isoDate })
         .refine((w) => w.start <= w.end, { path: ['end'], message: 'on or after window.start' })
-        .refine((w) => DateTime.fromISO(w.end).diff(DateTime.fromISO(w.start), 'days').days <= 731, { path: ['end'], message: 'at most two years after window.start' }),
+        .refine((w) => DateTime.fromISO(w.end).diff(DateTime.fromISO(w.start), 'days').days <= 731, {
+          path: ['end'],
+          message: 'at most two years after window.start',
+        }),
       z.strictObject({ semester: z.string().regex(/^(19\d\d|20\d\d|2100)[AB]$/, `a semester such as 2027A or 2027B, years ${FIRST_YEAR} to ${LAST_YEAR}`) }),
     ],
     { error: '{ start: YYYY-MM-DD, end: YYYY-MM-DD } or { semester: 2027A }' },
@@ -41,13 +44,25 @@ export const campaignSchema = z.strictObject({
   goals: z.strictObject({ significance: z.number().positive('a positive K/sigma_K').max(100, 'at most 100').default(5) }).default({ significance: 5 }),
   noise: z
     .strictObject({
-      nightlyJitterFraction: z.number({ error: 'a fraction from 0 to 1' }).min(0, 'a fraction from 0 to 1').max(1, 'a fraction from 0 to 1').default(DEFAULT_NIGHTLY_JITTER_FRACTION),
+      nightlyJitterFraction: z
+        .number({ error: 'a fraction from 0 to 1' })
+        .min(0, 'a fraction from 0 to 1')
+        .max(1, 'a fraction from 0 to 1')
+        .default(DEFAULT_NIGHTLY_JITTER_FRACTION),
     })
     .default({ nightlyJitterFraction: DEFAULT_NIGHTLY_JITTER_FRACTION }),
   transits: z
     .strictObject({
-      confidence: z.number({ error: 'a probability from 0.5 to 0.9999' }).min(0.5, 'a probability from 0.5 to 0.9999').max(0.9999, 'a probability from 0.5 to 0.9999').default(0.95),
-      maxOrbitFraction: z.number({ error: 'a fraction of the orbit from 0 to 0.5' }).min(0, 'a fraction of the orbit from 0 to 0.5').max(0.5, 'a fraction of the orbit from 0 to 0.5').default(0.2),
+      confidence: z
+        .number({ error: 'a probability from 0.5 to 0.9999' })
+        .min(0.5, 'a probability from 0.5 to 0.9999')
+        .max(0.9999, 'a probability from 0.5 to 0.9999')
+        .default(0.95),
+      maxOrbitFraction: z
+        .number({ error: 'a fraction of the orbit from 0 to 0.5' })
+        .min(0, 'a fraction of the orbit from 0 to 0.5')
+        .max(0.5, 'a fraction of the orbit from 0 to 0.5')
+        .default(0.2),
     })
     .default({ confidence: 0.95, maxOrbitFraction: 0.2 }),
   seed: z.number().int('a whole number').min(0, 'a whole number, 0 or more').default(1),
@@ -75,7 +90,10 @@ export function readCampaign(file: string): Campaign {
     });
   }
   const targets = readTargets(shown(targetsFile));
-  const observedFile = c.observed === undefined ? undefined : shown(existingFile(path.resolve(baseDir, c.observed), c.observed, 'observed-visits file', { file, field: 'observed' }));
+  const observedFile =
+    c.observed === undefined
+      ? undefined
+      : shown(existingFile(path.resolve(baseDir, c.observed), c.observed, 'observed-visits file', { file, field: 'observed' }));
   return {
     name: c.name,
     file,

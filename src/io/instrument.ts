@@ -10,14 +10,29 @@ const between = (min: number, max: number, text: string) => z.number().min(min, 
 
 /** Fields whose numbers need a source note in `sources` (a published figure, "from memory", or "Crest's estimate"). */
 export const SOURCED_FIELDS = [
-  'apertureM', 'resolvingPower', 'coverageNm', 'reference', 'readNoiseE', 'pixelsPerResolutionElement', 'spatialPixels',
-  'entrance', 'skyMagPerArcsec2', 'floorMps', 'overheads', 'exposureLimits', 'extinctionMagPerAirmass',
+  'apertureM',
+  'resolvingPower',
+  'coverageNm',
+  'reference',
+  'readNoiseE',
+  'pixelsPerResolutionElement',
+  'spatialPixels',
+  'entrance',
+  'skyMagPerArcsec2',
+  'floorMps',
+  'overheads',
+  'exposureLimits',
+  'extinctionMagPerAirmass',
 ] as const;
 
-const entrance = z.discriminatedUnion('kind', [
-  z.strictObject({ kind: z.literal('fibre'), diameterArcsec: positive('arcsec') }),
-  z.strictObject({ kind: z.literal('slit'), widthArcsec: positive('arcsec') }),
-], { error: 'an entrance {"kind": "fibre", "diameterArcsec"} or {"kind": "slit", "widthArcsec"}' });
+const entrance = z.discriminatedUnion(
+  'kind',
+  [
+    z.strictObject({ kind: z.literal('fibre'), diameterArcsec: positive('arcsec') }),
+    z.strictObject({ kind: z.literal('slit'), widthArcsec: positive('arcsec') }),
+  ],
+  { error: 'an entrance {"kind": "fibre", "diameterArcsec"} or {"kind": "slit", "widthArcsec"}' },
+);
 
 /** Instrument profile schema (sites/instruments/*.json). */
 export const instrumentSchema = z
@@ -51,7 +66,10 @@ export const instrumentSchema = z
     minExposureSec: between(1, 1e5, 'seconds from 1 to 100000'),
     maxExposureSec: between(1, 1e5, 'seconds from 1 to 100000'),
     extinctionMagPerAirmass: between(0, 1, 'mag per airmass from 0 to 1'),
-    teffFactors: z.array(z.tuple([z.number(), positive('(factor)')])).min(2, 'at least two [teffK, factor] pairs').optional(),
+    teffFactors: z
+      .array(z.tuple([z.number(), positive('(factor)')]))
+      .min(2, 'at least two [teffK, factor] pairs')
+      .optional(),
     sources: z.record(z.string(), z.string().min(1, 'a non-empty source note')),
     sourceNote: z.string().min(1, 'where the figures come from, or "typical, from memory"'),
   })
@@ -61,7 +79,12 @@ export const instrumentSchema = z
   })
   .superRefine((v, ctx) => {
     for (const field of SOURCED_FIELDS) {
-      if (!v.sources[field]) ctx.addIssue({ code: 'custom', path: ['sources', field], message: 'where this number comes from: a published figure, "from memory" or "Crest\'s estimate"' });
+      if (!v.sources[field])
+        ctx.addIssue({
+          code: 'custom',
+          path: ['sources', field],
+          message: 'where this number comes from: a published figure, "from memory" or "Crest\'s estimate"',
+        });
     }
   });
 

@@ -18,7 +18,13 @@ const UTC_ALLOWED = 'mid-exposure as ISO 8601 date and time with Z or an offset,
 const rowSchema = z.strictObject({
   target: z.preprocess(blankToUndefined, z.string({ error: ID_ALLOWED })),
   midbjdtdb: numberField('mid-exposure as a full BJD_TDB in days, 2400000 to 2600000', 2.4e6, 2.6e6),
-  midutc: z.preprocess(blankToUndefined, z.string().refine((text) => Number.isFinite(isoInstantMs(text)), UTC_ALLOWED).optional()),
+  midutc: z.preprocess(
+    blankToUndefined,
+    z
+      .string()
+      .refine((text) => Number.isFinite(isoInstantMs(text)), UTC_ALLOWED)
+      .optional(),
+  ),
   instrument: z.preprocess(blankToUndefined, z.string({ error: INSTRUMENT_ALLOWED }).regex(/^[A-Za-z0-9-]+$/, INSTRUMENT_ALLOWED)),
   rvmps: numberField('measured radial velocity in m/s, -1e6 to 1e6', -1e6, 1e6),
   // Below 1 mm/s the weights 1/sigma^2 of a fit leave the range of a double (as for an RV series).
@@ -27,7 +33,14 @@ const rowSchema = z.strictObject({
 type Row = z.infer<typeof rowSchema>;
 
 const COLUMNS = Object.keys(rowSchema.shape);
-const CANONICAL: Record<string, string> = { target: 'target', midbjdtdb: 'midBjdTdb', midutc: 'midUtc', instrument: 'instrument', rvmps: 'rvMps', rverrormps: 'rvErrorMps' };
+const CANONICAL: Record<string, string> = {
+  target: 'target',
+  midbjdtdb: 'midBjdTdb',
+  midutc: 'midUtc',
+  instrument: 'instrument',
+  rvmps: 'rvMps',
+  rverrormps: 'rvErrorMps',
+};
 const display = (column: string) => CANONICAL[column] ?? column;
 const EXPECTED = 'the header target,midBjdTdb or midUtc,instrument (rvMps,rvErrorMps optional) and one row per visit made';
 
@@ -36,22 +49,41 @@ function checkHeader(header: string[], file: string): string[] {
   const columns = header.map((name) => name.trim().toLowerCase());
   const unknown = header.filter((_, i) => !COLUMNS.includes(columns[i]!));
   if (unknown.length > 0) {
-    throw inputError({ file, where: 'header', field: 'columns', value: unknown.join(','), allowed: `unknown column(s); allowed: ${COLUMNS.map(display).join(', ')}` });
+    throw inputError({
+      file,
+      where: 'header',
+      field: 'columns',
+      value: unknown.join(','),
+      allowed: `unknown column(s); allowed: ${COLUMNS.map(display).join(', ')}`,
+    });
   }
   columns.forEach((column, i) => {
-    if (columns.indexOf(column) !== i) throw inputError({ file, where: `header column ${i + 1}`, field: 'column', value: header[i], allowed: 'each column once' });
+    if (columns.indexOf(column) !== i)
+      throw inputError({ file, where: `header column ${i + 1}`, field: 'column', value: header[i], allowed: 'each column once' });
   });
   for (const column of ['target', 'instrument']) {
-    if (!columns.includes(column)) throw inputError({ file, where: 'header', field: column, value: undefined, allowed: `required column missing; the header has: ${header.join(', ')}` });
+    if (!columns.includes(column))
+      throw inputError({ file, where: 'header', field: column, value: undefined, allowed: `required column missing; the header has: ${header.join(', ')}` });
   }
   if (!columns.includes('midbjdtdb') && !columns.includes('midutc')) {
-    throw inputError({ file, where: 'header', field: 'midBjdTdb', value: undefined, allowed: `a column midBjdTdb or midUtc is required; the header has: ${header.join(', ')}` });
+    throw inputError({
+      file,
+      where: 'header',
+      field: 'midBjdTdb',
+      value: undefined,
+      allowed: `a column midBjdTdb or midUtc is required; the header has: ${header.join(', ')}`,
+    });
   }
   return columns;
 }
 
 /** Cross-field rules of one row: exactly one time, RV and its error together, a known id. */
-function buildRow(data: Row, raw: Record<string, string>, knownIds: ReadonlySet<string>, fail: (column: string, allowed: string) => never): Omit<ObservedRow, 'row' | 'line'> {
+function buildRow(
+  data: Row,
+  raw: Record<string, string>,
+  knownIds: ReadonlySet<string>,
+  fail: (column: string, allowed: string) => never,
+): Omit<ObservedRow, 'row' | 'line'> {
   if (!knownIds.has(data.target)) fail('target', 'a star or planet id of the target list (this id is not in it)');
   const hasBjd = data.midbjdtdb !== undefined;
   const hasUtc = data.midutc !== undefined;

@@ -59,7 +59,15 @@ const targetSchema = z.object({
   ephemeris: z
     .object({ periodDays: positive, periodErrDays: nonNegative, tcBjdTdb: bjd, tcErrDays: nonNegative, transitDurationHours: optional(positive) })
     .optional(),
-  planet: z.object({ msiniEarth: optional(positive), kMps: optional(positive), ecc: num.min(0, 'from 0 to 0.99').max(0.99, 'from 0 to 0.99'), omegaDeg: num, eccPriorSigma: optional(positive) }).optional(),
+  planet: z
+    .object({
+      msiniEarth: optional(positive),
+      kMps: optional(positive),
+      ecc: num.min(0, 'from 0 to 0.99').max(0.99, 'from 0 to 0.99'),
+      omegaDeg: num,
+      eccPriorSigma: optional(positive),
+    })
+    .optional(),
   search: z
     .object({ periodMinDays: positive, periodMaxDays: positive, msiniEarth: positive })
     .refine((s) => s.periodMinDays < s.periodMaxDays, { path: ['periodMaxDays'], message: 'longer than periodMinDays' })
@@ -123,7 +131,12 @@ const planSchema = z
     const bySlug = new Map<string, string>();
     plan.campaign.targets.forEach((t, i) => {
       const earlier = bySlug.get(slug(t.id));
-      if (earlier !== undefined) ctx.addIssue({ code: 'custom', path: ['campaign', 'targets', i, 'id'], message: `an id that differs from ${JSON.stringify(earlier)} in more than case or punctuation` });
+      if (earlier !== undefined)
+        ctx.addIssue({
+          code: 'custom',
+          path: ['campaign', 'targets', i, 'id'],
+          message: `an id that differs from ${JSON.stringify(earlier)} in more than case or punctuation`,
+        });
       bySlug.set(slug(t.id), t.id);
     });
     const known = `a target id of campaign.targets`;

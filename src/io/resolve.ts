@@ -15,19 +15,19 @@ export function listIds(dir: string): string[] {
 export function existingFile(resolved: string, ref: string, what: string, context: { file: string; field: string }): string {
   if (existsSync(resolved) && statSync(resolved).isFile()) return resolved;
   const problem = existsSync(resolved) ? 'is not a file' : 'does not exist';
-  throw inputError({ file: context.file, field: context.field, value: ref, allowed: `a ${what} file (${path.relative(process.cwd(), resolved) || resolved} ${problem})` });
+  throw inputError({
+    file: context.file,
+    field: context.field,
+    value: ref,
+    allowed: `a ${what} file (${path.relative(process.cwd(), resolved) || resolved} ${problem})`,
+  });
 }
 
 /**
  * A reference is either a path (contains a slash or a file extension) or an id of a bundled file.
  * `baseDir` resolves relative paths (the campaign file's folder).
  */
-export function resolveRef(
-  ref: string,
-  bundledDir: string,
-  what: string,
-  context: { file: string; field: string; baseDir: string },
-): string {
+export function resolveRef(ref: string, bundledDir: string, what: string, context: { file: string; field: string; baseDir: string }): string {
   if (/[\\/]/.test(ref) || /\.(json|ya?ml)$/i.test(ref)) return existingFile(path.resolve(context.baseDir, ref), ref, what, context);
   const ids = listIds(bundledDir);
   if (ids.includes(ref)) return path.join(bundledDir, `${ref}.json`);

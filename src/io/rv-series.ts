@@ -38,7 +38,13 @@ export function parseRvSeries(text: string, file: string): RvSeries {
   const columns = table.header.map((name) => name.trim().toLowerCase());
   const expected = Object.keys(HEADER);
   if (columns.length !== expected.length || !expected.every((c) => columns.includes(c))) {
-    throw inputError({ file, where: 'header', field: 'columns', value: table.header.join(','), allowed: 'exactly the columns bjdTdb, rvMps, rvErrorMps (any order, any case)' });
+    throw inputError({
+      file,
+      where: 'header',
+      field: 'columns',
+      value: table.header.join(','),
+      allowed: 'exactly the columns bjdTdb, rvMps, rvErrorMps (any order, any case)',
+    });
   }
   const series: RvSeries = { file, timesBjdTdb: [], rvMps: [], rvErrorsMps: [] };
   const { rows } = table;
@@ -47,14 +53,25 @@ export function parseRvSeries(text: string, file: string): RvSeries {
     const result = rowSchema.safeParse(raw);
     if (!result.success) {
       const column = String(result.error.issues[0]!.path[0]);
-      throw inputError({ file, where: `row ${index + 1} (line ${line})`, field: HEADER[column] ?? column, value: raw[column], allowed: result.error.issues[0]!.message });
+      throw inputError({
+        file,
+        where: `row ${index + 1} (line ${line})`,
+        field: HEADER[column] ?? column,
+        value: raw[column],
+        allowed: result.error.issues[0]!.message,
+      });
     }
     series.timesBjdTdb.push(result.data.bjdtdb);
     series.rvMps.push(result.data.rvmps);
     series.rvErrorsMps.push(result.data.rverrormps);
   });
   if (rows.length < MIN_RV_POINTS) {
-    throw inputError({ file, field: 'rows', value: rows.length, allowed: `at least ${MIN_RV_POINTS} visits for a periodogram and its false-alarm probability` });
+    throw inputError({
+      file,
+      field: 'rows',
+      value: rows.length,
+      allowed: `at least ${MIN_RV_POINTS} visits for a periodogram and its false-alarm probability`,
+    });
   }
   const times = extent(series.timesBjdTdb);
   if (times.min === times.max) {

@@ -17,7 +17,10 @@ type Cell = string | undefined;
 function angleField(parse: (text: string) => number, allowed: string, min: number, max: number) {
   return z.preprocess(
     (cell: Cell) => (cell === undefined || cell.trim() === '' ? undefined : parse(cell)),
-    z.number({ error: allowed }).refine((v) => Number.isFinite(v) && v >= min && v <= max, allowed).optional(),
+    z
+      .number({ error: allowed })
+      .refine((v) => Number.isFinite(v) && v >= min && v <= max, allowed)
+      .optional(),
   );
 }
 
@@ -60,7 +63,11 @@ const rowSchema = z.strictObject({
   planetkmps: numberField('semi-amplitude K in m/s, more than 0 and at most 10000', 0, 1e4, { exclusiveMin: true }),
   ecc: z.preprocess(
     (cell: Cell) => (cell === undefined || cell.trim() === '' ? undefined : parseDecimal(cell)),
-    z.number({ error: 'eccentricity from 0 to 0.99' }).min(0, 'eccentricity from 0 to 0.99').max(0.99, 'eccentricity from 0 to 0.99 (e >= 1 is not a bound orbit)').optional(),
+    z
+      .number({ error: 'eccentricity from 0 to 0.99' })
+      .min(0, 'eccentricity from 0 to 0.99')
+      .max(0.99, 'eccentricity from 0 to 0.99 (e >= 1 is not a bound orbit)')
+      .optional(),
   ),
   omegadeg: numberField('argument of periastron in degrees, 0 to 360', 0, 360),
   eccsigma: numberField('prior width on e cos(omega) and e sin(omega) when e is fitted, more than 0 and at most 1', 0, 1, { exclusiveMin: true }),
@@ -72,24 +79,76 @@ const rowSchema = z.strictObject({
 type Row = z.infer<typeof rowSchema>;
 const COLUMNS = Object.keys(rowSchema.shape);
 const CANONICAL: Record<string, string> = {
-  pmramasyr: 'pmRaMasYr', pmdecmasyr: 'pmDecMasYr', epochyear: 'epochYear', teffk: 'teffK', masssun: 'massSun',
-  vsinikms: 'vsiniKms', jittermps: 'jitterMps', goalsignificance: 'goalSignificance', perioddays: 'periodDays', perioderrdays: 'periodErrDays',
-  tcbjdtdb: 'tcBjdTdb', tcerrdays: 'tcErrDays', transitdurationhours: 'transitDurationHours', planetmsiniearth: 'planetMsiniEarth', planetkmps: 'planetKMps',
-  omegadeg: 'omegaDeg', searchperiodmindays: 'searchPeriodMinDays', searchperiodmaxdays: 'searchPeriodMaxDays',
-  searchmsiniearth: 'searchMsiniEarth', nightlyjitterfraction: 'nightlyJitterFraction', rotationdays: 'rotationDays', activitymps: 'activityMps',
-  activitycoherencedays: 'activityCoherenceDays', eccsigma: 'eccSigma',
-  rmag: 'rmag', imag: 'imag', jmag: 'jmag', hmag: 'hmag', gmag: 'gmag', logrhk: 'logRhk',
-  exposuresec: 'exposureSec', visitsigmamps: 'visitSigmaMps', visitspernight: 'visitsPerNight',
+  pmramasyr: 'pmRaMasYr',
+  pmdecmasyr: 'pmDecMasYr',
+  epochyear: 'epochYear',
+  teffk: 'teffK',
+  masssun: 'massSun',
+  vsinikms: 'vsiniKms',
+  jittermps: 'jitterMps',
+  goalsignificance: 'goalSignificance',
+  perioddays: 'periodDays',
+  perioderrdays: 'periodErrDays',
+  tcbjdtdb: 'tcBjdTdb',
+  tcerrdays: 'tcErrDays',
+  transitdurationhours: 'transitDurationHours',
+  planetmsiniearth: 'planetMsiniEarth',
+  planetkmps: 'planetKMps',
+  omegadeg: 'omegaDeg',
+  searchperiodmindays: 'searchPeriodMinDays',
+  searchperiodmaxdays: 'searchPeriodMaxDays',
+  searchmsiniearth: 'searchMsiniEarth',
+  nightlyjitterfraction: 'nightlyJitterFraction',
+  rotationdays: 'rotationDays',
+  activitymps: 'activityMps',
+  activitycoherencedays: 'activityCoherenceDays',
+  eccsigma: 'eccSigma',
+  rmag: 'rmag',
+  imag: 'imag',
+  jmag: 'jmag',
+  hmag: 'hmag',
+  gmag: 'gmag',
+  logrhk: 'logRhk',
+  exposuresec: 'exposureSec',
+  visitsigmamps: 'visitSigmaMps',
+  visitspernight: 'visitsPerNight',
 };
 /** Magnitude columns other than V, by band. */
-const BAND_COLUMNS: [BandId, 'rmag' | 'imag' | 'jmag' | 'hmag' | 'gmag'][] = [['R', 'rmag'], ['I', 'imag'], ['J', 'jmag'], ['H', 'hmag'], ['G', 'gmag']];
+const BAND_COLUMNS: [BandId, 'rmag' | 'imag' | 'jmag' | 'hmag' | 'gmag'][] = [
+  ['R', 'rmag'],
+  ['I', 'imag'],
+  ['J', 'jmag'],
+  ['H', 'hmag'],
+  ['G', 'gmag'],
+];
 const display = (column: string) => CANONICAL[column] ?? column;
 const REQUIRED = ['id', 'ra', 'dec', 'vmag', 'teffk'];
 /** Star fields: given once per star (on any of its rows) or repeated identically. */
 const STAR_COLUMNS = [
-  'ra', 'dec', 'pmramasyr', 'pmdecmasyr', 'epochyear', 'vmag', 'teffk', 'masssun', 'vsinikms', 'jittermps',
-  'nightlyjitterfraction', 'rotationdays', 'activitymps', 'activitycoherencedays', 'rmag', 'imag', 'jmag', 'hmag', 'gmag',
-  'logrhk', 'logg', 'exposuresec', 'visitsigmamps', 'visitspernight',
+  'ra',
+  'dec',
+  'pmramasyr',
+  'pmdecmasyr',
+  'epochyear',
+  'vmag',
+  'teffk',
+  'masssun',
+  'vsinikms',
+  'jittermps',
+  'nightlyjitterfraction',
+  'rotationdays',
+  'activitymps',
+  'activitycoherencedays',
+  'rmag',
+  'imag',
+  'jmag',
+  'hmag',
+  'gmag',
+  'logrhk',
+  'logg',
+  'exposuresec',
+  'visitsigmamps',
+  'visitspernight',
 ] as const;
 
 interface Place {
@@ -115,8 +174,10 @@ function buildTarget(row: Row, place: Place): Target {
   const mags: Partial<Record<BandId, number>> = {};
   for (const [band, column] of BAND_COLUMNS) if (row[column] !== undefined) mags[band] = row[column];
   const firstBand = BAND_COLUMNS.find(([band]) => mags[band] !== undefined)?.[0];
-  if (row.vmag === undefined && firstBand === undefined) fail(place, 'vmag', 'required: V magnitude from -2 to 20, or a magnitude in another band (rmag, imag, jmag, hmag, gmag)');
-  if (row.visitspernight !== undefined && !Number.isInteger(row.visitspernight)) fail(place, 'visitspernight', 'visits of the star in one night, a whole number from 1 to 12');
+  if (row.vmag === undefined && firstBand === undefined)
+    fail(place, 'vmag', 'required: V magnitude from -2 to 20, or a magnitude in another band (rmag, imag, jmag, hmag, gmag)');
+  if (row.visitspernight !== undefined && !Number.isInteger(row.visitspernight))
+    fail(place, 'visitspernight', 'visits of the star in one night, a whole number from 1 to 12');
   if (row.exposuresec !== undefined && row.visitsigmamps !== undefined) fail(place, 'visitsigmamps', 'give exposureSec or visitSigmaMps, not both');
   const withDefault = <T>(value: T | undefined, name: string, fallback: T): T => {
     if (value !== undefined) return value;
@@ -166,10 +227,21 @@ function buildTarget(row: Row, place: Place): Target {
     estimated,
     source: `${place.file} ${place.where}`,
   };
-  const optional = { nightlyJitterFraction: row.nightlyjitterfraction, rotationDays: row.rotationdays, activityMps: row.activitymps, activityCoherenceDays: row.activitycoherencedays };
+  const optional = {
+    nightlyJitterFraction: row.nightlyjitterfraction,
+    rotationDays: row.rotationdays,
+    activityMps: row.activitymps,
+    activityCoherenceDays: row.activitycoherencedays,
+  };
   for (const [key, value] of Object.entries(optional)) if (value !== undefined) Object.assign(target, { [key]: value });
   if (Object.keys(mags).length > 0) target.mags = mags;
-  for (const [key, value] of [['logRhk', row.logrhk], ['logg', row.logg], ['exposureSec', row.exposuresec], ['visitSigmaMps', row.visitsigmamps], ['visitsPerNight', row.visitspernight]] as const) {
+  for (const [key, value] of [
+    ['logRhk', row.logrhk],
+    ['logg', row.logg],
+    ['exposureSec', row.exposuresec],
+    ['visitSigmaMps', row.visitsigmamps],
+    ['visitsPerNight', row.visitspernight],
+  ] as const) {
     if (value !== undefined) target[key] = value;
   }
   if (hasPeriod) {
@@ -206,12 +278,26 @@ export function parseTargets(text: string, file: string): Target[] {
   const columns = table.header.map((name) => name.trim().toLowerCase());
   columns.forEach((column, i) => {
     if (!COLUMNS.includes(column)) {
-      throw inputError({ file, where: `header column ${i + 1}`, field: 'column', value: table.header[i], allowed: `unknown column; known: ${COLUMNS.map(display).join(', ')}` });
+      throw inputError({
+        file,
+        where: `header column ${i + 1}`,
+        field: 'column',
+        value: table.header[i],
+        allowed: `unknown column; known: ${COLUMNS.map(display).join(', ')}`,
+      });
     }
-    if (columns.indexOf(column) !== i) throw inputError({ file, where: `header column ${i + 1}`, field: 'column', value: table.header[i], allowed: 'each column once' });
+    if (columns.indexOf(column) !== i)
+      throw inputError({ file, where: `header column ${i + 1}`, field: 'column', value: table.header[i], allowed: 'each column once' });
   });
   for (const column of REQUIRED.filter((c) => c !== 'vmag' && c !== 'teffk')) {
-    if (!columns.includes(column)) throw inputError({ file, where: 'header', field: display(column), value: undefined, allowed: `required column missing; the header has: ${table.header.join(', ')}` });
+    if (!columns.includes(column))
+      throw inputError({
+        file,
+        where: 'header',
+        field: display(column),
+        value: undefined,
+        allowed: `required column missing; the header has: ${table.header.join(', ')}`,
+      });
   }
   if (table.rows.length === 0) throw inputError({ file, field: '(file)', value: '', allowed: 'no target rows after the header' });
 
@@ -232,7 +318,8 @@ export function parseTargets(text: string, file: string): Target[] {
   for (const { row, place } of parsed) {
     if (seen.has(row.id)) fail(place, 'id', `each id once (also on ${seen.get(row.id)!.where})`);
     const earlier = bySlug.get(slug(row.id));
-    if (earlier !== undefined) fail(place, 'id', `an id that differs from ${JSON.stringify(earlier)} in more than case or punctuation (both would be written to the same file names)`);
+    if (earlier !== undefined)
+      fail(place, 'id', `an id that differs from ${JSON.stringify(earlier)} in more than case or punctuation (both would be written to the same file names)`);
     seen.set(row.id, place);
     bySlug.set(slug(row.id), row.id);
   }
@@ -251,7 +338,8 @@ function groupStars(parsed: { row: Row; place: Place }[], ids: Map<string, Place
   for (const entry of parsed) {
     const starId = entry.row.star ?? entry.row.id;
     const rowOfId = ids.get(starId);
-    if (rowOfId && (rowAt.get(rowOfId)!.star ?? starId) !== starId) fail(entry.place, 'star', `a star name that is not the id of a row of another star (${rowOfId.where})`);
+    if (rowOfId && (rowAt.get(rowOfId)!.star ?? starId) !== starId)
+      fail(entry.place, 'star', `a star name that is not the id of a row of another star (${rowOfId.where})`);
     stars.set(starId, [...(stars.get(starId) ?? []), entry]);
   }
   for (const [starId, group] of stars) {
@@ -266,7 +354,8 @@ function groupStars(parsed: { row: Row; place: Place }[], ids: Map<string, Place
       }
     }
     const searches = group.filter(({ row }) => row.searchperiodmindays !== undefined);
-    if (searches.length > 1) fail(searches[1]!.place, 'searchperiodmindays', `one search range per star (star ${starId} has one on ${searches[0]!.place.where})`);
+    if (searches.length > 1)
+      fail(searches[1]!.place, 'searchperiodmindays', `one search range per star (star ${starId} has one on ${searches[0]!.place.where})`);
     for (const entry of group) for (const column of STAR_COLUMNS) if (given[column]) (entry.row as Record<string, unknown>)[column] = given[column]!.value;
   }
   return stars;

@@ -29,7 +29,7 @@ function sinInclination(input: MassFromKInput): number {
  */
 export function planetMassFromKApproxEarth(input: MassFromKInput): number {
   const gmStar = input.starMassSun * GM_SUN;
-  return (Math.cbrt(massFunctionGm(input)) * Math.pow(gmStar, 2 / 3)) / sinInclination(input) / GM_EARTH;
+  return (Math.cbrt(massFunctionGm(input)) * gmStar ** (2 / 3)) / sinInclination(input) / GM_EARTH;
 }
 
 /**
@@ -45,8 +45,8 @@ export function planetMassFromKEarth(input: MassFromKInput): number {
   const gmStar = input.starMassSun * GM_SUN;
   const sinI = sinInclination(input);
   const c = Math.cbrt(massFunctionGm(input) / gmStar);
-  const residual = (y: number) => (y * sinI) / Math.pow(1 + y, 2 / 3) - c;
-  const slope = (y: number) => (sinI * (1 + y / 3)) / Math.pow(1 + y, 5 / 3);
+  const residual = (y: number) => (y * sinI) / (1 + y) ** (2 / 3) - c;
+  const slope = (y: number) => (sinI * (1 + y / 3)) / (1 + y) ** (5 / 3);
   let lo = c / sinI;
   let hi = Math.max(1, (4 * c ** 3) / sinI ** 3);
   let y = lo;

@@ -22,7 +22,5 @@ export function semiAmplitudeMps(input: SemiAmplitudeInput): number {
   const gmPlanet = planetMassEarth * GM_EARTH;
   const gmTotal = starMassSun * GM_SUN + gmPlanet;
   const sinI = Math.sin((inclinationDeg * Math.PI) / 180);
-  return (
-    Math.cbrt((2 * Math.PI) / periodSec) * (gmPlanet * sinI) / Math.pow(gmTotal, 2 / 3) / Math.sqrt(1 - ecc * ecc)
-  );
+  return (Math.cbrt((2 * Math.PI) / periodSec) * (gmPlanet * sinI)) / gmTotal ** (2 / 3) / Math.sqrt(1 - ecc * ecc);
 }

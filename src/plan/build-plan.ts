@@ -33,8 +33,7 @@ export function buildPlan(given: Campaign, options: PlanOptions = {}): Plan {
   const bySlot = new Map(details.map((d) => [d.slot.slotId, d]));
   const ahead = result.slotIds.map((id) => plannedVisit(bySlot.get(id)!, campaign));
   const visits = [...past.kept, ...ahead].sort((a, b) => a.startUtc.localeCompare(b.startUtc));
-  const windowEndBjdTdb = (t: TargetSetup) =>
-    starBjdTdb(DateTime.fromISO(window.end, { zone: site.timeZone }).plus({ days: 1 }).toJSDate(), t.target);
+  const windowEndBjdTdb = (t: TargetSetup) => starBjdTdb(DateTime.fromISO(window.end, { zone: site.timeZone }).plus({ days: 1 }).toJSDate(), t.target);
   const targets = setups.map((setup) => {
     const summary = targetSummary(setup, result, weather.targets, windowEndBjdTdb(setup));
     const fit = rv.fits.get(setup.target.id);
@@ -51,7 +50,9 @@ export function buildPlan(given: Campaign, options: PlanOptions = {}): Plan {
   const plan: Plan = {
     schemaVersion: 1,
     generator: GENERATOR,
-    ...(options.now ? { replan: { nowUtc: DateTime.fromJSDate(options.now, { zone: 'utc' }).toISO({ suppressMilliseconds: true })!, lostDates: campaign.lostDates } } : {}),
+    ...(options.now
+      ? { replan: { nowUtc: DateTime.fromJSDate(options.now, { zone: 'utc' }).toISO({ suppressMilliseconds: true })!, lostDates: campaign.lostDates } }
+      : {}),
     ...(observed.length > 0 ? { observed } : {}),
     campaign: { ...campaign, seed },
     nights,
@@ -59,7 +60,14 @@ export function buildPlan(given: Campaign, options: PlanOptions = {}): Plan {
     backups: result.backups.map((b) => ({ localDate: b.localDate, rank: b.rank, utilityGain: b.utilityGain })),
     visits,
     targets,
-    totals: { nights: plannedDates.length, visits: visits.length, exposureHours, overheadHours: totalHours - exposureHours, totalHours, utility: result.utility },
+    totals: {
+      nights: plannedDates.length,
+      visits: visits.length,
+      exposureHours,
+      overheadHours: totalHours - exposureHours,
+      totalHours,
+      utility: result.utility,
+    },
     warnings: [],
   };
   plan.warnings = [...rv.warnings, ...planWarnings(plan, setups, windows, transitRule(campaign))];

@@ -84,7 +84,9 @@ export function setupTargets(campaign: Campaign): TargetSetup[] {
       setup.role = 'search';
       setup.kMps = semiAmplitudeMps({ starMassSun: target.massSun, planetMassEarth: msiniEarth, periodDays: periodMinDays });
     } else {
-      setup.skipped = target.ephemeris ? 'has an ephemeris but no planet mass or K: nothing to schedule for' : 'has neither an ephemeris with a planet nor a search range: nothing to schedule for';
+      setup.skipped = target.ephemeris
+        ? 'has an ephemeris but no planet mass or K: nothing to schedule for'
+        : 'has neither an ephemeris with a planet nor a search range: nothing to schedule for';
     }
     return setup;
   });
@@ -99,7 +101,14 @@ export function setupStars(campaign: Campaign, setups: TargetSetup[]): StarSetup
     const lead = rowSetups.filter((r) => r.role === 'ephemeris').sort((a, b) => a.kMps! - b.kMps!)[0] ?? rowSetups[0]!;
     // Every row of the star is observed with that exposure.
     for (const row of rowSetups) Object.assign(row, { exposure: lead.exposure, durationSec: lead.durationSec });
-    const star: StarSetup = { starId, star: lead.target, rows: rowSetups, exposure: lead.exposure, durationSec: lead.durationSec, noise: starNoise(lead.target, campaign.noise.nightlyJitterFraction) };
+    const star: StarSetup = {
+      starId,
+      star: lead.target,
+      rows: rowSetups,
+      exposure: lead.exposure,
+      durationSec: lead.durationSec,
+      noise: starNoise(lead.target, campaign.noise.nightlyJitterFraction),
+    };
     const goalOf = (t: Target) => t.goalSignificance ?? campaign.goals.significance;
     const planets = planetRows(rows).map((t) => ({ id: t.id, priority: t.priority, kMps: byId.get(t.id)!.kMps!, goalSignificance: goalOf(t) }));
     const searchRow = rowSetups.find((s) => s.role === 'search');
@@ -110,7 +119,14 @@ export function setupStars(campaign: Campaign, setups: TargetSetup[]): StarSetup
     if (model) target.model = model;
     if (searchRow) {
       const { periodMinDays, periodMaxDays } = searchRow.target.search!;
-      target.search = { id: searchRow.target.id, priority: searchRow.target.priority, kMps: searchRow.kMps!, goalSignificance: goalOf(searchRow.target), periodMinDays, periodMaxDays };
+      target.search = {
+        id: searchRow.target.id,
+        priority: searchRow.target.priority,
+        kMps: searchRow.kMps!,
+        goalSignificance: goalOf(searchRow.target),
+        periodMinDays,
+        periodMaxDays,
+      };
     }
     star.scheduleTarget = target;
     return star;

@@ -74,8 +74,17 @@ export function nextVisits(given: Campaign, at: Date): NextAnswer {
   }
   const ratios = (t: number) => {
     const star = problem.targets[t]!;
-    const out = star.planets.map((p, i) => ({ targetId: p.id, ratio: state.planetFractionOfGoal(c.planetFrom[t]! + i) * p.goalSignificance, goalSignificance: p.goalSignificance }));
-    if (star.search) out.push({ targetId: star.search.id, ratio: state.searchFractionOfGoal(t, 0, 0) * star.search.goalSignificance, goalSignificance: star.search.goalSignificance });
+    const out = star.planets.map((p, i) => ({
+      targetId: p.id,
+      ratio: state.planetFractionOfGoal(c.planetFrom[t]! + i) * p.goalSignificance,
+      goalSignificance: p.goalSignificance,
+    }));
+    if (star.search)
+      out.push({
+        targetId: star.search.id,
+        ratio: state.searchFractionOfGoal(t, 0, 0) * star.search.goalSignificance,
+        goalSignificance: star.search.goalSignificance,
+      });
     return out;
   };
   const choices: NextChoice[] = [];
@@ -86,10 +95,16 @@ export function nextVisits(given: Campaign, at: Date): NextAnswer {
     state.add(j);
     const after = ratios(t);
     state.remove(j);
-    const window = inputs.windows.find((w) => w.targetId === d.slot.targetId && w.localDate === localDate && w.start.getTime() <= d.slot.startMs && w.end.getTime() >= d.slot.startMs)!;
+    const window = inputs.windows.find(
+      (w) => w.targetId === d.slot.targetId && w.localDate === localDate && w.start.getTime() <= d.slot.startMs && w.end.getTime() >= d.slot.startMs,
+    )!;
     // A star with one planet or search is named once, by its line.
     const name = (id: string) => (before.length > 1 ? `${id} ` : '');
-    const goalWords = before.map((b) => (b.ratio >= b.goalSignificance ? `${name(b.targetId)}goal reached (K/sigma_K ${b.ratio.toFixed(1)})` : `${name(b.targetId)}K/sigma_K ${b.ratio.toFixed(1)} of ${b.goalSignificance}`));
+    const goalWords = before.map((b) =>
+      b.ratio >= b.goalSignificance
+        ? `${name(b.targetId)}goal reached (K/sigma_K ${b.ratio.toFixed(1)})`
+        : `${name(b.targetId)}K/sigma_K ${b.ratio.toFixed(1)} of ${b.goalSignificance}`,
+    );
     choices.push({
       starId: d.slot.targetId,
       startMs: d.slot.startMs,

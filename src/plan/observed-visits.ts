@@ -42,7 +42,11 @@ export function observedVisits(campaign: Campaign, stars: StarSetup[]): Observed
   const starMps = new Map<string, number>();
   const instrumentMpsOf = (setup: StarSetup) => {
     if (!starMps.has(setup.starId)) {
-      starMps.set(setup.starId, visitPrecision(campaign.instrument, setup.star, setup.exposure.exposureSec, TYPICAL_AIRMASS, { seeingArcsec: campaign.site.medianSeeingArcsec }).visitSigmaMps);
+      starMps.set(
+        setup.starId,
+        visitPrecision(campaign.instrument, setup.star, setup.exposure.exposureSec, TYPICAL_AIRMASS, { seeingArcsec: campaign.site.medianSeeingArcsec })
+          .visitSigmaMps,
+      );
     }
     return starMps.get(setup.starId)!;
   };

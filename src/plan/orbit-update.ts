@@ -23,7 +23,9 @@ export interface RvUpdate {
 
 /** The RV-carrying observed visits of a star, as the fit takes them. */
 function points(observed: ObservedVisit[], starId: string): FitPoint[] {
-  return observed.filter((v) => v.starId === starId && v.rvMps !== undefined).map((v) => ({ bjdTdb: v.midBjdTdb, rvMps: v.rvMps!, rvErrorMps: v.rvErrorMps!, instrument: v.instrument }));
+  return observed
+    .filter((v) => v.starId === starId && v.rvMps !== undefined)
+    .map((v) => ({ bjdTdb: v.midBjdTdb, rvMps: v.rvMps!, rvErrorMps: v.rvErrorMps!, instrument: v.instrument }));
 }
 
 /**
@@ -71,7 +73,13 @@ export function updateFromRvs(campaign: Campaign, observed: ObservedVisit[], set
         tcErrDays: p.tcErrDays,
         periodDays: p.periodDays,
         periodErrDays: p.periodErrDays,
-        catalogue: { kMps: byId.get(row.id)!.kMps, tcBjdTdb: eph.tcBjdTdb, tcErrDays: eph.tcErrDays, periodDays: eph.periodDays, periodErrDays: eph.periodErrDays },
+        catalogue: {
+          kMps: byId.get(row.id)!.kMps,
+          tcBjdTdb: eph.tcBjdTdb,
+          tcErrDays: eph.tcErrDays,
+          periodDays: eph.periodDays,
+          periodErrDays: eph.periodErrDays,
+        },
       });
       replaced.set(row.id, {
         ...row,
@@ -83,7 +91,9 @@ export function updateFromRvs(campaign: Campaign, observed: ObservedVisit[], set
   // The planner has one zero point per star (instrument offsets are fitted, not planned for).
   const others = [...new Set(observed.map((v) => v.instrument))].filter((id) => id !== campaign.instrument.id);
   if (others.length > 0) {
-    out.warnings.push(`observed visits from ${others.join(', ')} count in the plan as if on the zero point of ${campaign.instrument.id} (the RV fit gives each instrument its own offset)`);
+    out.warnings.push(
+      `observed visits from ${others.join(', ')} count in the plan as if on the zero point of ${campaign.instrument.id} (the RV fit gives each instrument its own offset)`,
+    );
   }
   if (replaced.size > 0) out.campaign = { ...campaign, targets: campaign.targets.map((t) => replaced.get(t.id) ?? t) };
   return out;

@@ -50,7 +50,11 @@ export function planInputs(given: Campaign, options: ReplanOptions): PlanInputs 
     targets: stars.flatMap((s) => (s.scheduleTarget ? [s.scheduleTarget] : [])),
     slots: details.map((d) => d.slot),
     time: left.time,
-    constraints: { minSpacingHours: constraints.minSpacingHours, onePerNight: constraints.minSpacingHours >= 12, sameNightSpacingHours: constraints.sameNightSpacingHours },
+    constraints: {
+      minSpacingHours: constraints.minSpacingHours,
+      onePerNight: constraints.minSpacingHours >= 12,
+      sameNightSpacingHours: constraints.sameNightSpacingHours,
+    },
     prior: priorVisits(past, rv.fittedStars, allNights),
   };
   return { campaign, rv, setups, stars, nights, windows, observed, past, left, details, problem };

@@ -29,7 +29,12 @@ export function starVisitInformation(
     model,
     visits: informationVisits(
       model,
-      visits.map((v) => ({ bjdTdb: v.midBjdTdb, whiteSigmaMps: v.whiteSigmaMps, night: nightPos.get(v.localDate) ?? -1, nightBjdTdb: nightMiddleJd(nights[nightPos.get(v.localDate)!]) })),
+      visits.map((v) => ({
+        bjdTdb: v.midBjdTdb,
+        whiteSigmaMps: v.whiteSigmaMps,
+        night: nightPos.get(v.localDate) ?? -1,
+        nightBjdTdb: nightMiddleJd(nights[nightPos.get(v.localDate)!]),
+      })),
     ),
   };
 }

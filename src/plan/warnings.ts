@@ -48,7 +48,9 @@ export function planWarnings(plan: Plan, setups: TargetSetup[], windows: Window[
     if (neverObservable) w.push('never observable in the window under the constraints (altitude, airmass, Moon, dark time)');
     if (setup.exposure.warning) w.push(setup.exposure.warning);
     if (!neverObservable && summary.goalSignificance !== undefined && summary.kOverSigmaK !== undefined && summary.kOverSigmaK < summary.goalSignificance) {
-      w.push(`goal K/sigma_K = ${summary.goalSignificance} not reached: ${summary.kOverSigmaK.toFixed(1)} with ${summary.visits} visits${visitsHint(summary, setup)}`);
+      w.push(
+        `goal K/sigma_K = ${summary.goalSignificance} not reached: ${summary.kOverSigmaK.toFixed(1)} with ${summary.visits} visits${visitsHint(summary, setup)}`,
+      );
     }
     if (summary.phaseErrAtEnd !== undefined && summary.phaseErrAtEnd > LOST_PHASE_ERR_CYCLES && summary.kMps !== undefined) {
       const n = recoveryVisits(summary.kMps, setup.exposure.budget.effectiveSigmaMps);
@@ -57,8 +59,14 @@ export function planWarnings(plan: Plan, setups: TargetSetup[], windows: Window[
       );
     }
     const eph = setup.target.ephemeris;
-    if (eph?.transitDurationHours !== undefined && Number.isFinite(windowEndBjdTdb) && transitHalfWidthDays(eph, nearestEpoch(eph, windowEndBjdTdb), rule) === 0) {
-      w.push(`transit time too uncertain to avoid by the window's end (keeping out of it would remove more than ${Math.round(rule.maxOrbitFraction * 100)}% of the orbit): visits may fall in transit`);
+    if (
+      eph?.transitDurationHours !== undefined &&
+      Number.isFinite(windowEndBjdTdb) &&
+      transitHalfWidthDays(eph, nearestEpoch(eph, windowEndBjdTdb), rule) === 0
+    ) {
+      w.push(
+        `transit time too uncertain to avoid by the window's end (keeping out of it would remove more than ${Math.round(rule.maxOrbitFraction * 100)}% of the orbit): visits may fall in transit`,
+      );
     }
   }
   const warnings: string[] = [];

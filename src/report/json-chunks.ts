@@ -41,7 +41,9 @@ function* parts(value: unknown, pad: string, depth: number, where: string): Gene
   const inner = pad + INDENT;
   const entries = Array.isArray(value)
     ? value.map((v) => [undefined, omitted(v) ? null : v] as const)
-    : Object.entries(value).filter(([, v]) => !omitted(v)).map(([k, v]) => [k, v] as const);
+    : Object.entries(value)
+        .filter(([, v]) => !omitted(v))
+        .map(([k, v]) => [k, v] as const);
   const [open, close] = Array.isArray(value) ? ['[', ']'] : ['{', '}'];
   if (entries.length === 0) {
     yield `${open}${close}`;

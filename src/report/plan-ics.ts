@@ -35,7 +35,9 @@ export function renderPlanIcs(plan: Plan, options: PlanIcsOptions = {}): string 
   });
   const stamp = DateTime.fromMillis(stampMs(plan, options.stampMs), { zone: 'utc' });
   const uids = visitUids(plan.visits);
-  plan.visits.forEach((visit, i) => addEvent(calendar, plan, visit, { uid: uids[i]!, stamp, sequence: visit.icsSequence ?? 0 }));
+  plan.visits.forEach((visit, i) => {
+    addEvent(calendar, plan, visit, { uid: uids[i]!, stamp, sequence: visit.icsSequence ?? 0 });
+  });
   if (previous) {
     const kept = new Set(uids);
     visitUids(previous.visits).forEach((uid, i) => {

@@ -1,6 +1,19 @@
 import type { Plan } from '../plan/plan-schema.js';
 import { markdownTable } from './markdown.js';
-import { ADVISORY, historyLine, rvUpdateLines, nightHeading, OBSERVED_COLUMNS, observedRows, targetColumns, targetRows, totalsLine, VISIT_COLUMNS, visitRow, visitsByNight } from './plan-rows.js';
+import {
+  ADVISORY,
+  historyLine,
+  rvUpdateLines,
+  nightHeading,
+  OBSERVED_COLUMNS,
+  observedRows,
+  targetColumns,
+  targetRows,
+  totalsLine,
+  VISIT_COLUMNS,
+  visitRow,
+  visitsByNight,
+} from './plan-rows.js';
 
 /** plan.md: the plan for people. */
 export function renderPlanMarkdown(plan: Plan): string {
@@ -28,7 +41,15 @@ export function renderPlanMarkdown(plan: Plan): string {
   ];
   for (const [date, visits] of visitsByNight(plan)) {
     out.push(`### ${nightHeading(plan, date)}`, '');
-    out.push(visits.length ? markdownTable(VISIT_COLUMNS, visits.map((v) => visitRow(v, zone))) : '(no visit)', '');
+    out.push(
+      visits.length
+        ? markdownTable(
+            VISIT_COLUMNS,
+            visits.map((v) => visitRow(v, zone)),
+          )
+        : '(no visit)',
+      '',
+    );
   }
   if (plan.backups.length) {
     out.push('## Backup nights', '', ...plan.backups.map((b) => `${b.rank}. ${b.localDate} (utility gain ${b.utilityGain.toFixed(3)})`), '');

@@ -119,7 +119,7 @@ export function totalsLine(plan: Plan): string {
 }
 
 export const ADVISORY =
-  'This plan is advisory. The observatory\'s own safety rules (Sun avoidance, wind, humidity, dome and telescope limits) always take precedence.';
+  "This plan is advisory. The observatory's own safety rules (Sun avoidance, wind, humidity, dome and telescope limits) always take precedence.";
 
 /** What the plan started from, when it was re-planned or given visits already made; undefined otherwise. */
 export function historyLine(plan: Plan): string | undefined {
@@ -127,7 +127,9 @@ export function historyLine(plan: Plan): string | undefined {
   const kept = plan.visits.filter((v) => v.kept).length;
   const parts = [
     plan.replan ? `Re-planned from ${plan.replan.nowUtc}: ${kept} earlier visit${kept === 1 ? '' : 's'} kept as planned` : undefined,
-    plan.observed ? `${plan.observed.length} visit${plan.observed.length === 1 ? '' : 's'} already made (${plan.campaign.observed?.file ?? 'observed file'})` : undefined,
+    plan.observed
+      ? `${plan.observed.length} visit${plan.observed.length === 1 ? '' : 's'} already made (${plan.campaign.observed?.file ?? 'observed file'})`
+      : undefined,
     plan.campaign.lostDates.length ? `lost nights ${plan.campaign.lostDates.join(', ')}` : undefined,
   ];
   return `${parts.filter((p) => p !== undefined).join('; ')}.`;

@@ -1,6 +1,19 @@
 import type { Plan } from '../plan/plan-schema.js';
 import { renderTable } from './table.js';
-import { ADVISORY, historyLine, rvUpdateLines, nightHeading, OBSERVED_COLUMNS, observedRows, targetColumns, targetRows, totalsLine, VISIT_COLUMNS, visitRow, visitsByNight } from './plan-rows.js';
+import {
+  ADVISORY,
+  historyLine,
+  rvUpdateLines,
+  nightHeading,
+  OBSERVED_COLUMNS,
+  observedRows,
+  targetColumns,
+  targetRows,
+  totalsLine,
+  VISIT_COLUMNS,
+  visitRow,
+  visitsByNight,
+} from './plan-rows.js';
 
 /** The plain-text summary printed by `crest plan`. */
 export function renderPlanText(plan: Plan): string {
@@ -17,7 +30,16 @@ export function renderPlanText(plan: Plan): string {
   if (updates.length) out.push('What the RVs so far change', ...updates.map((l) => `- ${l}`), '');
   for (const [date, visits] of visitsByNight(plan)) {
     out.push(nightHeading(plan, date));
-    out.push(visits.length ? indent(renderTable(VISIT_COLUMNS, visits.map((v) => visitRow(v, zone)))) : '  (no visit)');
+    out.push(
+      visits.length
+        ? indent(
+            renderTable(
+              VISIT_COLUMNS,
+              visits.map((v) => visitRow(v, zone)),
+            ),
+          )
+        : '  (no visit)',
+    );
     out.push('');
   }
   if (plan.backups.length) {

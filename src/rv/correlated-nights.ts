@@ -151,7 +151,8 @@ export class CorrelatedNights {
     const { p, d } = this;
     for (let k = 0; k < this.samples; k++) {
       const h = this.h.subarray(q * this.row + k * p, q * this.row + (k + 1) * p);
-      if (!removed) for (let c = 0; c < p; c++) d[c] = (nightU[k * p + c]! + sign * v.weight * v.rows[v.offset + k * p + c]!) / after - nightU[k * p + c]! / nightWeight;
+      if (!removed)
+        for (let c = 0; c < p; c++) d[c] = (nightU[k * p + c]! + sign * v.weight * v.rows[v.offset + k * p + c]!) / after - nightU[k * p + c]! / nightWeight;
       visit(k, h, pqq, beta);
     }
   }
@@ -242,7 +243,8 @@ export class CorrelatedNights {
     const { m, cap, p, row } = this;
     const a = new Float64Array(m * 2 * m);
     for (let i = 0; i < m; i++) {
-      for (let k = 0; k < m; k++) a[i * 2 * m + k] = activityCovariance(this.activity, this.times[i]! - this.times[k]!) + (i === k ? 1 / this.weights[i]! + this.tau2 : 0);
+      for (let k = 0; k < m; k++)
+        a[i * 2 * m + k] = activityCovariance(this.activity, this.times[i]! - this.times[k]!) + (i === k ? 1 / this.weights[i]! + this.tau2 : 0);
       a[i * 2 * m + m + i] = 1;
     }
     for (let col = 0; col < m; col++) {
@@ -256,10 +258,19 @@ export class CorrelatedNights {
     }
     for (let i = 0; i < m; i++) for (let k = 0; k < m; k++) this.pm[i * cap + k] = a[i * 2 * m + m + k]!;
     this.h.fill(0, 0, m * row);
-    for (let i = 0; i < m; i++) for (let k = 0; k < m; k++) for (let c = 0; c < row; c++) this.h[i * row + c] += this.pm[i * cap + k]! * this.ubar[k * row + c]!;
+    for (let i = 0; i < m; i++)
+      for (let k = 0; k < m; k++) for (let c = 0; c < row; c++) this.h[i * row + c] += this.pm[i * cap + k]! * this.ubar[k * row + c]!;
     this.g.fill(0);
     for (let s = 0; s < this.samples; s++) {
-      for (let i = 0; i < m; i++) addOuter(this.g, s * this.packed, p, this.ubar.subarray(i * row + s * p, i * row + (s + 1) * p), this.h.subarray(i * row + s * p, i * row + (s + 1) * p), 1);
+      for (let i = 0; i < m; i++)
+        addOuter(
+          this.g,
+          s * this.packed,
+          p,
+          this.ubar.subarray(i * row + s * p, i * row + (s + 1) * p),
+          this.h.subarray(i * row + s * p, i * row + (s + 1) * p),
+          1,
+        );
     }
   }
 }

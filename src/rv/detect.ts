@@ -91,7 +91,14 @@ export function minimumDetectableKMps(whiteSigmaMps: number, visits: number, goa
 }
 
 /** The K (m/s) detected with probability `level` after N visits (bisection; P rises with K). */
-export function kAtProbabilityMps(whiteSigmaMps: number, visits: number, goalSignificance: number, layout: PhaseLayout, floorMps: number, level: number): number {
+export function kAtProbabilityMps(
+  whiteSigmaMps: number,
+  visits: number,
+  goalSignificance: number,
+  layout: PhaseLayout,
+  floorMps: number,
+  level: number,
+): number {
   let lo = 0;
   let hi = 2 * minimumDetectableKMps(whiteSigmaMps, visits, goalSignificance, layout, floorMps) + 1e-9;
   while (detectionProbability(hi, whiteSigmaMps, visits, goalSignificance, layout, floorMps) < level) hi *= 2;
@@ -139,7 +146,10 @@ export function massLimitTable(input: MassLimitInput): MassLimitRow[] {
   const { starMassSun, whiteSigmaMps, visits, goalSignificance, ecc = 0, floorMps = 0 } = input;
   const kRandom = minimumDetectableKMps(whiteSigmaMps, visits, goalSignificance, 'random', floorMps);
   const kQuad = minimumDetectableKMps(whiteSigmaMps, visits, goalSignificance, 'quadrature', floorMps);
-  const [k50, k90] = COMPLETENESS_LEVELS.map((level) => kAtProbabilityMps(whiteSigmaMps, visits, goalSignificance, 'random', floorMps, level)) as [number, number];
+  const [k50, k90] = COMPLETENESS_LEVELS.map((level) => kAtProbabilityMps(whiteSigmaMps, visits, goalSignificance, 'random', floorMps, level)) as [
+    number,
+    number,
+  ];
   const mass = (kMps: number, periodDays: number) => planetMassFromKEarth({ starMassSun, kMps, periodDays, ecc });
   return input.periodsDays.map((periodDays) => ({
     periodDays,

@@ -24,7 +24,10 @@ export const COLOUR_TABLE_TEFF_K = { min: COLOUR_TEFF_K[0]!, max: COLOUR_TEFF_K[
 export function dwarfColour(bandId: BandId, teffK: number): number {
   if (bandId === 'V') return 0;
   const column = V_MINUS[bandId];
-  return interpolateTable(COLOUR_TEFF_K.map((t, i) => [t, column[i]!] as const), teffK);
+  return interpolateTable(
+    COLOUR_TEFF_K.map((t, i) => [t, column[i]!] as const),
+    teffK,
+  );
 }
 
 /** What the precision model needs to know of a star's brightness. */

@@ -118,14 +118,16 @@ export function chooseExposureSec(
 ): ExposureChoice {
   const minimum = minimumExposure(instrument, star);
   const photonAt = (t: number) => photonNoise(instrument, star, t, airmass, options).photonSigmaMps;
-  const hoursSec = targetVisitSigmaMps === undefined && options.kMps !== undefined ? fewestHoursSec(instrument, star, airmass, minimum.sec, options) : undefined;
+  const hoursSec =
+    targetVisitSigmaMps === undefined && options.kMps !== undefined ? fewestHoursSec(instrument, star, airmass, minimum.sec, options) : undefined;
   let goal: ExposureChoice['goal'];
   let goalMps: number;
   let requiredSec: number;
   if (targetVisitSigmaMps !== undefined) {
     goal = 'target-sigma';
     goalMps = targetVisitSigmaMps;
-    requiredSec = targetVisitSigmaMps > instrument.floorMps ? exposureForSigma(photonAt, Math.sqrt(targetVisitSigmaMps ** 2 - instrument.floorMps ** 2)) : Infinity;
+    requiredSec =
+      targetVisitSigmaMps > instrument.floorMps ? exposureForSigma(photonAt, Math.sqrt(targetVisitSigmaMps ** 2 - instrument.floorMps ** 2)) : Infinity;
   } else if (hoursSec !== undefined) {
     goal = 'fewest-hours';
     requiredSec = hoursSec;
@@ -138,8 +140,15 @@ export function chooseExposureSec(
   const { exposureSec, clippedTo } = clip(requiredSec, minimum.sec, instrument.maxExposureSec);
   const budget = visitPrecision(instrument, star, exposureSec, airmass, options);
   const choice: ExposureChoice = {
-    exposureSec, requiredSec, goal, goalMps, clippedTo, minimumSec: minimum.sec, minimumReason: minimum.reason,
-    tooFaint: clippedTo === 'max' && goal !== 'fewest-hours', budget,
+    exposureSec,
+    requiredSec,
+    goal,
+    goalMps,
+    clippedTo,
+    minimumSec: minimum.sec,
+    minimumReason: minimum.reason,
+    tooFaint: clippedTo === 'max' && goal !== 'fewest-hours',
+    budget,
   };
   if (choice.tooFaint) choice.warning = exposureWarning(choice, instrument, targetVisitSigmaMps);
   return choice;
@@ -161,12 +170,25 @@ function exposureWarning(choice: ExposureChoice, instrument: Instrument, targetV
 }
 
 /** A given exposure, in the same shape as a chosen one; warns when outside the limits or shorter than the p modes. */
-export function fixedExposure(instrument: Instrument, star: ExposureStar, airmass: number, exposureSec: number, options: PrecisionOptions = {}): ExposureChoice {
+export function fixedExposure(
+  instrument: Instrument,
+  star: ExposureStar,
+  airmass: number,
+  exposureSec: number,
+  options: PrecisionOptions = {},
+): ExposureChoice {
   const budget = visitPrecision(instrument, star, exposureSec, airmass, options);
   const minimum = minimumExposure(instrument, star);
   const choice: ExposureChoice = {
-    exposureSec, requiredSec: exposureSec, goal: 'fixed', goalMps: budget.visitSigmaMps, clippedTo: null,
-    minimumSec: minimum.sec, minimumReason: minimum.reason, tooFaint: false, budget,
+    exposureSec,
+    requiredSec: exposureSec,
+    goal: 'fixed',
+    goalMps: budget.visitSigmaMps,
+    clippedTo: null,
+    minimumSec: minimum.sec,
+    minimumReason: minimum.reason,
+    tooFaint: false,
+    budget,
   };
   if (exposureSec < instrument.minExposureSec || exposureSec > instrument.maxExposureSec) {
     choice.warning = `exposure ${exposureSec} s is outside ${instrument.id}'s limits of ${instrument.minExposureSec}-${instrument.maxExposureSec} s`;

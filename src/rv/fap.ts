@@ -1,4 +1,4 @@
-import { type FrequencyGrid } from './frequency-grid.js';
+import type { FrequencyGrid } from './frequency-grid.js';
 
 /**
  * False-alarm probabilities of a GLS peak of normalised power p (ZK09 normalisation, see
@@ -20,7 +20,8 @@ export interface FapContext {
 export function fapContext(timesDays: ArrayLike<number>, rvErrorsMps: ArrayLike<number>, grid: FrequencyGrid): FapContext {
   const n = timesDays.length;
   if (n < 4) throw new RangeError(`a false-alarm probability needs at least 4 points, got ${n}`);
-  let sw = 0, st = 0;
+  let sw = 0,
+    st = 0;
   for (let i = 0; i < n; i++) {
     const w = 1 / (rvErrorsMps[i]! * rvErrorsMps[i]!);
     sw += w;
@@ -28,7 +29,7 @@ export function fapContext(timesDays: ArrayLike<number>, rvErrorsMps: ArrayLike<
   }
   const mean = st / sw;
   let dt = 0;
-  for (let i = 0; i < n; i++) dt += ((timesDays[i]! - mean) ** 2) / (rvErrorsMps[i]! * rvErrorsMps[i]!);
+  for (let i = 0; i < n; i++) dt += (timesDays[i]! - mean) ** 2 / (rvErrorsMps[i]! * rvErrorsMps[i]!);
   const weightedVarDays2 = dt / sw;
   const fMax = grid.startPerDay + (grid.count - 1) * grid.stepPerDay;
   return {
@@ -44,7 +45,7 @@ export function fapContext(timesDays: ArrayLike<number>, rvErrorsMps: ArrayLike<
  * Prob(p > p0) = (1 − p0)^((N − 3)/2) (ZK09).
  */
 export function fapSingle(power: number, n: number): number {
-  return Math.pow(1 - clampPower(power), (n - 3) / 2);
+  return (1 - clampPower(power)) ** ((n - 3) / 2);
 }
 
 /**
@@ -76,7 +77,7 @@ export function fapBaluev(power: number, ctx: FapContext): number {
   const nK = ctx.n - 3;
   const gammaH = Math.sqrt(2 / nH) * Math.exp(logGamma(nH / 2) - logGamma((nH - 1) / 2));
   const w = ctx.bandPerDay * ctx.effectiveSpanDays;
-  const tau = gammaH * w * Math.pow(1 - p, (nK - 1) / 2) * Math.sqrt((nH * p) / 2);
+  const tau = gammaH * w * (1 - p) ** ((nK - 1) / 2) * Math.sqrt((nH * p) / 2);
   const single = fapSingle(p, ctx.n);
   // 1 − (1 − s)e^(−τ) = −expm1(−τ) + s·e^(−τ), exact for small values.
   return Math.min(1, -Math.expm1(-tau) + single * Math.exp(-tau));
@@ -111,8 +112,8 @@ function clampPower(power: number): number {
 // Lanczos approximation, g = 7, nine coefficients (Lanczos 1964, SIAM J. Numer. Anal. B1, 86;
 // coefficients as tabulated by P. Godfrey, common practice), relative error about 1e-15.
 const LANCZOS = [
-  0.99999999999980993, 676.5203681218851, -1259.1392167224028, 771.32342877765313, -176.61502916214059,
-  12.507343278686905, -0.13857109526572012, 9.9843695780195716e-6, 1.5056327351493116e-7,
+  0.99999999999980993, 676.5203681218851, -1259.1392167224028, 771.32342877765313, -176.61502916214059, 12.507343278686905, -0.13857109526572012,
+  9.9843695780195716e-6, 1.5056327351493116e-7,
 ];
 
 /** ln Γ(x) for x ≥ 0.5. */

@@ -243,6 +243,8 @@ export function designRow(model: StarModel, sample: EphemerisSample, tBjdTdb: nu
 export function designRows(model: StarModel, tBjdTdb: number): Float64Array {
   const p = model.paramCount;
   const out = new Float64Array(model.samples.length * p);
-  model.samples.forEach((sample, s) => designRow(model, sample, tBjdTdb, out, s * p));
+  model.samples.forEach((sample, s) => {
+    designRow(model, sample, tBjdTdb, out, s * p);
+  });
   return out;
 }

@@ -133,7 +133,24 @@ export class StarInformation {
     const { packed, paramCount: p, planetCount } = this;
     const u = night?.u ?? rows;
     for (let s = 0; s < this.sampleCount; s++) {
-      const ok = addRankTwoVariances(this.factor, s * packed, p, planetCount, this.current, s * planetCount, rows, offset + s * p, u, night ? s * p : 0, m11, m12, m22, this.scratch, this.model.samples[s]!.weight, out);
+      const ok = addRankTwoVariances(
+        this.factor,
+        s * packed,
+        p,
+        planetCount,
+        this.current,
+        s * planetCount,
+        rows,
+        offset + s * p,
+        u,
+        night ? s * p : 0,
+        m11,
+        m12,
+        m22,
+        this.scratch,
+        this.model.samples[s]!.weight,
+        out,
+      );
       if (!ok) {
         out.fill(0);
         return false;
@@ -255,6 +272,15 @@ export function kVariances(model: StarModel, visits: InformationVisit[]): Float6
 }
 
 /** The visits of one star as the information sees them: design rows at each time, one night key per visit. */
-export function informationVisits(model: StarModel, visits: { bjdTdb: number; whiteSigmaMps: number; night: number; nightBjdTdb: number }[]): InformationVisit[] {
-  return visits.map((v) => ({ rows: designRows(model, v.bjdTdb), offset: 0, weight: 1 / (v.whiteSigmaMps * v.whiteSigmaMps), night: v.night, nightBjdTdb: v.nightBjdTdb }));
+export function informationVisits(
+  model: StarModel,
+  visits: { bjdTdb: number; whiteSigmaMps: number; night: number; nightBjdTdb: number }[],
+): InformationVisit[] {
+  return visits.map((v) => ({
+    rows: designRows(model, v.bjdTdb),
+    offset: 0,
+    weight: 1 / (v.whiteSigmaMps * v.whiteSigmaMps),
+    night: v.night,
+    nightBjdTdb: v.nightBjdTdb,
+  }));
 }

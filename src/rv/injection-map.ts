@@ -27,8 +27,10 @@ export function levelMass(msinisEarth: number[], probabilities: number[], level:
   const j = probabilities.findIndex((p) => p >= level);
   if (j < 0) return { where: 'above grid' };
   if (j === 0) return { where: 'below grid' };
-  const p0 = probabilities[j - 1]!, p1 = probabilities[j]!;
-  const l0 = Math.log(msinisEarth[j - 1]!), l1 = Math.log(msinisEarth[j]!);
+  const p0 = probabilities[j - 1]!,
+    p1 = probabilities[j]!;
+  const l0 = Math.log(msinisEarth[j - 1]!),
+    l1 = Math.log(msinisEarth[j]!);
   return { where: 'inside', msiniEarth: Math.exp(l0 + ((level - p0) / (p1 - p0)) * (l1 - l0)) };
 }
 

@@ -1,7 +1,15 @@
 import { radialVelocityMps } from '../orbit/rv-curve.js';
 import { semiAmplitudeMps } from '../orbit/semi-amplitude.js';
 import { fapBaluev, fapContext, type FapContext } from './fap.js';
-import { DEFAULT_MAX_PERIOD_PER_BASELINE, DEFAULT_MIN_PERIOD_DAYS, baselineDays, frequencyGrid, gridFrequency, type FrequencyGrid, type FrequencyGridOptions } from './frequency-grid.js';
+import {
+  DEFAULT_MAX_PERIOD_PER_BASELINE,
+  DEFAULT_MIN_PERIOD_DAYS,
+  baselineDays,
+  frequencyGrid,
+  gridFrequency,
+  type FrequencyGrid,
+  type FrequencyGridOptions,
+} from './frequency-grid.js';
 import { argMax } from './periodogram-peaks.js';
 import { glsKernel, type GlsKernel } from './periodogram.js';
 import { createRng, deriveSeed, type Rng } from './random.js';

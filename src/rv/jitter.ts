@@ -25,7 +25,14 @@ export interface JitterEstimate {
 export function quietJitterMps(teffK: number): number {
   if (teffK < 3900) return 2;
   if (teffK < 6000) return 1.5;
-  return interpolateTable([[6000, 1.5], [6500, 3], [7000, 5]], teffK);
+  return interpolateTable(
+    [
+      [6000, 1.5],
+      [6500, 3],
+      [7000, 5],
+    ],
+    teffK,
+  );
 }
 
 /** Below this v sin i (km/s) rotation is not resolved and says little about activity (Crest's choice). */

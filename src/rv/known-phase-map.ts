@@ -54,7 +54,13 @@ export function expectedSigmaKMps(timesBjdTdb: number[], rvErrorsMps: number[], 
     nightlyJitterMps: 0,
     spanBjdTdb: span,
   });
-  const variance = kVariances(model, informationVisits(model, timesBjdTdb.map((bjd, n) => ({ bjdTdb: bjd, whiteSigmaMps: rvErrorsMps[n]!, night: n, nightBjdTdb: bjd }))))[0]!;
+  const variance = kVariances(
+    model,
+    informationVisits(
+      model,
+      timesBjdTdb.map((bjd, n) => ({ bjdTdb: bjd, whiteSigmaMps: rvErrorsMps[n]!, night: n, nightBjdTdb: bjd })),
+    ),
+  )[0]!;
   return Math.sqrt(variance);
 }
 
@@ -72,7 +78,9 @@ export function knownPhaseMapAnalytic(input: KnownPhaseInput): KnownPhaseMap {
   checkInput(input);
   const sigmaKMps = input.periodsDays.map((p) => expectedSigmaKMps(input.timesBjdTdb, input.rvErrorsMps, atPeriod(input.ephemeris, p)));
   const detection = input.periodsDays.map((p, i) =>
-    input.msinisEarth.map((m) => (Number.isFinite(sigmaKMps[i]!) ? detectionProbabilityKnownPhase(kOf(input, p, m), sigmaKMps[i]!, input.goalSignificance) : 0)),
+    input.msinisEarth.map((m) =>
+      Number.isFinite(sigmaKMps[i]!) ? detectionProbabilityKnownPhase(kOf(input, p, m), sigmaKMps[i]!, input.goalSignificance) : 0,
+    ),
   );
   return { periodsDays: input.periodsDays, msinisEarth: input.msinisEarth, goalSignificance: input.goalSignificance, detection, sigmaKMps };
 }

@@ -137,10 +137,19 @@ function checkInputs(planets: FitPlanetPrior[], points: FitPoint[], jitterMps: n
   if (!(jitterMps >= 0 && Number.isFinite(jitterMps))) throw validationError('jitterMps', jitterMps, 'a finite jitter of 0 m/s or more');
   points.forEach((pt, i) => {
     if (!Number.isFinite(pt.bjdTdb) || !Number.isFinite(pt.rvMps)) throw validationError(`points[${i}]`, pt, 'a finite time and RV');
-    if (!(pt.rvErrorMps > 0 && Number.isFinite(pt.rvErrorMps))) throw validationError(`points[${i}].rvErrorMps`, pt.rvErrorMps, 'a positive, finite uncertainty');
+    if (!(pt.rvErrorMps > 0 && Number.isFinite(pt.rvErrorMps)))
+      throw validationError(`points[${i}].rvErrorMps`, pt.rvErrorMps, 'a positive, finite uncertainty');
   });
   planets.forEach((pl, i) => {
-    const ok = pl.periodDays > 0 && pl.periodErrDays >= 0 && pl.tcErrDays >= 0 && pl.kMps > 0 && pl.ecc >= 0 && pl.ecc < MAX_ECC && Number.isFinite(pl.tcBjdTdb) && Number.isFinite(pl.omegaDeg);
+    const ok =
+      pl.periodDays > 0 &&
+      pl.periodErrDays >= 0 &&
+      pl.tcErrDays >= 0 &&
+      pl.kMps > 0 &&
+      pl.ecc >= 0 &&
+      pl.ecc < MAX_ECC &&
+      Number.isFinite(pl.tcBjdTdb) &&
+      Number.isFinite(pl.omegaDeg);
     if (!ok) throw validationError(`planets[${i}]`, pl.id, 'P > 0, errors of 0 or more, a finite Tc and ω, K > 0 and 0 ≤ e < 0.99');
     if (pl.eccSigma !== undefined && !(pl.eccSigma > 0)) throw validationError(`planets[${i}].eccSigma`, pl.eccSigma, 'a positive prior width');
   });
@@ -191,7 +200,9 @@ export function fitOrbits(catalogue: FitPlanetPrior[], points: FitPoint[], jitte
     residuals: n + lay.priors.length,
     residual(theta, out) {
       for (let i = 0; i < n; i++) out[i] = (points[i]!.rvMps - model(theta, i)) * invSigma[i]!;
-      lay.priors.forEach((pr, j) => (out[n + j] = (theta[pr.slot]! - pr.centre) * pr.invSigma));
+      lay.priors.forEach((pr, j) => {
+        out[n + j] = (theta[pr.slot]! - pr.centre) * pr.invSigma;
+      });
     },
     jacobian(theta, out) {
       out.fill(0);
@@ -216,9 +227,14 @@ export function fitOrbits(catalogue: FitPlanetPrior[], points: FitPoint[], jitte
           }
         }
       });
-      lay.priors.forEach((pr, j) => (out[(n + j) * p + pr.slot] = pr.invSigma));
+      lay.priors.forEach((pr, j) => {
+        out[(n + j) * p + pr.slot] = pr.invSigma;
+      });
     },
-    admissible: (theta) => lay.slots.every((s) => theta[s.k]! > 0 && (s.ecc < 0 || Math.hypot(theta[s.ecc]!, theta[s.ecc + 1]!) < MAX_ECC) && (s.period < 0 || theta[s.period]! > 0)),
+    admissible: (theta) =>
+      lay.slots.every(
+        (s) => theta[s.k]! > 0 && (s.ecc < 0 || Math.hypot(theta[s.ecc]!, theta[s.ecc + 1]!) < MAX_ECC) && (s.period < 0 || theta[s.period]! > 0),
+      ),
   };
 
   const best = bestOfStarts(problem, startsFor(planets, points, lay, (first + last) / 2));
@@ -268,7 +284,14 @@ function bestOfStarts(problem: LeastSquaresProblem, starts: Float64Array[]): Lea
   return pool.reduce((a, b) => (b.chi2 < a.chi2 ? b : a));
 }
 
-function summarise(planets: FitPlanetPrior[], points: FitPoint[], lay: Layout, fit: LeastSquaresResult, model: (theta: ArrayLike<number>, i: number) => number, origin: number): OrbitFit {
+function summarise(
+  planets: FitPlanetPrior[],
+  points: FitPoint[],
+  lay: Layout,
+  fit: LeastSquaresResult,
+  model: (theta: ArrayLike<number>, i: number) => number,
+  origin: number,
+): OrbitFit {
   const { theta } = fit;
   const covariance = inversePacked(fit.normal, lay.count);
   const cov = (a: number, b: number) => (a < 0 || b < 0 ? 0 : covariance ? covariance[packedIndex(a, b)]! : Infinity);

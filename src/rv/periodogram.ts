@@ -1,4 +1,4 @@
-import { type FrequencyGrid } from './frequency-grid.js';
+import type { FrequencyGrid } from './frequency-grid.js';
 import { validationError } from '../errors.js';
 
 /**
@@ -52,18 +52,16 @@ function weightedMean(values: ArrayLike<number>, w: Float64Array): number {
  * cos(θ + δ) = cos θ cos δ − sin θ sin δ, sin(θ + δ) = sin θ cos δ + cos θ sin δ (common practice);
  * its rounding error grows by about 1e-16 per step.
  */
-export function glsKernel(
-  timesDays: ArrayLike<number>,
-  rvErrorsMps: ArrayLike<number>,
-  grid: FrequencyGrid,
-  offset: OffsetModel = 'floating',
-): GlsKernel {
+export function glsKernel(timesDays: ArrayLike<number>, rvErrorsMps: ArrayLike<number>, grid: FrequencyGrid, offset: OffsetModel = 'floating'): GlsKernel {
   const n = timesDays.length;
   if (rvErrorsMps.length !== n) throw new RangeError(`times and sigma differ in length: ${n} and ${rvErrorsMps.length}`);
   const w = normalisedWeights(rvErrorsMps);
   const tRef = weightedMean(timesDays, w);
   const f = grid.count;
-  const cos0 = new Float64Array(n), sin0 = new Float64Array(n), cosStep = new Float64Array(n), sinStep = new Float64Array(n);
+  const cos0 = new Float64Array(n),
+    sin0 = new Float64Array(n),
+    cosStep = new Float64Array(n),
+    sinStep = new Float64Array(n);
   for (let i = 0; i < n; i++) {
     const dt = timesDays[i]! - tRef;
     cos0[i] = Math.cos(2 * Math.PI * grid.startPerDay * dt);
@@ -73,10 +71,17 @@ export function glsKernel(
   }
 
   // Value-free sums per frequency.
-  const C = new Float64Array(f), S = new Float64Array(f), CC = new Float64Array(f), SS = new Float64Array(f), CS = new Float64Array(f);
+  const C = new Float64Array(f),
+    S = new Float64Array(f),
+    CC = new Float64Array(f),
+    SS = new Float64Array(f),
+    CS = new Float64Array(f);
   for (let i = 0; i < n; i++) {
-    const wi = w[i]!, a = cosStep[i]!, b = sinStep[i]!;
-    let c = cos0[i]!, s = sin0[i]!;
+    const wi = w[i]!,
+      a = cosStep[i]!,
+      b = sinStep[i]!;
+    let c = cos0[i]!,
+      s = sin0[i]!;
     for (let k = 0; k < f; k++) {
       C[k]! += wi * c;
       S[k]! += wi * s;
@@ -100,7 +105,8 @@ export function glsKernel(
   }
 
   const wy = new Float64Array(n);
-  const YC = new Float64Array(f), YS = new Float64Array(f);
+  const YC = new Float64Array(f),
+    YS = new Float64Array(f);
   return {
     grid,
     n,
@@ -117,8 +123,11 @@ export function glsKernel(
       YC.fill(0);
       YS.fill(0);
       for (let i = 0; i < n; i++) {
-        const wyi = wy[i]!, a = cosStep[i]!, b = sinStep[i]!;
-        let c = cos0[i]!, s = sin0[i]!;
+        const wyi = wy[i]!,
+          a = cosStep[i]!,
+          b = sinStep[i]!;
+        let c = cos0[i]!,
+          s = sin0[i]!;
         for (let k = 0; k < f; k++) {
           YC[k]! += wyi * c;
           YS[k]! += wyi * s;
@@ -128,7 +137,9 @@ export function glsKernel(
         }
       }
       for (let k = 0; k < f; k++) {
-        const yc = YC[k]!, ys = YS[k]!, d = D[k]!;
+        const yc = YC[k]!,
+          ys = YS[k]!,
+          d = D[k]!;
         const p = (SS[k]! * yc * yc + CC[k]! * ys * ys - 2 * CS[k]! * yc * ys) / (yy * d);
         // A degenerate frequency (D ≈ 0, e.g. sampling that cannot tell cos from sin) or constant data: no power.
         out[k] = Number.isFinite(p) && d > 0 ? Math.min(1, Math.max(0, p)) : 0;
@@ -166,25 +177,41 @@ export interface SinusoidFit {
  * normal equations of the same fit (ZK09 sect. 2): a = (YC·SS − YS·CS)/D, b = (YS·CC − YC·CS)/D,
  * c = Y − a·C − b·S.
  */
-export function glsAt(
-  timesDays: ArrayLike<number>,
-  valuesMps: ArrayLike<number>,
-  rvErrorsMps: ArrayLike<number>,
-  freqPerDay: number,
-): SinusoidFit {
+export function glsAt(timesDays: ArrayLike<number>, valuesMps: ArrayLike<number>, rvErrorsMps: ArrayLike<number>, freqPerDay: number): SinusoidFit {
   const n = timesDays.length;
   const w = normalisedWeights(rvErrorsMps);
   const tRef = weightedMean(timesDays, w);
-  let Y = 0, C = 0, S = 0, YYh = 0, YCh = 0, YSh = 0, CCh = 0, SSh = 0, CSh = 0;
+  let Y = 0,
+    C = 0,
+    S = 0,
+    YYh = 0,
+    YCh = 0,
+    YSh = 0,
+    CCh = 0,
+    SSh = 0,
+    CSh = 0;
   for (let i = 0; i < n; i++) {
     const phase = 2 * Math.PI * freqPerDay * (timesDays[i]! - tRef);
-    const c = Math.cos(phase), s = Math.sin(phase), y = valuesMps[i]!, wi = w[i]!;
-    Y += wi * y; C += wi * c; S += wi * s;
-    YYh += wi * y * y; YCh += wi * y * c; YSh += wi * y * s;
-    CCh += wi * c * c; SSh += wi * s * s; CSh += wi * c * s;
+    const c = Math.cos(phase),
+      s = Math.sin(phase),
+      y = valuesMps[i]!,
+      wi = w[i]!;
+    Y += wi * y;
+    C += wi * c;
+    S += wi * s;
+    YYh += wi * y * y;
+    YCh += wi * y * c;
+    YSh += wi * y * s;
+    CCh += wi * c * c;
+    SSh += wi * s * s;
+    CSh += wi * c * s;
   }
-  const YY = YYh - Y * Y, YC = YCh - Y * C, YS = YSh - Y * S;
-  const CC = CCh - C * C, SS = SSh - S * S, CS = CSh - C * S;
+  const YY = YYh - Y * Y,
+    YC = YCh - Y * C,
+    YS = YSh - Y * S;
+  const CC = CCh - C * C,
+    SS = SSh - S * S,
+    CS = CSh - C * S;
   const D = CC * SS - CS * CS;
   const a = (YC * SS - YS * CS) / D;
   const b = (YS * CC - YC * CS) / D;

@@ -55,7 +55,10 @@ export function rngFromState(state: ArrayLike<number>): Rng {
 
   const nextUint32 = (): number => {
     // xoshiro128**: result = rotl(s1 · 5, 7) · 9, then the linear state update.
-    const s0 = s[0]!, s1 = s[1]!, s2 = s[2]!, s3 = s[3]!;
+    const s0 = s[0]!,
+      s1 = s[1]!,
+      s2 = s[2]!,
+      s3 = s[3]!;
     const x = Math.imul(s1, 5);
     const result = Math.imul((x << 7) | (x >>> 25), 9) >>> 0;
     const t = s1 << 9;

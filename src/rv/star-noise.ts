@@ -39,4 +39,3 @@ export function starNoise(star: Target, campaignFraction: number): StarNoise {
 export function whiteSigmaMps(visitSigmaMps: number, noise: StarNoise): number {
   return quadratureSum(visitSigmaMps, noise.whiteJitterMps);
 }
-

@@ -4,16 +4,7 @@
 import type { Target } from '../model.js';
 import type { Instrument } from './instrument.js';
 import { semiAmplitudeMps } from '../orbit/semi-amplitude.js';
-import {
-  detectionProbability,
-  floorOnKMps,
-  massLimitTable,
-  PHASE_LAYOUTS,
-  sigmaKMps,
-  visitsNeeded,
-  type MassLimitRow,
-  type PhaseLayout,
-} from './detect.js';
+import { detectionProbability, floorOnKMps, massLimitTable, PHASE_LAYOUTS, sigmaKMps, visitsNeeded, type MassLimitRow, type PhaseLayout } from './detect.js';
 import { chooseExposureSec, fixedExposure, visitCostSec, type ExposureChoice } from './exposure.js';
 
 /** Airmass assumed when none is given: a target observed reasonably high (common practice). */
@@ -54,14 +45,28 @@ export function planetOfTarget(target: DetectStar, hypothetical?: HypotheticalPl
     semiAmplitudeMps({ starMassSun: target.massSun, planetMassEarth: msiniEarth, periodDays, ecc });
   if (hypothetical) {
     const ecc = hypothetical.ecc ?? 0;
-    return { source: 'hypothetical', msiniEarth: hypothetical.msiniEarth, kMps: kOf(hypothetical.msiniEarth, hypothetical.periodDays, ecc), periodDays: hypothetical.periodDays, ecc, note: `hypothetical ${hypothetical.msiniEarth} M_earth at P = ${hypothetical.periodDays} d` };
+    return {
+      source: 'hypothetical',
+      msiniEarth: hypothetical.msiniEarth,
+      kMps: kOf(hypothetical.msiniEarth, hypothetical.periodDays, ecc),
+      periodDays: hypothetical.periodDays,
+      ecc,
+      note: `hypothetical ${hypothetical.msiniEarth} M_earth at P = ${hypothetical.periodDays} d`,
+    };
   }
   const { planet, ephemeris, search } = target;
   if (planet && ephemeris) {
     const periodDays = ephemeris.periodDays;
     if (planet.kMps !== undefined) return { source: 'given', kMps: planet.kMps, periodDays, ecc: planet.ecc, note: `K = ${planet.kMps} m/s as given` };
     const msiniEarth = planet.msiniEarth!;
-    return { source: 'given', msiniEarth, kMps: kOf(msiniEarth, periodDays, planet.ecc), periodDays, ecc: planet.ecc, note: `${msiniEarth} M_earth at P = ${periodDays} d` };
+    return {
+      source: 'given',
+      msiniEarth,
+      kMps: kOf(msiniEarth, periodDays, planet.ecc),
+      periodDays,
+      ecc: planet.ecc,
+      note: `${msiniEarth} M_earth at P = ${periodDays} d`,
+    };
   }
   if (search) {
     const periodDays = Math.sqrt(search.periodMinDays * search.periodMaxDays);
@@ -160,7 +165,10 @@ export function targetDetectability(target: DetectStar, instrument: Instrument, 
   const levels = [...new Set([3, 5, options.goalSignificance])].sort((a, b) => a - b);
   const needed: VisitsAt[] = planet
     ? levels.map((n) => {
-        const [random, quadrature] = PHASE_LAYOUTS.map((layout) => visitsNeeded(planet.kMps, budget.whiteSigmaMps, n, layout, budget.floorMps)) as [number, number];
+        const [random, quadrature] = PHASE_LAYOUTS.map((layout) => visitsNeeded(planet.kMps, budget.whiteSigmaMps, n, layout, budget.floorMps)) as [
+          number,
+          number,
+        ];
         return { goalSignificance: n, random, quadrature, hoursRandom: hours(random), hoursQuadrature: hours(quadrature) };
       })
     : [];
@@ -224,10 +232,16 @@ function verdict(row: TargetDetectability, instrument: Instrument, goalSignifica
   const quad = `${goal.quadrature} (${goal.hoursQuadrature.toFixed(1)} h) at quadratures`;
   if (goal.random > OUT_OF_REACH_VISITS) {
     if (goal.quadrature <= OUT_OF_REACH_VISITS && phaseKnown) {
-      return withNotes('demanding', `only with visits timed at quadrature: ${quad} for ${n}; random phases would need ${goal.random} (more than ${OUT_OF_REACH_VISITS})`);
+      return withNotes(
+        'demanding',
+        `only with visits timed at quadrature: ${quad} for ${n}; random phases would need ${goal.random} (more than ${OUT_OF_REACH_VISITS})`,
+      );
     }
     const why = goal.quadrature > OUT_OF_REACH_VISITS ? `and ${goal.quadrature} even at ideal quadratures` : `${quad}, but the orbital phase is not known`;
-    return withNotes('out of reach', `K = ${k} m/s against sigma ${row.effectiveSigmaMps.toFixed(2)} m/s per visit needs ${goal.random} visits for ${n} at random phases (more than ${OUT_OF_REACH_VISITS}), ${why}`);
+    return withNotes(
+      'out of reach',
+      `K = ${k} m/s against sigma ${row.effectiveSigmaMps.toFixed(2)} m/s per visit needs ${goal.random} visits for ${n} at random phases (more than ${OUT_OF_REACH_VISITS}), ${why}`,
+    );
   }
   const text = `${goal.random} visits (${goal.hoursRandom.toFixed(1)} h) for ${n} at random phases; ${quad}`;
   return withNotes(goal.random > DEMANDING_VISITS ? 'demanding' : 'feasible', text);

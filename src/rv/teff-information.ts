@@ -93,12 +93,7 @@ export interface TeffFactor {
  * [Teff, factor] pairs when it gives them). Teff outside the table's range throws a RangeError
  * (callers turn it into an input error naming the target).
  */
-export function teffFactor(
-  teffK: number,
-  referenceTeffK: number,
-  region: SpectralRegion,
-  override?: readonly (readonly [number, number])[],
-): TeffFactor {
+export function teffFactor(teffK: number, referenceTeffK: number, region: SpectralRegion, override?: readonly (readonly [number, number])[]): TeffFactor {
   const table = teffInformationTable(region);
   const points = override ?? table.points;
   const { minK, maxK } = override ? { minK: points[0]![0], maxK: points[points.length - 1]![0] } : tableRangeK(table);
@@ -108,7 +103,11 @@ export function teffFactor(
   const factor = interpolateTable(points, teffK) / interpolateTable(points, referenceTeffK);
   const source = override ? 'instrument profile teffFactors' : table.source;
   if (!override && (teffK < table.trusted.minK || teffK > table.trusted.maxK)) {
-    return { factor, source, warning: `Teff ${teffK} K is outside ${table.trusted.minK}-${table.trusted.maxK} K, where the ${region} RV-information table is reliable` };
+    return {
+      factor,
+      source,
+      warning: `Teff ${teffK} K is outside ${table.trusted.minK}-${table.trusted.maxK} K, where the ${region} RV-information table is reliable`,
+    };
   }
   return { factor, source };
 }

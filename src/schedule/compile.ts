@@ -81,7 +81,8 @@ function checkTarget(t: ScheduleTarget): void {
   if (t.planets.length > 0 && t.model?.planetCount !== t.planets.length) fail(`star ${t.id} needs a model with one planet per planet`);
   for (const planet of t.planets) if (!positive(planet)) fail(`planet ${planet.id} needs priority, kMps and goal > 0`);
   const search = t.search;
-  if (search && !(positive(search) && search.periodMinDays > 0 && search.periodMaxDays >= search.periodMinDays)) fail(`search ${search.id} needs priority, kMps, goal > 0 and 0 < periodMinDays <= periodMaxDays`);
+  if (search && !(positive(search) && search.periodMinDays > 0 && search.periodMaxDays >= search.periodMinDays))
+    fail(`search ${search.id} needs priority, kMps, goal > 0 and 0 < periodMinDays <= periodMaxDays`);
 }
 
 export function compileProblem(problem: ScheduleProblem, searchGridSize: number): CompiledProblem {
@@ -99,7 +100,8 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
   for (const s of problem.slots) {
     if (!targetPos.has(s.targetId)) fail(`slot ${s.slotId} names unknown star ${s.targetId}`);
     if (!nightPos.has(s.nightIndex)) fail(`slot ${s.slotId} names unknown night ${s.nightIndex}`);
-    if (!(s.durationSec > 0 && s.whiteSigmaMps > 0 && Number.isFinite(s.startMs) && Number.isFinite(s.midBjdTdb))) fail(`slot ${s.slotId} needs durationSec > 0, whiteSigmaMps > 0, finite startMs and midBjdTdb`);
+    if (!(s.durationSec > 0 && s.whiteSigmaMps > 0 && Number.isFinite(s.startMs) && Number.isFinite(s.midBjdTdb)))
+      fail(`slot ${s.slotId} needs durationSec > 0, whiteSigmaMps > 0, finite startMs and midBjdTdb`);
   }
 
   // Nights in time order of their slots; slots sorted by (night, start, id) so the order is total.
@@ -114,16 +116,23 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
   }
   const nightOrder = problem.nights.map((_, i) => i).sort((a, b) => firstStart[a]! - firstStart[b]! || problem.nights[a]!.index - problem.nights[b]!.index);
   const rank = new Int32Array(problem.nights.length);
-  nightOrder.forEach((n, r) => (rank[n] = r));
+  nightOrder.forEach((n, r) => {
+    rank[n] = r;
+  });
   const order = problem.slots.map((_, i) => i);
   const slotRank = (i: number) => rank[nightPos.get(problem.slots[i]!.nightIndex)!]!;
-  order.sort((a, b) => slotRank(a) - slotRank(b) || problem.slots[a]!.startMs - problem.slots[b]!.startMs || (problem.slots[a]!.slotId < problem.slots[b]!.slotId ? -1 : 1));
+  order.sort(
+    (a, b) =>
+      slotRank(a) - slotRank(b) || problem.slots[a]!.startMs - problem.slots[b]!.startMs || (problem.slots[a]!.slotId < problem.slots[b]!.slotId ? -1 : 1),
+  );
 
   const T = problem.targets.length;
   const S = order.length;
   const N = problem.nights.length;
   const planetFrom = new Int32Array(T + 1);
-  problem.targets.forEach((t, i) => (planetFrom[i + 1] = planetFrom[i]! + t.planets.length));
+  problem.targets.forEach((t, i) => {
+    planetFrom[i + 1] = planetFrom[i]! + t.planets.length;
+  });
   const planets = problem.targets.flatMap((t) => t.planets);
   const models = problem.targets.map((t) => (t.planets.length > 0 ? t.model! : null));
   const rowLength = (t: number) => (models[t] ? models[t]!.samples.length * models[t]!.paramCount : 0);
@@ -192,7 +201,9 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
     if (model) {
       c.rowOffset[j] = rowAt;
       const p = model.paramCount;
-      model.samples.forEach((sample, k) => designRow(model, sample, s.midBjdTdb, c.rows, rowAt + k * p));
+      model.samples.forEach((sample, k) => {
+        designRow(model, sample, s.midBjdTdb, c.rows, rowAt + k * p);
+      });
       // Sample 0 is the nominal ephemeris (information-model.ts).
       for (let i = 0; i < model.planetCount; i++) {
         const signal = c.rows[rowAt + model.kIndex[i]!]!;

@@ -84,7 +84,10 @@ export function greedyFill(state: PlanState, candidates: ArrayLike<number>, exac
     const j = candidates[i]!;
     const t = c.slotTarget[j]!;
     let list = byTarget.get(t);
-    if (!list) byTarget.set(t, (list = []));
+    if (!list) {
+      list = [];
+      byTarget.set(t, list);
+    }
     list.push(j);
     price(j);
   }

@@ -28,12 +28,9 @@ export interface LocalSearchSettings {
   onProgress?: (utility: number, step: string) => void;
 }
 
-
-
 function openSlots(state: PlanState): number[] {
   return openNightList(state).flatMap((n) => Array.from(nightSlots(state, n)));
 }
-
 
 /** Slots that could take chosen slot a's place: those overlapping it in its night, and its target's slots in open nights. */
 function replacementCandidates(state: PlanState, a: number, maxDurationMs: number, shortlist: number[]): number[] {
@@ -121,7 +118,10 @@ function bestUnchosen(state: PlanState, count: number): number[] {
   const c = state.c;
   const scored: { j: number; key: number }[] = [];
   for (const j of openSlots(state)) if (!state.chosen[j]) scored.push({ j, key: state.rankingGain(j) / c.hours[j]! });
-  return scored.sort((x, y) => y.key - x.key || x.j - y.j).slice(0, count).map((x) => x.j);
+  return scored
+    .sort((x, y) => y.key - x.key || x.j - y.j)
+    .slice(0, count)
+    .map((x) => x.j);
 }
 
 /** Improves the plan in place (see the file comment). Returns the number of passes run. */

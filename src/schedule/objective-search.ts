@@ -97,7 +97,11 @@ export function searchLogScore(stats: Float64Array, offset: number, grid: Search
   let product = 1;
   const floor = eps * eps * eps;
   for (let p = 0, o = offset + 1; p < freq.length; p++, o += 5) {
-    let b = stats[o]!, c = stats[o + 1]!, d = stats[o + 2]! + eps, e = stats[o + 3]!, f = stats[o + 4]! + eps;
+    let b = stats[o]!,
+      c = stats[o + 1]!,
+      d = stats[o + 2]! + eps,
+      e = stats[o + 3]!,
+      f = stats[o + 4]! + eps;
     if (trig) {
       const sn = trig[2 * p]!;
       const cs = trig[2 * p + 1]!;
@@ -110,7 +114,7 @@ export function searchLogScore(stats: Float64Array, offset: number, grid: Search
     // det of the symmetric [[a, b, c], [b, d, e], [c, e, f]] by cofactors along the first row;
     // rounding after removals can leave it a hair below the ridge's own determinant: floor it there.
     const det = a * (d * f - e * e) - b * (b * f - c * e) + c * (b * e - d * c);
-    product *= det > floor ? det : floor;
+    product *= Math.max(det, floor);
     if ((p & 3) === 3) {
       logDetSum += Math.log(product);
       product = 1;

@@ -148,7 +148,10 @@ export function optimiseCompiled(c: CompiledProblem, options: ScheduleOptions): 
     chooseNightsGreedy(state, nights, new Set());
   } else {
     for (let n = 0; n < c.nightCount; n++) state.openNight(n);
-    greedyFill(state, Array.from({ length: c.slotCount }, (_, j) => j));
+    greedyFill(
+      state,
+      Array.from({ length: c.slotCount }, (_, j) => j),
+    );
   }
   options.onProgress?.(state.utility, 'greedy');
   const rng = createRng(options.seed);
@@ -191,7 +194,8 @@ export function optimiseSchedule(problem: ScheduleProblem, options: ScheduleOpti
   const chosen = state.chosenSlots();
   const targets = outcomes(state);
   const nights = new Set<number>();
-  for (let n = 0; n < c.nightCount; n++) if (state.nightOpen[n] && (problem.time.mode === 'choose-nights' || state.nightVisits[n]!.length > 0)) nights.add(problem.nights[c.nightOrder[n]!]!.index);
+  for (let n = 0; n < c.nightCount; n++)
+    if (state.nightOpen[n] && (problem.time.mode === 'choose-nights' || state.nightVisits[n]!.length > 0)) nights.add(problem.nights[c.nightOrder[n]!]!.index);
   return {
     slotIds: chosen.map((j) => problem.slots[c.slotSource[j]!]!.slotId),
     nightIndices: [...nights].sort((a, b) => a - b),

@@ -48,7 +48,7 @@ function pairValue(state: PlanState, b1: number, b2: number): number {
 function bestSide(state: PlanState, slots: number[], positive: boolean): number[] {
   const c = state.c;
   return slots
-    .filter((j) => (c.signal[j]! >= 0) === positive)
+    .filter((j) => c.signal[j]! >= 0 === positive)
     .sort((a, b) => c.weight[b]! * c.signal[b]! ** 2 - c.weight[a]! * c.signal[a]! ** 2 || a - b)
     .slice(0, SIDE);
 }

@@ -25,7 +25,9 @@ export function compilePrior(c: CompiledProblem): CompiledPrior {
   const targetPos = new Map(problem.targets.map((t, i) => [t.id, i]));
   // Night keys: the compiled position of a problem night with that date, else one past them.
   const problemKey = new Map<string, number>();
-  c.nightOrder.forEach((n, position) => problemKey.set(problem.nights[n]!.localDate, position));
+  c.nightOrder.forEach((n, position) => {
+    problemKey.set(problem.nights[n]!.localDate, position);
+  });
   const otherNights = new Map<string, { key: number; sumDays: number; count: number }>();
   for (const v of prior) {
     if (problemKey.has(v.localDate)) continue;
@@ -44,7 +46,8 @@ export function compilePrior(c: CompiledProblem): CompiledPrior {
   for (const v of prior) {
     const t = targetPos.get(v.targetId);
     if (t === undefined) throw new Error(`schedule problem: prior visit names unknown star ${v.targetId}`);
-    if (!(v.whiteSigmaMps > 0 && Number.isFinite(v.midBjdTdb))) throw new Error(`schedule problem: prior visit of ${v.targetId} needs whiteSigmaMps > 0 and a finite midBjdTdb`);
+    if (!(v.whiteSigmaMps > 0 && Number.isFinite(v.midBjdTdb)))
+      throw new Error(`schedule problem: prior visit of ${v.targetId} needs whiteSigmaMps > 0 and a finite midBjdTdb`);
     // Weighted least squares: a visit weighs 1/sigma^2 (common practice).
     const weight = 1 / (v.whiteSigmaMps * v.whiteSigmaMps);
     out.count[t]++;

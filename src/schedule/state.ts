@@ -153,7 +153,10 @@ export class PlanState {
     const gain = this.gain(j);
     let credit = 0;
     const grid = c.grids[t];
-    if (grid && visits < 3) credit += (c.searchPriority[t]! * goalValue((Math.exp(grid.meanLogK) * Math.sqrt(1.5 * c.weight[j]!)) / c.searchGoalSignificance[t]!, this.searchOvershoot[t]!)) / 3;
+    if (grid && visits < 3)
+      credit +=
+        (c.searchPriority[t]! * goalValue((Math.exp(grid.meanLogK) * Math.sqrt(1.5 * c.weight[j]!)) / c.searchGoalSignificance[t]!, this.searchOvershoot[t]!)) /
+        3;
     // Until the star's visits determine its K's (one visit per planet beyond the offset), each is credited as half a pair.
     if (this.information[t] && this.kVariance[c.planetFrom[t]!] === Infinity) {
       const w = c.weight[j]!;

@@ -93,7 +93,13 @@ export function simulateWeather(problem: ScheduleProblem, result: ScheduleResult
         info.variances(variance);
         for (let i = 0; i < info.planetCount; i++) {
           const at = c.planetFrom[t]! + i;
-          count(at, variance[i] === Infinity ? 0 : c.planetK[at]! / Math.sqrt(variance[i]!), c.planetGoalSignificance[at]!, c.planetPriority[at]!, prior.planetOvershoot[at]!);
+          count(
+            at,
+            variance[i] === Infinity ? 0 : c.planetK[at]! / Math.sqrt(variance[i]!),
+            c.planetGoalSignificance[at]!,
+            c.planetPriority[at]!,
+            prior.planetOvershoot[at]!,
+          );
         }
       }
       if (grid) count(searchSlot[t]!, Math.exp(searchLogScore(stats, 0, grid)), c.searchGoalSignificance[t]!, c.searchPriority[t]!, prior.searchOvershoot[t]!);

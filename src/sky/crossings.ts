@@ -1,5 +1,5 @@
 // When the Sun or the Moon is below an altitude: astronomy-engine's SearchAltitude, chained.
-import { Body, Equator, Horizon, MakeTime, SearchAltitude, type Observer } from 'astronomy-engine';
+import { type Body, Equator, Horizon, MakeTime, SearchAltitude, type Observer } from 'astronomy-engine';
 import { DAY_MS } from '../astro/constants.js';
 
 /** A span below the altitude, clipped to the search range; `startIsCrossing` is false when clipped. */

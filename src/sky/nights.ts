@@ -40,7 +40,12 @@ function level(observer: Observer, altitudeDeg: number, fromMs: number, toMs: nu
   const span = spans.reduce((a, b) => (b.endMs - b.startMs > a.endMs - a.startMs ? b : a));
   const dusk = span.startIsCrossing ? new Date(span.startMs) : null;
   const dawn = span.endIsCrossing ? new Date(span.endMs) : null;
-  const why = !dusk && !dawn ? `Sun below ${altitudeDeg} deg all day (${name})` : !dusk || !dawn ? `Sun already below ${altitudeDeg} deg at a local noon (${name})` : undefined;
+  const why =
+    !dusk && !dawn
+      ? `Sun below ${altitudeDeg} deg all day (${name})`
+      : !dusk || !dawn
+        ? `Sun already below ${altitudeDeg} deg at a local noon (${name})`
+        : undefined;
   return { dusk, dawn, span, why };
 }
 

@@ -71,7 +71,7 @@ export function localSiderealDeg(clock: SiteClock, tMs: number): number {
 /** Local hour angle in degrees, in (-180, 180]: west positive. */
 export function hourAngleDeg(p: PreparedPosition, t: Date | number): number {
   const lstDeg = localSiderealDeg(p.clock, ms(t));
-  const h = (((lstDeg - p.raDeg) % 360) + 540) % 360 - 180;
+  const h = ((((lstDeg - p.raDeg) % 360) + 540) % 360) - 180;
   return h === -180 ? 180 : h;
 }
 

@@ -139,12 +139,7 @@ function targetNight(site: Site, target: Target, ctx: NightContext, limits: Limi
  * at least constraints.minWindowMinutes are returned, in time order. A target-night with none is
  * listed in `dropped` with the reason.
  */
-export function computeWindows(
-  site: Site,
-  targets: Target[],
-  nights: Night[],
-  constraints: Constraints,
-): { windows: Window[]; dropped: DroppedWindow[] } {
+export function computeWindows(site: Site, targets: Target[], nights: Night[], constraints: Constraints): { windows: Window[]; dropped: DroppedWindow[] } {
   const limits = limitsOf(site, constraints);
   const windows: Window[] = [];
   const dropped: DroppedWindow[] = [];

@@ -30,7 +30,9 @@ describe('crest amplitude', () => {
     expect(out.semiMajorAxisAu).toBeCloseTo(1.0, 2);
     expect(out.planetSpeedKmps).toBeCloseTo(29.8, 1);
     expect(out.starSpeedMps).toBeCloseTo(out.kMps as number, 9);
-    expect(Object.keys(out)).toEqual(expect.arrayContaining(['kMps', 'massEarth', 'massJupiter', 'semiMajorAxisAu', 'starOrbitRadiusKm', 'planetSpeedKmps', 'starSpeedMps']));
+    expect(Object.keys(out)).toEqual(
+      expect.arrayContaining(['kMps', 'massEarth', 'massJupiter', 'semiMajorAxisAu', 'starOrbitRadiusKm', 'planetSpeedKmps', 'starSpeedMps']),
+    );
   });
 
   it('inverts K: m sin i exact beside the m << M★ approximation', async () => {

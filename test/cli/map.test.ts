@@ -39,7 +39,8 @@ describe('crest map', () => {
     ]);
     expect(one.stderr).toBe('');
     expect(one.status).toBe(0);
-    const a = JSON.parse(one.stdout), b = JSON.parse(two.stdout);
+    const a = JSON.parse(one.stdout),
+      b = JSON.parse(two.stdout);
     expect(a.targets).toHaveLength(1);
     expect(a.targets[0].simulated).toEqual(b.targets[0].simulated);
     expect(a.targets[0].simulated).toHaveLength(4);
@@ -82,7 +83,8 @@ describe('crest map', () => {
   });
 
   it('injects eccentric orbits with --ecc-max (0 is the circular map, a wider range changes it)', async () => {
-    const run = (extra: string[], out: string) => runCliInProcess(['map', '--plan', planFile, '--target', 'Alba', ...small, '--json', '--out', path.join(dir, out), ...extra]);
+    const run = (extra: string[], out: string) =>
+      runCliInProcess(['map', '--plan', planFile, '--target', 'Alba', ...small, '--json', '--out', path.join(dir, out), ...extra]);
     const [circular, zero, eccentric] = await Promise.all([run([], 'c'), run(['--ecc-max', '0'], 'z'), run(['--ecc-max', '0.6'], 'e')]);
     const [c, z, e] = [circular, zero, eccentric].map((r) => JSON.parse(r.stdout));
     expect(z.targets[0].simulated).toEqual(c.targets[0].simulated);

@@ -35,7 +35,10 @@ export const SITE_JSON = `${JSON.stringify(
     elevationM: 2400,
     timeZone: 'America/Santiago',
     minAltitudeDeg: 20,
-    horizon: [{ azimuthDeg: 0, altitudeDeg: 5 }, { azimuthDeg: 180, altitudeDeg: 10 }],
+    horizon: [
+      { azimuthDeg: 0, altitudeDeg: 5 },
+      { azimuthDeg: 180, altitudeDeg: 10 },
+    ],
     clearFraction: [0.8, 0.8, 0.8, 0.75, 0.7, 0.6, 0.6, 0.65, 0.7, 0.8, 0.85, 0.85],
     semesters: { A: { start: '02-01', end: '07-31' }, B: { start: '08-01', end: '01-31' } },
     sourceNote: 'invented for the fuzz test',
@@ -45,66 +48,65 @@ export const SITE_JSON = `${JSON.stringify(
 )}\n`;
 
 export const INSTRUMENT_JSON = `${JSON.stringify(
-{
-  "id": "fuzz-echelle",
-  "name": "Fuzz echelle (invented)",
-  "apertureM": 1.93,
-  "resolvingPower": 75000,
-  "band": "V",
-  "wavelengthNm": 550,
-  "coverageNm": [
-    387,
-    694
-  ],
-  "spectralRegion": "optical",
-  "reference": {
-    "photonSigmaMps": 1.43,
-    "mag": 8,
-    "exposureSec": 600,
-    "airmass": 1.2,
-    "seeingArcsec": 1.5,
-    "snrPerPixel": 117,
-    "teffK": 5800,
-    "vsiniKms": 2
+  {
+    id: 'fuzz-echelle',
+    name: 'Fuzz echelle (invented)',
+    apertureM: 1.93,
+    resolvingPower: 75000,
+    band: 'V',
+    wavelengthNm: 550,
+    coverageNm: [387, 694],
+    spectralRegion: 'optical',
+    reference: {
+      photonSigmaMps: 1.43,
+      mag: 8,
+      exposureSec: 600,
+      airmass: 1.2,
+      seeingArcsec: 1.5,
+      snrPerPixel: 117,
+      teffK: 5800,
+      vsiniKms: 2,
+    },
+    readNoiseE: 5,
+    pixelsPerResolutionElement: 3.0,
+    spatialPixels: 6,
+    entrance: {
+      kind: 'fibre',
+      diameterArcsec: 3.0,
+    },
+    skyMagPerArcsec2: 21.3,
+    floorMps: 1.5,
+    readoutSec: 40,
+    acquisitionSec: 180,
+    minExposureSec: 120,
+    maxExposureSec: 3600,
+    extinctionMagPerAirmass: 0.15,
+    sources: {
+      apertureM: 'invented for the fuzz test',
+      resolvingPower: 'invented for the fuzz test',
+      coverageNm: 'invented for the fuzz test',
+      reference: 'invented for the fuzz test',
+      readNoiseE: 'invented for the fuzz test',
+      pixelsPerResolutionElement: 'invented for the fuzz test',
+      spatialPixels: 'invented for the fuzz test',
+      entrance: 'invented for the fuzz test',
+      skyMagPerArcsec2: 'invented for the fuzz test',
+      floorMps: 'invented for the fuzz test',
+      overheads: 'invented for the fuzz test',
+      exposureLimits: 'invented for the fuzz test',
+      extinctionMagPerAirmass: 'invented for the fuzz test',
+    },
+    sourceNote: 'invented for the fuzz test',
   },
-  "readNoiseE": 5,
-  "pixelsPerResolutionElement": 3.0,
-  "spatialPixels": 6,
-  "entrance": {
-    "kind": "fibre",
-    "diameterArcsec": 3.0
-  },
-  "skyMagPerArcsec2": 21.3,
-  "floorMps": 1.5,
-  "readoutSec": 40,
-  "acquisitionSec": 180,
-  "minExposureSec": 120,
-  "maxExposureSec": 3600,
-  "extinctionMagPerAirmass": 0.15,
-  "sources": {
-    "apertureM": "invented for the fuzz test",
-    "resolvingPower": "invented for the fuzz test",
-    "coverageNm": "invented for the fuzz test",
-    "reference": "invented for the fuzz test",
-    "readNoiseE": "invented for the fuzz test",
-    "pixelsPerResolutionElement": "invented for the fuzz test",
-    "spatialPixels": "invented for the fuzz test",
-    "entrance": "invented for the fuzz test",
-    "skyMagPerArcsec2": "invented for the fuzz test",
-    "floorMps": "invented for the fuzz test",
-    "overheads": "invented for the fuzz test",
-    "exposureLimits": "invented for the fuzz test",
-    "extinctionMagPerAirmass": "invented for the fuzz test"
-  },
-  "sourceNote": "invented for the fuzz test"
-},
   null,
   2,
 )}\n`;
 
 export const RV_CSV = [
   'bjdTdb,rvMps,rvErrorMps',
-  ...[0, 1.1, 2.3, 4.0, 5.2, 7.9, 9.1, 12.6, 15.0, 18.4].map((d, i) => `${(2461000.5 + d).toFixed(4)},${(3 * Math.sin(d)).toFixed(2)},${(1.5 + (i % 3) * 0.2).toFixed(1)}`),
+  ...[0, 1.1, 2.3, 4.0, 5.2, 7.9, 9.1, 12.6, 15.0, 18.4].map(
+    (d, i) => `${(2461000.5 + d).toFixed(4)},${(3 * Math.sin(d)).toFixed(2)},${(1.5 + (i % 3) * 0.2).toFixed(1)}`,
+  ),
   '',
 ].join('\n');
 

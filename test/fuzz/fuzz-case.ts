@@ -34,7 +34,9 @@ function prepareFolder(dir: string, files: Record<string, string>): void {
   if (!kept) {
     rmSync(dir, { recursive: true, force: true });
     mkdirSync(dir, { recursive: true });
-  } else for (const name of readdirSync(dir)) if (!Object.hasOwn(files, name) || kept.get(name) !== files[name]) rmSync(path.join(dir, name), { recursive: true, force: true });
+  } else
+    for (const name of readdirSync(dir))
+      if (!Object.hasOwn(files, name) || kept.get(name) !== files[name]) rmSync(path.join(dir, name), { recursive: true, force: true });
   for (const [name, text] of Object.entries(files)) if (kept?.get(name) !== text) writeFileSync(path.join(dir, name), text);
 }
 

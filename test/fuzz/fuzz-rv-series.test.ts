@@ -8,7 +8,10 @@ fuzzKind(
     cases: 600,
     make: (rng) => ({
       files: { 'rv.csv': mutated(RV_CSV, rng, false) },
-      args: choose(rng, [['periodogram', '{dir}/rv.csv'], ['periodogram', '{dir}/rv.csv', '--json', '--top', '3']]),
+      args: choose(rng, [
+        ['periodogram', '{dir}/rv.csv'],
+        ['periodogram', '{dir}/rv.csv', '--json', '--top', '3'],
+      ]),
     }),
   },
   1704,

@@ -5,8 +5,37 @@ import type { Rng } from '../../src/rv/random.js';
 
 /** Awkward numbers and words: the edges of doubles, other bases, and number look-alikes. */
 export const AWKWARD = [
-  '0', '-0', '-1', '1e309', '-1e309', '5e-324', '1e-209', '1e300', 'NaN', 'Infinity', '-Infinity', '0x10', '0b11', '1_000',
-  '9007199254740993', '9999', '0001', '2.4e6', '2461000.5', '99999', '10000', '', ' ', '1,5', '١٢', '1e', '.', '+', '--1', 'null', 'true',
+  '0',
+  '-0',
+  '-1',
+  '1e309',
+  '-1e309',
+  '5e-324',
+  '1e-209',
+  '1e300',
+  'NaN',
+  'Infinity',
+  '-Infinity',
+  '0x10',
+  '0b11',
+  '1_000',
+  '9007199254740993',
+  '9999',
+  '0001',
+  '2.4e6',
+  '2461000.5',
+  '99999',
+  '10000',
+  '',
+  ' ',
+  '1,5',
+  '١٢',
+  '1e',
+  '.',
+  '+',
+  '--1',
+  'null',
+  'true',
 ];
 /** Stray characters: delimiters, quotes and YAML indicators. */
 const STRAY = ['"', "'", ',', '#', '\n', '\r', '\t', '[', ']', '{', '}', ':', '&a', '*a', '!tag ', '|', '>', '%', '@', '\u0000', '\u00e9', '\ufeff', '\\'];
@@ -72,7 +101,8 @@ export function mutateJson(text: string, rng: Rng): string {
   const data = JSON.parse(text) as unknown;
   const paths = keyPaths(data);
   const path = pick(rng, paths);
-  const parent = path.slice(0, -1).reduce<any>((node, key) => node[key], data) as Record<string | number, unknown> & unknown[];
+  const parent = path.slice(0, -1).reduce<unknown>((node, key) => (node as Record<string | number, unknown>)[key], data) as Record<string | number, unknown> &
+    unknown[];
   const key = path[path.length - 1]!;
   const r = rng.uniform();
   if (r < 0.3) {

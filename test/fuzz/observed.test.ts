@@ -16,7 +16,8 @@ function fault(text: string): string | undefined {
   try {
     for (const row of parseObserved(text, 'observed.csv', KNOWN)) {
       const times = Number(row.midBjdTdb !== undefined) + Number(row.midUtc !== undefined);
-      if (times !== 1 || !KNOWN.has(row.targetId) || (row.rvMps === undefined) !== (row.rvErrorMps === undefined)) return `row outside the rules: ${JSON.stringify(row)}`;
+      if (times !== 1 || !KNOWN.has(row.targetId) || (row.rvMps === undefined) !== (row.rvErrorMps === undefined))
+        return `row outside the rules: ${JSON.stringify(row)}`;
       if (row.midBjdTdb !== undefined && !(row.midBjdTdb >= 2.4e6 && row.midBjdTdb <= 2.6e6)) return `BJD out of range: ${row.midBjdTdb}`;
     }
     return undefined;

@@ -44,14 +44,32 @@ describe('size cases', () => {
   });
 
   it('a 100,000-target list is read whole (the run stops at the out folder, before planning)', async () => {
-    const run = await passes('targets', { files: { ...BASE, 'targets.csv': targetList(100_000) }, args: ['plan', '{dir}/campaign.yaml', '--out', '{dir}/site.json'] });
+    const run = await passes('targets', {
+      files: { ...BASE, 'targets.csv': targetList(100_000) },
+      args: ['plan', '{dir}/campaign.yaml', '--out', '{dir}/site.json'],
+    });
     expect(run.stderr).toMatch(/^crest: command line: --out = ".*site\.json": names an existing file/);
   });
 
   it.each([
-    ['campaign.yaml', `${CAMPAIGN_YAML}extra: ${nested(100_000)}\n`, ['plan', '{dir}/campaign.yaml', '--out', '{dir}/out'], /campaign\.yaml: line 11, column 108: malformed YAML: nested more than 100 levels/],
-    ['site.json', nested(100_000), ['nights', '--site', '{dir}/site.json', '--from', '2027-03-01', '--to', '2027-03-01'], /site\.json: line 1, column 101: malformed JSON: nested more than 100 levels/],
-    ['plan.json', `{"a": ${nested(100_000)}}`, ['report', '{dir}/plan.json', '--out', '{dir}/out'], /plan\.json: line 1, column 106: malformed JSON: nested more than 100 levels/],
+    [
+      'campaign.yaml',
+      `${CAMPAIGN_YAML}extra: ${nested(100_000)}\n`,
+      ['plan', '{dir}/campaign.yaml', '--out', '{dir}/out'],
+      /campaign\.yaml: line 11, column 108: malformed YAML: nested more than 100 levels/,
+    ],
+    [
+      'site.json',
+      nested(100_000),
+      ['nights', '--site', '{dir}/site.json', '--from', '2027-03-01', '--to', '2027-03-01'],
+      /site\.json: line 1, column 101: malformed JSON: nested more than 100 levels/,
+    ],
+    [
+      'plan.json',
+      `{"a": ${nested(100_000)}}`,
+      ['report', '{dir}/plan.json', '--out', '{dir}/out'],
+      /plan\.json: line 1, column 106: malformed JSON: nested more than 100 levels/,
+    ],
   ])('100,000 nested brackets in %s are one located line', async (name, text, args, message) => {
     const run = await passes(`deep-${name}`, { files: { ...BASE, [name]: text }, args });
     expect(run.status).toBe(2);

@@ -28,44 +28,110 @@ describe('campaign files', () => {
   });
 
   it('takes a semester instead of dates: default A is 1 February to 31 July, B runs into the next year', () => {
-    const win = (label: string) => readCampaign(campaignFile(BASE.replace(/window: .*\n/, `window: { semester: ${label} }\n`) + 'time: { mode: hours, hours: 5 }\n')).window;
+    const win = (label: string) =>
+      readCampaign(campaignFile(`${BASE.replace(/window: .*\n/, `window: { semester: ${label} }\n`)}time: { mode: hours, hours: 5 }\n`)).window;
     expect(win('2027A')).toEqual({ start: '2027-02-01', end: '2027-07-31' });
     expect(win('2027B')).toEqual({ start: '2027-08-01', end: '2028-01-31' });
     expect(() => win('2027C')).toThrow(/window\.semester = "2027C": a semester such as 2027A/);
   });
 
-  it('uses a site file\'s own semester boundaries', () => {
-    const site = JSON.stringify({ id: 'cerro-example', name: 'Cerro Example', latitudeDeg: -30, longitudeDeg: -70, elevationM: 2000, timeZone: 'America/Santiago', clearFraction: 0.7, sourceNote: 'invented', semesters: { A: { start: '04-01', end: '09-30' }, B: { start: '10-01', end: '03-31' } } });
-    const text = BASE.replace('site: la-silla', 'site: ./s.json').replace(/window: .*\n/, 'window: { semester: 2028B }\n') + 'time: { mode: hours, hours: 5 }\n';
+  it("uses a site file's own semester boundaries", () => {
+    const site = JSON.stringify({
+      id: 'cerro-example',
+      name: 'Cerro Example',
+      latitudeDeg: -30,
+      longitudeDeg: -70,
+      elevationM: 2000,
+      timeZone: 'America/Santiago',
+      clearFraction: 0.7,
+      sourceNote: 'invented',
+      semesters: { A: { start: '04-01', end: '09-30' }, B: { start: '10-01', end: '03-31' } },
+    });
+    const text = `${BASE.replace('site: la-silla', 'site: ./s.json').replace(/window: .*\n/, 'window: { semester: 2028B }\n')}time: { mode: hours, hours: 5 }\n`;
     expect(readCampaign(campaignFile(text, 'campaign.yaml', { 's.json': site })).window).toEqual({ start: '2028-10-01', end: '2029-03-31' });
   });
 
   it('fills documented defaults for constraints, goals and seed', () => {
     const c = readCampaign(campaignFile(`${BASE}time: { mode: hours, hours: 12 }\n`));
-    expect(c.constraints).toEqual({ twilight: 'nautical', maxAirmass: 2, moonSeparationDeg: 30, minSpacingHours: 20, sameNightSpacingHours: 2, minWindowMinutes: 20 });
+    expect(c.constraints).toEqual({
+      twilight: 'nautical',
+      maxAirmass: 2,
+      moonSeparationDeg: 30,
+      minSpacingHours: 20,
+      sameNightSpacingHours: 2,
+      minWindowMinutes: 20,
+    });
     expect(c.goals).toEqual({ significance: 5 });
     expect(c.seed).toBe(1);
   });
 
   it('reads JSON as well, and site or instrument files by path relative to the campaign', () => {
-    const site = JSON.stringify({ id: 'cerro-example', name: 'Cerro Example', latitudeDeg: -30, longitudeDeg: -70, elevationM: 2000, timeZone: 'America/Santiago', clearFraction: 0.7, sourceNote: 'invented' });
-    const json = JSON.stringify({ name: 'J', site: './my-site.json', instrument: 'compact-1m', targets: 'targets.csv', window: { start: '2027-01-01', end: '2027-01-05' }, time: { mode: 'given-nights', dates: ['2027-01-02'] } });
+    const site = JSON.stringify({
+      id: 'cerro-example',
+      name: 'Cerro Example',
+      latitudeDeg: -30,
+      longitudeDeg: -70,
+      elevationM: 2000,
+      timeZone: 'America/Santiago',
+      clearFraction: 0.7,
+      sourceNote: 'invented',
+    });
+    const json = JSON.stringify({
+      name: 'J',
+      site: './my-site.json',
+      instrument: 'compact-1m',
+      targets: 'targets.csv',
+      window: { start: '2027-01-01', end: '2027-01-05' },
+      time: { mode: 'given-nights', dates: ['2027-01-02'] },
+    });
     const c = readCampaign(campaignFile(json, 'campaign.json', { 'my-site.json': site }));
     expect(c.site.id).toBe('cerro-example');
     expect(c.time).toEqual({ mode: 'given-nights', dates: ['2027-01-02'] });
   });
 
   it.each([
-    ['a date outside the window', `${BASE}time: { mode: given-nights, dates: [2027-03-05, 2027-04-02] }\n`, /campaign\.yaml: time\.dates\[1\] = "2027-04-02": a date inside the window/],
+    [
+      'a date outside the window',
+      `${BASE}time: { mode: given-nights, dates: [2027-03-05, 2027-04-02] }\n`,
+      /campaign\.yaml: time\.dates\[1\] = "2027-04-02": a date inside the window/,
+    ],
     ['an unknown time mode', `${BASE}time: { mode: every-night }\n`, /campaign\.yaml: time(\.mode)? = .*choose-nights, given-nights, hours/],
-    ['a misspelt constraint', `${BASE}time: { mode: hours, hours: 5 }\nconstraints: { maxAirmas: 2 }\n`, /campaign\.yaml: constraints\.maxAirmas = 2: unknown key/],
-    ['an airmass limit below 1', `${BASE}time: { mode: hours, hours: 5 }\nconstraints: { maxAirmass: 0.5 }\n`, /campaign\.yaml: constraints\.maxAirmass = 0\.5: an airmass from 1 to 5/],
-    ['a same-night spacing above 12 h', `${BASE}time: { mode: hours, hours: 5 }\nconstraints: { sameNightSpacingHours: 13 }\n`, /campaign\.yaml: constraints\.sameNightSpacingHours = 13: hours from 0 to 12$/],
-    ['a bad date', `${BASE.replace('2027-03-31', '2027-02-30')}time: { mode: hours, hours: 5 }\n`, /campaign\.yaml: window\.end = "2027-02-30": a date as YYYY-MM-DD/],
+    [
+      'a misspelt constraint',
+      `${BASE}time: { mode: hours, hours: 5 }\nconstraints: { maxAirmas: 2 }\n`,
+      /campaign\.yaml: constraints\.maxAirmas = 2: unknown key/,
+    ],
+    [
+      'an airmass limit below 1',
+      `${BASE}time: { mode: hours, hours: 5 }\nconstraints: { maxAirmass: 0.5 }\n`,
+      /campaign\.yaml: constraints\.maxAirmass = 0\.5: an airmass from 1 to 5/,
+    ],
+    [
+      'a same-night spacing above 12 h',
+      `${BASE}time: { mode: hours, hours: 5 }\nconstraints: { sameNightSpacingHours: 13 }\n`,
+      /campaign\.yaml: constraints\.sameNightSpacingHours = 13: hours from 0 to 12$/,
+    ],
+    [
+      'a bad date',
+      `${BASE.replace('2027-03-31', '2027-02-30')}time: { mode: hours, hours: 5 }\n`,
+      /campaign\.yaml: window\.end = "2027-02-30": a date as YYYY-MM-DD/,
+    ],
     ['no time model', BASE, /campaign\.yaml: time = \(missing\)/],
-    ['hours mode without hours', `${BASE}time: { mode: hours }\n`, /campaign\.yaml: time\.hours = \(missing\): required: a positive number of hours, at most 5000$/],
-    ['nights given as text', `${BASE}time: { mode: choose-nights, nights: ten }\n`, /campaign\.yaml: time\.nights = "ten": a whole number of nights, 1 to 366$/],
-    ['a missing target list', `${BASE.replace('targets.csv', 'other.csv')}time: { mode: hours, hours: 5 }\n`, /campaign\.yaml: targets = "other\.csv": a target list file \(.*other\.csv does not exist\)$/],
+    [
+      'hours mode without hours',
+      `${BASE}time: { mode: hours }\n`,
+      /campaign\.yaml: time\.hours = \(missing\): required: a positive number of hours, at most 5000$/,
+    ],
+    [
+      'nights given as text',
+      `${BASE}time: { mode: choose-nights, nights: ten }\n`,
+      /campaign\.yaml: time\.nights = "ten": a whole number of nights, 1 to 366$/,
+    ],
+    [
+      'a missing target list',
+      `${BASE.replace('targets.csv', 'other.csv')}time: { mode: hours, hours: 5 }\n`,
+      /campaign\.yaml: targets = "other\.csv": a target list file \(.*other\.csv does not exist\)$/,
+    ],
   ])('names the key of a bad value: %s', (_name, text, message) => {
     expect(() => readCampaign(campaignFile(text))).toThrow(message);
   });

@@ -55,8 +55,20 @@ describe('instrument profiles', () => {
   });
 
   it('sorts spectral-type factors', () => {
-    const inst = parseInstrument({ ...GOOD, teffFactors: [[6500, 2], [5000, 1]] }, 'i.json');
-    expect(inst.teffFactors).toEqual([[5000, 1], [6500, 2]]);
+    const inst = parseInstrument(
+      {
+        ...GOOD,
+        teffFactors: [
+          [6500, 2],
+          [5000, 1],
+        ],
+      },
+      'i.json',
+    );
+    expect(inst.teffFactors).toEqual([
+      [5000, 1],
+      [6500, 2],
+    ]);
   });
 
   it.each([

@@ -31,7 +31,7 @@ describe('jsonErrorOffset', () => {
     const rng = createRng(41);
     const disagreements: string[] = [];
     for (let i = 0; i < 3000; i++) {
-      const text = mutateText(PLAN_JSON.slice(0, 1500 + Math.floor(rng.uniform() * 400)) + ']}', rng);
+      const text = mutateText(`${PLAN_JSON.slice(0, 1500 + Math.floor(rng.uniform() * 400))}]}`, rng);
       if ((jsonErrorOffset(text) === undefined) !== parses(text)) disagreements.push(text.slice(0, 80));
       const whole = mutateText(PLAN_JSON, rng);
       if ((jsonErrorOffset(whole) === undefined) !== parses(whole)) disagreements.push(whole.slice(0, 80));

@@ -18,7 +18,12 @@ const NEW = { 'plan.md': 'new md', 'plan.csv': 'new csv', 'plan.json': 'new json
 const STEPS = ['staged plan.md', 'staged plan.csv', 'staged plan.json', 'committed', 'moved plan.md', 'moved plan.csv', 'moved plan.json', 'done'];
 
 const fresh = () => mkdtempSync(path.join(tmpdir(), 'crest-set-'));
-const contents = (dir: string) => Object.fromEntries(readdirSync(dir).sort().map((name) => [name, readFileSync(path.join(dir, name), 'utf8')]));
+const contents = (dir: string) =>
+  Object.fromEntries(
+    readdirSync(dir)
+      .sort()
+      .map((name) => [name, readFileSync(path.join(dir, name), 'utf8')]),
+  );
 
 /** Writes NEW over OLD in a child process killed at the first step starting with `step`; returns how the child ended. */
 function killedAt(dir: string, step: string): string | null {
@@ -66,7 +71,9 @@ describe('output sets', () => {
     const full = (step: string) => {
       if (step === 'staged plan.csv') throw Object.assign(new Error('no space left on device'), { code: 'ENOSPC' });
     };
-    expect(() => writeOutputSet(dir, NEW, [], { afterStep: full })).toThrow(/^command line: --out = ".*": cannot write plan\.csv \(ENOSPC, the disk is full\); the files there are unchanged$/);
+    expect(() => writeOutputSet(dir, NEW, [], { afterStep: full })).toThrow(
+      /^command line: --out = ".*": cannot write plan\.csv \(ENOSPC, the disk is full\); the files there are unchanged$/,
+    );
     expect(contents(dir)).toEqual(OLD);
   });
 

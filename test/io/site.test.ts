@@ -52,7 +52,16 @@ describe('site files', () => {
   });
 
   it('defaults the minimum altitude to 20 degrees and sorts the horizon by azimuth', () => {
-    const site = parseSite({ ...GOOD, horizon: [{ azimuthDeg: 200, altitudeDeg: 15 }, { azimuthDeg: 10, altitudeDeg: 5 }] }, 'x.json');
+    const site = parseSite(
+      {
+        ...GOOD,
+        horizon: [
+          { azimuthDeg: 200, altitudeDeg: 15 },
+          { azimuthDeg: 10, altitudeDeg: 5 },
+        ],
+      },
+      'x.json',
+    );
     expect(site.minAltitudeDeg).toBe(20);
     expect(site.horizon!.map((p) => p.azimuthDeg)).toEqual([10, 200]);
   });
@@ -62,7 +71,16 @@ describe('site files', () => {
     ['longitude out of range', { longitudeDeg: 200 }, /^x\.json: longitudeDeg = 200: degrees from -180 to \+180, east positive$/],
     ['unknown time zone', { timeZone: 'Mars/Olympus' }, /^x\.json: timeZone = "Mars\/Olympus": an IANA time-zone name/],
     ['eleven monthly clear fractions', { clearFraction: Array(11).fill(0.5) }, /^x\.json: clearFraction = \[.*: twelve monthly values$/],
-    ['a horizon point out of range', { horizon: [{ azimuthDeg: 0, altitudeDeg: 5 }, { azimuthDeg: 400, altitudeDeg: 5 }] }, /^x\.json: horizon\[1\]\.azimuthDeg = 400: degrees from 0 to 360$/],
+    [
+      'a horizon point out of range',
+      {
+        horizon: [
+          { azimuthDeg: 0, altitudeDeg: 5 },
+          { azimuthDeg: 400, altitudeDeg: 5 },
+        ],
+      },
+      /^x\.json: horizon\[1\]\.azimuthDeg = 400: degrees from 0 to 360$/,
+    ],
     ['a misspelt key', { elevation: 2300 }, /^x\.json: elevation = 2300: unknown key/],
     ['missing name', { name: undefined }, /^x\.json: name = \(missing\): required/],
   ])('names the key of a bad value: %s', (_name, change, message) => {

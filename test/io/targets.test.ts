@@ -70,7 +70,7 @@ describe('transit duration', () => {
 describe('bands, activity, gravity and per-target exposure or sigma', () => {
   const cols = 'id,ra,dec,vmag,jmag,gmag,teffK,vsiniKms,logRhk,logg,exposureSec,visitSigmaMps';
 
-  it('reads other bands, log R\'HK, log g and a per-target exposure; the jitter follows the relations', () => {
+  it("reads other bands, log R'HK, log g and a per-target exposure; the jitter follows the relations", () => {
     const [t] = parseTargets(`${cols}\nA,10:00:00,-10:00:00,9.1,7.6,8.9,5800,9,-4.6,4.3,600,\n`, 't.csv');
     expect(t!.mags).toEqual({ J: 7.6, G: 8.9 });
     expect(t!.logRhk).toBe(-4.6);
@@ -90,7 +90,11 @@ describe('bands, activity, gravity and per-target exposure or sigma', () => {
   });
 
   it.each([
-    ['no magnitude at all', 'id,ra,dec,teffK\nA,10:00:00,-10:00:00,5000\n', /^t\.csv: row 1 \(line 2\): vmag = \(empty\): required: V magnitude .* or a magnitude in another band/],
+    [
+      'no magnitude at all',
+      'id,ra,dec,teffK\nA,10:00:00,-10:00:00,5000\n',
+      /^t\.csv: row 1 \(line 2\): vmag = \(empty\): required: V magnitude .* or a magnitude in another band/,
+    ],
     ['exposure and sigma both', `${cols}\nA,10:00:00,-10:00:00,9,,,5000,,,,600,2\n`, /visitSigmaMps = "2": give exposureSec or visitSigmaMps, not both$/],
     ['log g out of range', `${cols}\nA,10:00:00,-10:00:00,9,,,5000,,,7,,\n`, /logg = "7": surface gravity log g \(cgs\) from 0 to 6$/],
   ])('bad input: %s', (_name, text, message) => {

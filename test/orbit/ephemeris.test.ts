@@ -34,7 +34,9 @@ describe('ephemeris propagation', () => {
       let sumSq = 0;
       const trials = 40_000;
       for (let i = 0; i < trials; i++) {
-        const tc = tcAtEpochBjdTdb({ ...EPH, tcBjdTdb: EPH.tcBjdTdb + EPH.tcErrDays * draw(), periodDays: EPH.periodDays + EPH.periodErrDays * draw() }, n) - tcAtEpochBjdTdb(EPH, n);
+        const tc =
+          tcAtEpochBjdTdb({ ...EPH, tcBjdTdb: EPH.tcBjdTdb + EPH.tcErrDays * draw(), periodDays: EPH.periodDays + EPH.periodErrDays * draw() }, n) -
+          tcAtEpochBjdTdb(EPH, n);
         sum += tc;
         sumSq += tc * tc;
       }

@@ -4,7 +4,7 @@ import { massFunctionGm, planetMassFromKApproxEarth, planetMassFromKEarth } from
 import { semiAmplitudeMps } from '../../src/orbit/semi-amplitude.js';
 
 /** Masses from 0.1 Earth masses to 80 Jupiter masses, evenly in log. */
-const MASSES_EARTH = Array.from({ length: 41 }, (_, i) => 0.1 * Math.pow((80 * EARTH_PER_JUPITER) / 0.1, i / 40));
+const MASSES_EARTH = Array.from({ length: 41 }, (_, i) => 0.1 * ((80 * EARTH_PER_JUPITER) / 0.1) ** (i / 40));
 const SYSTEMS = [
   { starMassSun: 0.08, periodDays: 0.3, ecc: 0, inclinationDeg: 90 },
   { starMassSun: 0.5, periodDays: 5, ecc: 0.2, inclinationDeg: 90 },
@@ -38,7 +38,7 @@ describe('planet mass from K (the exact inverse)', () => {
       const exact = planetMassFromKEarth(input);
       const approx = planetMassFromKApproxEarth(input);
       expect(exact).toBeGreaterThan(approx);
-      expect(exact / approx).toBeCloseTo(Math.pow(1 + exact / (0.9 * EARTH_PER_SUN), 2 / 3), 12);
+      expect(exact / approx).toBeCloseTo((1 + exact / (0.9 * EARTH_PER_SUN)) ** (2 / 3), 12);
     }
   });
 

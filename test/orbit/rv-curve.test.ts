@@ -19,7 +19,14 @@ function depth(orbit: RvOrbit, t: number): number {
   return ((1 - orbit.ecc ** 2) / (1 + orbit.ecc * Math.cos(nu))) * Math.sin(nu + orbit.omegaDeg * DEG);
 }
 
-const SHAPES: [number, number][] = [[0, 90], [0, 17], [0.2, 40], [0.5, 250], [0.9, 300], [0.97, 100]];
+const SHAPES: [number, number][] = [
+  [0, 90],
+  [0, 17],
+  [0.2, 40],
+  [0.5, 250],
+  [0.9, 300],
+  [0.97, 100],
+];
 
 describe('Keplerian RV curve', () => {
   it('is v = γ − K sin(2π (t − Tc)/P) for a circular orbit', () => {
@@ -34,7 +41,7 @@ describe('Keplerian RV curve', () => {
     }
   });
 
-  it.each(SHAPES)('is the time derivative of the star\'s position (e = %s, ω = %s°)', (ecc, omegaDeg) => {
+  it.each(SHAPES)("is the time derivative of the star's position (e = %s, ω = %s°)", (ecc, omegaDeg) => {
     // Property: v − γ = dz/dt, checked by central differences of the orbit's geometry. Times near
     // zero keep every bit of t ± h (a full BJD leaves only ~1e-10 d of resolution).
     const orbit = orbitFromTc(ecc, omegaDeg, 0.4);

@@ -26,7 +26,7 @@ describe('semi-amplitude K: properties of K = (2πG/P)^(1/3) m sin i (M★ + m)^
     // Property of the formula: doubling m from M★/10 changes K by 2 ((M★ + m)/(M★ + 2m))^(2/3).
     const mEarth = 0.1 * 0.8 * EARTH_PER_SUN; // a tenth of the star
     const ratio = semiAmplitudeMps({ ...base, planetMassEarth: 2 * mEarth }) / semiAmplitudeMps({ ...base, planetMassEarth: mEarth });
-    expect(ratio).toBeCloseTo(2 * Math.pow(1.1 / 1.2, 2 / 3), 6);
+    expect(ratio).toBeCloseTo(2 * (1.1 / 1.2) ** (2 / 3), 6);
   });
 
   it('scales with sin i and 1/√(1 − e²)', () => {

@@ -3,7 +3,6 @@ import { radialVelocityMps } from '../../src/orbit/rv-curve.js';
 import { periastronFromConjunctionBjdTdb } from '../../src/orbit/periastron-time.js';
 import { signalShape } from '../../src/orbit/signal-shape.js';
 
-
 describe('signal shape of a Keplerian orbit against phase from transit', () => {
   it('is -sin(2 pi phase) for a circular orbit, with slope -2 pi cos(2 pi phase) (common practice)', () => {
     const shape = signalShape(0, 90);
@@ -14,7 +13,11 @@ describe('signal shape of a Keplerian orbit against phase from transit', () => {
   });
 
   it('equals the RV curve with K = 1 at Tc + phase P, and e cos(omega) at transit where it falls', () => {
-    for (const [ecc, omegaDeg] of [[0.3, 40], [0.6, 250], [0.1, 90]] as const) {
+    for (const [ecc, omegaDeg] of [
+      [0.3, 40],
+      [0.6, 250],
+      [0.1, 90],
+    ] as const) {
       const shape = signalShape(ecc, omegaDeg);
       const tc = 2461400.25;
       const periodDays = 7.3;
@@ -27,7 +30,11 @@ describe('signal shape of a Keplerian orbit against phase from transit', () => {
   });
 
   it('has a slope equal to a central difference of the RV curve (e up to 0.8)', () => {
-    for (const [ecc, omegaDeg] of [[0.5, 120], [0.8, 300], [0.05, 10]] as const) {
+    for (const [ecc, omegaDeg] of [
+      [0.5, 120],
+      [0.8, 300],
+      [0.05, 10],
+    ] as const) {
       const periodDays = 3.1;
       const orbit = { kMps: 1, periodDays, ecc, omegaDeg, periastronBjdTdb: periastronFromConjunctionBjdTdb({ tcBjdTdb: 0, periodDays, ecc, omegaDeg }) };
       const shape = signalShape(ecc, omegaDeg);

@@ -26,9 +26,7 @@ export interface ParsedIcs {
 
 export function parseIcs(text: string): ParsedIcs {
   const calendar = new ICAL.Component(ICAL.parse(text));
-  const zones = new Map(
-    calendar.getAllSubcomponents('vtimezone').map((c) => [String(c.getFirstPropertyValue('tzid')), new ICAL.Timezone(c)]),
-  );
+  const zones = new Map(calendar.getAllSubcomponents('vtimezone').map((c) => [String(c.getFirstPropertyValue('tzid')), new ICAL.Timezone(c)]));
   const instant = (value: ICAL.Time, tzid: string | null): number => {
     const zone = tzid ? zones.get(tzid) : undefined;
     if (tzid && !zone) throw new Error(`TZID ${tzid} has no VTIMEZONE`);
@@ -71,7 +69,9 @@ export function documentedUids(plan: Plan): Map<string, PlannedVisit> {
   const uids = new Map<string, PlannedVisit>();
   for (const [night, visits] of byNight) {
     const ordered = [...visits].sort((a, b) => Date.parse(a.startUtc) - Date.parse(b.startUtc));
-    ordered.forEach((v, k) => uids.set(`${night}-${k + 1}@crest`, v));
+    ordered.forEach((v, k) => {
+      uids.set(`${night}-${k + 1}@crest`, v);
+    });
   }
   return uids;
 }
@@ -107,7 +107,8 @@ export function icsMismatches(plan: Plan, text: string, previous?: Plan): string
     const utcAllowed = e.tzid === null && (secondOccurrence(start) || secondOccurrence(start.plus({ seconds: v.durationSec })));
     if (e.tzid !== zone && !utcAllowed) problems.push(`${label}: DTSTART TZID ${e.tzid}, not ${zone}`);
     if (e.endMs - e.startMs !== v.durationSec * 1000) problems.push(`${label}: event lasts ${(e.endMs - e.startMs) / 1000} s, block ${v.durationSec} s`);
-    if (!e.description.includes(v.starId) || !e.description.includes(`${v.exposureSec.toFixed(0)} s`)) problems.push(`${label}: description lacks target or exposure`);
+    if (!e.description.includes(v.starId) || !e.description.includes(`${v.exposureSec.toFixed(0)} s`))
+      problems.push(`${label}: description lacks target or exposure`);
     if (v.phases.some((p) => !e.description.includes(p.phase.toFixed(3)))) problems.push(`${label}: description lacks the phase`);
     if (!e.stampIsUtc) problems.push(`${label}: DTSTAMP not in UTC form`);
   }
@@ -116,7 +117,8 @@ export function icsMismatches(plan: Plan, text: string, previous?: Plan): string
   for (const [uid, v] of gone) {
     const e = byUid.get(uid);
     if (e?.status !== 'CANCELLED') problems.push(`${uid}: gone from the plan but not cancelled`);
-    else if (e.startMs !== Date.parse(v.startUtc) || e.endMs - e.startMs !== v.durationSec * 1000) problems.push(`${uid}: cancelled event not at the old visit's time`);
+    else if (e.startMs !== Date.parse(v.startUtc) || e.endMs - e.startMs !== v.durationSec * 1000)
+      problems.push(`${uid}: cancelled event not at the old visit's time`);
   }
   return problems;
 }

@@ -97,8 +97,12 @@ export function checkVisits(plan: Plan): VisitCheck {
     const fast = groupBy(computeWindows(site, targets, [night], constraints).windows, (w) => w.targetId);
     for (const v of visits) {
       const label = `${v.starId} ${v.startUtc}`;
-      if (v.durationSec !== v.exposureSec + instrument.acquisitionSec + instrument.readoutSec) violations.push(`${label}: block is not acquisition + exposure + readout`);
-      if (DateTime.fromISO(v.startLocal).toMillis() !== startMs(v) || DateTime.fromISO(v.startLocal, { setZone: true }).offset !== DateTime.fromMillis(startMs(v), { zone: site.timeZone }).offset) {
+      if (v.durationSec !== v.exposureSec + instrument.acquisitionSec + instrument.readoutSec)
+        violations.push(`${label}: block is not acquisition + exposure + readout`);
+      if (
+        DateTime.fromISO(v.startLocal).toMillis() !== startMs(v) ||
+        DateTime.fromISO(v.startLocal, { setZone: true }).offset !== DateTime.fromMillis(startMs(v), { zone: site.timeZone }).offset
+      ) {
         violations.push(`${label}: local start ${v.startLocal} is not the same instant in ${site.timeZone}`);
       }
       if (startMs(v) < night.darkStart.getTime() || endMs(v) > night.darkEnd.getTime()) violations.push(`${label}: outside the dark span`);
@@ -122,7 +126,9 @@ export function checkVisits(plan: Plan): VisitCheck {
       }
     }
     const cap = plan.campaign.targets.find((t) => t.starId === starId)?.visitsPerNight ?? 1;
-    if (byNights) for (const [date, evening] of groupBy(visits, (v) => v.localDate)) if (evening.length > cap) violations.push(`${starId}: ${evening.length} visits on ${date}, at most ${cap}`);
+    if (byNights)
+      for (const [date, evening] of groupBy(visits, (v) => v.localDate))
+        if (evening.length > cap) violations.push(`${starId}: ${evening.length} visits on ${date}, at most ${cap}`);
   }
 
   const dates = new Set(plan.visits.map((v) => v.localDate));

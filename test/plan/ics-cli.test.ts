@@ -53,7 +53,11 @@ describe('crest plan and plan.ics', () => {
     const r = await plan(dir, undefined);
     expect([r.status, r.stderr]).toEqual([0, '']);
     const text = read(dir, 'plan.ics');
-    expect(parseIcs(text).events.filter((e) => e.status === 'CANCELLED').map((e) => e.uid)).toEqual([`${previous.visits[0]!.starId}-2027-04-02-1@crest`]);
+    expect(
+      parseIcs(text)
+        .events.filter((e) => e.status === 'CANCELLED')
+        .map((e) => e.uid),
+    ).toEqual([`${previous.visits[0]!.starId}-2027-04-02-1@crest`]);
     expect(icsMismatches(readPlanJson(dir), text, moved)).toEqual([]);
   });
 

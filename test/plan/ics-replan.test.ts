@@ -26,7 +26,10 @@ describe('UIDs across re-plans', () => {
   });
 
   it('a re-plan with one visit moved 20 minutes within its night: every UID as before, the moved event at its new time', () => {
-    const moved = withVisits(plan, plan.visits.map((v, i) => (i === 3 ? shifted(v, 20) : v)));
+    const moved = withVisits(
+      plan,
+      plan.visits.map((v, i) => (i === 3 ? shifted(v, 20) : v)),
+    );
     const before = eventsOf(plan);
     const after = eventsOf(moved);
     expect(after.map((e) => e.uid)).toEqual(before.map((e) => e.uid));
@@ -49,7 +52,10 @@ describe('UIDs across re-plans', () => {
 describe('visits gone from the previous plan', () => {
   it('appear once each with STATUS:CANCELLED at their old time, one SEQUENCE higher', () => {
     const gone = plan.visits[5]!;
-    const next = withVisits(plan, plan.visits.filter((v) => v !== gone));
+    const next = withVisits(
+      plan,
+      plan.visits.filter((v) => v !== gone),
+    );
     const events = eventsOf(next, { previous: plan });
     const cancelled = events.filter((e) => e.status === 'CANCELLED');
     expect(cancelled).toHaveLength(1);
@@ -68,10 +74,22 @@ describe('visits gone from the previous plan', () => {
 
 describe('SEQUENCE (RFC 5545 3.8.7.4: raised when the start or end changes)', () => {
   it('is 0 unchanged, one more each time the visit moves, and survives plan.json', () => {
-    const once = withIcsSequences(withVisits(plan, plan.visits.map((v, i) => (i === 2 ? shifted(v, 15) : v))), plan);
+    const once = withIcsSequences(
+      withVisits(
+        plan,
+        plan.visits.map((v, i) => (i === 2 ? shifted(v, 15) : v)),
+      ),
+      plan,
+    );
     const saved = planFromJson(JSON.parse(renderPlanJson(once)), 'plan.json');
     expect(saved.visits[2]!.icsSequence).toBe(1);
-    const twice = withIcsSequences(withVisits(saved, saved.visits.map((v, i) => (i === 2 ? shifted(v, 15) : v))), saved);
+    const twice = withIcsSequences(
+      withVisits(
+        saved,
+        saved.visits.map((v, i) => (i === 2 ? shifted(v, 15) : v)),
+      ),
+      saved,
+    );
     const again = withIcsSequences(twice, twice);
     const events = eventsOf(again, { previous: twice });
     const uid = `${plan.visits[2]!.starId}-${plan.visits[2]!.localDate}-1@crest`;

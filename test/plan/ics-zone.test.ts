@@ -39,9 +39,7 @@ describe('VTIMEZONE against the time-zone database', () => {
     const instants: number[] = [];
     for (let t = fromMs; t < toMs; t += 7 * 3_600_000) if (!ambiguous(t)) instants.push(t);
     for (const b of backward) instants.push(b.at - b.spanMs - 1000, b.at + b.spanMs);
-    const wrong = instants
-      .filter((t) => icalInstantMs(tz, DateTime.fromMillis(t, { zone })) !== t)
-      .map((t) => new Date(t).toISOString());
+    const wrong = instants.filter((t) => icalInstantMs(tz, DateTime.fromMillis(t, { zone })) !== t).map((t) => new Date(t).toISOString());
     // None, or two a year for six years.
     expect([0, 12]).toContain(changes.length);
     expect(wrong).toEqual([]);

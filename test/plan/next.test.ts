@@ -19,29 +19,52 @@ const CAMPAIGN = path.join(path.dirname(fileURLToPath(import.meta.url)), '../../
 const SETTINGS = { searchGridSize: 48, overshootWeight: 0.1 };
 /** Edge tolerance of the window comparison (minutes): the sampler steps by one minute. */
 const EDGE_MIN = 2;
-const INSTANTS = ['2027-03-21T00:30:00Z', '2027-03-21T03:40:00Z', '2027-03-21T07:20:00Z', '2027-03-22T05:10:00Z', '2027-04-02T02:00:00Z', '2027-04-20T09:30:00Z'];
+const INSTANTS = [
+  '2027-03-21T00:30:00Z',
+  '2027-03-21T03:40:00Z',
+  '2027-03-21T07:20:00Z',
+  '2027-03-22T05:10:00Z',
+  '2027-04-02T02:00:00Z',
+  '2027-04-20T09:30:00Z',
+];
 
 describe('crest next against brute force', () => {
   const campaign = readCampaign(CAMPAIGN);
   it.each(INSTANTS)('at %s', (iso) => {
     const at = new Date(iso);
     const answer = nextVisits(campaign, at);
-    const inputs = planInputs({ ...campaign, window: { start: answer.localDate, end: answer.localDate }, time: { mode: 'given-nights', dates: [answer.localDate] }, lostDates: [] }, { now: at });
+    const inputs = planInputs(
+      { ...campaign, window: { start: answer.localDate, end: answer.localDate }, time: { mode: 'given-nights', dates: [answer.localDate] }, lostDates: [] },
+      { now: at },
+    );
     const night = inputs.nights[0]!;
     const reference = referenceWindows(campaign.site, starTargets(inputs.stars), night, campaign.constraints);
     // Every offered visit lies inside a reference window of its star (within the sampler's step).
     for (const c of answer.now) {
-      const inside = reference.some((w) => w.targetId === c.starId && w.start.getTime() <= c.startMs + EDGE_MIN * 60_000 && w.end.getTime() >= c.startMs + c.durationSec * 1000 - EDGE_MIN * 60_000);
+      const inside = reference.some(
+        (w) =>
+          w.targetId === c.starId &&
+          w.start.getTime() <= c.startMs + EDGE_MIN * 60_000 &&
+          w.end.getTime() >= c.startMs + c.durationSec * 1000 - EDGE_MIN * 60_000,
+      );
       expect(inside, `${c.starId} at ${iso}`).toBe(true);
     }
     // Every star the sampler finds open now for a whole visit (with margin) is offered.
     const offered = new Set(answer.now.map((c) => c.starId));
     for (const star of inputs.stars.filter((s) => s.scheduleTarget)) {
-      const open = reference.some((w) => w.targetId === star.starId && w.start.getTime() <= at.getTime() - EDGE_MIN * 60_000 && w.end.getTime() >= at.getTime() + (star.durationSec + 600 + EDGE_MIN * 60) * 1000);
+      const open = reference.some(
+        (w) =>
+          w.targetId === star.starId &&
+          w.start.getTime() <= at.getTime() - EDGE_MIN * 60_000 &&
+          w.end.getTime() >= at.getTime() + (star.durationSec + 600 + EDGE_MIN * 60) * 1000,
+      );
       // Visits are kept out of predicted transits (candidates.ts): such a star is not open.
       const fromBjdTdb = starBjdTdb(at, star.star);
       const toBjdTdb = fromBjdTdb + (star.durationSec + 600) / 86_400;
-      const inTransit = star.rows.some((r) => r.target.ephemeris?.transitDurationHours !== undefined && overlapsTransit(r.target.ephemeris, fromBjdTdb, toBjdTdb, transitRule(inputs.campaign)));
+      const inTransit = star.rows.some(
+        (r) =>
+          r.target.ephemeris?.transitDurationHours !== undefined && overlapsTransit(r.target.ephemeris, fromBjdTdb, toBjdTdb, transitRule(inputs.campaign)),
+      );
       if (open && !inTransit) expect(offered.has(star.starId), `${star.starId} open at ${iso}`).toBe(true);
     }
     if (answer.now.length === 0) return;

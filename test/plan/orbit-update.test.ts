@@ -10,7 +10,11 @@ import { planInputs } from '../../src/plan/plan-inputs.js';
 
 const CAMPAIGN = path.join(path.dirname(fileURLToPath(import.meta.url)), '../../examples/under-way/campaign.yaml');
 /** One night of the campaign (the fit does not depend on the window; planning one night is quick). */
-const oneNight = (c: Campaign): Campaign => ({ ...c, window: { start: '2027-03-20', end: '2027-03-20' }, time: { mode: 'given-nights', dates: ['2027-03-20'] } });
+const oneNight = (c: Campaign): Campaign => ({
+  ...c,
+  window: { start: '2027-03-20', end: '2027-03-20' },
+  time: { mode: 'given-nights', dates: ['2027-03-20'] },
+});
 
 describe('the RVs so far in the plan', () => {
   const campaign = readCampaign(CAMPAIGN);
@@ -30,13 +34,15 @@ describe('the RVs so far in the plan', () => {
   });
 
   it('a star with no more RVs than its offset and K s keeps its catalogue values', () => {
-    const rows = campaign.observed!.rows.filter((r) => r.targetId !== 'SELVA-12').concat(campaign.observed!.rows.filter((r) => r.targetId === 'SELVA-12').slice(0, 2));
+    const rows = campaign
+      .observed!.rows.filter((r) => r.targetId !== 'SELVA-12')
+      .concat(campaign.observed!.rows.filter((r) => r.targetId === 'SELVA-12').slice(0, 2));
     const { rv, campaign: planned } = planInputs(oneNight({ ...campaign, observed: { ...campaign.observed!, rows } }), {});
     expect(rv.fits.has('SELVA-12')).toBe(false);
     expect(planned.targets.find((t) => t.id === 'SELVA-12')).toEqual(campaign.targets.find((t) => t.id === 'SELVA-12'));
   });
 
-  it('warns once when visits come from another instrument than the campaign\'s', () => {
+  it("warns once when visits come from another instrument than the campaign's", () => {
     const rows = campaign.observed!.rows.map((r, i) => (i < 3 ? { ...r, instrument: 'other-spec' } : r));
     const { rv } = planInputs(oneNight({ ...campaign, observed: { ...campaign.observed!, rows } }), {});
     expect(rv.warnings.filter((w) => w.includes('other-spec'))).toHaveLength(1);

@@ -61,9 +61,10 @@ describe('crest plan on the demo', () => {
 });
 
 describe('crest plan --nights', () => {
-  it('chooses that many nights instead of the campaign\'s number', async () => {
+  it("chooses that many nights instead of the campaign's number", async () => {
     const dir = tempFiles({
-      'campaign.yaml': 'name: few\nsite: la-silla\ninstrument: stable-4m\ntargets: targets.csv\nwindow: { start: 2027-04-01, end: 2027-04-10 }\ntime: { mode: choose-nights, nights: 5 }\n',
+      'campaign.yaml':
+        'name: few\nsite: la-silla\ninstrument: stable-4m\ntargets: targets.csv\nwindow: { start: 2027-04-01, end: 2027-04-10 }\ntime: { mode: choose-nights, nights: 5 }\n',
       'targets.csv': read(path.dirname(fixture('small')), 'targets.csv'),
     });
     const r = await runCliInProcess(['plan', path.join(dir, 'campaign.yaml'), '--nights', '2', '--json', '--out', path.join(dir, 'out')]);
@@ -78,7 +79,8 @@ describe('crest plan --nights', () => {
 describe('crest plan on bad input', () => {
   it('a campaign asking for 0 nights: exit 2, one line naming the field', async () => {
     const dir = tempFiles({
-      'campaign.yaml': 'name: bad\nsite: la-silla\ninstrument: stable-4m\ntargets: targets.csv\nwindow: { start: 2027-04-01, end: 2027-04-05 }\ntime: { mode: choose-nights, nights: 0 }\n',
+      'campaign.yaml':
+        'name: bad\nsite: la-silla\ninstrument: stable-4m\ntargets: targets.csv\nwindow: { start: 2027-04-01, end: 2027-04-05 }\ntime: { mode: choose-nights, nights: 0 }\n',
       'targets.csv': read(path.dirname(fixture('small')), 'targets.csv'),
     });
     const r = await runCliInProcess(['plan', path.join(dir, 'campaign.yaml'), '--out', path.join(dir, 'out')]);
@@ -121,7 +123,14 @@ describe('--out pointing at the folder that holds the inputs', () => {
   it('a campaign file named plan.json: exit 2 and the file unchanged', async () => {
     const dir = tempFiles({});
     copyFileSync(path.join(small, 'targets.csv'), path.join(dir, 'targets.csv'));
-    const campaign = JSON.stringify({ name: 'as json', site: 'la-silla', instrument: 'stable-4m', targets: 'targets.csv', window: { start: '2027-04-01', end: '2027-04-04' }, time: { mode: 'choose-nights', nights: 1 } });
+    const campaign = JSON.stringify({
+      name: 'as json',
+      site: 'la-silla',
+      instrument: 'stable-4m',
+      targets: 'targets.csv',
+      window: { start: '2027-04-01', end: '2027-04-04' },
+      time: { mode: 'choose-nights', nights: 1 },
+    });
     writeFileSync(path.join(dir, 'plan.json'), campaign);
     const r = await runCliInProcess(['plan', path.join(dir, 'plan.json'), '--out', dir]);
     expect(r.status).toBe(2);

@@ -25,7 +25,7 @@ const whole = (rng: Rng, lo: number, hi: number) => lo + Math.floor(rng.uniform(
 /** Right ascension on the meridian at local midnight: the Sun's RA + 180 deg (Sun's RA from the day of the year, approximate, common practice). */
 function midnightRaDeg(localDate: string): number {
   const dayOfYear = DateTime.fromISO(localDate, { zone: 'utc' }).ordinal;
-  return (((360 * (dayOfYear - 80)) / 365.25 + 180) % 360 + 360) % 360;
+  return ((((360 * (dayOfYear - 80)) / 365.25 + 180) % 360) + 360) % 360;
 }
 
 function star(rng: Rng, id: string, site: Site, windowStart: string): Target {
@@ -35,9 +35,21 @@ function star(rng: Rng, id: string, site: Site, windowStart: string): Target {
   const decDeg = anywhere ? between(rng, -89, 89) : Math.max(-89, Math.min(89, site.latitudeDeg + between(rng, -45, 45)));
   const teffK = between(rng, 3800, 6300);
   return {
-    id, starId: id, raDeg, decDeg, pmRaMasYr: 100 * rng.normal(), pmDecMasYr: 100 * rng.normal(), epochYear: 2016,
-    vmag: between(rng, 7, 11.5), teffK, massSun: 0.5 + (teffK - 3800) / 4000, vsiniKms: between(rng, 1, 6),
-    jitterMps: between(rng, 1, 3), priority: pick(rng, [0.5, 1, 1, 2]), estimated: [], source: `random ${id}`,
+    id,
+    starId: id,
+    raDeg,
+    decDeg,
+    pmRaMasYr: 100 * rng.normal(),
+    pmDecMasYr: 100 * rng.normal(),
+    epochYear: 2016,
+    vmag: between(rng, 7, 11.5),
+    teffK,
+    massSun: 0.5 + (teffK - 3800) / 4000,
+    vsiniKms: between(rng, 1, 6),
+    jitterMps: between(rng, 1, 3),
+    priority: pick(rng, [0.5, 1, 1, 2]),
+    estimated: [],
+    source: `random ${id}`,
   };
 }
 
@@ -74,8 +86,7 @@ function timeModel(rng: Rng, window: { start: string; end: string }, nights: num
 /** The index-th random campaign (same index, same campaign). */
 export function randomCampaign(index: number): Campaign {
   const rng = createRng(7_200_000 + index);
-  const siteFile =
-    index % 10 === 9 ? MASKED_SITE : path.join(SITES_DIR, `${pick(rng, index % 2 === 0 ? SOUTH : NORTH)}.json`);
+  const siteFile = index % 10 === 9 ? MASKED_SITE : path.join(SITES_DIR, `${pick(rng, index % 2 === 0 ? SOUTH : NORTH)}.json`);
   const site = readSite(siteFile);
   const instrument = readInstrument(path.join(INSTRUMENTS_DIR, `${pick(rng, INSTRUMENTS)}.json`));
   const nights = whole(rng, 5, 30);
@@ -95,7 +106,16 @@ export function randomCampaign(index: number): Campaign {
     // One in four later rows is a second planet of the star before it (at most two per star): the same star fields, its own orbit.
     const previous = targets[k - 1];
     const single = previous !== undefined && targets.filter((t) => t.starId === previous.starId).length === 1;
-    if (previous && single && previous.ephemeris && target.ephemeris && rng.uniform() < 0.25) targets.push({ ...previous, id, starId: previous.starId, ephemeris: target.ephemeris, planet: target.planet!, search: undefined, source: `random ${id}` } as Target);
+    if (previous && single && previous.ephemeris && target.ephemeris && rng.uniform() < 0.25)
+      targets.push({
+        ...previous,
+        id,
+        starId: previous.starId,
+        ephemeris: target.ephemeris,
+        planet: target.planet!,
+        search: undefined,
+        source: `random ${id}`,
+      } as Target);
     else targets.push(target);
   }
   return {

@@ -22,7 +22,9 @@ export function describeRandomPlans(first: number): void {
 
   // Ten plans take up to 15 s on one core; the default hook limit is too tight on a loaded machine.
   beforeAll(() => {
-    names.forEach((name, i) => plans.set(name, buildPlan(randomCampaign(first + i), { weatherTrials: WEATHER_TRIALS })));
+    names.forEach((name, i) => {
+      plans.set(name, buildPlan(randomCampaign(first + i), { weatherTrials: WEATHER_TRIALS }));
+    });
   }, 600_000);
 
   describe('the sample', () => {

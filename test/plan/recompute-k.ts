@@ -63,7 +63,12 @@ export function kOverSigmaKFromCsv(plan: Plan, summary: TargetSummary, visits: C
   if (mine.length === 0) return 0;
   const variance = denseKVariances(
     model,
-    mine.map((v) => ({ bjdTdb: v.midBjdTdb, whiteSigmaMps: v.whiteSigmaMps, night: nightPos.get(v.localDate)!, nightBjdTdb: nightMiddleJd(plan.nights[nightPos.get(v.localDate)!]) })),
+    mine.map((v) => ({
+      bjdTdb: v.midBjdTdb,
+      whiteSigmaMps: v.whiteSigmaMps,
+      night: nightPos.get(v.localDate)!,
+      nightBjdTdb: nightMiddleJd(plan.nights[nightPos.get(v.localDate)!]),
+    })),
   )[model.planets.findIndex((p) => p.input.id === summary.targetId)]!;
   return variance === Infinity ? 0 : summary.kMps! / Math.sqrt(variance);
 }

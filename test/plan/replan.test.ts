@@ -30,7 +30,8 @@ function replanCase(before: Plan, withLostBefore: boolean): Case {
   const after = buildPlan(campaign, { now, previous: before, weatherTrials: WEATHER_TRIALS });
   const early = before.plannedDates.find((d) => before.visits.some((v) => v.localDate === d && Date.parse(v.startUtc) < now.getTime() - 86_400_000));
   const out: Case = { before, after, now, ...(lost ? { lost } : {}) };
-  if (early && withLostBefore) out.lostBefore = { plan: buildPlan({ ...before.campaign, lostDates: [early] }, { now, previous: before, weatherTrials: WEATHER_TRIALS }), date: early };
+  if (early && withLostBefore)
+    out.lostBefore = { plan: buildPlan({ ...before.campaign, lostDates: [early] }, { now, previous: before, weatherTrials: WEATHER_TRIALS }), date: early };
   return out;
 }
 
@@ -63,7 +64,11 @@ describe('re-planning with --now', () => {
   it('a lost night after now holds no visit; one before now loses only its own visits', () => {
     for (const name of names) {
       const c = cases.get(name)!;
-      if (c.lost) expect(c.after.visits.filter((v) => v.localDate === c.lost), name).toEqual([]);
+      if (c.lost)
+        expect(
+          c.after.visits.filter((v) => v.localDate === c.lost),
+          name,
+        ).toEqual([]);
       if (!c.lostBefore) continue;
       const past = (p: Plan) => p.visits.filter((v) => Date.parse(v.startUtc) < c.now.getTime()).map(key);
       const expected = c.before.visits.filter((v) => Date.parse(v.startUtc) < c.now.getTime() && v.localDate !== c.lostBefore!.date).map(key);

@@ -37,7 +37,13 @@ const fromQuadrature = (phase: number) => {
 function trial(rng: Rng, fitted: boolean): number {
   const tcCatalogue = BJD0 - 20 * PERIOD_DAYS;
   const tcTrue = tcCatalogue + 2 * TC_ERR_DAYS * (rng.uniform() < 0.5 ? 1 : -1);
-  const orbit = { kMps: K_MPS, periodDays: PERIOD_DAYS, ecc: 0, omegaDeg: 90, periastronBjdTdb: periastronFromConjunctionBjdTdb({ tcBjdTdb: tcTrue, periodDays: PERIOD_DAYS, ecc: 0, omegaDeg: 90 }) };
+  const orbit = {
+    kMps: K_MPS,
+    periodDays: PERIOD_DAYS,
+    ecc: 0,
+    omegaDeg: 90,
+    periastronBjdTdb: periastronFromConjunctionBjdTdb({ tcBjdTdb: tcTrue, periodDays: PERIOD_DAYS, ecc: 0, omegaDeg: 90 }),
+  };
   // One visit on each of the first week's nights at a random time of its window.
   const points: FitPoint[] = Array.from({ length: FIRST_WEEK }, (_, n) => {
     const bjd = BJD0 + n + 0.05 + 0.33 * rng.uniform();
@@ -53,11 +59,33 @@ function trial(rng: Rng, fitted: boolean): number {
   });
   const slots: CandidateSlot[] = [];
   for (let n = FIRST_WEEK; n < NIGHTS; n++) {
-    nightSlots(n).forEach(({ midBjdTdb }, k) => slots.push({ slotId: `${n}/${k}`, targetId: 'S', nightIndex: n, startMs: (midBjdTdb - 2440587.5) * 86_400_000, durationSec: 900, whiteSigmaMps: SIGMA_MPS, midBjdTdb }));
+    nightSlots(n).forEach(({ midBjdTdb }, k) => {
+      slots.push({
+        slotId: `${n}/${k}`,
+        targetId: 'S',
+        nightIndex: n,
+        startMs: (midBjdTdb - 2440587.5) * 86_400_000,
+        durationSec: 900,
+        whiteSigmaMps: SIGMA_MPS,
+        midBjdTdb,
+      });
+    });
   }
-  const prior: PriorVisit[] = points.map((p, n) => ({ targetId: 'S', localDate: `week1-${n}`, midBjdTdb: p.bjdTdb, whiteSigmaMps: SIGMA_MPS, ...(fitted ? { phaseInPrior: true } : {}) }));
+  const prior: PriorVisit[] = points.map((p, n) => ({
+    targetId: 'S',
+    localDate: `week1-${n}`,
+    midBjdTdb: p.bjdTdb,
+    whiteSigmaMps: SIGMA_MPS,
+    ...(fitted ? { phaseInPrior: true } : {}),
+  }));
   const problem: ScheduleProblem = {
-    nights: Array.from({ length: NIGHTS - FIRST_WEEK }, (_, i) => ({ index: FIRST_WEEK + i, localDate: `n${FIRST_WEEK + i}`, clearProbability: 1, hoursAvailable: 8, midBjdTdb: BJD0 + FIRST_WEEK + i + 0.2 })),
+    nights: Array.from({ length: NIGHTS - FIRST_WEEK }, (_, i) => ({
+      index: FIRST_WEEK + i,
+      localDate: `n${FIRST_WEEK + i}`,
+      clearProbability: 1,
+      hoursAvailable: 8,
+      midBjdTdb: BJD0 + FIRST_WEEK + i + 0.2,
+    })),
     targets: [{ id: 'S', planets: [{ id: 'b', priority: 1, kMps: eph.kMps, goalSignificance: 50 }], model }],
     slots,
     time: { mode: 'hours', hours: (PLANNED_VISITS * 900) / 3600 + 1e-6 },

@@ -40,7 +40,7 @@ describe('never observable', () => {
   });
 });
 
-describe('phase lost by the window\'s end', () => {
+describe("phase lost by the window's end", () => {
   // Phase error at the window's end (the next local midnight after its last night):
   // sigma_phi = sqrt(sigma_Tc^2 + x^2 sigma_P^2) / P with x = (t - Tc)/P (linear error propagation,
   // common practice), t as a Julian date (JD 2440587.5 = 1970-01-01 0 h UTC, common practice; the
@@ -81,7 +81,7 @@ describe('goal not reached on the demo cut to 7 nights', () => {
       const target = demo.targets.find((x) => x.id === t.targetId)!;
       const exposureSec = demoPlan.visits.find((v) => v.starId === t.starId)!.exposureSec;
       const sigma = visitPrecision(demo.instrument, target, exposureSec, 1.2).effectiveSigmaMps;
-      const n = Math.ceil((t.goalSignificance! * sigma / t.kMps!) ** 2);
+      const n = Math.ceil(((t.goalSignificance! * sigma) / t.kMps!) ** 2);
       expect(t.warnings.join(' ')).toContain(`about ${n} visits at quadratures`);
     }
   });
@@ -90,7 +90,10 @@ describe('goal not reached on the demo cut to 7 nights', () => {
 describe('a window without darkness', () => {
   it('78 deg N in June: no dark span on any night, no visit, and both plan-wide warnings', () => {
     const dir = mkdtempSync(path.join(tmpdir(), 'crest-arctic-'));
-    writeFileSync(path.join(dir, 'targets.csv'), 'id,ra,dec,vmag,teffK,periodDays,tcBjdTdb,planetMsiniEarth\nNorda-1,18:00:00,+60:00:00,9,5200,4.2,2461500.3,20\n');
+    writeFileSync(
+      path.join(dir, 'targets.csv'),
+      'id,ra,dec,vmag,teffK,periodDays,tcBjdTdb,planetMsiniEarth\nNorda-1,18:00:00,+60:00:00,9,5200,4.2,2461500.3,20\n',
+    );
     writeFileSync(
       path.join(dir, 'campaign.yaml'),
       `name: Arctic\nsite: ${path.resolve('test/fixtures/sites/high-arctic.json')}\ninstrument: stable-2m\ntargets: targets.csv\nwindow: { start: 2027-06-15, end: 2027-06-18 }\ntime: { mode: choose-nights, nights: 2 }\n`,

@@ -1,12 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import {
-  detectionProbabilityKnownPhase,
-  massLimitTable,
-  MIN_VISITS,
-  periodGridDays,
-  sigmaKMps,
-  visitsNeeded,
-} from '../../src/rv/detect.js';
+import { detectionProbabilityKnownPhase, massLimitTable, MIN_VISITS, periodGridDays, sigmaKMps, visitsNeeded } from '../../src/rv/detect.js';
 import { erfc, normalCdf } from '../../src/rv/normal-cdf.js';
 import { createRng } from '../../src/rv/random.js';
 import { semiAmplitudeMps } from '../../src/orbit/semi-amplitude.js';
@@ -21,7 +14,11 @@ describe('least-squares identities for K (docs/references.md [Visits-needed]; co
     for (const n of [2, 10, 36]) {
       const phases = Array.from({ length: n }, (_, i) => (i % 2 === 0 ? 0.25 : 0.75));
       const s = phases.map(shape);
-      const { varK } = fitK(s, s.map(() => 0), sigma);
+      const { varK } = fitK(
+        s,
+        s.map(() => 0),
+        sigma,
+      );
       expect(varK).toBeCloseTo((sigma * sigma) / n, 12);
       expect(sigmaKMps(sigma, n, 'quadrature') ** 2).toBeCloseTo(varK, 12);
     }
@@ -32,7 +29,13 @@ describe('least-squares identities for K (docs/references.md [Visits-needed]; co
     for (let trial = 0; trial < 50; trial++) {
       const n = 3 + Math.floor(rng.uniform() * 30);
       const s = Array.from({ length: n }, () => shape(rng.uniform()));
-      expect(fitK(s, s.map(() => 0), 1).varK).toBeGreaterThanOrEqual(1 / n - 1e-12);
+      expect(
+        fitK(
+          s,
+          s.map(() => 0),
+          1,
+        ).varK,
+      ).toBeGreaterThanOrEqual(1 / n - 1e-12);
     }
   });
 
@@ -42,18 +45,32 @@ describe('least-squares identities for K (docs/references.md [Visits-needed]; co
     // The spread of N·Var(K̂)/(2σ²) about 1 shrinks as 1/√N: Var(sin²) = 1/8, so its 1-σ is ≈ √(1/(2N)).
     for (const n of [400, 4000, 20000]) {
       const s = Array.from({ length: n }, () => shape(rng.uniform()));
-      const ratio = fitK(s, s.map(() => 0), sigma).varK / sigmaKMps(sigma, n, 'random') ** 2;
+      const ratio =
+        fitK(
+          s,
+          s.map(() => 0),
+          sigma,
+        ).varK /
+        sigmaKMps(sigma, n, 'random') ** 2;
       expect(Math.abs(ratio - 1)).toBeLessThan(4 * Math.sqrt(1 / (2 * n)));
     }
   });
 
   it('N = 2(nσ/K)² + 1 at random phases (E Σ(s − s̄)² = (N − 1)/2) and (nσ/K)² at quadratures, the fewest reaching K/σ_K = n', () => {
-    for (const [k, sigma, n] of [[3, 2.5, 5], [1, 2.2, 3], [10, 1.5, 5], [0.8, 1.1, 7]] as const) {
+    for (const [k, sigma, n] of [
+      [3, 2.5, 5],
+      [1, 2.2, 3],
+      [10, 1.5, 5],
+      [0.8, 1.1, 7],
+    ] as const) {
       const random = visitsNeeded(k, sigma, n, 'random');
       const quad = visitsNeeded(k, sigma, n, 'quadrature');
       expect(random).toBe(Math.max(MIN_VISITS, Math.ceil(2 * ((n * sigma) / k) ** 2 + 1)));
       expect(quad).toBe(Math.max(MIN_VISITS, Math.ceil(((n * sigma) / k) ** 2)));
-      for (const [layout, visits] of [['random', random], ['quadrature', quad]] as const) {
+      for (const [layout, visits] of [
+        ['random', random],
+        ['quadrature', quad],
+      ] as const) {
         expect(k / sigmaKMps(sigma, visits, layout)).toBeGreaterThanOrEqual(n - 1e-9);
         if (visits > MIN_VISITS) expect(k / sigmaKMps(sigma, visits - 1, layout)).toBeLessThan(n);
       }
@@ -87,7 +104,13 @@ describe('Monte Carlo (seeded): simulated fits at the computed N', () => {
     const n = 3;
     // One fixed design; σ_K is that design's exact least-squares value.
     const s = Array.from({ length: visits }, () => shape(rng.uniform()));
-    const sigmaK = Math.sqrt(fitK(s, s.map(() => 0), sigma).varK);
+    const sigmaK = Math.sqrt(
+      fitK(
+        s,
+        s.map(() => 0),
+        sigma,
+      ).varK,
+    );
     const trials = 4000;
     for (const offset of [-1, 0, 0.5, 1.5]) {
       const k = (n + offset) * sigmaK;
@@ -136,7 +159,7 @@ describe('mass limits', () => {
     const rows = massLimitTable({ starMassSun: 0.8, whiteSigmaMps: 2.2, visits: 40, goalSignificance: 5, periodsDays: [1, 20, 700], ecc: 0.3 });
     for (const row of rows) {
       expect(row.kMinRandomMps).toBeCloseTo(5 * 2.2 * Math.sqrt(2 / 39), 12);
-      expect(row.kMinQuadratureMps).toBeCloseTo(5 * 2.2 / Math.sqrt(40), 12);
+      expect(row.kMinQuadratureMps).toBeCloseTo((5 * 2.2) / Math.sqrt(40), 12);
       const k = semiAmplitudeMps({ starMassSun: 0.8, planetMassEarth: row.massMinRandomEarth, periodDays: row.periodDays, ecc: 0.3 });
       expect(k).toBeCloseTo(row.kMinRandomMps, 9);
       // Quadratures need √((N − 1)/(2N)) of the K, hence (nearly) that fraction of the mass for small planets.

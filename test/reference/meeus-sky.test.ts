@@ -23,7 +23,14 @@ describe('Meeus 13.b: Venus from Washington, 1987 April 10, 19:21:00 UT', () => 
     const date = new Date('1987-04-10T19:21:00Z');
     const raDeg = dms(23, 9, 16.641) * 15;
     const decDeg = -dms(6, 43, 11.61);
-    const p: PreparedPosition = { raDeg, decDeg, sinDec: Math.sin(decDeg * DEG), cosDec: Math.cos(decDeg * DEG), vector: [0, 0, 1], clock: siteClock(site, date) };
+    const p: PreparedPosition = {
+      raDeg,
+      decDeg,
+      sinDec: Math.sin(decDeg * DEG),
+      cosDec: Math.cos(decDeg * DEG),
+      vector: [0, 0, 1],
+      clock: siteClock(site, date),
+    };
     // Tolerance 0.001 deg: Meeus quotes four decimals; his sidereal time and astronomy-engine's agree to ~0.01 s.
     expect(geometricAltitudeDeg(p, date)).toBeCloseTo(15.1249, 3);
     expect(azimuthDeg(p, date)).toBeCloseTo(68.0337 + 180, 3);

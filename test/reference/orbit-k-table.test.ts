@@ -42,7 +42,11 @@ describe('K table from the IAU 2015 nominal constants', () => {
   it('agrees with the three-figure entries to three significant figures', () => {
     // Lovis & Fischer 2010, Table 1, from memory: 89.9, 28.4, 12.7 m/s for a Jupiter mass at 0.1, 1, 5 au.
     const k = (aAu: number) =>
-      semiAmplitudeMps({ starMassSun: 1, planetMassEarth: EARTH_PER_JUPITER, periodDays: periodDaysFromAu({ starMassSun: 1, planetMassEarth: EARTH_PER_JUPITER, semiMajorAxisAu: aAu }) });
+      semiAmplitudeMps({
+        starMassSun: 1,
+        planetMassEarth: EARTH_PER_JUPITER,
+        periodDays: periodDaysFromAu({ starMassSun: 1, planetMassEarth: EARTH_PER_JUPITER, semiMajorAxisAu: aAu }),
+      });
     expect([0.1, 1, 5].map((a) => k(a).toPrecision(3))).toEqual(['89.9', '28.4', '12.7']);
   });
 
@@ -57,7 +61,7 @@ describe('K table from the IAU 2015 nominal constants', () => {
     // for a Jupiter mass on a one-year orbit; its constant was derived with slightly different mass
     // values, hence 1e-4.
     const kMps = semiAmplitudeMps({ starMassSun: 1, planetMassEarth: EARTH_PER_JUPITER, periodDays: JULIAN_YEAR_DAYS });
-    const handy = 28.4329 * Math.pow(1 + EARTH_PER_JUPITER / EARTH_PER_SUN, -2 / 3);
+    const handy = 28.4329 * (1 + EARTH_PER_JUPITER / EARTH_PER_SUN) ** (-2 / 3);
     expect(Math.abs(kMps / handy - 1)).toBeLessThan(1e-4);
   });
 

@@ -67,7 +67,8 @@ describe('classes estimated from a published efficiency and the 1 m/s class (an 
   it.each(['compact-1m', 'stable-2m'])('%s: its reference point within 20% of the S/N and sigma this gives', (id) => {
     const b = load(id);
     const ref = b.reference;
-    const couplingOnly = electronsPerPixel(b, ref.mag, ref.exposureSec, ref.airmass, ref.seeingArcsec, 1) / electronsPerPixel(b, ref.mag, ref.exposureSec, ref.airmass, 1e-6, 1);
+    const couplingOnly =
+      electronsPerPixel(b, ref.mag, ref.exposureSec, ref.airmass, ref.seeingArcsec, 1) / electronsPerPixel(b, ref.mag, ref.exposureSec, ref.airmass, 1e-6, 1);
     expect(couplingOnly).toBeGreaterThan(0.5); // the fibre takes most of the light at this seeing
     const electrons = electronsPerPixel(b, ref.mag, ref.exposureSec, ref.airmass, ref.seeingArcsec, 0.06 / couplingOnly);
     const snr = electrons / Math.sqrt(electrons + readVariance(b));
@@ -94,17 +95,35 @@ describe('photon-noise scaling laws: σ ∝ 10^(0.2 m) t^(-1/2) D^(-1) in the ph
 
   it('fitted exponents over bright grids: 0.2 in magnitude, -1/2 in exposure, -1 in aperture', () => {
     const mags = grid(3, 7, 9);
-    expect(slope(mags, mags.map((m) => log(photonNoise(stable4m, { ...g2, vmag: m }, 300, 1.2).photonSigmaMps)))).toBeCloseTo(0.2, 2);
+    expect(
+      slope(
+        mags,
+        mags.map((m) => log(photonNoise(stable4m, { ...g2, vmag: m }, 300, 1.2).photonSigmaMps)),
+      ),
+    ).toBeCloseTo(0.2, 2);
     const times = grid(60, 900, 9);
-    expect(slope(times.map(log), times.map((t) => log(photonNoise(stable4m, g2, t, 1.2).photonSigmaMps)))).toBeCloseTo(-0.5, 2);
+    expect(
+      slope(
+        times.map(log),
+        times.map((t) => log(photonNoise(stable4m, g2, t, 1.2).photonSigmaMps)),
+      ),
+    ).toBeCloseTo(-0.5, 2);
     const apertures = grid(2, 8, 7);
-    expect(slope(apertures.map(log), apertures.map((d) => log(photonNoise(stable4m, g2, 300, 1.2, { apertureM: d }).photonSigmaMps)))).toBeCloseTo(-1, 2);
+    expect(
+      slope(
+        apertures.map(log),
+        apertures.map((d) => log(photonNoise(stable4m, g2, 300, 1.2, { apertureM: d }).photonSigmaMps)),
+      ),
+    ).toBeCloseTo(-1, 2);
   });
 
   it('read noise and sky take over at the faint end: the slope in magnitude rises well above 0.2 (1 m class, 900 s)', () => {
     const compact = load('compact-1m');
     const faint = grid(15, 17, 5);
-    const s = slope(faint, faint.map((m) => log(photonNoise(compact, { ...g2, vmag: m }, 900, 1.2).photonSigmaMps)));
+    const s = slope(
+      faint,
+      faint.map((m) => log(photonNoise(compact, { ...g2, vmag: m }, 900, 1.2).photonSigmaMps)),
+    );
     expect(s).toBeGreaterThan(0.3);
     expect(photonNoise(compact, { ...g2, vmag: 14 }, 900, 1.2).factors.detector).toBeGreaterThan(1.3);
   });
@@ -129,7 +148,11 @@ describe('airmass: extinction at the instrument wavelength and entrance losses w
       }
       return inside / total;
     };
-    for (const [d, fwhm] of [[1, 1], [1, 1.6], [2.58, 1.5]] as const) {
+    for (const [d, fwhm] of [
+      [1, 1],
+      [1, 1.6],
+      [2.58, 1.5],
+    ] as const) {
       expect(entranceCoupling({ kind: 'fibre', diameterArcsec: d }, fwhm)).toBeCloseTo(numeric(d, fwhm), 2);
     }
     expect(seeingAtAirmassArcsec(1, 2)).toBeCloseTo(2 ** 0.6, 12);
@@ -165,7 +188,12 @@ describe('line width from the resolving power', () => {
     }
     return sum;
   };
-  it.each([[0, 2, 5], [10, 2, 5], [30, 2, 7.9], [5, 5, 3]])('factor against the Gaussian-line integral: v sin i = %s vs %s km/s, w0 = %s km/s', (vsini, vsiniRef, w0) => {
+  it.each([
+    [0, 2, 5],
+    [10, 2, 5],
+    [30, 2, 7.9],
+    [5, 5, 3],
+  ])('factor against the Gaussian-line integral: v sin i = %s vs %s km/s, w0 = %s km/s', (vsini, vsiniRef, w0) => {
     const width = (v: number) => Math.hypot(w0, v);
     expect(lineWidthFactor(vsini, vsiniRef, w0)).toBeCloseTo(Math.sqrt(information(width(vsiniRef)) / information(width(vsini))), 6);
   });
@@ -194,7 +222,11 @@ describe('spectral type: the RV-information table ([ReinersZechmeister2020] shap
   });
 
   it('an instrument table overrides the built-in one, normalised at the reference Teff', () => {
-    const table: [number, number][] = [[4000, 0.8], [5300, 1.6], [6500, 3.2]];
+    const table: [number, number][] = [
+      [4000, 0.8],
+      [5300, 1.6],
+      [6500, 3.2],
+    ];
     const { factor, source } = teffFactor(5900, 5300, 'optical', table);
     expect(factor).toBeCloseTo(2.4 / 1.6, 12); // linear interpolation
     expect(source).toBe('instrument profile teffFactors');

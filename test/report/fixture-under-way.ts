@@ -51,14 +51,22 @@ export const MIRADOR_RVS: [number, string, string, number][] = [
 ];
 
 // A circular orbit: v = −K sin 2π(t − Tc)/P (src/orbit/signal-shape.ts for e = 0).
-const circular = (k: number, eph: { tcBjdTdb: number; periodDays: number }, bjd: number) => -k * Math.sin((2 * Math.PI * (bjd - eph.tcBjdTdb)) / eph.periodDays);
+const circular = (k: number, eph: { tcBjdTdb: number; periodDays: number }, bjd: number) =>
+  -k * Math.sin((2 * Math.PI * (bjd - eph.tcBjdTdb)) / eph.periodDays);
 
 function observed(starId: string, signal: (bjd: number) => number) {
   return ([bjd, localDate, instrument, rvErrorMps]: [number, string, string, number], i: number): ObservedVisit => ({
-    targetId: starId, starId, midBjdTdb: bjd, midUtc: new Date((bjd - 2440587.5) * 86_400_000).toISOString(), localDate, instrument,
+    targetId: starId,
+    starId,
+    midBjdTdb: bjd,
+    midUtc: new Date((bjd - 2440587.5) * 86_400_000).toISOString(),
+    localDate,
+    instrument,
     // The fixture's exact data: offset plus the star's planets, no noise.
-    rvMps: GAMMA[instrument]! + signal(bjd), rvErrorMps,
-    whiteSigmaMps: Math.hypot(rvErrorMps, 1.5 * Math.SQRT1_2), source: `fixture ${starId} row ${i + 1}`,
+    rvMps: GAMMA[instrument]! + signal(bjd),
+    rvErrorMps,
+    whiteSigmaMps: Math.hypot(rvErrorMps, 1.5 * Math.SQRT1_2),
+    source: `fixture ${starId} row ${i + 1}`,
   });
 }
 
@@ -76,17 +84,26 @@ export function underWayPlan(): Plan {
       ...plan.campaign,
       targets: [
         ...plan.campaign.targets.map((t) =>
-          t.id === 'Teyu-3' ? { ...t, ephemeris: { ...t.ephemeris!, tcBjdTdb: fit.tcBjdTdb, tcErrDays: fit.tcErrDays, periodDays: fit.periodDays, periodErrDays: fit.periodErrDays }, planet: { ...t.planet!, kMps: fit.kMps } } : t,
+          t.id === 'Teyu-3'
+            ? {
+                ...t,
+                ephemeris: { ...t.ephemeris!, tcBjdTdb: fit.tcBjdTdb, tcErrDays: fit.tcErrDays, periodDays: fit.periodDays, periodErrDays: fit.periodErrDays },
+                planet: { ...t.planet!, kMps: fit.kMps },
+              }
+            : t,
         ),
         MIRADOR_C,
       ],
     },
-    targets: [...plan.targets.map((s) =>
-      s.targetId === 'Teyu-3'
-        ? { ...s, kMps: fit.kMps, fit, priorVisits: 4, priorKOverSigmaK: 1.1 }
-        : s.targetId === 'Alba'
-          ? { ...s, peak: { periodDays: 5.43, kMps: 2.8, fap: 0.0004, significant: true } }
-          : s,
-    ), { targetId: MIRADOR_C.id, starId: 'Mirador-7', kind: 'ephemeris', priority: 1, kMps: 4.2, visits: 0, hours: 0, warnings: [] }],
+    targets: [
+      ...plan.targets.map((s) =>
+        s.targetId === 'Teyu-3'
+          ? { ...s, kMps: fit.kMps, fit, priorVisits: 4, priorKOverSigmaK: 1.1 }
+          : s.targetId === 'Alba'
+            ? { ...s, peak: { periodDays: 5.43, kMps: 2.8, fap: 0.0004, significant: true } }
+            : s,
+      ),
+      { targetId: MIRADOR_C.id, starId: 'Mirador-7', kind: 'ephemeris', priority: 1, kMps: 4.2, visits: 0, hours: 0, warnings: [] },
+    ],
   };
 }

@@ -49,8 +49,22 @@ const instrument: Instrument = {
 
 function target(id: string, raDeg: number, decDeg: number, vmag: number, extra: Partial<Target>): Target {
   return {
-    id, starId: id, raDeg, decDeg, pmRaMasYr: 0, pmDecMasYr: 0, epochYear: 2000, vmag, teffK: 5300, massSun: 0.9,
-    vsiniKms: 2, jitterMps: 1.5, priority: 1, estimated: [], source: `fixture ${id}`, ...extra,
+    id,
+    starId: id,
+    raDeg,
+    decDeg,
+    pmRaMasYr: 0,
+    pmDecMasYr: 0,
+    epochYear: 2000,
+    vmag,
+    teffK: 5300,
+    massSun: 0.9,
+    vsiniKms: 2,
+    jitterMps: 1.5,
+    priority: 1,
+    estimated: [],
+    source: `fixture ${id}`,
+    ...extra,
   };
 }
 
@@ -60,7 +74,8 @@ export const TARGETS: Target[] = [
     planet: { msiniEarth: 14, ecc: 0, omegaDeg: 90 },
   }),
   target('Mirador-7', 185.2, -22.4, 9.4, {
-    massSun: 1.02, teffK: 5800,
+    massSun: 1.02,
+    teffK: 5800,
     ephemeris: { periodDays: 8.7032, periodErrDays: 0.004, tcBjdTdb: 2461472.905, tcErrDays: 0.004 },
     planet: { msiniEarth: 30, ecc: 0, omegaDeg: 90 },
   }),
@@ -119,8 +134,17 @@ function visit(starId: string, start: Date, exposureSec: number, airmass: number
   const local = new Date(start.getTime() - 4 * 3.6e6).toISOString().replace('Z', '-04:00');
   const phases = t.ephemeris ? [{ targetId: starId, phase: phaseAt(t.ephemeris, midBjdTdb), phaseErr: phaseErrCycles(t.ephemeris, midBjdTdb) }] : [];
   return {
-    starId, localDate, startUtc: start.toISOString(), startLocal: local, midBjdTdb, exposureSec,
-    durationSec: exposureSec + 150, airmass, moonSeparationDeg: 60, phases, visitSigmaMps,
+    starId,
+    localDate,
+    startUtc: start.toISOString(),
+    startLocal: local,
+    midBjdTdb,
+    exposureSec,
+    durationSec: exposureSec + 150,
+    airmass,
+    moonSeparationDeg: 60,
+    phases,
+    visitSigmaMps,
     effectiveSigmaMps: Math.hypot(visitSigmaMps, t.jitterMps),
     whiteSigmaMps: Math.hypot(visitSigmaMps, t.jitterMps * Math.SQRT1_2),
     snrPerPixel: 100 / visitSigmaMps,
@@ -145,9 +169,52 @@ const hours = (id: string) => VISITS.filter((v) => v.starId === id).reduce((s, v
 const count = (id: string) => VISITS.filter((v) => v.starId === id).length;
 
 export const SUMMARIES: TargetSummary[] = [
-  { targetId: 'Teyu-3', starId: 'Teyu-3', kind: 'ephemeris', priority: 1, kMps: 5.9, visits: count('Teyu-3'), hours: hours('Teyu-3'), sigmaKMps: 4.5, kOverSigmaK: 1.3, goalSignificance: 5, goalProbability: 0.0, informationEfficiency: 0.1, phaseErrAtEnd: 0.0009, warnings: [] },
-  { targetId: 'Mirador-7', starId: 'Mirador-7', kind: 'ephemeris', priority: 1, kMps: 8.5, visits: count('Mirador-7'), hours: hours('Mirador-7'), sigmaKMps: 2.0, kOverSigmaK: 4.2, goalSignificance: 5, goalProbability: 0.2, informationEfficiency: 0.55, phaseErrAtEnd: 0.002, warnings: [] },
-  { targetId: 'Alba', starId: 'Alba', kind: 'search', priority: 1, kMps: 3.1, visits: count('Alba'), hours: hours('Alba'), sigmaKMps: 1.2, kOverSigmaK: 2.6, goalSignificance: 5, goalProbability: 0.05, warnings: [] },
+  {
+    targetId: 'Teyu-3',
+    starId: 'Teyu-3',
+    kind: 'ephemeris',
+    priority: 1,
+    kMps: 5.9,
+    visits: count('Teyu-3'),
+    hours: hours('Teyu-3'),
+    sigmaKMps: 4.5,
+    kOverSigmaK: 1.3,
+    goalSignificance: 5,
+    goalProbability: 0.0,
+    informationEfficiency: 0.1,
+    phaseErrAtEnd: 0.0009,
+    warnings: [],
+  },
+  {
+    targetId: 'Mirador-7',
+    starId: 'Mirador-7',
+    kind: 'ephemeris',
+    priority: 1,
+    kMps: 8.5,
+    visits: count('Mirador-7'),
+    hours: hours('Mirador-7'),
+    sigmaKMps: 2.0,
+    kOverSigmaK: 4.2,
+    goalSignificance: 5,
+    goalProbability: 0.2,
+    informationEfficiency: 0.55,
+    phaseErrAtEnd: 0.002,
+    warnings: [],
+  },
+  {
+    targetId: 'Alba',
+    starId: 'Alba',
+    kind: 'search',
+    priority: 1,
+    kMps: 3.1,
+    visits: count('Alba'),
+    hours: hours('Alba'),
+    sigmaKMps: 1.2,
+    kOverSigmaK: 2.6,
+    goalSignificance: 5,
+    goalProbability: 0.05,
+    warnings: [],
+  },
   { targetId: 'Quena-2', starId: 'Quena-2', kind: 'monitor', priority: 0.5, visits: 0, hours: 0, warnings: ['never observable in the window'] },
 ];
 

@@ -9,7 +9,13 @@ describe('jsonChunks', () => {
     fn: () => 1,
     empty: [],
     none: {},
-    targets: Array.from({ length: 300 }, (_, i) => ({ id: `Star-${i}`, k: i / 7, tags: ['a', i], nested: { deep: { deeper: [i, null, undefined] } }, gone: undefined })),
+    targets: Array.from({ length: 300 }, (_, i) => ({
+      id: `Star-${i}`,
+      k: i / 7,
+      tags: ['a', i],
+      nested: { deep: { deeper: [i, null, undefined] } },
+      gone: undefined,
+    })),
     list: [undefined, 1, 'two', null, { a: [] }],
   };
 

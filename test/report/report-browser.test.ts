@@ -12,9 +12,7 @@ import { fixturePlan } from './fixture.js';
 
 const CHROMIUM = '/usr/bin/chromium';
 const skip = !existsSync(CHROMIUM) && !process.env.CI;
-const title = skip
-  ? `report in a browser (SKIPPED: ${CHROMIUM} is missing; install it with: apt-get install -y chromium)`
-  : 'report in a browser';
+const title = skip ? `report in a browser (SKIPPED: ${CHROMIUM} is missing; install it with: apt-get install -y chromium)` : 'report in a browser';
 
 describe.skipIf(skip)(title, () => {
   let context: BrowserContext;
@@ -29,8 +27,14 @@ describe.skipIf(skip)(title, () => {
       headless: true,
       viewport: { width: 1100, height: 900 },
       args: [
-        '--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run',
-        '--disable-background-networking', '--disable-component-update', '--disable-sync',
+        '--headless',
+        '--no-sandbox',
+        '--disable-gpu',
+        '--disable-quic',
+        '--no-first-run',
+        '--disable-background-networking',
+        '--disable-component-update',
+        '--disable-sync',
       ],
     });
   });

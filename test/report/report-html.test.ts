@@ -109,11 +109,15 @@ describe('numbers recomputed from the visits', () => {
    * phase errors are below 0.003 cycles, so the expected information differs from this by < 0.1%.
    */
   function referenceKOverSigmaK(kMps: number, n: number, targetId: string): number {
-    let sw = 0, sws = 0, swss = 0;
+    let sw = 0,
+      sws = 0,
+      swss = 0;
     for (const v of visitsOf(targetId).slice(0, n)) {
       const w = 1 / v.effectiveSigmaMps ** 2;
       const s = -Math.sin(2 * Math.PI * v.phases[0]!.phase);
-      sw += w; sws += w * s; swss += w * s * s;
+      sw += w;
+      sws += w * s;
+      swss += w * s * s;
     }
     const det = sw * swss - sws * sws;
     return det > 0 ? kMps / Math.sqrt(sw / det) : 0;
@@ -129,7 +133,9 @@ describe('numbers recomputed from the visits', () => {
       expect(markCount(charts[i]!.html, 'k_growth_points')).toBe(t.visits);
       expect(markCount(charts[i]!.html, 'goal_line')).toBe(1);
       const values = rows.map((r) => Number(r[2]));
-      values.forEach((value, j) => expect(value).toBeCloseTo(referenceKOverSigmaK(t.kMps!, j + 1, t.targetId), 1));
+      values.forEach((value, j) => {
+        expect(value).toBeCloseTo(referenceKOverSigmaK(t.kMps!, j + 1, t.targetId), 1);
+      });
       for (let j = 1; j < values.length; j++) expect(values[j]!).toBeGreaterThanOrEqual(values[j - 1]!);
     }
   });
@@ -145,7 +151,12 @@ describe('numbers recomputed from the visits', () => {
   it('the calendar table lists planned and backup nights with their visits', () => {
     const rows = tableRows(figures(page, 'calendar')[0]!.html);
     expect(rows.filter((r) => r[1] === 'planned').map((r) => r[0])).toEqual([...plan.plannedDates].sort());
-    expect(rows.filter((r) => r[1]!.startsWith('backup')).map((r) => r[0]).sort()).toEqual(plan.backups.map((b) => b.localDate).sort());
+    expect(
+      rows
+        .filter((r) => r[1]!.startsWith('backup'))
+        .map((r) => r[0])
+        .sort(),
+    ).toEqual(plan.backups.map((b) => b.localDate).sort());
     const listed = rows.flatMap((r) => (r[3] === '-' ? [] : r[3]!.split(', ')));
     expect(listed).toHaveLength(plan.visits.length);
   });

@@ -68,7 +68,9 @@ describe('measured RVs on the folded curve', () => {
     const group = html.slice(start, html.indexOf('</g>', start));
     const xs = [...group.matchAll(/translate\(([-\d.]+),/g)].map((m) => Number(m[1]));
     expect(xs.sort((a, b) => a - b)).toEqual(
-      TEYU_RVS.map(([bjd]) => handPhase(bjd) * 380).sort((a, b) => a - b).map((x) => expect.closeTo(x, 0)),
+      TEYU_RVS.map(([bjd]) => handPhase(bjd) * 380)
+        .sort((a, b) => a - b)
+        .map((x) => expect.closeTo(x, 0)),
     );
   });
 
@@ -103,7 +105,9 @@ describe('K/σ_K growth and the text once RVs exist', () => {
     // periods on, fitted 2461480.3131 + 10 × 3.2176, catalogue 2461480.3121 + 10 × 3.2174: +0.0030 d
     // = +4.3 min; errors √(0.0015² + (10 × 0.0003)²) = 4.8 min now and √(0.002² + (10 × 0.0004)²)
     // = 6.4 min before, so the shift is 4.3 / 6.4 = 0.67σ of the catalogue.
-    expect(text[0]).toContain('Teyu-3 (4 RVs): K 5.90 -&gt; 6.10 ± 1.20 m/s; transit near the window&#39;s middle +4 min (+0.7σ of the catalogue), now ± 5 min (was ± 6)');
+    expect(text[0]).toContain(
+      'Teyu-3 (4 RVs): K 5.90 -&gt; 6.10 ± 1.20 m/s; transit near the window&#39;s middle +4 min (+0.7σ of the catalogue), now ± 5 min (was ± 6)',
+    );
     expect(text[0]).toContain('P 3.217400 -&gt; 3.217600 ± 3.0e-4 d');
     expect(text[1]).toContain('Alba: candidate signal in the RVs so far, P = 5.430 d, K = 2.80 m/s');
   });

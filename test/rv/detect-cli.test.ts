@@ -26,7 +26,22 @@ describe('crest detect', () => {
   });
 
   it('a hypothetical planet around one star, with mass limits at a planned N (--json)', async () => {
-    const r = await runCliInProcess(['detect', '--instrument', 'stable-4m', '--vmag', '9', '--teff', '4800', '--planet-mass', '10', '--period', '20', '--visits', '40', '--json']);
+    const r = await runCliInProcess([
+      'detect',
+      '--instrument',
+      'stable-4m',
+      '--vmag',
+      '9',
+      '--teff',
+      '4800',
+      '--planet-mass',
+      '10',
+      '--period',
+      '20',
+      '--visits',
+      '40',
+      '--json',
+    ]);
     expect(r.status).toBe(0);
     const [row] = JSON.parse(r.stdout).targets;
     expect(row.planet.source).toBe('hypothetical');

@@ -87,7 +87,8 @@ describe('visits needed and the floor', () => {
     expect(visitsNeeded(0.5, 1, 3, 'quadrature', 0.5)).toBe(Infinity);
     expect(visitsNeeded(0.55, 1, 3, 'random', 0.5)).toBeLessThan(Infinity);
     // At most Φ(n (K/f − 1)), the limit of infinitely many visits.
-    for (const visits of [10, 100, 10_000]) expect(detectionProbability(0.4, 1, visits, 3, 'random', 0.5)).toBeLessThanOrEqual(normalCdf(3 * (0.4 / 0.5 - 1)) + 1e-9);
+    for (const visits of [10, 100, 10_000])
+      expect(detectionProbability(0.4, 1, visits, 3, 'random', 0.5)).toBeLessThanOrEqual(normalCdf(3 * (0.4 / 0.5 - 1)) + 1e-9);
     for (const visits of [10, 100, 10_000]) expect(minimumDetectableKMps(1, visits, 3, 'random', 0.5)).toBeGreaterThan(0.5);
   });
 });

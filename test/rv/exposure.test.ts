@@ -105,7 +105,11 @@ describe('exposure for the fewest hours given K', () => {
   });
 
   it('is within 1% of the best whole-second exposure found by brute force (slow reference)', () => {
-    for (const [vmag, k] of [[11.5, 3], [12.5, 8], [10, 0.6]] as const) {
+    for (const [vmag, k] of [
+      [11.5, 3],
+      [12.5, 8],
+      [10, 0.6],
+    ] as const) {
       const star = { ...kDwarf, vmag };
       const choice = chooseExposureSec(stable4m, star, 1.2, undefined, { kMps: k, goalSignificance: 5 });
       let best = Infinity;
@@ -117,7 +121,8 @@ describe('exposure for the fewest hours given K', () => {
   it('with a cap on visits (one a night over the campaign), the cheapest exposure that fits under it', () => {
     const star = { ...kDwarf, vmag: 11.5 };
     const free = chooseExposureSec(stable4m, star, 1.2, undefined, { kMps: 3, goalSignificance: 5 });
-    const visitsAt = (sec: number) => visitsExact(3, Math.hypot(photonNoise(stable4m, star, sec, 1.2).photonSigmaMps, star.jitterMps), 5, 'random', stable4m.floorMps);
+    const visitsAt = (sec: number) =>
+      visitsExact(3, Math.hypot(photonNoise(stable4m, star, sec, 1.2).photonSigmaMps, star.jitterMps), 5, 'random', stable4m.floorMps);
     const cap = Math.floor(visitsAt(free.exposureSec) / 2);
     const capped = chooseExposureSec(stable4m, star, 1.2, undefined, { kMps: 3, goalSignificance: 5, maxVisits: cap });
     expect(capped.exposureSec).toBeGreaterThan(free.exposureSec);

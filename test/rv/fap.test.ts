@@ -29,7 +29,7 @@ describe('false-alarm probability', () => {
     const { t, sigma } = visits();
     const rng = createRng(21);
     const trials = 2000;
-    const p0 = 1 - Math.pow(0.1, 2 / (t.length - 3)); // the power with a 10% single-frequency tail
+    const p0 = 1 - 0.1 ** (2 / (t.length - 3)); // the power with a 10% single-frequency tail
     expect(fapSingle(p0, t.length)).toBeCloseTo(0.1, 12);
     let above = 0;
     for (let j = 0; j < trials; j++) {
@@ -52,7 +52,8 @@ describe('false-alarm probability', () => {
     const trials = 2000;
     const y = new Float64Array(t.length);
     const power = new Float64Array(grid.count);
-    let over10 = 0, over1 = 0;
+    let over10 = 0,
+      over1 = 0;
     for (let j = 0; j < trials; j++) {
       for (let i = 0; i < t.length; i++) y[i] = sigma[i]! * rng.normal();
       kernel.power(y, power);

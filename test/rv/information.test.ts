@@ -150,7 +150,14 @@ describe('analytic cases', () => {
     // One number cannot separate γ from K.
     expect(kVariances(model, one)[0]).toBe(Infinity);
     const two = buildStarModel({ ...model.input, planets: [model.input.planets[0]!, { ...model.input.planets[0]!, id: 'c', periodDays: 13.1 }] });
-    expect(Array.from(kVariances(two, informationVisits(two, [{ bjdTdb: two.input.spanBjdTdb[0] + 3.3, whiteSigmaMps: 2, night: 3, nightBjdTdb: two.input.spanBjdTdb[0] + 3 }])))).toEqual([Infinity, Infinity]);
+    expect(
+      Array.from(
+        kVariances(
+          two,
+          informationVisits(two, [{ bjdTdb: two.input.spanBjdTdb[0] + 3.3, whiteSigmaMps: 2, night: 3, nightBjdTdb: two.input.spanBjdTdb[0] + 3 }]),
+        ),
+      ),
+    ).toEqual([Infinity, Infinity]);
   });
 
   it('one visit per quadrature, white noise only: Var(K) = σ²/2', () => {
@@ -202,7 +209,7 @@ describe('analytic cases', () => {
     const dt = visits[0]!.nightBjdTdb - visits[visits.length - 1]!.nightBjdTdb;
     // k(Δt) = h² exp(−Δt²/2λ² − sin²(πΔt/P_rot)/(2 · 0.5²)) written out here (Haywood et al. 2014 form).
     const h2 = 9;
-    const kAB = h2 * Math.exp(-(dt * dt) / (2 * 40 * 40) - (2 * Math.sin((Math.PI * dt) / 23) ** 2));
+    const kAB = h2 * Math.exp(-(dt * dt) / (2 * 40 * 40) - 2 * Math.sin((Math.PI * dt) / 23) ** 2);
     expect(relDiff(activityCovariance(activity, dt), kAB)).toBeLessThan(1e-12);
     const got = kVariances(model, informationVisits(model, visits))[0]!;
     expect(relDiff(got, analytic(6.25 / 4 + tau * tau + h2, 12.25 / 3 + tau * tau + h2, kAB))).toBeLessThan(1e-9);
@@ -247,9 +254,22 @@ function churn(star: StarInput, seed: number, steps: number): { changes: number;
     info.variances(out);
     worstTrial = Math.max(worstTrial, compare(trial, out));
     const remaining = [...active].sort((a, b) => a - b);
-    const fresh = kVariances(model, remaining.map((i) => rows[i]!));
+    const fresh = kVariances(
+      model,
+      remaining.map((i) => rows[i]!),
+    );
     worstFresh = Math.max(worstFresh, compare(out, fresh));
-    if (step % 10 === 9 && remaining.length >= 4) worstDense = Math.max(worstDense, compare(out, denseKVariances(model, remaining.map((i) => pool[i]!))));
+    if (step % 10 === 9 && remaining.length >= 4)
+      worstDense = Math.max(
+        worstDense,
+        compare(
+          out,
+          denseKVariances(
+            model,
+            remaining.map((i) => pool[i]!),
+          ),
+        ),
+      );
   }
   return { changes, worstFresh, worstTrial, worstDense };
 }
@@ -265,7 +285,9 @@ describe('incremental updates', () => {
     it(`${name}: adds and removes equal a fresh accumulation; the trial form equals applying`, () => {
       const star = randomStar(createRng(500 + c), config.planets, config);
       const r = churn(star, 900 + c, config.activity ? 200 : 120);
-      console.log(`incremental, ${name}: ${r.changes} changes; vs fresh ${r.worstFresh.toExponential(2)}, trial vs apply ${r.worstTrial.toExponential(2)}, vs dense ${r.worstDense.toExponential(2)}`);
+      console.log(
+        `incremental, ${name}: ${r.changes} changes; vs fresh ${r.worstFresh.toExponential(2)}, trial vs apply ${r.worstTrial.toExponential(2)}, vs dense ${r.worstDense.toExponential(2)}`,
+      );
       if (config.activity) expect(r.changes).toBeGreaterThan(64);
       expect(r.worstFresh).toBeLessThan(1e-8);
       expect(r.worstTrial).toBeLessThan(1e-8);

@@ -11,7 +11,9 @@ import { createRng } from '../../src/rv/random.js';
 // Worker threads need the compiled worker script: the pool is imported from dist/ (`npm test`
 // builds it; run `npm run build` before running this file alone).
 const POOL = new URL('../../dist/rv/injection-worker-pool.js', import.meta.url);
-type Pool = { injectionRecoveryParallel(input: InjectionInput, options: { threads: number; onProgress?: (done: number, total: number) => void }): Promise<InjectionMap> };
+type Pool = {
+  injectionRecoveryParallel(input: InjectionInput, options: { threads: number; onProgress?: (done: number, total: number) => void }): Promise<InjectionMap>;
+};
 
 describe('log-spaced axes', () => {
   it('run from min to max with a constant ratio', () => {

@@ -64,8 +64,13 @@ describe('known-phase detection map', () => {
     // One cell at the ephemeris period, the mass whose K is exactly n σ_K.
     const sigmaK = expectedSigmaKMps(input.timesBjdTdb, input.rvErrorsMps, EPH);
     const kOf = (m: number) => semiAmplitudeMps({ starMassSun: input.starMassSun, planetMassEarth: m, periodDays: EPH.periodDays });
-    let lo = 0.1, hi = 1000;
-    for (let k = 0; k < 100; k++) { const mid = Math.sqrt(lo * hi); if (kOf(mid) < input.goalSignificance * sigmaK) lo = mid; else hi = mid; }
+    let lo = 0.1,
+      hi = 1000;
+    for (let k = 0; k < 100; k++) {
+      const mid = Math.sqrt(lo * hi);
+      if (kOf(mid) < input.goalSignificance * sigmaK) lo = mid;
+      else hi = mid;
+    }
     const map = knownPhaseMapAnalytic({ ...input, periodsDays: [EPH.periodDays], msinisEarth: [lo] });
     expect(map.detection[0]![0]).toBeCloseTo(0.5, 6);
   });

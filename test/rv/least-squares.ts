@@ -5,13 +5,11 @@
 export function leastSquares(design: number[][], y: number[], sigma: number): { coef: number[]; cov: number[][] } {
   const p = design[0]!.length;
   // Augmented matrix [XᵀX | Xᵀy | I].
-  const a = Array.from({ length: p }, (_, i) =>
-    [
-      ...Array.from({ length: p }, (_, j) => design.reduce((s, row) => s + row[i]! * row[j]!, 0)),
-      design.reduce((s, row, k) => s + row[i]! * y[k]!, 0),
-      ...Array.from({ length: p }, (_, j) => (i === j ? 1 : 0)),
-    ],
-  );
+  const a = Array.from({ length: p }, (_, i) => [
+    ...Array.from({ length: p }, (_, j) => design.reduce((s, row) => s + row[i]! * row[j]!, 0)),
+    design.reduce((s, row, k) => s + row[i]! * y[k]!, 0),
+    ...Array.from({ length: p }, (_, j) => (i === j ? 1 : 0)),
+  ]);
   for (let col = 0; col < p; col++) {
     let pivot = col;
     for (let r = col + 1; r < p; r++) if (Math.abs(a[r]![col]!) > Math.abs(a[pivot]![col]!)) pivot = r;
@@ -32,6 +30,10 @@ export function leastSquares(design: number[][], y: number[], sigma: number): { 
 
 /** Fits v = γ + K s with known s (offset free): returns K̂ and Var(K̂). */
 export function fitK(s: number[], v: number[], sigma: number): { k: number; varK: number } {
-  const { coef, cov } = leastSquares(s.map((x) => [1, x]), v, sigma);
+  const { coef, cov } = leastSquares(
+    s.map((x) => [1, x]),
+    v,
+    sigma,
+  );
   return { k: coef[1]!, varK: cov[1]![1]! };
 }

@@ -26,7 +26,14 @@ function truthRv(truths: Truth[], t: number, gammaMps: number): number {
   }, gammaMps);
 }
 
-function simulate(truths: Truth[], times: number[], rvErrorMps: number, rng: Rng | null, instrumentOf: (i: number) => string = () => 'echelle-a', gammas: Record<string, number> = { 'echelle-a': 3 }): FitPoint[] {
+function simulate(
+  truths: Truth[],
+  times: number[],
+  rvErrorMps: number,
+  rng: Rng | null,
+  instrumentOf: (i: number) => string = () => 'echelle-a',
+  gammas: Record<string, number> = { 'echelle-a': 3 },
+): FitPoint[] {
   return times.map((bjd, i) => {
     const instrument = instrumentOf(i);
     return { bjdTdb: bjd, instrument, rvErrorMps, rvMps: truthRv(truths, bjd, gammas[instrument]!) + (rng ? rvErrorMps * rng.normal() : 0) };
@@ -53,7 +60,16 @@ describe('fitOrbits', () => {
     const truth: Truth = { kMps: 10, periodDays: 4.3, tcBjdTdb: 2461000.4 };
     const points = simulate([truth], visitTimes(rng, 14, 2461030, 20), 0.01, null);
     // Catalogue 0.03 d and 0.002 d off the truth, with priors wide against the data's information.
-    const prior: FitPlanetPrior = { id: 'Orvel-2 b', periodDays: 4.302, periodErrDays: 0.01, tcBjdTdb: 2461000.43, tcErrDays: 0.2, kMps: 7, ecc: 0, omegaDeg: 90 };
+    const prior: FitPlanetPrior = {
+      id: 'Orvel-2 b',
+      periodDays: 4.302,
+      periodErrDays: 0.01,
+      tcBjdTdb: 2461000.43,
+      tcErrDays: 0.2,
+      kMps: 7,
+      ecc: 0,
+      omegaDeg: 90,
+    };
     const fit = fitOrbits([prior], points, 0);
     const pl = fit.planets[0]!;
     expect(fit.converged).toBe(true);
@@ -76,7 +92,11 @@ describe('fitOrbits', () => {
     // Reference: for circular orbits v = γ + K cos(ν + ω) is linear in (γ, K) at fixed (Tc, P) (least squares by Gauss–Jordan, test/rv/least-squares.ts).
     const penalised = (tc: number, period: number) => {
       const design = points.map((pt) => [1, truthRv([{ kMps: 1, periodDays: period, tcBjdTdb: tc }], pt.bjdTdb, 0)]);
-      const { coef } = leastSquares(design, points.map((pt) => pt.rvMps), sigma);
+      const { coef } = leastSquares(
+        design,
+        points.map((pt) => pt.rvMps),
+        sigma,
+      );
       const data = points.reduce((s, pt, i) => s + ((pt.rvMps - coef[0]! - coef[1]! * design[i]![1]!) / sigma) ** 2, 0);
       return data + ((tc - prior.tcBjdTdb) / prior.tcErrDays) ** 2 + ((period - prior.periodDays) / prior.periodErrDays) ** 2;
     };
@@ -84,8 +104,8 @@ describe('fitOrbits', () => {
     const cells = 160;
     for (let a = 0; a <= cells; a++) {
       for (let b = 0; b <= cells; b++) {
-        const tc = prior.tcBjdTdb + 3 * prior.tcErrDays * (2 * a / cells - 1);
-        const period = prior.periodDays + 3 * prior.periodErrDays * (2 * b / cells - 1);
+        const tc = prior.tcBjdTdb + 3 * prior.tcErrDays * ((2 * a) / cells - 1);
+        const period = prior.periodDays + 3 * prior.periodErrDays * ((2 * b) / cells - 1);
         const chi2 = penalised(tc, period);
         if (chi2 < best.chi2) best = { chi2, tc, period };
       }
@@ -101,7 +121,16 @@ describe('fitOrbits', () => {
 
   it('Tc 2σ from the catalogue: over 200 seeded trials the stated 1σ and 2σ of Tc and σ_K hold', () => {
     const rng = createRng(13);
-    const catalogue: FitPlanetPrior = { id: 'Tekla b', periodDays: 5.2, periodErrDays: 0.002, tcBjdTdb: 2461000.5, tcErrDays: 0.5, kMps: 10, ecc: 0, omegaDeg: 90 };
+    const catalogue: FitPlanetPrior = {
+      id: 'Tekla b',
+      periodDays: 5.2,
+      periodErrDays: 0.002,
+      tcBjdTdb: 2461000.5,
+      tcErrDays: 0.5,
+      kMps: 10,
+      ecc: 0,
+      omegaDeg: 90,
+    };
     // Phase error of the catalogue ≈ 0.1 cycles; the truth sits 2σ (1 d) from the catalogue Tc.
     const truth: Truth = { kMps: 10, periodDays: 5.2, tcBjdTdb: catalogue.tcBjdTdb + 2 * catalogue.tcErrDays };
     const times = visitTimes(rng, 10, 2461100, 14);

@@ -50,7 +50,12 @@ describe('crest periodogram', () => {
     expect(r.status).toBe(0);
     expect(r.stdout).toMatch(/30 visits over 88\.1 days/);
     expect(r.stdout).toMatch(/rank\s+period \(d\)/);
-    expect(r.stdout.trim().split('\n').filter((l) => /^\s+[123]\s/.test(l))).toHaveLength(3);
+    expect(
+      r.stdout
+        .trim()
+        .split('\n')
+        .filter((l) => /^\s+[123]\s/.test(l)),
+    ).toHaveLength(3);
   });
 
   it('exits 2 with one line for a bad row and for a bad flag', async () => {

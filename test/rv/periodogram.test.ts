@@ -79,19 +79,36 @@ describe('generalised Lomb–Scargle', () => {
     const mean = raw.reduce((a, b) => a + b, 0) / raw.length;
     const y = raw.map((v) => v - mean);
     const grid = frequencyGrid(t, { oversample: 4 });
-    const power = glsKernel(t, t.map(() => 1), grid, 'fixed-zero').power(y);
+    const power = glsKernel(
+      t,
+      t.map(() => 1),
+      grid,
+      'fixed-zero',
+    ).power(y);
     const yy = y.reduce((s, v) => s + v * v, 0);
     for (let k = 0; k < grid.count; k += 7) {
       const w = 2 * Math.PI * gridFrequency(grid, k);
       // Classical periodogram with the time offset τ (Lomb 1976, Ap&SS 39, 447; Scargle 1982, ApJ 263, 835):
       // tan 2ωτ = Σ sin 2ωt / Σ cos 2ωt; P = [ (Σ y cos ω(t−τ))² / Σ cos² + (Σ y sin ω(t−τ))² / Σ sin² ] / Σ y².
-      const tau = Math.atan2(t.reduce((s, ti) => s + Math.sin(2 * w * ti), 0), t.reduce((s, ti) => s + Math.cos(2 * w * ti), 0)) / (2 * w);
-      let yc = 0, ys = 0, cc = 0, ss = 0;
+      const tau =
+        Math.atan2(
+          t.reduce((s, ti) => s + Math.sin(2 * w * ti), 0),
+          t.reduce((s, ti) => s + Math.cos(2 * w * ti), 0),
+        ) /
+        (2 * w);
+      let yc = 0,
+        ys = 0,
+        cc = 0,
+        ss = 0;
       t.forEach((ti, i) => {
-        const c = Math.cos(w * (ti - tau)), s = Math.sin(w * (ti - tau));
-        yc += y[i]! * c; ys += y[i]! * s; cc += c * c; ss += s * s;
+        const c = Math.cos(w * (ti - tau)),
+          s = Math.sin(w * (ti - tau));
+        yc += y[i]! * c;
+        ys += y[i]! * s;
+        cc += c * c;
+        ss += s * s;
       });
-      expect(power[k]).toBeCloseTo((yc * yc / cc + ys * ys / ss) / yy, 9);
+      expect(power[k]).toBeCloseTo(((yc * yc) / cc + (ys * ys) / ss) / yy, 9);
     }
   });
 
@@ -122,8 +139,15 @@ describe('generalised Lomb–Scargle', () => {
     const { t, y, sigma } = series(5);
     const grid = frequencyGrid(t);
     const base = glsPeriodogram(t, y, sigma, grid);
-    const shifted = glsPeriodogram(t.map((ti) => ti - 2_461_000), y.map((v) => 3 * v - 40), sigma, grid);
-    base.forEach((p, k) => expect(shifted[k]).toBeCloseTo(p, 9));
+    const shifted = glsPeriodogram(
+      t.map((ti) => ti - 2_461_000),
+      y.map((v) => 3 * v - 40),
+      sigma,
+      grid,
+    );
+    base.forEach((p, k) => {
+      expect(shifted[k]).toBeCloseTo(p, 9);
+    });
   });
 
   it('finds the injected period as the highest of distinct peaks', () => {

@@ -4,7 +4,24 @@ import { runCli, runCliInProcess } from '../cli/run-cli.js';
 
 describe('crest precision', () => {
   it('--json shows every factor of the budget, and they multiply to the photon noise', () => {
-    const r = runCli(['precision', '--instrument', 'stable-2m', '--vmag', '10.5', '--teff', '6300', '--vsini', '9', '--jitter', '2.5', '--exposure', '1200', '--airmass', '1.5', '--json']);
+    const r = runCli([
+      'precision',
+      '--instrument',
+      'stable-2m',
+      '--vmag',
+      '10.5',
+      '--teff',
+      '6300',
+      '--vsini',
+      '9',
+      '--jitter',
+      '2.5',
+      '--exposure',
+      '1200',
+      '--airmass',
+      '1.5',
+      '--json',
+    ]);
     expect(r.status).toBe(0);
     const out = JSON.parse(r.stdout);
     const b = out.exposure.budget;

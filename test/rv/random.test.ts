@@ -7,7 +7,7 @@ const draw = (seed: number, count: number, pick: 'uniform' | 'normal') => {
 };
 
 describe('seeded generator', () => {
-  it('is xoshiro128**: the first ten outputs from the state {1, 2, 3, 4} of the authors\' reference code', () => {
+  it("is xoshiro128**: the first ten outputs from the state {1, 2, 3, 4} of the authors' reference code", () => {
     // Output of Blackman & Vigna's reference implementation xoshiro128starstar.c (v1.1), as quoted
     // in the reference test of the rand_xoshiro crate (rust-random/rngs, xoshiro128starstar.rs).
     const rng = rngFromState([1, 2, 3, 4]);

@@ -43,7 +43,10 @@ function denseSigmaK(visits: Visit[]): number {
   const x = visits.map((v) => [1, Math.sin((2 * Math.PI * (v.bjdTdb - TC)) / P)]);
   const cInvX = solve(cov, x);
   const fisher = [0, 1].map((r) => [0, 1].map((c) => x.reduce((sum, row, i) => sum + row[r]! * cInvX[i]![c]!, 0)));
-  const inverse = solve(fisher, [[1, 0], [0, 1]]);
+  const inverse = solve(fisher, [
+    [1, 0],
+    [0, 1],
+  ]);
   return Math.sqrt(inverse[1]![1]!);
 }
 

@@ -7,7 +7,8 @@ import { semiAmplitudeMps } from '../../src/orbit/semi-amplitude.js';
 import { OUT_OF_REACH_VISITS, planetOfTarget, targetDetectability } from '../../src/rv/target-detect.js';
 
 const stable4m = readInstrument(path.join(INSTRUMENTS_DIR, 'stable-4m.json'));
-const header = 'id,ra,dec,vmag,teffK,massSun,jitterMps,periodDays,tcBjdTdb,planetMsiniEarth,planetKMps,ecc,searchPeriodMinDays,searchPeriodMaxDays,searchMsiniEarth';
+const header =
+  'id,ra,dec,vmag,teffK,massSun,jitterMps,periodDays,tcBjdTdb,planetMsiniEarth,planetKMps,ecc,searchPeriodMinDays,searchPeriodMaxDays,searchMsiniEarth';
 const [given, byK, search, bare, tiny] = parseTargets(
   [
     header,
@@ -40,7 +41,7 @@ describe('planetOfTarget', () => {
     expect(p.note).toMatch(/logarithmic middle of 3-48 d/);
   });
 
-  it('a hypothetical planet replaces the target\'s own, and nothing gives nothing', () => {
+  it("a hypothetical planet replaces the target's own, and nothing gives nothing", () => {
     expect(planetOfTarget(given, { msiniEarth: 10, periodDays: 20 })!.source).toBe('hypothetical');
     expect(planetOfTarget(bare)).toBeUndefined();
   });
@@ -54,7 +55,7 @@ describe('targetDetectability', () => {
     expect(d.effectiveSigmaMps).toBe(d.exposure.budget.effectiveSigmaMps);
   });
 
-  it('at a planned N: Φ(K/σ_K − n) and the smallest detectable mass at the planet\'s period', () => {
+  it("at a planned N: Φ(K/σ_K − n) and the smallest detectable mass at the planet's period", () => {
     const d = targetDetectability(given, stable4m, { goalSignificance: 5, airmass: 1.2, visits: 30, periodsDays: [1, 10] });
     const at = d.atPlannedVisits!;
     // σ_K² = σ_white² / E[S] + (floor/n)², E[S] = (N − 1)/2 at random phases.

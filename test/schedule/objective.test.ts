@@ -8,8 +8,20 @@ import { syntheticProblem } from '../../reference/synthetic.js';
 import { goalValue } from '../../src/schedule/utility.js';
 
 describe('the plan state against a recomputation from scratch', () => {
-  it('keeps every planet\'s K/sigma_K and every search score equal to fresh accumulators, also after removals', () => {
-    const problem = syntheticProblem({ targets: 5, nights: 15, slotsPerNight: 3, searchFraction: 0.4, visibleFraction: 0.8, time: { mode: 'given-nights' }, minSpacingHours: 0, onePerNight: false, nightHours: 8, seed: 11, phaseErrors: true });
+  it("keeps every planet's K/sigma_K and every search score equal to fresh accumulators, also after removals", () => {
+    const problem = syntheticProblem({
+      targets: 5,
+      nights: 15,
+      slotsPerNight: 3,
+      searchFraction: 0.4,
+      visibleFraction: 0.8,
+      time: { mode: 'given-nights' },
+      minSpacingHours: 0,
+      onePerNight: false,
+      nightHours: 8,
+      seed: 11,
+      phaseErrors: true,
+    });
     const c = compileProblem(problem, 16);
     const state = new PlanState(c, Infinity, 0.1);
     for (let n = 0; n < c.nightCount; n++) state.openNight(n);
@@ -23,7 +35,9 @@ describe('the plan state against a recomputation from scratch', () => {
     const expected = referenceKOverSigmaK(problem, kept, { searchGridSize: 16, overshootWeight: 0.1 });
     let k = 0;
     problem.targets.forEach((target, t) => {
-      target.planets.forEach((planet, i) => expect(state.planetFractionOfGoal(c.planetFrom[t]! + i) * planet.goalSignificance).toBeCloseTo(expected[k++]!, 8));
+      target.planets.forEach((planet, i) => {
+        expect(state.planetFractionOfGoal(c.planetFrom[t]! + i) * planet.goalSignificance).toBeCloseTo(expected[k++]!, 8);
+      });
       if (target.search) expect(state.searchFractionOfGoal(t, 0, 0) * target.search.goalSignificance).toBeCloseTo(expected[k++]!, 8);
     });
     expect(k).toBe(expected.length);
@@ -31,7 +45,19 @@ describe('the plan state against a recomputation from scratch', () => {
 });
 
 describe('search coverage', () => {
-  const problem = syntheticProblem({ targets: 1, nights: 40, slotsPerNight: 2, searchFraction: 1, visibleFraction: 1, time: { mode: 'given-nights' }, minSpacingHours: 0, onePerNight: false, nightHours: 8, seed: 5, phaseErrors: false });
+  const problem = syntheticProblem({
+    targets: 1,
+    nights: 40,
+    slotsPerNight: 2,
+    searchFraction: 1,
+    visibleFraction: 1,
+    time: { mode: 'given-nights' },
+    minSpacingHours: 0,
+    onePerNight: false,
+    nightHours: 8,
+    seed: 5,
+    phaseErrors: false,
+  });
   const c = compileProblem(problem, 32);
   const grid = c.grids[0]!;
 

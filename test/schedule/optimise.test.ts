@@ -43,8 +43,13 @@ describe('optimiseSchedule on random problems', () => {
       // The claimed utility and K/sigma_K equal a recomputation from the chosen slots.
       expect(result.utility).toBeCloseTo(referenceUtility(problem, visits, settings), 8);
       const ratios = referenceKOverSigmaK(problem, visits, settings);
-      result.targets.forEach((t, i) => expect(t.kOverSigmaK).toBeCloseTo(ratios[i]!, 8));
-      expect(result.hours).toBeCloseTo(visits.reduce((sum, v) => sum + v.durationSec / 3600, 0), 9);
+      result.targets.forEach((t, i) => {
+        expect(t.kOverSigmaK).toBeCloseTo(ratios[i]!, 8);
+      });
+      expect(result.hours).toBeCloseTo(
+        visits.reduce((sum, v) => sum + v.durationSec / 3600, 0),
+        9,
+      );
       // Utility never decreases from the greedy pass through every kept move.
       for (let i = 1; i < trace.length; i++) expect(trace[i]!).toBeGreaterThanOrEqual(trace[i - 1]! - 1e-9);
       expect(result.utility).toBeGreaterThanOrEqual(trace[0]! - 1e-9);
@@ -66,8 +71,19 @@ describe('several visits a night', () => {
   for (let seed = 1; seed <= 6; seed++) {
     it(`case ${seed}: every other star up to 3 a night, 1.5 h apart; the rest one a night`, () => {
       const problem = syntheticProblem({
-        targets: 4, nights: 15, slotsPerNight: 8, searchFraction: seed % 3 === 0 ? 0.25 : 0, visibleFraction: 0.8, time: times[seed % 3]!,
-        minSpacingHours: 20, onePerNight: true, visitsPerNight: 3, sameNightSpacingHours: 1.5, nightHours: 8, seed, phaseErrors: seed % 2 === 0,
+        targets: 4,
+        nights: 15,
+        slotsPerNight: 8,
+        searchFraction: seed % 3 === 0 ? 0.25 : 0,
+        visibleFraction: 0.8,
+        time: times[seed % 3]!,
+        minSpacingHours: 20,
+        onePerNight: true,
+        visitsPerNight: 3,
+        sameNightSpacingHours: 1.5,
+        nightHours: 8,
+        seed,
+        phaseErrors: seed % 2 === 0,
       });
       const visits = visitsOf(problem, optimiseSchedule(problem, { seed, searchGridSize: 16 }));
       expect(scheduleViolations(problem, visits)).toEqual([]);
@@ -75,7 +91,10 @@ describe('several visits a night', () => {
       for (const target of problem.targets) {
         const cap = target.visitsPerNight ?? 1;
         for (const night of problem.nights) {
-          const mine = visits.filter((v) => v.targetId === target.id && v.nightIndex === night.index).map((v) => v.startMs).sort((a, b) => a - b);
+          const mine = visits
+            .filter((v) => v.targetId === target.id && v.nightIndex === night.index)
+            .map((v) => v.startMs)
+            .sort((a, b) => a - b);
           expect(mine.length).toBeLessThanOrEqual(cap);
           for (let i = 1; i < mine.length; i++) expect(mine[i]! - mine[i - 1]!).toBeGreaterThanOrEqual(1.5 * 3_600_000);
           if (mine.length > 1) several++;
@@ -95,11 +114,24 @@ function singleTarget(periodDays: number, nights: number, hoursPerNight: number)
   for (let n = 0; n < nights; n++) {
     for (let k = 0; k < hoursPerNight * 3; k++) {
       const startMs = t0 + n * 86_400_000 + k * 1_200_000;
-      slots.push({ slotId: `n${n}k${k}`, targetId: 'LONE-1', nightIndex: n, startMs, durationSec: 1200, whiteSigmaMps: 2, midBjdTdb: (startMs + 600_000 - t0) / 86_400_000 });
+      slots.push({
+        slotId: `n${n}k${k}`,
+        targetId: 'LONE-1',
+        nightIndex: n,
+        startMs,
+        durationSec: 1200,
+        whiteSigmaMps: 2,
+        midBjdTdb: (startMs + 600_000 - t0) / 86_400_000,
+      });
     }
   }
   return {
-    nights: Array.from({ length: nights }, (_, n) => ({ index: n, localDate: `2027-04-${String(n + 1).padStart(2, '0')}`, clearProbability: 0.8, hoursAvailable: hoursPerNight })),
+    nights: Array.from({ length: nights }, (_, n) => ({
+      index: n,
+      localDate: `2027-04-${String(n + 1).padStart(2, '0')}`,
+      clearProbability: 0.8,
+      hoursAvailable: hoursPerNight,
+    })),
     targets: [onePlanetStar('LONE-1', { kMps: 3, periodDays, tcBjdTdb: 0, goalSignificance: 100 }, [0, nights])],
     slots,
     time: { mode: 'given-nights' },
@@ -111,7 +143,11 @@ describe('information efficiency', () => {
   for (const periodDays of [2.7, 4.13, 9.6]) {
     it(`reaches above 0.95 for one target with perfect visibility (P = ${periodDays} d)`, () => {
       // Visible around the clock for 12 days; a budget of 24 visits of 20 minutes.
-      const problem: ScheduleProblem = { ...singleTarget(periodDays, 12, 24), time: { mode: 'hours', hours: 8 }, constraints: { minSpacingHours: 0, onePerNight: false } };
+      const problem: ScheduleProblem = {
+        ...singleTarget(periodDays, 12, 24),
+        time: { mode: 'hours', hours: 8 },
+        constraints: { minSpacingHours: 0, onePerNight: false },
+      };
       const result = optimiseSchedule(problem, { seed: 1 });
       const target = result.targets[0]!;
       expect(target.visits).toBe(24);
@@ -131,7 +167,10 @@ describe('what the utility asks of a plan', () => {
     const busiest = relaxed.targets.filter((t) => t.kind === 'ephemeris').sort((a, b) => b.visits - a.visits)[0]!;
     const easy = problem.targets.find((t) => t.id === busiest.starId)!;
     // Make the first target's goal tiny: it should keep few visits and give the rest away.
-    const lowered = { ...problem, targets: problem.targets.map((t) => (t === easy ? { ...t, planets: t.planets.map((p) => ({ ...p, goalSignificance: 0.5 })) } : t)) };
+    const lowered = {
+      ...problem,
+      targets: problem.targets.map((t) => (t === easy ? { ...t, planets: t.planets.map((p) => ({ ...p, goalSignificance: 0.5 })) } : t)),
+    };
     const capped = optimiseSchedule(lowered, { seed: 1 });
     const before = relaxed.targets.find((t) => t.starId === easy.id)!;
     const after = capped.targets.find((t) => t.starId === easy.id)!;
@@ -144,7 +183,10 @@ describe('what the utility asks of a plan', () => {
   it('spends visits away from the quadratures when the ephemeris is stale, and none when it is fresh', () => {
     // The same slots; a catalogue Tc and P whose phase error reaches 0.15 cycles by the window's end.
     const fresh = { ...singleTarget(3.3, 40, 9), time: { mode: 'choose-nights' as const, nights: 12 } };
-    const stale = { ...fresh, targets: [onePlanetStar('LONE-1', { kMps: 3, periodDays: 3.3, tcBjdTdb: -300, tcErrDays: 0.05, periodErrDays: 0.0015, goalSignificance: 100 }, [0, 40])] };
+    const stale = {
+      ...fresh,
+      targets: [onePlanetStar('LONE-1', { kMps: 3, periodDays: 3.3, tcBjdTdb: -300, tcErrDays: 0.05, periodErrDays: 0.0015, goalSignificance: 100 }, [0, 40])],
+    };
     // |sin 2 pi phi| below 0.7: more than 0.125 cycles from both quadratures (common practice).
     const offQuadrature = (problem: ScheduleProblem) => {
       const visits = visitsOf(problem, optimiseSchedule(problem, { seed: 2 }));

@@ -27,7 +27,15 @@ function slots(starId: string): CandidateSlot[] {
     const opens = 0.08 - (4 / 1440) * n;
     for (let k = 0; k < 16; k++) {
       const midBjdTdb = BJD0 + n + opens + (k * 30 + 10) / 1440;
-      out.push({ slotId: `${n}/${k}`, targetId: starId, nightIndex: n, startMs: (midBjdTdb - 2440587.5) * 86_400_000 - 600_000, durationSec: SLOT_SEC, whiteSigmaMps: SIGMA_MPS, midBjdTdb });
+      out.push({
+        slotId: `${n}/${k}`,
+        targetId: starId,
+        nightIndex: n,
+        startMs: (midBjdTdb - 2440587.5) * 86_400_000 - 600_000,
+        durationSec: SLOT_SEC,
+        whiteSigmaMps: SIGMA_MPS,
+        midBjdTdb,
+      });
     }
   }
   return out;
@@ -44,7 +52,12 @@ function problemOf(star: StarInput, visits: number, onePerNight: boolean, goalSi
   };
 }
 
-const asFit = (s: CandidateSlot): FitVisit => ({ bjdTdb: s.midBjdTdb, whiteSigmaMps: s.whiteSigmaMps, night: s.nightIndex, nightBjdTdb: BJD0 + s.nightIndex + 0.25 });
+const asFit = (s: CandidateSlot): FitVisit => ({
+  bjdTdb: s.midBjdTdb,
+  whiteSigmaMps: s.whiteSigmaMps,
+  night: s.nightIndex,
+  nightBjdTdb: BJD0 + s.nightIndex + 0.25,
+});
 
 function plannedVisits(problem: ScheduleProblem): FitVisit[] {
   const byId = new Map(problem.slots.map((s) => [s.slotId, s]));
@@ -72,7 +85,9 @@ function measuredSigmaK(star: StarInput, visitSets: FitVisit[][], seed: number):
   const errors = star.planets.map(() => [] as number[]);
   for (const visits of visitSets) {
     const result = monteCarloKErrors({ planets: star.planets, nightlyJitterMps: star.nightlyJitterMps, visits }, Math.ceil(DATA_SETS / visitSets.length), rng);
-    result.kErrors.forEach((e, i) => errors[i]!.push(...e));
+    result.kErrors.forEach((e, i) => {
+      errors[i]!.push(...e);
+    });
   }
   return errors.map(rms);
 }
@@ -89,9 +104,27 @@ function planet(id: string, kMps: number, periodDays: number, phaseErrEnd: numbe
 const span: [number, number] = [BJD0, BJD0 + NIGHTS];
 
 const CASES: { name: string; star: StarInput; visits: number; onePerNight: boolean; margin: number }[] = [
-  { name: 'phase error 0.15 cycles at the end', star: { planets: [planet('b', 4, 3.71, 0.15, 700)], nightlyJitterMps: 0, spanBjdTdb: span }, visits: 20, onePerNight: true, margin: 1 },
-  { name: 'nightly jitter 2 m/s, several visits a night', star: { planets: [planet('b', 4, 5.93, 0.01, 200)], nightlyJitterMps: 2, spanBjdTdb: span }, visits: 24, onePerNight: false, margin: 0.85 },
-  { name: 'two planets', star: { planets: [planet('b', 4, 3.71, 0.02, 300), planet('c', 3, 11.2, 0.03, 300)], nightlyJitterMps: 0, spanBjdTdb: span }, visits: 24, onePerNight: true, margin: 0.9 },
+  {
+    name: 'phase error 0.15 cycles at the end',
+    star: { planets: [planet('b', 4, 3.71, 0.15, 700)], nightlyJitterMps: 0, spanBjdTdb: span },
+    visits: 20,
+    onePerNight: true,
+    margin: 1,
+  },
+  {
+    name: 'nightly jitter 2 m/s, several visits a night',
+    star: { planets: [planet('b', 4, 5.93, 0.01, 200)], nightlyJitterMps: 2, spanBjdTdb: span },
+    visits: 24,
+    onePerNight: false,
+    margin: 0.85,
+  },
+  {
+    name: 'two planets',
+    star: { planets: [planet('b', 4, 3.71, 0.02, 300), planet('c', 3, 11.2, 0.03, 300)], nightlyJitterMps: 0, spanBjdTdb: span },
+    visits: 24,
+    onePerNight: true,
+    margin: 0.9,
+  },
 ];
 
 describe('planned visits, fitted as an astronomer would', () => {
@@ -103,9 +136,15 @@ describe('planned visits, fitted as an astronomer would', () => {
       const claimed = claimedSigmaK(c.star, planned);
       const measured = measuredSigmaK(c.star, [planned], 11);
       const rng = createRng(5);
-      const random = measuredSigmaK(c.star, Array.from({ length: 8 }, () => randomVisits(problem, c.visits, rng)), 12);
+      const random = measuredSigmaK(
+        c.star,
+        Array.from({ length: 8 }, () => randomVisits(problem, c.visits, rng)),
+        12,
+      );
       c.star.planets.forEach((p, i) => {
-        console.log(`${c.name}, planet ${p.id}: claimed ${claimed[i]!.toFixed(3)} m/s, fitted ${measured[i]!.toFixed(3)} m/s; random visits fitted ${random[i]!.toFixed(3)} m/s`);
+        console.log(
+          `${c.name}, planet ${p.id}: claimed ${claimed[i]!.toFixed(3)} m/s, fitted ${measured[i]!.toFixed(3)} m/s; random visits fitted ${random[i]!.toFixed(3)} m/s`,
+        );
         expect(Math.abs(measured[i]! / claimed[i]! - 1)).toBeLessThan(0.1);
         // The planned visits are worth more than random ones (each RMS is good to about 1.6% at
         // 2,000 data sets). The stale case is the close one, 2% apart: random visits also spread

@@ -14,8 +14,17 @@ const SETTINGS = { searchGridSize: 48, overshootWeight: 0.1 };
 /** A synthetic problem whose first nights are already observed: some of their slots become prior visits. */
 function withPrior(seed: number, sharedNight: boolean): ScheduleProblem {
   const problem = syntheticProblem({
-    targets: 6, nights: 10, slotsPerNight: 4, searchFraction: 0.34, visibleFraction: 0.8,
-    time: { mode: 'choose-nights', nights: 3 }, minSpacingHours: 1, onePerNight: false, nightHours: 6, seed, phaseErrors: true,
+    targets: 6,
+    nights: 10,
+    slotsPerNight: 4,
+    searchFraction: 0.34,
+    visibleFraction: 0.8,
+    time: { mode: 'choose-nights', nights: 3 },
+    minSpacingHours: 1,
+    onePerNight: false,
+    nightHours: 6,
+    seed,
+    phaseErrors: true,
   });
   const rng = createRng(seed + 100);
   const past = new Set([0, 1, 2]);
@@ -56,7 +65,11 @@ describe('prior visits in the optimiser', () => {
     for (const seed of [6, 7, 8]) {
       const base = withPrior(seed, true);
       const granted = base.nights[0]!.index;
-      const problem = { ...base, nights: base.nights.map((n) => (n.index === granted ? { ...n, granted: true } : n)), time: { mode: 'choose-nights' as const, nights: 2 } };
+      const problem = {
+        ...base,
+        nights: base.nights.map((n) => (n.index === granted ? { ...n, granted: true } : n)),
+        time: { mode: 'choose-nights' as const, nights: 2 },
+      };
       const result = optimiseSchedule(problem, { seed, restarts: 12 });
       expect(new Set(result.slotIds).size).toBe(result.slotIds.length);
       expect(result.nightIndices).toContain(granted);
@@ -71,23 +84,43 @@ describe('prior visits in the optimiser', () => {
     const result = optimiseSchedule(clear, { seed: 1, restarts: 1 });
     const weather = simulateWeather(clear, result, 3, 1);
     const reference = referenceKOverSigmaK(clear, chosen(clear, result.slotIds), SETTINGS);
-    weather.targets.forEach((t, i) => expect(t.meanKOverSigmaK).toBeCloseTo(reference[i]!, 9));
+    weather.targets.forEach((t, i) => {
+      expect(t.meanKOverSigmaK).toBeCloseTo(reference[i]!, 9);
+    });
     expect(weather.meanUtility).toBeCloseTo(result.utility, 9);
   });
 
   it('a planet whose past visits already reach its goal gets no further visits, even with nights to spare', () => {
-    const nights = Array.from({ length: 6 }, (_, n) => ({ index: n, localDate: `2027-03-0${n + 1}`, clearProbability: 1, hoursAvailable: 8, midBjdTdb: 100 + n + 0.25 }));
+    const nights = Array.from({ length: 6 }, (_, n) => ({
+      index: n,
+      localDate: `2027-03-0${n + 1}`,
+      clearProbability: 1,
+      hoursAvailable: 8,
+      midBjdTdb: 100 + n + 0.25,
+    }));
     const star = (id: string, periodDays: number) => ({
       id,
       planets: [{ id: `${id} b`, priority: 1, kMps: 8, goalSignificance: 5 }],
-      model: buildStarModel({ planets: [{ id: `${id} b`, kMps: 8, periodDays, tcBjdTdb: 99.3, periodErrDays: 0, tcErrDays: 0, ecc: 0, omegaDeg: 90 }], nightlyJitterMps: 0, spanBjdTdb: [100, 106] }),
+      model: buildStarModel({
+        planets: [{ id: `${id} b`, kMps: 8, periodDays, tcBjdTdb: 99.3, periodErrDays: 0, tcErrDays: 0, ecc: 0, omegaDeg: 90 }],
+        nightlyJitterMps: 0,
+        spanBjdTdb: [100, 106],
+      }),
     });
     const slots: CandidateSlot[] = [];
     for (const id of ['DONE', 'OPEN']) {
       for (const n of nights) {
         for (let k = 0; k < 8; k++) {
           const midBjdTdb = n.midBjdTdb - 0.15 + k * 0.04;
-          slots.push({ slotId: `${id}/${n.index}/${k}`, targetId: id, nightIndex: n.index, startMs: (midBjdTdb - 2440587.5) * 86_400_000, durationSec: 900, whiteSigmaMps: 2, midBjdTdb });
+          slots.push({
+            slotId: `${id}/${n.index}/${k}`,
+            targetId: id,
+            nightIndex: n.index,
+            startMs: (midBjdTdb - 2440587.5) * 86_400_000,
+            durationSec: 900,
+            whiteSigmaMps: 2,
+            midBjdTdb,
+          });
         }
       }
     }

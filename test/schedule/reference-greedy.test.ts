@@ -7,8 +7,17 @@ describe('the from-scratch greedy of the bench', () => {
     const settings = { searchGridSize: 16, overshootWeight: 0.1 };
     for (const seed of [1, 2, 3]) {
       const problem = syntheticProblem({
-        targets: 3, nights: 6, slotsPerNight: 2, searchFraction: 0.34, visibleFraction: 0.7, time: { mode: 'hours', hours: 4 },
-        minSpacingHours: 0, onePerNight: true, nightHours: 6, seed, phaseErrors: true,
+        targets: 3,
+        nights: 6,
+        slotsPerNight: 2,
+        searchFraction: 0.34,
+        visibleFraction: 0.7,
+        time: { mode: 'hours', hours: 4 },
+        minSpacingHours: 0,
+        onePerNight: true,
+        nightHours: 6,
+        seed,
+        phaseErrors: true,
       });
       const { utility, visits } = referenceGreedy(problem, settings);
       expect(scheduleViolations(problem, visits)).toEqual([]);

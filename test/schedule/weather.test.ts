@@ -8,7 +8,19 @@ import { simulateWeather } from '../../src/schedule/weather.js';
 const settings = { searchGridSize: 16, overshootWeight: 0.1 };
 
 function problemWith(clearProbability: number, seed: number): ScheduleProblem {
-  const base = syntheticProblem({ targets: 3, nights: 14, slotsPerNight: 2, searchFraction: 0.34, visibleFraction: 0.8, time: { mode: 'choose-nights', nights: 6 }, minSpacingHours: 0, onePerNight: true, nightHours: 6, seed, phaseErrors: true });
+  const base = syntheticProblem({
+    targets: 3,
+    nights: 14,
+    slotsPerNight: 2,
+    searchFraction: 0.34,
+    visibleFraction: 0.8,
+    time: { mode: 'choose-nights', nights: 6 },
+    minSpacingHours: 0,
+    onePerNight: true,
+    nightHours: 6,
+    seed,
+    phaseErrors: true,
+  });
   return { ...base, nights: base.nights.map((n) => ({ ...n, clearProbability })) };
 }
 
@@ -36,7 +48,14 @@ describe('simulateWeather', () => {
   it('agrees with an exact sum over every weather outcome, within Monte Carlo error', () => {
     const problem = problemWith(0.6, 5);
     // Low goals so that reaching them is a matter of luck with the weather.
-    const lowered = { ...problem, targets: problem.targets.map((t) => ({ ...t, planets: t.planets.map((p) => ({ ...p, goalSignificance: 1 })), ...(t.search ? { search: { ...t.search, goalSignificance: 1 } } : {}) })) };
+    const lowered = {
+      ...problem,
+      targets: problem.targets.map((t) => ({
+        ...t,
+        planets: t.planets.map((p) => ({ ...p, goalSignificance: 1 })),
+        ...(t.search ? { search: { ...t.search, goalSignificance: 1 } } : {}),
+      })),
+    };
     const result = optimiseSchedule(lowered, { seed: 1, ...settings });
     const byId = new Map(lowered.slots.map((s) => [s.slotId, s]));
     const visits = result.slotIds.map((id) => byId.get(id)!);
@@ -46,8 +65,14 @@ describe('simulateWeather', () => {
     for (let mask = 0; mask < 1 << nights.length; mask++) {
       const clear = new Set(nights.filter((_, i) => mask & (1 << i)));
       const weight = nights.reduce((p, n) => p * (clear.has(n) ? 0.6 : 0.4), 1);
-      const ratios = referenceKOverSigmaK(lowered, visits.filter((v) => clear.has(v.nightIndex)), settings);
-      ratios.forEach((r, i) => (exact[i] += r >= 1 - 1e-9 ? weight : 0));
+      const ratios = referenceKOverSigmaK(
+        lowered,
+        visits.filter((v) => clear.has(v.nightIndex)),
+        settings,
+      );
+      ratios.forEach((r, i) => {
+        exact[i] += r >= 1 - 1e-9 ? weight : 0;
+      });
     }
     const trials = 1000;
     const outcome = simulateWeather(lowered, result, trials, 21, settings);

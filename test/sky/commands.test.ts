@@ -23,7 +23,11 @@ describe('crest nights', () => {
   });
 
   it('rejects a bad date or level with one line and exit status 2', async () => {
-    for (const args of [['--from', '2027-02-30', '--to', '2027-03-01'], ['--from', '2027-03-02', '--to', '2027-03-01'], ['--from', '2027-03-01', '--to', '2027-03-01', '--twilight', 'dusky']]) {
+    for (const args of [
+      ['--from', '2027-02-30', '--to', '2027-03-01'],
+      ['--from', '2027-03-02', '--to', '2027-03-01'],
+      ['--from', '2027-03-01', '--to', '2027-03-01', '--twilight', 'dusky'],
+    ]) {
       const out = await crest('nights', '--site', 'la-silla', ...args);
       expect(out.status).toBe(2);
       expect(out.stderr.trim().split('\n')).toHaveLength(1);
@@ -44,7 +48,19 @@ describe('crest visibility', () => {
   });
 
   it('rejects a bad airmass with exit status 2', async () => {
-    const out = await crest('visibility', '--site', 'la-silla', '--targets', 'examples/demo/targets.csv', '--from', '2027-03-01', '--to', '2027-03-02', '--max-airmass', '0.5');
+    const out = await crest(
+      'visibility',
+      '--site',
+      'la-silla',
+      '--targets',
+      'examples/demo/targets.csv',
+      '--from',
+      '2027-03-01',
+      '--to',
+      '2027-03-02',
+      '--max-airmass',
+      '0.5',
+    );
     expect(out.status).toBe(2);
     expect(out.stderr).toMatch(/--max-airmass/);
   });

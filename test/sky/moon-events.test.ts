@@ -18,7 +18,10 @@ describe('moonrise and moonset between sunset and sunrise', () => {
       for (const night of computeNights(site, '2027-03-01', '2027-04-09', 'nautical')) {
         const from = night.sunset!;
         const to = night.sunrise!;
-        for (const [direction, ours] of [[1, night.moon.rise], [-1, night.moon.set]] as const) {
+        for (const [direction, ours] of [
+          [1, night.moon.rise],
+          [-1, night.moon.set],
+        ] as const) {
           const found = SearchRiseSet(Body.Moon, observer, direction, from, 1);
           if (ours === null) {
             expect(found === null || found.date.getTime() > to.getTime() - SLACK_MS, `${night.localDate} ${direction}`).toBe(true);

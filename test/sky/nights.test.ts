@@ -19,7 +19,8 @@ describe('computeNights', () => {
       expect(localDateOf(n.sunrise!, laSilla.timeZone) > n.localDate).toBe(true);
     }
     // Sunsets a solar day apart (within 3 min), though the local clock jumps by an hour.
-    for (let i = 1; i < nights.length; i++) expect(Math.abs(nights[i]!.sunset!.getTime() - nights[i - 1]!.sunset!.getTime() - 86_400_000)).toBeLessThan(180_000);
+    for (let i = 1; i < nights.length; i++)
+      expect(Math.abs(nights[i]!.sunset!.getTime() - nights[i - 1]!.sunset!.getTime() - 86_400_000)).toBeLessThan(180_000);
     const offset = (d: Date) => DateTime.fromJSDate(d, { zone: laSilla.timeZone }).offset;
     const across = nights[1]!;
     expect(offset(across.sunset!) - offset(across.sunrise!)).toBe(60);
@@ -35,7 +36,9 @@ describe('computeNights', () => {
 
   it('orders the edges: sunset < civil < nautical < astronomical dusk < dawns < sunrise, dark span = chosen level', () => {
     for (const n of computeNights(laSilla, '2027-01-10', '2027-01-12', 'astronomical')) {
-      const seq = [n.sunset, n.civil.dusk, n.nautical.dusk, n.astronomical.dusk, n.astronomical.dawn, n.nautical.dawn, n.civil.dawn, n.sunrise].map((d) => d!.getTime());
+      const seq = [n.sunset, n.civil.dusk, n.nautical.dusk, n.astronomical.dusk, n.astronomical.dawn, n.nautical.dawn, n.civil.dawn, n.sunrise].map((d) =>
+        d!.getTime(),
+      );
       for (let i = 1; i < seq.length; i++) expect(seq[i]).toBeGreaterThan(seq[i - 1]!);
       expect(n.darkStart).toEqual(n.astronomical.dusk);
       expect(n.darkHours).toBeCloseTo((n.darkEnd!.getTime() - n.darkStart!.getTime()) / 3.6e6, 9);

@@ -41,7 +41,23 @@ function randomSite(i: number): Site {
 }
 
 function star(id: string, decDeg: number): Target {
-  return { id, starId: id, raDeg: between(0, 360), decDeg, pmRaMasYr: 300 * rng.normal(), pmDecMasYr: 300 * rng.normal(), epochYear: 2016, vmag: 9, teffK: 5500, massSun: 1, vsiniKms: 2, jitterMps: 1.5, priority: 1, estimated: [], source: 'random' };
+  return {
+    id,
+    starId: id,
+    raDeg: between(0, 360),
+    decDeg,
+    pmRaMasYr: 300 * rng.normal(),
+    pmDecMasYr: 300 * rng.normal(),
+    epochYear: 2016,
+    vmag: 9,
+    teffK: 5500,
+    massSun: 1,
+    vsiniKms: 2,
+    jitterMps: 1.5,
+    priority: 1,
+    estimated: [],
+    source: 'random',
+  };
 }
 
 describe('computeWindows against the one-minute reference sampler', () => {
@@ -54,7 +70,14 @@ describe('computeWindows against the one-minute reference sampler', () => {
       const site = randomSite(g);
       const day = new Date(Date.UTC(2024, 0, 1) + Math.floor(between(0, 365 * 6)) * 86_400_000).toISOString().slice(0, 10);
       const twilight = pick<TwilightLevel>(['civil', 'nautical', 'astronomical']);
-      const constraints: Constraints = { twilight, maxAirmass: between(1.3, 3), moonSeparationDeg: pick([0, 30, 60]), minSpacingHours: 0, sameNightSpacingHours: 0, minWindowMinutes: 0 };
+      const constraints: Constraints = {
+        twilight,
+        maxAirmass: between(1.3, 3),
+        moonSeparationDeg: pick([0, 30, 60]),
+        minSpacingHours: 0,
+        sameNightSpacingHours: 0,
+        minWindowMinutes: 0,
+      };
       const hemisphere = Math.sign(site.latitudeDeg);
       const targets = [
         star(`g${g}-circumpolar`, hemisphere * between(75, 89.5)),
@@ -65,7 +88,9 @@ describe('computeWindows against the one-minute reference sampler', () => {
       const result = computeWindows(site, targets, [night], constraints);
       fast.push(...result.windows);
       reference.push(...referenceWindows(site, targets, night, constraints));
-      circumpolar += result.windows.filter((w) => w.targetId.endsWith('circumpolar') && w.start.getTime() === night.darkStart!.getTime() && w.end.getTime() === night.darkEnd!.getTime()).length;
+      circumpolar += result.windows.filter(
+        (w) => w.targetId.endsWith('circumpolar') && w.start.getTime() === night.darkStart!.getTime() && w.end.getTime() === night.darkEnd!.getTime(),
+      ).length;
       neverUp += result.dropped.filter((d) => d.reason.startsWith('never above')).length;
     }
     const comparison = compareWithReference(fast, reference);

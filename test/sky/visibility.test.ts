@@ -15,7 +15,23 @@ import { computeWindows } from '../../src/sky/visibility.js';
 const laSilla = readSite(path.join(SITES_DIR, 'la-silla.json'));
 const masked = readSite(path.join(import.meta.dirname, '..', 'fixtures', 'sites', 'masked-south.json'));
 const base: Constraints = { twilight: 'nautical', maxAirmass: 2, moonSeparationDeg: 0, minSpacingHours: 0, sameNightSpacingHours: 0, minWindowMinutes: 0 };
-const star = (id: string, raDeg: number, decDeg: number): Target => ({ id, starId: id, raDeg, decDeg, pmRaMasYr: 0, pmDecMasYr: 0, epochYear: 2000, vmag: 9, teffK: 5500, massSun: 1, vsiniKms: 2, jitterMps: 1.5, priority: 1, estimated: [], source: 'test' });
+const star = (id: string, raDeg: number, decDeg: number): Target => ({
+  id,
+  starId: id,
+  raDeg,
+  decDeg,
+  pmRaMasYr: 0,
+  pmDecMasYr: 0,
+  epochYear: 2000,
+  vmag: 9,
+  teffK: 5500,
+  massSun: 1,
+  vsiniKms: 2,
+  jitterMps: 1.5,
+  priority: 1,
+  estimated: [],
+  source: 'test',
+});
 
 describe('prepared positions', () => {
   it('altitude matches astronomy-engine Horizon, its normal refraction scaled by the site pressure / 1010 hPa, within 0.01 deg over a night', () => {

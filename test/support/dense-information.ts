@@ -183,7 +183,11 @@ export function denseKVariances(model: StarModel, visits: DenseVisit[]): Float64
         const pl = planets[i]!;
         const u = model.planets[i]!.orbitsScale;
         const moved = (field: 'tc' | 'period' | 'x' | 'y' | 'k') => (d: number) =>
-          velocity(0, base.map((b, j) => (j === i ? { ...b, [field]: b[field] + d } : b)), t);
+          velocity(
+            0,
+            base.map((b, j) => (j === i ? { ...b, [field]: b[field] + d } : b)),
+            t,
+          );
         switch (slot.kind) {
           case 'alpha':
             return pl.periodDays * stencil(moved('tc'), 1e-4 * pl.periodDays);
@@ -196,6 +200,7 @@ export function denseKVariances(model: StarModel, visits: DenseVisit[]): Float64
           case 'k':
             return stencil(moved('k'), 1e-3);
         }
+        throw new Error(`no derivative for the slot kind of ${JSON.stringify(slot)}`);
       }),
     );
     const cInvJ = solveDense(cov, jac)!;

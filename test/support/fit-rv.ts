@@ -209,7 +209,9 @@ export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, opti
   let activityFactor: Float64Array | null = null;
   if (setup.activity) {
     const k = new Float64Array(m * m);
-    for (let a = 0; a < m; a++) for (let b = 0; b < m; b++) k[a * m + b] = activityCovariance(setup.activity, nightTimes[a]! - nightTimes[b]!) + (a === b ? 1e-9 * setup.activity.amplitudeMps ** 2 : 0);
+    for (let a = 0; a < m; a++)
+      for (let b = 0; b < m; b++)
+        k[a * m + b] = activityCovariance(setup.activity, nightTimes[a]! - nightTimes[b]!) + (a === b ? 1e-9 * setup.activity.amplitudeMps ** 2 : 0);
     activityFactor = cholesky(k, m);
   }
 
@@ -301,7 +303,8 @@ export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, opti
       for (let q = 0; q < m; q++) for (let r = 0; r <= q; r++) actNoise[q] += activityFactor[q * m + r]! * z[r]!;
     }
     curvesAt(truth);
-    for (let i = 0; i < n; i++) y[i] = modelVelocity(truth[0]!, i) + visits[i]!.whiteSigmaMps * rng.normal() + nightNoise[nightOf[i]!]! + actNoise[nightOf[i]!]!;
+    for (let i = 0; i < n; i++)
+      y[i] = modelVelocity(truth[0]!, i) + visits[i]!.whiteSigmaMps * rng.normal() + nightNoise[nightOf[i]!]! + actNoise[nightOf[i]!]!;
 
     const fromCatalogue = Float64Array.from(lay.centre);
     fromCatalogue[0] = y.reduce((s, v) => s + v, 0) / n;
@@ -314,9 +317,12 @@ export function monteCarloKErrors(setup: FitSetup, count: number, rng: Rng, opti
       failures++;
       continue;
     }
-    planets.forEach((pl, i) => kErrors[i]!.push(fit.theta[lay.k[i]!]! - pl.kMps));
+    planets.forEach((pl, i) => {
+      kErrors[i]!.push(fit.theta[lay.k[i]!]! - pl.kMps);
+    });
   }
-  if (options.diagnose) console.log(`fit-rv diagnostics: ${diagnostics.betterFromTruth} of ${count} fits from the catalogue ended above the fit started at the truth`);
+  if (options.diagnose)
+    console.log(`fit-rv diagnostics: ${diagnostics.betterFromTruth} of ${count} fits from the catalogue ended above the fit started at the truth`);
   return { kErrors, failures };
 
   /**

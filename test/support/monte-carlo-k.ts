@@ -24,7 +24,15 @@ export const MONTE_CARLO_TITLE = 'claimed σ_K against Monte Carlo fits (2,000 d
  * 0.004 P and σ_P set so that the phase error at the span's end is `phaseErrEnd` cycles:
  * σ_φ(end)² = (σ_Tc² + N² σ_P²) / P², N the orbits from Tc to the end (common practice).
  */
-export function stalePlanet(id: string, kMps: number, periodDays: number, phaseErrEnd: number, span: [number, number], ageDays: number, offset: number): PlanetInput {
+export function stalePlanet(
+  id: string,
+  kMps: number,
+  periodDays: number,
+  phaseErrEnd: number,
+  span: [number, number],
+  ageDays: number,
+  offset: number,
+): PlanetInput {
   const tcBjdTdb = span[0] - ageDays + offset * periodDays;
   const tcErrDays = 0.004 * periodDays;
   const orbits = (span[1] - tcBjdTdb) / periodDays;
@@ -48,14 +56,20 @@ export function onePerNight(rng: Rng, span: [number, number], nights: number, wh
 function compare(name: string, star: StarInput, visits: FitVisit[], seed: number): { claimed: number[]; measured: number[] } {
   const model = buildStarModel(star);
   const claimed = Array.from(kVariances(model, informationVisits(model, visits)), Math.sqrt);
-  const result = monteCarloKErrors({ planets: star.planets, nightlyJitterMps: star.nightlyJitterMps, activity: star.activity, visits }, DATA_SETS, createRng(seed));
+  const result = monteCarloKErrors(
+    { planets: star.planets, nightlyJitterMps: star.nightlyJitterMps, activity: star.activity, visits },
+    DATA_SETS,
+    createRng(seed),
+  );
   const measured = result.kErrors.map(rms);
   const bias = result.kErrors.map((e) => e.reduce((s, v) => s + v, 0) / e.length);
   result.kErrors.forEach((e, i) => {
     const sorted = [...e].sort((a, b) => a - b);
     const q = (f: number) => sorted[Math.floor(f * (sorted.length - 1))]!;
     const mad = [...e].map((v) => Math.abs(v - q(0.5))).sort((a, b) => a - b)[Math.floor(e.length / 2)]!;
-    console.log(`monte carlo ${name}, planet ${star.planets[i]!.id}: error quantiles 1/5/25/50/75/95/99%: ${[0.01, 0.05, 0.25, 0.5, 0.75, 0.95, 0.99].map((f) => q(f).toFixed(2)).join(' ')}; 1.4826 MAD ${(1.4826 * mad).toFixed(3)}; beyond 4 claimed σ: ${e.filter((v) => Math.abs(v) > 4 * claimed[i]!).length}`);
+    console.log(
+      `monte carlo ${name}, planet ${star.planets[i]!.id}: error quantiles 1/5/25/50/75/95/99%: ${[0.01, 0.05, 0.25, 0.5, 0.75, 0.95, 0.99].map((f) => q(f).toFixed(2)).join(' ')}; 1.4826 MAD ${(1.4826 * mad).toFixed(3)}; beyond 4 claimed σ: ${e.filter((v) => Math.abs(v) > 4 * claimed[i]!).length}`,
+    );
   });
   star.planets.forEach((pl, i) => {
     console.log(

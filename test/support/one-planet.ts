@@ -10,7 +10,18 @@ export function onePlanetStar(
   nightlyJitterMps = 0,
 ): ScheduleTarget {
   const model = buildStarModel({
-    planets: [{ id, kMps: planet.kMps, periodDays: planet.periodDays, tcBjdTdb: planet.tcBjdTdb, tcErrDays: planet.tcErrDays ?? 0, periodErrDays: planet.periodErrDays ?? 0, ecc: 0, omegaDeg: 90 }],
+    planets: [
+      {
+        id,
+        kMps: planet.kMps,
+        periodDays: planet.periodDays,
+        tcBjdTdb: planet.tcBjdTdb,
+        tcErrDays: planet.tcErrDays ?? 0,
+        periodErrDays: planet.periodErrDays ?? 0,
+        ecc: 0,
+        omegaDeg: 90,
+      },
+    ],
     nightlyJitterMps,
     spanBjdTdb: spanDays,
   });

@@ -29,7 +29,14 @@ export function transferSigmaMps(a: TransferView, sigmaA: number, snrA: number, 
  * s⁻¹ cm⁻² Å⁻¹ at 550 nm, common practice), with an overall efficiency and a centred Gaussian seeing
  * disc in a fibre.
  */
-export function electronsPerPixel(instrument: Instrument, mag: number, exposureSec: number, airmass: number, seeingAtAirmassArcsec: number, efficiency: number): number {
+export function electronsPerPixel(
+  instrument: Instrument,
+  mag: number,
+  exposureSec: number,
+  airmass: number,
+  seeingAtAirmassArcsec: number,
+  efficiency: number,
+): number {
   const photonsCm2SA = 1000 * 10 ** (-0.4 * (mag + instrument.extinctionMagPerAirmass * airmass));
   const areaCm2 = (Math.PI * (instrument.apertureM * 100) ** 2) / 4;
   const pixelA = (10 * instrument.wavelengthNm) / (instrument.resolvingPower * instrument.pixelsPerResolutionElement);

@@ -19,12 +19,13 @@ export async function runMain(args: string[]): Promise<MainResult> {
   const err: string[] = [];
   const writeOut = process.stdout.write;
   const writeErr = process.stderr.write;
-  const capture = (sink: string[]) => ((chunk: string | Uint8Array, ...rest: unknown[]) => {
-    sink.push(typeof chunk === 'string' ? chunk : Buffer.from(chunk).toString('utf8'));
-    const done = rest.find((r) => typeof r === 'function') as (() => void) | undefined;
-    done?.();
-    return true;
-  }) as typeof process.stdout.write;
+  const capture = (sink: string[]) =>
+    ((chunk: string | Uint8Array, ...rest: unknown[]) => {
+      sink.push(typeof chunk === 'string' ? chunk : Buffer.from(chunk).toString('utf8'));
+      const done = rest.find((r) => typeof r === 'function') as (() => void) | undefined;
+      done?.();
+      return true;
+    }) as typeof process.stdout.write;
   // The test runner replaces console's methods with its own, so they are caught here too.
   const { log, error, warn } = console;
   process.stdout.write = capture(out);

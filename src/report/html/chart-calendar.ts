@@ -39,7 +39,8 @@ export function calendarFigure(plan: Plan): ChartFigure {
   /** Planned and backup nights: columns filled and outlined differently (backups dashed), one shared legend. */
   const nightColumns = (name: string, values: object[], stroke: string, strokeDash: number[]) => ({
     data: { values },
-    name, mark: { type: 'rect', stroke, strokeDash, strokeWidth: 1 },
+    name,
+    mark: { type: 'rect', stroke, strokeDash, strokeWidth: 1 },
     encoding: {
       x,
       x2: { field: 'nightEnd' },
@@ -59,7 +60,8 @@ export function calendarFigure(plan: Plan): ChartFigure {
         width,
         height: 46,
         data: { values: moon },
-        name: 'moon_bars', mark: { type: 'rect', color: MUTED, opacity: 0.55 },
+        name: 'moon_bars',
+        mark: { type: 'rect', color: MUTED, opacity: 0.55 },
         encoding: {
           x: { ...x, axis: null },
           x2: { field: 'nightEnd' },
@@ -74,9 +76,14 @@ export function calendarFigure(plan: Plan): ChartFigure {
           nightColumns('backup_nights', backups, OKABE_ITO.orange, [3, 2]),
           {
             data: { values: visits },
-            name: 'calendar_visits', mark: { type: 'point', shape: 'circle', filled: true, size: 60, color: OKABE_ITO.blue, opacity: 1 },
+            name: 'calendar_visits',
+            mark: { type: 'point', shape: 'circle', filled: true, size: 60, color: OKABE_ITO.blue, opacity: 1 },
             encoding: {
-              x: { ...x, title: 'Night (local date of the evening)', axis: { values: ticks, labelExpr: "utcFormat(datum.value, '%d %b')", labelAngle: 0, labelOverlap: true } },
+              x: {
+                ...x,
+                title: 'Night (local date of the evening)',
+                axis: { values: ticks, labelExpr: "utcFormat(datum.value, '%d %b')", labelAngle: 0, labelOverlap: true },
+              },
               y: { field: 'target', type: 'nominal', title: 'Target', scale: { domain: targetIds }, axis: { grid: true } },
             },
           },

@@ -33,7 +33,11 @@ function panelSpec(data: DetectionMapData, panel: DetectionMapData['panels'][num
     data.msinisEarth.map((_, j) => ({ p0: pEdges[i]!, p1: pEdges[i + 1]!, m0: mEdges[j]!, m1: mEdges[j + 1]!, probability: panel.detection[i]![j]! })),
   );
   const contour = levelRows(data.periodsDays, data.msinisEarth, panel.detection).flatMap((row) =>
-    row.levels.map(({ level, mass }) => ({ periodDays: row.periodDays, level: `${Math.round(level * 100)}%`, msiniEarth: mass.where === 'inside' ? mass.msiniEarth : null })),
+    row.levels.map(({ level, mass }) => ({
+      periodDays: row.periodDays,
+      level: `${Math.round(level * 100)}%`,
+      msiniEarth: mass.where === 'inside' ? mass.msiniEarth : null,
+    })),
   );
   const x = { type: 'quantitative' as const, title: 'Orbital period (days)', scale: { type: 'log', domain: [pEdges[0], pEdges.at(-1)], nice: false } };
   const y = { type: 'quantitative' as const, title: 'm sin i (M⊕)', scale: { type: 'log', domain: [mEdges[0], mEdges.at(-1)], nice: false } };
@@ -43,7 +47,10 @@ function panelSpec(data: DetectionMapData, panel: DetectionMapData['panels'][num
       name: 'map_cells',
       mark: { type: 'rect' },
       encoding: {
-        x: { ...x, field: 'p0' }, x2: { field: 'p1' }, y: { ...y, field: 'm0' }, y2: { field: 'm1' },
+        x: { ...x, field: 'p0' },
+        x2: { field: 'p1' },
+        y: { ...y, field: 'm0' },
+        y2: { field: 'm1' },
         color: { field: 'probability', type: 'quantitative', title: 'P(detect)', scale: { scheme: 'blues', domain: [0, 1] }, legend: { format: '.0%' } },
       },
     },
@@ -52,13 +59,30 @@ function panelSpec(data: DetectionMapData, panel: DetectionMapData['panels'][num
       name: 'map_contours',
       mark: { type: 'line', color: INK, strokeWidth: 2, invalid: 'break-paths-filter-domains' },
       encoding: {
-        x: { ...x, field: 'periodDays' }, y: { ...y, field: 'msiniEarth' },
-        strokeDash: { field: 'level', type: 'nominal', title: 'detected', scale: { domain: ['50%', '90%'], range: [[1, 0], [6, 3]] } },
+        x: { ...x, field: 'periodDays' },
+        y: { ...y, field: 'msiniEarth' },
+        strokeDash: {
+          field: 'level',
+          type: 'nominal',
+          title: 'detected',
+          scale: {
+            domain: ['50%', '90%'],
+            range: [
+              [1, 0],
+              [6, 3],
+            ],
+          },
+        },
       },
     },
   ];
   if (data.markMsiniEarth !== undefined) {
-    layers.push({ data: { values: [{ msiniEarth: data.markMsiniEarth }] }, name: 'map_mark', mark: { type: 'rule', color: MUTED, strokeDash: [2, 2] }, encoding: { y: { ...y, field: 'msiniEarth' } } });
+    layers.push({
+      data: { values: [{ msiniEarth: data.markMsiniEarth }] },
+      name: 'map_mark',
+      mark: { type: 'rule', color: MUTED, strokeDash: [2, 2] },
+      encoding: { y: { ...y, field: 'msiniEarth' } },
+    });
   }
   return { title: { text: panel.label, fontSize: 12, fontWeight: 500 }, width, height: 240, layer: layers };
 }
@@ -72,7 +96,9 @@ function panelSpec(data: DetectionMapData, panel: DetectionMapData['panels'][num
 export function detectionMapFigure(data: DetectionMapData): ChartFigure {
   const width = data.panels.length > 1 ? 300 : 420;
   const panels = data.panels.map((panel) => panelSpec(data, panel, width));
-  const spec = (panels.length === 1 ? panels[0] : { hconcat: panels, resolve: { scale: { color: 'shared', strokeDash: 'shared' } } }) as unknown as TopLevelSpec;
+  const spec = (panels.length === 1
+    ? panels[0]
+    : { hconcat: panels, resolve: { scale: { color: 'shared', strokeDash: 'shared' } } }) as unknown as TopLevelSpec;
   const first = data.panels[0]!;
   const rows = levelRows(data.periodsDays, data.msinisEarth, first.detection);
   return {
@@ -81,7 +107,11 @@ export function detectionMapFigure(data: DetectionMapData): ChartFigure {
     title: `${data.targetId}: detection probability against period and m sin i`,
     caption: `${data.method} Solid line: 50% detected; dashed: 90%.${data.markMsiniEarth !== undefined ? ` Dotted rule: ${fmt(data.markMsiniEarth, 1)} M⊕.` : ''}`,
     spec,
-    columns: [{ header: 'period (d)', align: 'right' }, { header: `50% mass (M⊕, ${first.label})`, align: 'right' }, { header: '90% mass (M⊕)', align: 'right' }],
+    columns: [
+      { header: 'period (d)', align: 'right' },
+      { header: `50% mass (M⊕, ${first.label})`, align: 'right' },
+      { header: '90% mass (M⊕)', align: 'right' },
+    ],
     rows: rows.map((r) => [fmt(r.periodDays, 2), massText(r.levels[0]!.mass), massText(r.levels[1]!.mass)]),
   };
 }

@@ -53,14 +53,21 @@ export function kGrowthFigure(plan: Plan, summary: TargetSummary & { kMps: numbe
   const ahead = series.filter((p) => p.visit > 0);
   const priorVisits = summary.priorVisits ?? 0;
   const yMax = Math.max(goal, ...series.map((p) => p.kOverSigmaK)) * 1.15;
-  const x = { field: 'visit', type: 'quantitative' as const, title: done ? 'Visits ahead (0: the visits done so far)' : 'Visits so far', scale: { domain: [0, Math.max(ahead.length, 1) + 0.5], nice: false }, axis: { tickMinStep: 1, format: 'd' } };
+  const x = {
+    field: 'visit',
+    type: 'quantitative' as const,
+    title: done ? 'Visits ahead (0: the visits done so far)' : 'Visits so far',
+    scale: { domain: [0, Math.max(ahead.length, 1) + 0.5], nice: false },
+    axis: { tickMinStep: 1, format: 'd' },
+  };
   const spec = {
     width: 300,
     height: 220,
     layer: [
       {
         data: { values: [{ goal }] },
-        name: 'goal_line', mark: { type: 'rule', color: MUTED, strokeDash: [5, 3], strokeWidth: 1.5 },
+        name: 'goal_line',
+        mark: { type: 'rule', color: MUTED, strokeDash: [5, 3], strokeWidth: 1.5 },
         encoding: { y: { field: 'goal', type: 'quantitative' } },
       },
       {
@@ -71,10 +78,25 @@ export function kGrowthFigure(plan: Plan, summary: TargetSummary & { kMps: numbe
       {
         data: { values: series },
         layer: [
-          { name: 'k_growth_line', mark: { type: 'line', color: OKABE_ITO.blue, strokeWidth: 2 }, encoding: { x, y: { field: 'kOverSigmaK', type: 'quantitative' } } },
-          ...(done ? [{ name: 'k_done_segment', transform: [{ filter: 'datum.visit <= 1' }], mark: { type: 'line', color: INK, strokeWidth: 3 }, encoding: { x, y: { field: 'kOverSigmaK', type: 'quantitative' } } }] : []),
           {
-            name: 'k_growth_points', transform: [{ filter: 'datum.visit > 0' }], mark: { type: 'point', shape: 'circle', filled: true, size: 45, color: OKABE_ITO.blue, opacity: 1 },
+            name: 'k_growth_line',
+            mark: { type: 'line', color: OKABE_ITO.blue, strokeWidth: 2 },
+            encoding: { x, y: { field: 'kOverSigmaK', type: 'quantitative' } },
+          },
+          ...(done
+            ? [
+                {
+                  name: 'k_done_segment',
+                  transform: [{ filter: 'datum.visit <= 1' }],
+                  mark: { type: 'line', color: INK, strokeWidth: 3 },
+                  encoding: { x, y: { field: 'kOverSigmaK', type: 'quantitative' } },
+                },
+              ]
+            : []),
+          {
+            name: 'k_growth_points',
+            transform: [{ filter: 'datum.visit > 0' }],
+            mark: { type: 'point', shape: 'circle', filled: true, size: 45, color: OKABE_ITO.blue, opacity: 1 },
             encoding: {
               x,
               y: { field: 'kOverSigmaK', type: 'quantitative', title: 'Expected K/σ_K', scale: { domain: [0, yMax], nice: false } },
@@ -82,13 +104,25 @@ export function kGrowthFigure(plan: Plan, summary: TargetSummary & { kMps: numbe
           },
         ],
       },
-      ...(done ? [{
-        data: { values: [{ ...done, label: `done so far (${priorVisits} visits)` }] },
-        layer: [
-          { name: 'k_done_point', mark: { type: 'point', shape: 'square', filled: true, size: 80, color: INK, opacity: 1 }, encoding: { x, y: { field: 'kOverSigmaK', type: 'quantitative' } } },
-          { name: 'k_done_label', mark: { type: 'text', align: 'left', dx: 8, dy: 12, color: INK, fontSize: 11 }, encoding: { x, y: { field: 'kOverSigmaK', type: 'quantitative' }, text: { field: 'label' } } },
-        ],
-      }] : []),
+      ...(done
+        ? [
+            {
+              data: { values: [{ ...done, label: `done so far (${priorVisits} visits)` }] },
+              layer: [
+                {
+                  name: 'k_done_point',
+                  mark: { type: 'point', shape: 'square', filled: true, size: 80, color: INK, opacity: 1 },
+                  encoding: { x, y: { field: 'kOverSigmaK', type: 'quantitative' } },
+                },
+                {
+                  name: 'k_done_label',
+                  mark: { type: 'text', align: 'left', dx: 8, dy: 12, color: INK, fontSize: 11 },
+                  encoding: { x, y: { field: 'kOverSigmaK', type: 'quantitative' }, text: { field: 'label' } },
+                },
+              ],
+            },
+          ]
+        : []),
     ],
   } as unknown as TopLevelSpec;
   const last = series[series.length - 1];
@@ -99,7 +133,9 @@ export function kGrowthFigure(plan: Plan, summary: TargetSummary & { kMps: numbe
     caption:
       `Expected significance of K after each planned visit, in time order, against the goal of ${fmt(goal, 1)} (dashed). ` +
       `It includes the free velocity offset, the ephemeris uncertainty, the star's other planets and its nightly noise; after all ${ahead.length} visits${done ? ' ahead' : ''}: ${fmt(last?.kOverSigmaK, 1)}.` +
-      (done ? ` The square at 0, labelled "done so far", is what the ${priorVisits} visits already made give (${fmt(done.kOverSigmaK, 1)}); the thick segment joins it to the first visit ahead.` : ''),
+      (done
+        ? ` The square at 0, labelled "done so far", is what the ${priorVisits} visits already made give (${fmt(done.kOverSigmaK, 1)}); the thick segment joins it to the first visit ahead.`
+        : ''),
     spec,
     columns: [{ header: 'visit', align: 'right' }, { header: 'night' }, { header: 'K/sigma_K', align: 'right' }],
     rows: series.map((p) => [p.visit === 0 ? `0 (${priorVisits} made)` : String(p.visit), p.date, fmt(p.kOverSigmaK, 2)]),

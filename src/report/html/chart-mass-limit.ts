@@ -49,25 +49,36 @@ export function massLimitFigure(plan: Plan, summary: TargetSummary, target: Targ
   const { rows, goalSignificance, effectiveSigmaMps } = limit;
   const yMax = Math.max(msiniEarth, ...rows.map((r) => r.massMinRandomEarth)) * 1.15;
   const curve = rows.map((r) => ({ periodDays: r.periodDays, msiniEarth: r.massMinRandomEarth, top: yMax }));
-  const x = { field: 'periodDays', type: 'quantitative' as const, title: 'Orbital period (days)', scale: { type: 'log', domain: [periodMinDays, periodMaxDays], nice: false } };
+  const x = {
+    field: 'periodDays',
+    type: 'quantitative' as const,
+    title: 'Orbital period (days)',
+    scale: { type: 'log', domain: [periodMinDays, periodMaxDays], nice: false },
+  };
   const spec = {
     width: 380,
     height: 220,
     layer: [
       {
         data: { values: curve },
-        name: 'detectable_area', mark: { type: 'area', color: OKABE_ITO.bluishGreen, opacity: 0.12 },
+        name: 'detectable_area',
+        mark: { type: 'area', color: OKABE_ITO.bluishGreen, opacity: 0.12 },
         encoding: { x, y: { field: 'msiniEarth', type: 'quantitative' }, y2: { field: 'top' } },
       },
       {
         data: { values: curve },
-        name: 'mass_limit_line', mark: { type: 'line', color: OKABE_ITO.bluishGreen, strokeWidth: 2 },
+        name: 'mass_limit_line',
+        mark: { type: 'line', color: OKABE_ITO.bluishGreen, strokeWidth: 2 },
         encoding: { x, y: { field: 'msiniEarth', type: 'quantitative', title: 'Smallest m sin i (M⊕)', scale: { domain: [0, yMax], nice: false } } },
       },
       {
         data: { values: [{ msiniEarth, periodDays: periodMinDays, label: `target mass ${fmt(msiniEarth, 1)} M⊕` }] },
         layer: [
-          { name: 'goal_mass', mark: { type: 'rule', color: MUTED, strokeDash: [5, 3], strokeWidth: 1.5 }, encoding: { y: { field: 'msiniEarth', type: 'quantitative' } } },
+          {
+            name: 'goal_mass',
+            mark: { type: 'rule', color: MUTED, strokeDash: [5, 3], strokeWidth: 1.5 },
+            encoding: { y: { field: 'msiniEarth', type: 'quantitative' } },
+          },
           {
             mark: { type: 'text', align: 'left', dx: 4, dy: -7, color: MUTED, fontSize: 11 },
             encoding: { x, y: { field: 'msiniEarth', type: 'quantitative' }, text: { field: 'label' } },
@@ -86,7 +97,11 @@ export function massLimitFigure(plan: Plan, summary: TargetSummary, target: Targ
       `(equivalent σ = ${fmt(effectiveSigmaMps, 2)} m/s per visit, star ${fmt(target.massSun, 2)} M☉, circular orbits). ` +
       'It uses the random-phase rule σ_K ≈ σ√(2/N) and the exact inverse of K; the dashed line is the mass the search aims at.',
     spec,
-    columns: [{ header: 'period (d)', align: 'right' }, { header: 'K min (m/s)', align: 'right' }, { header: 'm sin i min (Earth masses)', align: 'right' }],
+    columns: [
+      { header: 'period (d)', align: 'right' },
+      { header: 'K min (m/s)', align: 'right' },
+      { header: 'm sin i min (Earth masses)', align: 'right' },
+    ],
     rows: shown.map((r) => [fmt(r.periodDays, 2), fmt(r.kMinRandomMps, 2), fmt(r.massMinRandomEarth, 2)]),
   };
 }

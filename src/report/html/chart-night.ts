@@ -69,7 +69,9 @@ export function nightFigure(plan: Plan, localDate: string, visits: PlannedVisit[
   const bands = night ? skyBands(night, fromMs, toMs).map((b) => ({ state: b.state, start: hours(b.startMs), end: hours(b.endMs) })) : [];
   const floorDeg = Math.max(site.minAltitudeDeg, altitudeForAirmassDeg(constraints.maxAirmass));
   const x = {
-    field: 'hour', type: 'quantitative' as const, title: `Local time (${zone})`,
+    field: 'hour',
+    type: 'quantitative' as const,
+    title: `Local time (${zone})`,
     scale: { domain: [hours(fromMs), hours(toMs)], nice: false },
     axis: { values: hourTicks(hours(fromMs), hours(toMs)), labelExpr: "format(datum.value % 24, '02d') + ':00'" },
   };
@@ -82,29 +84,42 @@ export function nightFigure(plan: Plan, localDate: string, visits: PlannedVisit[
     layer: [
       {
         data: { values: bands },
-        name: 'twilight_bands', mark: { type: 'rect' },
+        name: 'twilight_bands',
+        mark: { type: 'rect' },
         encoding: {
-          x: { ...x, field: 'start' }, x2: { field: 'end' },
-          fill: { field: 'state', type: 'nominal', title: 'Sky', scale: { domain: [...SKY_STATES], range: SKY_STATES.map(shadeOf) }, legend: { orient: 'bottom', direction: 'horizontal', columns: 5, labelLimit: 220, symbolStrokeColor: '#8a96a8', symbolStrokeWidth: 0.5 } },
+          x: { ...x, field: 'start' },
+          x2: { field: 'end' },
+          fill: {
+            field: 'state',
+            type: 'nominal',
+            title: 'Sky',
+            scale: { domain: [...SKY_STATES], range: SKY_STATES.map(shadeOf) },
+            legend: { orient: 'bottom', direction: 'horizontal', columns: 5, labelLimit: 220, symbolStrokeColor: '#8a96a8', symbolStrokeWidth: 0.5 },
+          },
         },
       },
       {
         data: { values: [{ floorDeg }] },
-        name: 'altitude_floor', mark: { type: 'rule', color: INK, strokeDash: [5, 3], strokeWidth: 1 },
+        name: 'altitude_floor',
+        mark: { type: 'rule', color: INK, strokeDash: [5, 3], strokeWidth: 1 },
         encoding: { y: { ...y, field: 'floorDeg', axis: null } },
       },
       {
         data: { values: blocks },
-        name: 'visit_blocks', mark: { type: 'rect', opacity: 0.55 },
+        name: 'visit_blocks',
+        mark: { type: 'rect', opacity: 0.55 },
         encoding: {
-          x: { ...x, field: 'start' }, x2: { field: 'end' },
-          y: { ...y, field: 'bottom', axis: null }, y2: { field: 'top' },
+          x: { ...x, field: 'start' },
+          x2: { field: 'end' },
+          y: { ...y, field: 'bottom', axis: null },
+          y2: { field: 'top' },
           color: { field: 'target', type: 'nominal', title: 'Target', scale: targetScale },
         },
       },
       {
         data: { values: curves },
-        name: 'altitude_lines', mark: { type: 'line', strokeWidth: 2, clip: true },
+        name: 'altitude_lines',
+        mark: { type: 'line', strokeWidth: 2, clip: true },
         encoding: {
           x,
           y: { ...y, field: 'altitudeDeg', title: 'Altitude (deg)' },
@@ -135,7 +150,13 @@ export function nightFigure(plan: Plan, localDate: string, visits: PlannedVisit[
 }
 
 function shadeOf(state: string): string {
-  return { day: SKY_SHADES.day, 'civil twilight': SKY_SHADES.civil, 'nautical twilight': SKY_SHADES.nautical, 'astronomical twilight': SKY_SHADES.astronomical, night: SKY_SHADES.night }[state]!;
+  return {
+    day: SKY_SHADES.day,
+    'civil twilight': SKY_SHADES.civil,
+    'nautical twilight': SKY_SHADES.nautical,
+    'astronomical twilight': SKY_SHADES.astronomical,
+    night: SKY_SHADES.night,
+  }[state]!;
 }
 
 /** Whole hours inside [from, to], every hour (or every second hour on long nights). */

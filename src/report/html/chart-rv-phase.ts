@@ -27,10 +27,12 @@ export function rvPhaseFigure(plan: Plan, summary: TargetSummary & { kMps: numbe
   const curve = Array.from({ length: CURVE_POINTS + 1 }, (_, i) => ({ phase: i / CURVE_POINTS, rv: rvAt(i / CURVE_POINTS) }));
   const fit = summary.fit;
   // The curve for K ± σ_K: v = (K ± σ_K) s(φ), the same shape scaled (K enters v linearly).
-  const band = fit && curve.map((c) => {
-    const ends = [(k - fit.kErrMps) * shape.at(c.phase), (k + fit.kErrMps) * shape.at(c.phase)];
-    return { phase: c.phase, lo: Math.min(...ends), hi: Math.max(...ends) };
-  });
+  const band =
+    fit &&
+    curve.map((c) => {
+      const ends = [(k - fit.kErrMps) * shape.at(c.phase), (k + fit.kErrMps) * shape.at(c.phase)];
+      return { phase: c.phase, lo: Math.min(...ends), hi: Math.max(...ends) };
+    });
   const { points: measured, othersRemoved } = foldedRvs(plan, summary);
   const keyed = measured.length > 0;
   // A layer's entry in the key, shown only beside measured RVs (the chart without them is unchanged).
@@ -46,9 +48,14 @@ export function rvPhaseFigure(plan: Plan, summary: TargetSummary & { kMps: numbe
     const { phase, phaseErr } = v.phases.find((p) => p.targetId === summary.targetId) ?? { phase: 0, phaseErr: 0 };
     const rv = rvAt(phase);
     return {
-      n: i + 1, date: v.kept ? `${v.localDate} (kept)` : v.localDate, phase, rv,
-      rvLo: rv - v.effectiveSigmaMps, rvHi: rv + v.effectiveSigmaMps,
-      phaseLo: phase - phaseErr, phaseHi: phase + phaseErr,
+      n: i + 1,
+      date: v.kept ? `${v.localDate} (kept)` : v.localDate,
+      phase,
+      rv,
+      rvLo: rv - v.effectiveSigmaMps,
+      rvHi: rv + v.effectiveSigmaMps,
+      phaseLo: phase - phaseErr,
+      phaseHi: phase + phaseErr,
     };
   });
   const ends = [...visits, ...measured].flatMap((v) => [Math.abs(v.rvHi), Math.abs(v.rvLo)]);
@@ -59,38 +66,56 @@ export function rvPhaseFigure(plan: Plan, summary: TargetSummary & { kMps: numbe
     width: 380,
     height: 220,
     layer: [
-      ...(band ? [{ data: { values: band }, name: 'fit_band', mark: { type: 'area', color: OKABE_ITO.skyBlue, opacity: 0.3, clip: true }, encoding: { x, y: { ...y, field: 'lo' }, y2: { field: 'hi' } } }] : []),
+      ...(band
+        ? [
+            {
+              data: { values: band },
+              name: 'fit_band',
+              mark: { type: 'area', color: OKABE_ITO.skyBlue, opacity: 0.3, clip: true },
+              encoding: { x, y: { ...y, field: 'lo' }, y2: { field: 'hi' } },
+            },
+          ]
+        : []),
       { data: { values: curve }, name: 'model_curve', mark: { type: 'line', color: INK, strokeWidth: 1.5 }, encoding: { x, y } },
       {
         data: { values: visits },
         layer: [
           {
-            name: 'rv_error_bars', mark: { type: 'rule', color: OKABE_ITO.vermillion, strokeWidth: 1.5, clip: true },
+            name: 'rv_error_bars',
+            mark: { type: 'rule', color: OKABE_ITO.vermillion, strokeWidth: 1.5, clip: true },
             encoding: { x, y: { ...y, field: 'rvLo' }, y2: { field: 'rvHi' } },
           },
           {
-            name: 'phase_error_bars', mark: { type: 'rule', color: OKABE_ITO.vermillion, strokeWidth: 1.5, clip: true },
+            name: 'phase_error_bars',
+            mark: { type: 'rule', color: OKABE_ITO.vermillion, strokeWidth: 1.5, clip: true },
             encoding: { x: { ...x, field: 'phaseLo' }, x2: { field: 'phaseHi' }, y },
           },
           {
-            name: 'visit_points', mark: { type: 'point', shape: 'circle', filled: true, size: 55, color: OKABE_ITO.vermillion, opacity: 1 },
+            name: 'visit_points',
+            mark: { type: 'point', shape: 'circle', filled: true, size: 55, color: OKABE_ITO.vermillion, opacity: 1 },
             encoding: { x, y, ...key(KEY.planned) },
           },
         ],
       },
-      ...(keyed ? [{
-        data: { values: measured },
-        layer: [
-          {
-            name: 'measured_error_bars', mark: { type: 'rule', color: OKABE_ITO.blue, strokeWidth: 1.2, clip: true },
-            encoding: { x, y: { ...y, field: 'rvLo' }, y2: { field: 'rvHi' } },
-          },
-          {
-            name: 'measured_points', mark: { type: 'point', filled: true, size: 70, opacity: 1 },
-            encoding: { x, y, ...key(KEY.measured) },
-          },
-        ],
-      }] : []),
+      ...(keyed
+        ? [
+            {
+              data: { values: measured },
+              layer: [
+                {
+                  name: 'measured_error_bars',
+                  mark: { type: 'rule', color: OKABE_ITO.blue, strokeWidth: 1.2, clip: true },
+                  encoding: { x, y: { ...y, field: 'rvLo' }, y2: { field: 'rvHi' } },
+                },
+                {
+                  name: 'measured_points',
+                  mark: { type: 'point', filled: true, size: 70, opacity: 1 },
+                  encoding: { x, y, ...key(KEY.measured) },
+                },
+              ],
+            },
+          ]
+        : []),
     ],
     ...(keyed ? { config: { legend: { orient: 'bottom', direction: 'horizontal', labelLimit: 300 } } } : {}),
   } as unknown as TopLevelSpec;
@@ -101,15 +126,21 @@ export function rvPhaseFigure(plan: Plan, summary: TargetSummary & { kMps: numbe
     caption:
       `Model curve for K = ${fmt(k, 2)} m/s on ${shape.ecc > 0 ? `an orbit with e = ${fmt(shape.ecc, 2)}, ω = ${fmt(shape.omegaDeg, 0)}°` : 'a circular orbit'} (line). Each of the ${visits.length} dots is a planned visit at its ` +
       'predicted phase; vertical bars are the per-visit RV uncertainty (±σ with jitter), horizontal bars the 1σ phase uncertainty of the ephemeris.' +
-      (fit ? ` The curve is the orbit fitted to ${fit.points} RVs so far; the shaded band spans the curves for K ± σ_K = ${fmt(k, 2)} ± ${fmt(fit.kErrMps, 2)} m/s.` : '') +
+      (fit
+        ? ` The curve is the orbit fitted to ${fit.points} RVs so far; the shaded band spans the curves for K ± σ_K = ${fmt(k, 2)} ± ${fmt(fit.kErrMps, 2)} m/s.`
+        : '') +
       (keyed
         ? ` Each of the ${measured.length} diamonds is an RV already measured, folded on the ${fit ? 'fitted ' : ''}ephemeris, less its instrument's offset ` +
           `(the weighted mean of RV − model for that instrument)${othersRemoved.length ? ` and the signal of ${othersRemoved.join(', ')}` : ''}; its bar is ±√(σ_RV² + jitter²).`
         : ''),
     spec,
     columns: [
-      { header: 'visit', align: 'right' }, { header: 'night' }, { header: 'phase', align: 'right' },
-      { header: 'phase error', align: 'right' }, { header: keyed ? 'RV: model if planned, measured if done (m/s)' : 'model RV (m/s)', align: 'right' }, { header: 'sigma (m/s)', align: 'right' },
+      { header: 'visit', align: 'right' },
+      { header: 'night' },
+      { header: 'phase', align: 'right' },
+      { header: 'phase error', align: 'right' },
+      { header: keyed ? 'RV: model if planned, measured if done (m/s)' : 'model RV (m/s)', align: 'right' },
+      { header: 'sigma (m/s)', align: 'right' },
     ],
     rows: [
       ...visits.map((v) => [String(v.n), v.date, fmt(v.phase, 3), fmt(v.phaseHi - v.phase, 3), fmt(v.rv, 2), fmt(v.rvHi - v.rv, 2)]),

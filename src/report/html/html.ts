@@ -11,14 +11,16 @@ export function escapeHtml(text: string): string {
 export function htmlTable(columns: Column[], rows: string[][], caption?: string): string {
   const cls = (c: Column) => (c.align === 'right' ? ' class="num"' : '');
   const head = columns.map((c) => `<th scope="col"${cls(c)}>${escapeHtml(c.header)}</th>`).join('');
-  const body = rows
-    .map((row) => `<tr>${row.map((cell, i) => `<td${cls(columns[i]!)}>${escapeHtml(cell)}</td>`).join('')}</tr>`)
-    .join('\n');
+  const body = rows.map((row) => `<tr>${row.map((cell, i) => `<td${cls(columns[i]!)}>${escapeHtml(cell)}</td>`).join('')}</tr>`).join('\n');
   const cap = caption ? `<caption>${escapeHtml(caption)}</caption>` : '';
   return `<table>${cap}<thead><tr>${head}</tr></thead>\n<tbody>\n${body}\n</tbody></table>`;
 }
 
 /** A short id for anchors and aria references: `SELVA-12` → `selva-12`. */
 export function anchorId(...parts: string[]): string {
-  return parts.join('-').toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-+|-+$/g, '');
+  return parts
+    .join('-')
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, '-')
+    .replace(/^-+|-+$/g, '');
 }

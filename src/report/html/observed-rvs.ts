@@ -58,7 +58,17 @@ export function foldedRvs(plan: Plan, summary: TargetSummary): { points: FoldedR
   const folded = points.map(({ v, rv, err }) => {
     const g = gamma.get(v.instrument)!;
     const y = rv - g - others(v.midBjdTdb);
-    return { date: v.localDate, instrument: v.instrument, bjdTdb: v.midBjdTdb, phase: phaseAt(self.ephemeris!, v.midBjdTdb), rv: y, rvLo: y - err, rvHi: y + err, errMps: err, gammaMps: g };
+    return {
+      date: v.localDate,
+      instrument: v.instrument,
+      bjdTdb: v.midBjdTdb,
+      phase: phaseAt(self.ephemeris!, v.midBjdTdb),
+      rv: y,
+      rvLo: y - err,
+      rvHi: y + err,
+      errMps: err,
+      gammaMps: g,
+    };
   });
   return { points: folded, othersRemoved: signals.map((p) => p.id).filter((id) => id !== summary.targetId) };
 }

@@ -32,7 +32,11 @@ export function proposalRows(plan: Plan): string[][] {
       fmt(targetOf(plan, s.targetId)?.vmag, 1),
       fmt(s.kMps, 2),
       fmt(equivalentSigmaMps(visits), 2),
-      spread(visits.map((v) => v.exposureSec), 0, '-'),
+      spread(
+        visits.map((v) => v.exposureSec),
+        0,
+        '-',
+      ),
       String(s.visits),
       fmt(s.hours, 1),
       fmt(s.kOverSigmaK, 1),
@@ -47,7 +51,12 @@ function list(items: string[]): string {
 }
 
 function clearText(clear: number | number[]): string {
-  return typeof clear === 'number' ? percent(clear) : `${spread(clear.map((c) => c * 100), 0)}% by month`;
+  return typeof clear === 'number'
+    ? percent(clear)
+    : `${spread(
+        clear.map((c) => c * 100),
+        0,
+      )}% by month`;
 }
 
 function ephemerisSentence(plan: Plan, summaries: TargetSummary[]): string {

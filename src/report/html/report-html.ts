@@ -45,7 +45,14 @@ async function targetSections(plan: Plan, maps: ReadonlyMap<string, DetectionMap
   if (ephemeris.length) {
     out.push('<h2 id="orbits">Orbital phase coverage</h2>');
     for (const s of ephemeris) {
-      out.push(`<h3>${escapeHtml(s.targetId)}</h3>`, ...[rvUpdateParagraph(plan, s)].filter(Boolean), '<div class="pair">', await renderFigure(rvPhaseFigure(plan, s)), await renderFigure(kGrowthFigure(plan, s)), '</div>');
+      out.push(
+        `<h3>${escapeHtml(s.targetId)}</h3>`,
+        ...[rvUpdateParagraph(plan, s)].filter(Boolean),
+        '<div class="pair">',
+        await renderFigure(rvPhaseFigure(plan, s)),
+        await renderFigure(kGrowthFigure(plan, s)),
+        '</div>',
+      );
     }
   }
   const search = plan.targets.flatMap((s) => {

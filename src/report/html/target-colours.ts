@@ -1,7 +1,11 @@
 import type { Plan } from '../../plan/plan-schema.js';
 import { CATEGORY_COLOURS } from './palette.js';
 
-const DASHES: readonly number[][] = [[1, 0], [6, 3], [2, 2]];
+const DASHES: readonly number[][] = [
+  [1, 0],
+  [6, 3],
+  [2, 2],
+];
 
 /**
  * Each target's colour and line dash, fixed by its place in the campaign's target list so they are
