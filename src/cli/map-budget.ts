@@ -9,14 +9,18 @@ export const MAX_SEARCH_WORK = 1e9;
 /** Simulated trials a known-phase map may take (cells × trials per cell). */
 export const MAX_KNOWN_PHASE_TRIALS = 2e7;
 
-/** Refuses (input error) a map whose work would exceed the bounds above. */
-export function checkMapBudget(jobs: MapJob[], settings: MapSettings): void {
+/**
+ * Refuses (input error) a map whose work would exceed the bounds above. The blind-search bound
+ * holds for each machine's share: the work over `searchParts` (the n of --shard i/n; a merge
+ * computes no blind-search cell and passes Infinity).
+ */
+export function checkMapBudget(jobs: MapJob[], settings: MapSettings, searchParts = 1): void {
   const cells = settings.grid.periods * settings.grid.masses;
   for (const job of jobs) {
     if (job.kind === 'search') {
       const frequencies = injectionGrid(job.input).count;
       const work = frequencies * cells * settings.trialsPerCell;
-      if (work > MAX_SEARCH_WORK) {
+      if (work / searchParts > MAX_SEARCH_WORK) {
         const periods = job.input.periodsDays;
         const value = settings.periods?.join(':') ?? `${periods[0]}:${periods[periods.length - 1]} (the plan's search range)`;
         throw inputError({

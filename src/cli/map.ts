@@ -15,7 +15,9 @@ import { DEFAULT_FAP_THRESHOLD } from '../rv/injection.js';
 import { levelRows, type LevelRow } from '../rv/injection-map.js';
 import { injectionRecoveryParallel } from '../rv/injection-worker-pool.js';
 import { knownPhaseMapAnalytic, knownPhaseMapSimulated } from '../rv/known-phase-map.js';
+import { mapShardFile, mapShardText } from '../io/map-shard-file.js';
 import { checkMapBudget } from './map-budget.js';
+import { computeShard, mergeShards, requestText, type ShardSpec, shardFlag, shardOf } from './map-shard.js';
 import { mapDataFile, reportWithMaps } from './map-report.js';
 import { mapJobs, type MapJob, type MapSettings } from './map-targets.js';
 import { levelTableText, mapTableText } from './map-text.js';
@@ -36,6 +38,8 @@ interface MapFlags {
   out?: string;
   json?: boolean;
   csv?: boolean;
+  shard?: ShardSpec;
+  merge?: boolean;
 }
 
 /** `A:B` with 0 < A < B ≤ max, as a flag parser. */
@@ -72,11 +76,24 @@ interface MapResult {
   svg: string;
 }
 
-async function runJob(job: MapJob, settings: MapSettings, threads: number, progress: Progress): Promise<Omit<MapResult, 'svg'>> {
+/** Where a blind search's detection probabilities come from: computed here, or the merged parts' (flat, cell order). */
+type SearchSource = { threads: number; progress: Progress } | { merged: number[] };
+
+async function searchDetection(job: MapJob & { kind: 'search' }, source: SearchSource): Promise<number[][]> {
+  if ('merged' in source) {
+    const masses = job.input.msinisEarth.length;
+    return job.input.periodsDays.map((_, i) => source.merged.slice(i * masses, (i + 1) * masses));
+  }
+  const { threads, progress } = source;
+  const map = await injectionRecoveryParallel(job.input, { threads, onProgress: (done, total) => progress.update(job.targetId, done, total) });
+  progress.end();
+  return map.detection;
+}
+
+async function runJob(job: MapJob, settings: MapSettings, source: SearchSource): Promise<Omit<MapResult, 'svg'>> {
   const { periodsDays, msinisEarth } = job.input;
   if (job.kind === 'search') {
-    const map = await injectionRecoveryParallel(job.input, { threads, onProgress: (done, total) => progress.update(job.targetId, done, total) });
-    progress.end();
+    const detection = await searchDetection(job, source);
     const method =
       `Injection–recovery: ${settings.trialsPerCell} trials a cell at the ${job.visits} planned visits (σ_eff with jitter), random phase, ${settings.eccMax ? `e uniform in [0, ${settings.eccMax}]` : 'circular orbits'}; ` +
       `detected when the highest GLS peak lies within 1/T of the injected frequency with Baluev FAP < ${settings.fapThreshold}.`;
@@ -85,10 +102,10 @@ async function runJob(job: MapJob, settings: MapSettings, threads: number, progr
       method,
       periodsDays,
       msinisEarth,
-      panels: [{ label: 'simulated', detection: map.detection }],
+      panels: [{ label: 'simulated', detection }],
       markMsiniEarth: job.searchMsiniEarth,
     };
-    return { job, chart, levels: levelRows(periodsDays, msinisEarth, map.detection) };
+    return { job, chart, levels: levelRows(periodsDays, msinisEarth, detection) };
   }
   const simulatedInput = { ...job.input, trialsPerCell: settings.trialsPerCell, seed: settings.seed };
   const analytic = knownPhaseMapAnalytic(job.input);
@@ -192,17 +209,20 @@ async function runMap(opts: MapFlags): Promise<void> {
     eccMax: opts.eccMax,
   };
   const { jobs, skipped } = mapJobs(plan, settings, opts.target);
-  checkMapBudget(jobs, settings);
+  checkMapBudget(jobs, settings, opts.merge ? Number.POSITIVE_INFINITY : (opts.shard?.count ?? 1));
   const outDir = opts.out ?? path.dirname(opts.plan);
+  const request = requestText(opts.target, settings);
+  // The core count is read here, at the edge; the pool takes at most one thread per cell.
+  const threads = opts.threads ?? availableParallelism();
+  if (opts.shard) return runShard(opts, opts.shard, jobs, request, outDir, threads);
+  const merged = opts.merge ? mergeShards(outDir, opts.plan, request, jobs) : undefined;
   const svgName = (targetId: string) => `map-${slug(targetId)}.svg`;
   const names = jobs.flatMap((j) => (j.kind === 'search' ? [svgName(j.targetId), mapDataFile(j.targetId)] : [svgName(j.targetId)]));
   checkOutFolder(outDir, [...names, 'report.html'], [opts.plan]);
   const progress = stderrProgress();
-  // The core count is read here, at the edge; the pool takes at most one thread per cell.
-  const threads = opts.threads ?? availableParallelism();
   const results: MapResult[] = [];
-  for (const job of jobs) {
-    const result = await runJob(job, settings, threads, progress);
+  for (const [k, job] of jobs.entries()) {
+    const result = await runJob(job, settings, merged ? { merged: merged.get(k) ?? [] } : { threads, progress });
     results.push({ ...result, svg: svgName(job.targetId) });
   }
   const files: Record<string, string> = {};
@@ -253,6 +273,21 @@ async function runMap(opts: MapFlags): Promise<void> {
   });
 }
 
+/** `--shard i/n`: computes this part's blind-search cells and writes them as one part file. */
+async function runShard(opts: MapFlags, shard: ShardSpec, jobs: MapJob[], request: string, outDir: string, threads: number): Promise<void> {
+  for (const flag of ['json', 'csv', 'merge'] as const) {
+    if (opts[flag])
+      throw inputError({ file: 'command line', field: `--${flag}`, value: true, allowed: 'not with --shard: a part prints no maps; give it to --merge' });
+  }
+  const name = mapShardFile(shard.index, shard.count);
+  checkOutFolder(outDir, [name], [opts.plan]);
+  const cells = await computeShard(jobs, shard, threads, stderrProgress());
+  const written = writeOutputSet(outDir, { [name]: mapShardText(shardOf(opts.plan, request, shard, cells)) }, [opts.plan]);
+  const searches = jobs.filter((j) => j.kind === 'search').length;
+  console.log(`Part ${shard.index} of ${shard.count} (counting from 0): ${cells.length} blind-search cells of ${searches} targets.`);
+  console.log(`Wrote ${written.join(', ')}; when every part is written, run the same command with --merge instead of --shard.`);
+}
+
 export function registerMap(program: Command): Command {
   return program
     .command('map')
@@ -296,5 +331,7 @@ export function registerMap(program: Command): Command {
     )
     .option('--json', 'print one JSON document')
     .option('--csv', 'print CSV, one row per cell and method')
+    .option('--shard <i/n>', 'compute part i (from 0) of n of the blind-search cells into map-shard-<i>-of-<n>.json in the --out folder', shardFlag)
+    .option('--merge', 'join the parts in the --out folder and write what one run writes (same flags as the parts)')
     .action(runMap);
 }

@@ -1,4 +1,5 @@
 import { mkdtempSync, readdirSync, renameSync, rmSync, writeFileSync } from 'node:fs';
+import { hostname } from 'node:os';
 import path from 'node:path';
 import { outputError } from '../errors.js';
 import { checkOutFolder, fileErrorReason } from './out-folder.js';
@@ -8,7 +9,9 @@ import { checkOutFolder, fileErrorReason } from './out-folder.js';
 // then each file is renamed into place. A run killed before the commit leaves the old set and
 // a staging folder, which the next run removes; one killed after it leaves a commit folder,
 // which the next writer or reader of the folder finishes moving. Either way the folder ends up
-// with the whole old set or the whole new one.
+// with the whole old set or the whole new one. Folder names carry the writer's pid and host, so
+// on a folder shared between machines (map parts on a cluster) no run removes the staging folder
+// of a run it cannot see; two runs finishing the same commit both end with the files in place.
 
 const STAGING = '.crest-staging-';
 const COMMIT = '.crest-commit-';
@@ -21,11 +24,18 @@ export interface OutputSetOptions {
   afterStep?: (step: OutputStep) => void;
 }
 
-/** The pid in a staging or commit folder's name. */
-const pidOf = (name: string) => Number(/^\.crest-(?:staging|commit)-(\d+)-/.exec(name)?.[1]);
+/** This machine's name as folder names carry it: letters, digits, dots and dashes only. */
+const HOST = hostname().replace(/[^A-Za-z0-9.-]/g, '_');
 
-function alive(pid: number): boolean {
-  if (pid === process.pid) return true;
+/** The pid and host in a staging or commit folder's name (no host: a name of an older version, this machine). */
+function writerOf(name: string): { pid: number; host: string } {
+  const m = /^\.crest-(?:staging|commit)-(\d+)(?:@(.+))?-[^-]+$/.exec(name);
+  return { pid: Number(m?.[1]), host: m?.[2] ?? HOST };
+}
+
+/** Whether a writer may still be running; one on another machine cannot be asked, so it may. */
+function alive({ pid, host }: { pid: number; host: string }): boolean {
+  if (host !== HOST || pid === process.pid) return true;
   try {
     process.kill(pid, 0);
     return true;
@@ -36,8 +46,19 @@ function alive(pid: number): boolean {
 
 /** Moves every file of a commit folder into place and removes the folder. */
 function finishCommit(outDir: string, commitDir: string, afterStep?: (step: OutputStep) => void): void {
-  for (const name of readdirSync(commitDir)) {
-    renameSync(path.join(commitDir, name), path.join(outDir, name));
+  let names: string[];
+  try {
+    names = readdirSync(commitDir);
+  } catch (err) {
+    if ((err as NodeJS.ErrnoException).code === 'ENOENT') return; // another run finished it
+    throw err;
+  }
+  for (const name of names) {
+    try {
+      renameSync(path.join(commitDir, name), path.join(outDir, name));
+    } catch (err) {
+      if ((err as NodeJS.ErrnoException).code !== 'ENOENT') throw err; // else another run moved it
+    }
     afterStep?.(`moved ${name}`);
   }
   rmSync(commitDir, { recursive: true, force: true });
@@ -57,7 +78,7 @@ export function recoverOutputSets(outDir: string): void {
   try {
     for (const name of names.filter((n) => n.startsWith(COMMIT)).sort()) finishCommit(outDir, path.join(outDir, name));
     for (const name of names.filter((n) => n.startsWith(STAGING))) {
-      if (!alive(pidOf(name))) rmSync(path.join(outDir, name), { recursive: true, force: true });
+      if (!alive(writerOf(name))) rmSync(path.join(outDir, name), { recursive: true, force: true });
     }
   } catch (err) {
     throw outputError(outDir, `a folder where the files of an interrupted run can be put in place (${fileErrorReason(err)})`);
@@ -87,7 +108,7 @@ export function writeOutputSet(outDir: string, files: Record<string, string>, in
   let committed = false;
   let current = '';
   try {
-    staging = mkdtempSync(path.join(outDir, `${STAGING}${process.pid}-`));
+    staging = mkdtempSync(path.join(outDir, `${STAGING}${process.pid}@${HOST}-`));
     for (const name of names) {
       current = name;
       writeFileSync(path.join(staging, name), files[name]!);

@@ -3,8 +3,7 @@
 // balances itself; since each cell has its own seeded stream, the map is identical for any number
 // of threads and equal to `injectionRecovery(input)` computed in one thread.
 import { Worker } from 'node:worker_threads';
-import { semiAmplitudeMps } from '../orbit/semi-amplitude.js';
-import { prepareInjection, type InjectionInput, type InjectionMap } from './injection.js';
+import { injectionMapFromCells, prepareInjection, type InjectionInput, type InjectionMap } from './injection.js';
 import type { CellResult } from './injection-worker.js';
 
 /** The worker script beside this module (dist/rv/injection-worker.js once built). */
@@ -17,28 +16,32 @@ export interface ParallelOptions {
   onProgress?: (done: number, total: number) => void;
 }
 
-/** The injection–recovery map of `input`, computed by worker threads (see the file comment). */
-export async function injectionRecoveryParallel(input: InjectionInput, options: ParallelOptions): Promise<InjectionMap> {
-  // Validates the input and gives the grid and threshold before any thread starts.
-  const setup = prepareInjection(input);
-  const { periodsDays, msinisEarth, starMassSun } = input;
-  const total = periodsDays.length * msinisEarth.length;
+/**
+ * The detection probabilities of the given cells of `input`'s map (cell = period index · masses +
+ * mass index), in the order given, computed by worker threads (see the file comment).
+ */
+export async function injectionCellsParallel(input: InjectionInput, cells: number[], options: ParallelOptions): Promise<number[]> {
+  // Validates the input before any thread starts.
+  prepareInjection(input);
+  const total = cells.length;
+  const out = new Array<number>(total);
+  if (total === 0) return out;
   const threads = Math.max(1, Math.min(options.threads, total));
-  const flat = new Array<number>(total);
+  const position = new Map(cells.map((cell, k) => [cell, k]));
   let next = 0;
   let done = 0;
   const workers: Worker[] = [];
   try {
     await new Promise<void>((resolve, reject) => {
       const feed = (worker: Worker) => {
-        if (next < total) worker.postMessage(next++);
+        if (next < total) worker.postMessage(cells[next++]);
       };
       for (let k = 0; k < threads; k++) {
         // execArgv [] : a compute thread needs none of the parent's flags or module hooks.
         const worker = new Worker(WORKER_URL, { workerData: input, execArgv: [] });
         workers.push(worker);
         worker.on('message', ({ cell, probability }: CellResult) => {
-          flat[cell] = probability;
+          out[position.get(cell)!] = probability;
           done += 1; // not inside the optional call below: `?.` would skip it without a callback
           options.onProgress?.(done, total);
           if (done === total) resolve();
@@ -54,13 +57,17 @@ export async function injectionRecoveryParallel(input: InjectionInput, options: 
   } finally {
     await Promise.all(workers.map((w) => w.terminate()));
   }
-  return {
-    periodsDays,
-    msinisEarth,
-    trialsPerCell: input.trialsPerCell,
-    fapThreshold: setup.fapThreshold,
-    detection: periodsDays.map((_, i) => flat.slice(i * msinisEarth.length, (i + 1) * msinisEarth.length)),
-    kCircularMps: periodsDays.map((periodDays) => msinisEarth.map((planetMassEarth) => semiAmplitudeMps({ starMassSun, planetMassEarth, periodDays }))),
-    grid: setup.grid,
-  };
+  return out;
+}
+
+/** The injection–recovery map of `input`, every cell computed by worker threads. */
+export async function injectionRecoveryParallel(input: InjectionInput, options: ParallelOptions): Promise<InjectionMap> {
+  const setup = prepareInjection(input);
+  const { periodsDays, msinisEarth } = input;
+  const flat = await injectionCellsParallel(
+    input,
+    Array.from({ length: periodsDays.length * msinisEarth.length }, (_, cell) => cell),
+    options,
+  );
+  return injectionMapFromCells(setup, flat);
 }

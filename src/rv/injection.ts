@@ -143,13 +143,20 @@ export function detectionProbability(setup: InjectionSetup, i: number, j: number
 /** The full map, one cell after another (a pure function of its input). */
 export function injectionRecovery(input: InjectionInput): InjectionMap {
   const setup = prepareInjection(input);
-  const { periodsDays, msinisEarth, starMassSun } = input;
+  const masses = input.msinisEarth.length;
+  const flat = Array.from({ length: input.periodsDays.length * masses }, (_, cell) => detectionProbability(setup, Math.floor(cell / masses), cell % masses));
+  return injectionMapFromCells(setup, flat);
+}
+
+/** The map from every cell's detection probability, flat in cell order (period index · masses + mass index). */
+export function injectionMapFromCells(setup: InjectionSetup, flat: number[]): InjectionMap {
+  const { periodsDays, msinisEarth, starMassSun } = setup.input;
   return {
     periodsDays,
     msinisEarth,
-    trialsPerCell: input.trialsPerCell,
+    trialsPerCell: setup.input.trialsPerCell,
     fapThreshold: setup.fapThreshold,
-    detection: periodsDays.map((_, i) => msinisEarth.map((_, j) => detectionProbability(setup, i, j))),
+    detection: periodsDays.map((_, i) => flat.slice(i * msinisEarth.length, (i + 1) * msinisEarth.length)),
     kCircularMps: periodsDays.map((periodDays) => msinisEarth.map((planetMassEarth) => semiAmplitudeMps({ starMassSun, planetMassEarth, periodDays }))),
     grid: setup.grid,
   };
