@@ -14,7 +14,10 @@ export const constraintsSchema = z.strictObject({
     .min(0, 'hours, 0 or more')
     .max(24 * 365, 'hours, at most a year')
     .default(20),
-  /** When visits are one a night (minSpacingHours >= 12): least spacing of a star's visits within one night, start to start, for stars with visitsPerNight > 1 (hours). */
+  /**
+   * When visits are one a night (minSpacingHours >= 12): least spacing of a star's visits within one night, start to start,
+   * for stars with visitsPerNight > 1 (hours).
+   */
   sameNightSpacingHours: z.number({ error: 'hours from 0 to 12' }).min(0, 'hours from 0 to 12').max(12, 'hours from 0 to 12').default(2),
   /** Windows shorter than this are dropped (minutes). */
   minWindowMinutes: z.number({ error: 'minutes, 0 or more' }).min(0, 'minutes, 0 or more').max(600, 'minutes, at most 600').default(20),

@@ -96,7 +96,8 @@ export function registerAmplitude(program: Command): Command {
       const summary = summarizeOrbit({ ...orbit, planetMassEarth });
       if (opts.json) return printJson({ mode: inverse ? 'inverse' : 'forward', ...summary, ...inverse });
       console.log(
-        `${inverse ? `Minimum mass from K = ${sig(opts.k!)} m/s` : 'Semi-amplitude K of the star'}: M* = ${sig(starMassSun)} Msun, P = ${sig(periodDays)} d, e = ${sig(opts.ecc)}, i = ${sig(opts.incl)} deg${opts.incl === 90 ? ' (edge-on)' : ''}`,
+        `${inverse ? `Minimum mass from K = ${sig(opts.k!)} m/s` : 'Semi-amplitude K of the star'}: M* = ${sig(starMassSun)} Msun, ` +
+          `P = ${sig(periodDays)} d, e = ${sig(opts.ecc)}, i = ${sig(opts.incl)} deg${opts.incl === 90 ? ' (edge-on)' : ''}`,
       );
       console.log(renderTable([{ header: 'quantity' }, { header: 'value', align: 'right' }, { header: 'unit' }], rowsFor(summary, inverse)));
       console.log('Speeds are barycentric, where the separation equals a (exact for a circular orbit).');

@@ -111,7 +111,8 @@ function printTable(rows: TargetDetectability[], options: DetectOptions): void {
   });
   console.log(renderTable(columns, body));
   console.log(
-    `\nPairs a/b: at random orbital phases / at ideal quadratures. sigma per visit includes floor and jitter; the floor does not average down. "!": exposure at the maximum; "-": never.`,
+    '\nPairs a/b: at random orbital phases / at ideal quadratures. sigma per visit includes floor and jitter; the floor does not average down. ' +
+      '"!": exposure at the maximum; "-": never.',
   );
   if (at !== undefined) console.log(`msini 50%/90%: the m sin i detected (K/sigma_K > ${n}) in half / nine in ten of such campaigns at random phases.`);
 }

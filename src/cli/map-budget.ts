@@ -27,7 +27,9 @@ export function checkMapBudget(jobs: MapJob[], settings: MapSettings, searchPart
           file: 'command line',
           field: '--periods',
           value,
-          allowed: `a map of at most ${MAX_SEARCH_WORK.toExponential(0)} frequency-trials (${job.targetId} needs ${frequencies} frequencies x ${cells} cells x ${settings.trialsPerCell} trials = ${work.toExponential(1)}); shorten --periods or lower --trials or --grid`,
+          allowed:
+            `a map of at most ${MAX_SEARCH_WORK.toExponential(0)} frequency-trials (${job.targetId} needs ${frequencies} frequencies x ${cells} cells ` +
+            `x ${settings.trialsPerCell} trials = ${work.toExponential(1)}); shorten --periods or lower --trials or --grid`,
         });
       }
     } else if (cells * settings.trialsPerCell > MAX_KNOWN_PHASE_TRIALS) {

@@ -95,7 +95,8 @@ async function runJob(job: MapJob, settings: MapSettings, source: SearchSource):
   if (job.kind === 'search') {
     const detection = await searchDetection(job, source);
     const method =
-      `Injection–recovery: ${settings.trialsPerCell} trials a cell at the ${job.visits} planned visits (σ_eff with jitter), random phase, ${settings.eccMax ? `e uniform in [0, ${settings.eccMax}]` : 'circular orbits'}; ` +
+      `Injection–recovery: ${settings.trialsPerCell} trials a cell at the ${job.visits} planned visits (σ_eff with jitter), random phase, ` +
+      `${settings.eccMax ? `e uniform in [0, ${settings.eccMax}]` : 'circular orbits'}; ` +
       `detected when the highest GLS peak lies within 1/T of the injected frequency with Baluev FAP < ${settings.fapThreshold}.`;
     const chart: DetectionMapData = {
       targetId: job.targetId,
@@ -176,7 +177,8 @@ function printText(results: MapResult[], skipped: string[], written: string[], f
           ? `; planet ${fmt(r.job.planetMsiniEarth, 1)} M⊕ detected ${percent(a.planet.analytic)} | ${percent(a.planet.simulated)}`
           : '';
       console.log(
-        `  ${r.job.targetId.padEnd(9)} P = ${fmt(a.periodDays, 3).padStart(6)} d: ${pair(a.analytic)} | ${pair(a.simulated)} M⊕${planet}; map cells differ by ${percent(r.maxDifference!)} at most`,
+        `  ${r.job.targetId.padEnd(9)} P = ${fmt(a.periodDays, 3).padStart(6)} d: ${pair(a.analytic)} | ${pair(a.simulated)} M⊕${planet}; ` +
+          `map cells differ by ${percent(r.maxDifference!)} at most`,
       );
     }
     console.log('');
@@ -292,7 +294,8 @@ export function registerMap(program: Command): Command {
   return program
     .command('map')
     .description(
-      'detection probability per (period, m sin i) cell for the targets of a plan: injection-recovery for blind searches, known phase for ephemeris targets; tables and SVG heatmaps',
+      'detection probability per (period, m sin i) cell for the targets of a plan: ' +
+        'injection-recovery for blind searches, known phase for ephemeris targets; tables and SVG heatmaps',
     )
     .requiredOption('--plan <file>', 'plan.json written by crest plan')
     .option('--target <id>', 'one target (default: every blind-search and ephemeris target with at least 4 visits)')

@@ -78,10 +78,12 @@ function printText(series: RvSeries, search: PeriodogramSearch): void {
   );
   console.log(`  median sigma ${fmt(median(series.rvErrorsMps), 2)} m/s; weighted rms about the mean ${fmt(weightedRmsMps(series), 2)} m/s`);
   console.log(
-    `Search: periods ${fmt(grid.minPeriodDays, 2)} to ${fmt(grid.maxPeriodDays, 1)} days, ${grid.count} frequencies, step 1/(T x ${grid.oversample}) = ${grid.stepPerDay.toPrecision(3)} per day`,
+    `Search: periods ${fmt(grid.minPeriodDays, 2)} to ${fmt(grid.maxPeriodDays, 1)} days, ${grid.count} frequencies, ` +
+      `step 1/(T x ${grid.oversample}) = ${grid.stepPerDay.toPrecision(3)} per day`,
   );
   console.log(
-    `Power with a false-alarm probability over the band (Baluev 2008): ${search.levels.map((l) => `${probabilityText(l.fap)} at p = ${fmt(l.power, 3)}`).join(', ')}`,
+    'Power with a false-alarm probability over the band (Baluev 2008): ' +
+      search.levels.map((l) => `${probabilityText(l.fap)} at p = ${fmt(l.power, 3)}`).join(', '),
   );
   console.log('');
   const rows = search.peaks.map((p) => [

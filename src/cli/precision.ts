@@ -135,7 +135,8 @@ function budgetRows(b: PrecisionBudget, instrument: Instrument, star: Pick<Detec
     [
       'reference photon noise',
       `${fmt(b.referencePhotonSigmaMps, 2)} m/s`,
-      `${instrument.band} = ${ref.mag}, ${ref.exposureSec} s, Teff ${ref.teffK} K, v sin i ${ref.vsiniKms} km/s, airmass ${ref.airmass}, S/N ${ref.snrPerPixel}`,
+      `${instrument.band} = ${ref.mag}, ${ref.exposureSec} s, Teff ${ref.teffK} K, v sin i ${ref.vsiniKms} km/s, ` +
+        `airmass ${ref.airmass}, S/N ${ref.snrPerPixel}`,
     ],
     [
       'magnitude',

@@ -104,7 +104,8 @@ export function registerVisibility(program: Command): Command {
       }
       const hm = (d: Date) => clockTime(d, site.timeZone, utc);
       console.log(
-        `${site.name}: ${targets.length} targets, nights ${opts.from} to ${opts.to}; ${opts.twilight} twilight, airmass <= ${opts.maxAirmass}, Moon >= ${opts.moonSep} deg at full Moon, windows >= ${opts.minWindow} min; times ${utc ? 'UTC' : `local (${site.timeZone})`}`,
+        `${site.name}: ${targets.length} targets, nights ${opts.from} to ${opts.to}; ${opts.twilight} twilight, airmass <= ${opts.maxAirmass}, ` +
+          `Moon >= ${opts.moonSep} deg at full Moon, windows >= ${opts.minWindow} min; times ${utc ? 'UTC' : `local (${site.timeZone})`}`,
       );
       const rows = windows.map((w) => [
         w.localDate,

@@ -92,7 +92,8 @@ export function updateFromRvs(campaign: Campaign, observed: ObservedVisit[], set
   const others = [...new Set(observed.map((v) => v.instrument))].filter((id) => id !== campaign.instrument.id);
   if (others.length > 0) {
     out.warnings.push(
-      `observed visits from ${others.join(', ')} count in the plan as if on the zero point of ${campaign.instrument.id} (the RV fit gives each instrument its own offset)`,
+      `observed visits from ${others.join(', ')} count in the plan as if on the zero point of ${campaign.instrument.id} ` +
+        '(the RV fit gives each instrument its own offset)',
     );
   }
   if (replaced.size > 0) out.campaign = { ...campaign, targets: campaign.targets.map((t) => replaced.get(t.id) ?? t) };

@@ -49,13 +49,15 @@ export function planWarnings(plan: Plan, setups: TargetSetup[], windows: Window[
     if (setup.exposure.warning) w.push(setup.exposure.warning);
     if (!neverObservable && summary.goalSignificance !== undefined && summary.kOverSigmaK !== undefined && summary.kOverSigmaK < summary.goalSignificance) {
       w.push(
-        `goal K/sigma_K = ${summary.goalSignificance} not reached: ${summary.kOverSigmaK.toFixed(1)} with ${summary.visits} visits${visitsHint(summary, setup)}`,
+        `goal K/sigma_K = ${summary.goalSignificance} not reached: ` +
+          `${summary.kOverSigmaK.toFixed(1)} with ${summary.visits} visits${visitsHint(summary, setup)}`,
       );
     }
     if (summary.phaseErrAtEnd !== undefined && summary.phaseErrAtEnd > LOST_PHASE_ERR_CYCLES && summary.kMps !== undefined) {
       const n = recoveryVisits(summary.kMps, setup.exposure.budget.effectiveSigmaMps);
       w.push(
-        `phase must be recovered first: phase error ±${summary.phaseErrAtEnd.toFixed(2)} cycles by the window's end, beyond what the plan's linearised model can trust; about ${n} visits spread in phase bring it to ±${RECOVERED_PHASE_ERR_CYCLES} cycles`,
+        `phase must be recovered first: phase error ±${summary.phaseErrAtEnd.toFixed(2)} cycles by the window's end, ` +
+          `beyond what the plan's linearised model can trust; about ${n} visits spread in phase bring it to ±${RECOVERED_PHASE_ERR_CYCLES} cycles`,
       );
     }
     const eph = setup.target.ephemeris;
@@ -65,7 +67,8 @@ export function planWarnings(plan: Plan, setups: TargetSetup[], windows: Window[
       transitHalfWidthDays(eph, nearestEpoch(eph, windowEndBjdTdb), rule) === 0
     ) {
       w.push(
-        `transit time too uncertain to avoid by the window's end (keeping out of it would remove more than ${Math.round(rule.maxOrbitFraction * 100)}% of the orbit): visits may fall in transit`,
+        "transit time too uncertain to avoid by the window's end " +
+          `(keeping out of it would remove more than ${Math.round(rule.maxOrbitFraction * 100)}% of the orbit): visits may fall in transit`,
       );
     }
   }

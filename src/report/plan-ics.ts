@@ -85,7 +85,8 @@ function addEvent(calendar: ICalCalendar, plan: Plan, visit: PlannedVisit, id: E
     location: site.name,
     description:
       `Star ${visit.starId}; exposure ${visit.exposureSec.toFixed(0)} s (block ${visit.durationSec.toFixed(0)} s with overheads); ` +
-      `airmass ${visit.airmass.toFixed(2)}${phase}; expected sigma ${visit.effectiveSigmaMps.toFixed(2)} m/s. Advisory: observatory safety rules take precedence.`,
+      `airmass ${visit.airmass.toFixed(2)}${phase}; expected sigma ${visit.effectiveSigmaMps.toFixed(2)} m/s. ` +
+      'Advisory: observatory safety rules take precedence.',
   });
 }
 

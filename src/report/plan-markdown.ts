@@ -24,7 +24,8 @@ export function renderPlanMarkdown(plan: Plan): string {
     '',
     `- Site: ${c.site.name} (${c.site.latitudeDeg.toFixed(4)}°, ${c.site.longitudeDeg.toFixed(4)}°, ${c.site.elevationM} m; ${zone})`,
     `- Instrument: ${c.instrument.name}`,
-    `- Window: ${c.window.start} to ${c.window.end}; twilight ${c.constraints.twilight}, airmass ≤ ${c.constraints.maxAirmass}, Moon ≥ ${c.constraints.moonSeparationDeg}°`,
+    `- Window: ${c.window.start} to ${c.window.end}; ` +
+      `twilight ${c.constraints.twilight}, airmass ≤ ${c.constraints.maxAirmass}, Moon ≥ ${c.constraints.moonSeparationDeg}°`,
     `- ${totalsLine(plan)}`,
     ...(historyLine(plan) ? [`- ${historyLine(plan)}`] : []),
     '',

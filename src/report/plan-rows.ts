@@ -8,7 +8,10 @@ export function clock(instant: string | Date | null, zone: string): string {
   return clockTime(typeof instant === 'string' ? new Date(instant) : instant, zone);
 }
 
-/** Each planet's predicted phase at a visit: `0.252±0.004` for one planet, `b 0.252±0.004; c 0.710±0.020` for several; with digits other than 3 (plan.csv) `id=phase±error; ...`. */
+/**
+ * Each planet's predicted phase at a visit: `0.252±0.004` for one planet, `b 0.252±0.004; c 0.710±0.020` for several;
+ * with digits other than 3 (plan.csv) `id=phase±error; ...`.
+ */
 export function phasesText(visit: PlannedVisit, digits = 3): string {
   if (visit.phases.length === 0) return digits === 3 ? '-' : '';
   const one = (p: { phase: number; phaseErr: number }) => `${p.phase.toFixed(digits)}±${p.phaseErr.toFixed(digits)}`;
@@ -182,15 +185,18 @@ export function targetRvUpdateLines(plan: Plan, t: TargetSummary): string[] {
     const shiftMin = (fitted.at - catalogue.at) * 1440;
     out.push(
       `${t.targetId} (${f.points} RVs): K ${fmt(f.catalogue.kMps, 2)} -> ${fmt(f.kMps, 2)} ± ${fmt(f.kErrMps, 2)} m/s; ` +
-        `transit near the window's middle ${shiftMin >= 0 ? '+' : ''}${fmt(shiftMin, 0)} min (${inSigma(shiftMin, catalogue.errDays * 1440)} of the catalogue), ` +
-        `now ± ${fmt(fitted.errDays * 1440, 0)} min (was ± ${fmt(catalogue.errDays * 1440, 0)}); P ${f.catalogue.periodDays.toFixed(6)} -> ${f.periodDays.toFixed(6)} ± ${f.periodErrDays.toExponential(1)} d`,
+        `transit near the window's middle ${shiftMin >= 0 ? '+' : ''}${fmt(shiftMin, 0)} min ` +
+        `(${inSigma(shiftMin, catalogue.errDays * 1440)} of the catalogue), ` +
+        `now ± ${fmt(fitted.errDays * 1440, 0)} min (was ± ${fmt(catalogue.errDays * 1440, 0)}); ` +
+        `P ${f.catalogue.periodDays.toFixed(6)} -> ${f.periodDays.toFixed(6)} ± ${f.periodErrDays.toExponential(1)} d`,
     );
   }
   const p = t.peak;
   if (p) {
     out.push(
       p.significant
-        ? `${t.targetId}: candidate signal in the RVs so far, P = ${fmt(p.periodDays, 3)} d, K = ${fmt(p.kMps, 2)} m/s, false-alarm probability ${p.fap.toExponential(1)}: offered, not adopted (add it as a planet row to plan for it)`
+        ? `${t.targetId}: candidate signal in the RVs so far, P = ${fmt(p.periodDays, 3)} d, K = ${fmt(p.kMps, 2)} m/s, ` +
+            `false-alarm probability ${p.fap.toExponential(1)}: offered, not adopted (add it as a planet row to plan for it)`
         : `${t.targetId}: no significant peak in the RVs so far (best P = ${fmt(p.periodDays, 3)} d, false-alarm probability ${fmt(p.fap, 2)})`,
     );
   }

@@ -83,7 +83,10 @@ export interface StarModel {
   planets: PlanetLayout[];
 }
 
-/** A phase error (cycles) below which an ephemeris dimension is not sampled: over ±σ the design rows move by 2πσ, so F changes by about (2πσ)² < 0.4%. */
+/**
+ * A phase error (cycles) below which an ephemeris dimension is not sampled:
+ * over ±σ the design rows move by 2πσ, so F changes by about (2πσ)² < 0.4%.
+ */
 export const SAMPLE_BELOW_CYCLES = 0.01;
 /** A period error with an exactly known Tc is given this floor on Tc (days), so the prior stays invertible. */
 const TC_ERR_FLOOR_DAYS = 1e-6;

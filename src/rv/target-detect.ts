@@ -76,7 +76,9 @@ export function planetOfTarget(target: DetectStar, hypothetical?: HypotheticalPl
       kMps: kOf(search.msiniEarth, periodDays, 0),
       periodDays,
       ecc: 0,
-      note: `search: ${search.msiniEarth} M_earth at P = ${periodDays.toFixed(1)} d, the logarithmic middle of ${search.periodMinDays}-${search.periodMaxDays} d`,
+      note:
+        `search: ${search.msiniEarth} M_earth at P = ${periodDays.toFixed(1)} d, ` +
+        `the logarithmic middle of ${search.periodMinDays}-${search.periodMaxDays} d`,
     };
   }
   return undefined;
@@ -240,7 +242,8 @@ function verdict(row: TargetDetectability, instrument: Instrument, goalSignifica
     const why = goal.quadrature > OUT_OF_REACH_VISITS ? `and ${goal.quadrature} even at ideal quadratures` : `${quad}, but the orbital phase is not known`;
     return withNotes(
       'out of reach',
-      `K = ${k} m/s against sigma ${row.effectiveSigmaMps.toFixed(2)} m/s per visit needs ${goal.random} visits for ${n} at random phases (more than ${OUT_OF_REACH_VISITS}), ${why}`,
+      `K = ${k} m/s against sigma ${row.effectiveSigmaMps.toFixed(2)} m/s per visit needs ${goal.random} visits for ${n} at random phases ` +
+        `(more than ${OUT_OF_REACH_VISITS}), ${why}`,
     );
   }
   const text = `${goal.random} visits (${goal.hoursRandom.toFixed(1)} h) for ${n} at random phases; ${quad}`;

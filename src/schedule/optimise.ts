@@ -3,7 +3,8 @@
 //
 // 1. Greedy. given-nights and hours: one greedy pass by utility gain per hour over every slot.
 //    choose-nights: greedy over nights, each night valued by the greedy schedule inside it given
-//    the plan so far (by ranking gains, so that a night holding a target's first visit counts); values are re-computed lazily (a night's cached value is re-checked only
+//    the plan so far (by ranking gains, so that a night holding a target's first visit counts);
+//    values are re-computed lazily (a night's cached value is re-checked only
 //    when it reaches the top, the usual lazy-greedy device for diminishing returns, Minoux 1978).
 // 2. Local search (local-search.ts) to a local optimum: add, replace (move and swap), night swap.
 // 3. Restarts (iterated local search, below), keeping the best plan.

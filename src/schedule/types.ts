@@ -13,7 +13,10 @@ export interface ScheduleNight {
   clearProbability: number;
   /** Hours of dark time that visits may fill; chosen visits in one night never sum to more. */
   hoursAvailable: number;
-  /** The night's middle on the slots' BJD_TDB scale (where nightly activity is evaluated; the planner gives the dark time's middle as a JD(UTC), within 10 min of it); default: the mean of its slots. */
+  /**
+   * The night's middle on the slots' BJD_TDB scale (where nightly activity is evaluated; the planner gives the dark time's middle
+   * as a JD(UTC), within 10 min of it); default: the mean of its slots.
+   */
   midBjdTdb?: number;
   /**
    * choose-nights: a night already granted (one in progress when re-planning): open from the

@@ -47,7 +47,8 @@ describe('campaign files', () => {
       sourceNote: 'invented',
       semesters: { A: { start: '04-01', end: '09-30' }, B: { start: '10-01', end: '03-31' } },
     });
-    const text = `${BASE.replace('site: la-silla', 'site: ./s.json').replace(/window: .*\n/, 'window: { semester: 2028B }\n')}time: { mode: hours, hours: 5 }\n`;
+    const withSite = BASE.replace('site: la-silla', 'site: ./s.json');
+    const text = `${withSite.replace(/window: .*\n/, 'window: { semester: 2028B }\n')}time: { mode: hours, hours: 5 }\n`;
     expect(readCampaign(campaignFile(text, 'campaign.yaml', { 's.json': site })).window).toEqual({ start: '2028-10-01', end: '2029-03-31' });
   });
 

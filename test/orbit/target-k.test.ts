@@ -8,7 +8,10 @@ describe('K of a target list row', () => {
   it('uses the given K, or computes it from the planet mass with the eccentricity', () => {
     // The row's K is the forward formula of the row's numbers.
     const [given, fromMass, none] = parseTargets(
-      `${HEADER}\nA,10:00:00,-10:00:00,9,5000,0.8,4.5,2461000.5,,7.5,\nB,10:00:00,-10:00:00,9,5000,0.8,4.5,2461000.5,12,,0.3\nC,10:00:00,-10:00:00,9,5000,0.8,,,,,\n`,
+      `${HEADER}\n` +
+        'A,10:00:00,-10:00:00,9,5000,0.8,4.5,2461000.5,,7.5,\n' +
+        'B,10:00:00,-10:00:00,9,5000,0.8,4.5,2461000.5,12,,0.3\n' +
+        'C,10:00:00,-10:00:00,9,5000,0.8,,,,,\n',
       't.csv',
     );
     expect(targetKMps(given!)).toBe(7.5);

@@ -64,7 +64,8 @@ describe('crest plan --nights', () => {
   it("chooses that many nights instead of the campaign's number", async () => {
     const dir = tempFiles({
       'campaign.yaml':
-        'name: few\nsite: la-silla\ninstrument: stable-4m\ntargets: targets.csv\nwindow: { start: 2027-04-01, end: 2027-04-10 }\ntime: { mode: choose-nights, nights: 5 }\n',
+        'name: few\nsite: la-silla\ninstrument: stable-4m\ntargets: targets.csv\n' +
+        'window: { start: 2027-04-01, end: 2027-04-10 }\ntime: { mode: choose-nights, nights: 5 }\n',
       'targets.csv': read(path.dirname(fixture('small')), 'targets.csv'),
     });
     const r = await runCliInProcess(['plan', path.join(dir, 'campaign.yaml'), '--nights', '2', '--json', '--out', path.join(dir, 'out')]);
@@ -80,7 +81,8 @@ describe('crest plan on bad input', () => {
   it('a campaign asking for 0 nights: exit 2, one line naming the field', async () => {
     const dir = tempFiles({
       'campaign.yaml':
-        'name: bad\nsite: la-silla\ninstrument: stable-4m\ntargets: targets.csv\nwindow: { start: 2027-04-01, end: 2027-04-05 }\ntime: { mode: choose-nights, nights: 0 }\n',
+        'name: bad\nsite: la-silla\ninstrument: stable-4m\ntargets: targets.csv\n' +
+        'window: { start: 2027-04-01, end: 2027-04-05 }\ntime: { mode: choose-nights, nights: 0 }\n',
       'targets.csv': read(path.dirname(fixture('small')), 'targets.csv'),
     });
     const r = await runCliInProcess(['plan', path.join(dir, 'campaign.yaml'), '--out', path.join(dir, 'out')]);

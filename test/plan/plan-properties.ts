@@ -27,7 +27,8 @@ export function describePlanProperties(names: string[], planOf: (name: string) =
     it('no visit reaches outside a reference window by more than the tolerance', () => {
       // Reported for the record: visits checked, worst reach outside a reference window, worst window edge.
       console.info(
-        `plan vs reference: ${stats.visits} visits, ${stats.maxOutsideMin.toFixed(2)} min outside at most, window edges within ${stats.maxEdgeMin.toFixed(2)} min`,
+        `plan vs reference: ${stats.visits} visits, ${stats.maxOutsideMin.toFixed(2)} min outside at most, ` +
+          `window edges within ${stats.maxEdgeMin.toFixed(2)} min`,
       );
       expect(stats.visits).toBeGreaterThanOrEqual(minVisits);
       expect(stats.maxOutsideMin).toBeLessThanOrEqual(REFERENCE_TOLERANCE_MIN);

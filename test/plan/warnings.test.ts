@@ -96,7 +96,8 @@ describe('a window without darkness', () => {
     );
     writeFileSync(
       path.join(dir, 'campaign.yaml'),
-      `name: Arctic\nsite: ${path.resolve('test/fixtures/sites/high-arctic.json')}\ninstrument: stable-2m\ntargets: targets.csv\nwindow: { start: 2027-06-15, end: 2027-06-18 }\ntime: { mode: choose-nights, nights: 2 }\n`,
+      `name: Arctic\nsite: ${path.resolve('test/fixtures/sites/high-arctic.json')}\ninstrument: stable-2m\ntargets: targets.csv\n` +
+        'window: { start: 2027-06-15, end: 2027-06-18 }\ntime: { mode: choose-nights, nights: 2 }\n',
     );
     const arctic = buildPlan(readCampaign(path.join(dir, 'campaign.yaml')), { weatherTrials: 10 });
     expect(arctic.visits).toEqual([]);

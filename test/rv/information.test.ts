@@ -286,7 +286,8 @@ describe('incremental updates', () => {
       const star = randomStar(createRng(500 + c), config.planets, config);
       const r = churn(star, 900 + c, config.activity ? 200 : 120);
       console.log(
-        `incremental, ${name}: ${r.changes} changes; vs fresh ${r.worstFresh.toExponential(2)}, trial vs apply ${r.worstTrial.toExponential(2)}, vs dense ${r.worstDense.toExponential(2)}`,
+        `incremental, ${name}: ${r.changes} changes; vs fresh ${r.worstFresh.toExponential(2)}, ` +
+          `trial vs apply ${r.worstTrial.toExponential(2)}, vs dense ${r.worstDense.toExponential(2)}`,
       );
       if (config.activity) expect(r.changes).toBeGreaterThan(64);
       expect(r.worstFresh).toBeLessThan(1e-8);

@@ -180,7 +180,8 @@ describe('fitOrbits', () => {
     });
     expect(fit.planets[0]!.eccErr).toBeUndefined();
     expect(Math.abs(fit.planets[1]!.ecc - 0.2)).toBeLessThan(4 * fit.planets[1]!.eccErr!);
-    // χ² of the data near its degrees of freedom (36 points − γ − 2 × (K, Tc, P) − e cos ω, e sin ω): within 4 √(2 dof) (χ² distribution, common practice).
+    // χ² of the data near its degrees of freedom (36 points − γ − 2 × (K, Tc, P) − e cos ω, e sin ω):
+    // within 4 √(2 dof) (χ² distribution, common practice).
     expect(fit.dof).toBe(36 - 9);
     expect(Math.abs(fit.chi2 - fit.dof)).toBeLessThan(4 * Math.sqrt(2 * fit.dof));
   });

@@ -143,7 +143,8 @@ describe('planned visits, fitted as an astronomer would', () => {
       );
       c.star.planets.forEach((p, i) => {
         console.log(
-          `${c.name}, planet ${p.id}: claimed ${claimed[i]!.toFixed(3)} m/s, fitted ${measured[i]!.toFixed(3)} m/s; random visits fitted ${random[i]!.toFixed(3)} m/s`,
+          `${c.name}, planet ${p.id}: claimed ${claimed[i]!.toFixed(3)} m/s, fitted ${measured[i]!.toFixed(3)} m/s; ` +
+            `random visits fitted ${random[i]!.toFixed(3)} m/s`,
         );
         expect(Math.abs(measured[i]! / claimed[i]! - 1)).toBeLessThan(0.1);
         // The planned visits are worth more than random ones (each RMS is good to about 1.6% at

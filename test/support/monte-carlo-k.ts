@@ -68,7 +68,9 @@ function compare(name: string, star: StarInput, visits: FitVisit[], seed: number
     const q = (f: number) => sorted[Math.floor(f * (sorted.length - 1))]!;
     const mad = [...e].map((v) => Math.abs(v - q(0.5))).sort((a, b) => a - b)[Math.floor(e.length / 2)]!;
     console.log(
-      `monte carlo ${name}, planet ${star.planets[i]!.id}: error quantiles 1/5/25/50/75/95/99%: ${[0.01, 0.05, 0.25, 0.5, 0.75, 0.95, 0.99].map((f) => q(f).toFixed(2)).join(' ')}; 1.4826 MAD ${(1.4826 * mad).toFixed(3)}; beyond 4 claimed σ: ${e.filter((v) => Math.abs(v) > 4 * claimed[i]!).length}`,
+      `monte carlo ${name}, planet ${star.planets[i]!.id}: error quantiles 1/5/25/50/75/95/99%: ` +
+        `${[0.01, 0.05, 0.25, 0.5, 0.75, 0.95, 0.99].map((f) => q(f).toFixed(2)).join(' ')}; ` +
+        `1.4826 MAD ${(1.4826 * mad).toFixed(3)}; beyond 4 claimed σ: ${e.filter((v) => Math.abs(v) > 4 * claimed[i]!).length}`,
     );
   });
   star.planets.forEach((pl, i) => {

@@ -101,11 +101,12 @@ export function detectionMapFigure(data: DetectionMapData): ChartFigure {
     : { hconcat: panels, resolve: { scale: { color: 'shared', strokeDash: 'shared' } } }) as unknown as TopLevelSpec;
   const first = data.panels[0]!;
   const rows = levelRows(data.periodsDays, data.msinisEarth, first.detection);
+  const markText = data.markMsiniEarth !== undefined ? ` Dotted rule: ${fmt(data.markMsiniEarth, 1)} M⊕.` : '';
   return {
     id: `detection-map-${data.targetId}`,
     kind: 'detection-map',
     title: `${data.targetId}: detection probability against period and m sin i`,
-    caption: `${data.method} Solid line: 50% detected; dashed: 90%.${data.markMsiniEarth !== undefined ? ` Dotted rule: ${fmt(data.markMsiniEarth, 1)} M⊕.` : ''}`,
+    caption: `${data.method} Solid line: 50% detected; dashed: 90%.${markText}`,
     spec,
     columns: [
       { header: 'period (d)', align: 'right' },

@@ -132,9 +132,11 @@ export function kGrowthFigure(plan: Plan, summary: TargetSummary & { kMps: numbe
     title: `${summary.targetId}: K/σ_K after each visit`,
     caption:
       `Expected significance of K after each planned visit, in time order, against the goal of ${fmt(goal, 1)} (dashed). ` +
-      `It includes the free velocity offset, the ephemeris uncertainty, the star's other planets and its nightly noise; after all ${ahead.length} visits${done ? ' ahead' : ''}: ${fmt(last?.kOverSigmaK, 1)}.` +
+      "It includes the free velocity offset, the ephemeris uncertainty, the star's other planets and its nightly noise; " +
+      `after all ${ahead.length} visits${done ? ' ahead' : ''}: ${fmt(last?.kOverSigmaK, 1)}.` +
       (done
-        ? ` The square at 0, labelled "done so far", is what the ${priorVisits} visits already made give (${fmt(done.kOverSigmaK, 1)}); the thick segment joins it to the first visit ahead.`
+        ? ` The square at 0, labelled "done so far", is what the ${priorVisits} visits already made give (${fmt(done.kOverSigmaK, 1)}); ` +
+          'the thick segment joins it to the first visit ahead.'
         : ''),
     spec,
     columns: [{ header: 'visit', align: 'right' }, { header: 'night' }, { header: 'K/sigma_K', align: 'right' }],

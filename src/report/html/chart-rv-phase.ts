@@ -119,19 +119,22 @@ export function rvPhaseFigure(plan: Plan, summary: TargetSummary & { kMps: numbe
     ],
     ...(keyed ? { config: { legend: { orient: 'bottom', direction: 'horizontal', labelLimit: 300 } } } : {}),
   } as unknown as TopLevelSpec;
+  const orbitText = shape.ecc > 0 ? `an orbit with e = ${fmt(shape.ecc, 2)}, ω = ${fmt(shape.omegaDeg, 0)}°` : 'a circular orbit';
   return {
     id: `rv-${summary.targetId}`,
     kind: 'rv-phase',
     title: `${summary.targetId}: expected RV curve and planned phases`,
     caption:
-      `Model curve for K = ${fmt(k, 2)} m/s on ${shape.ecc > 0 ? `an orbit with e = ${fmt(shape.ecc, 2)}, ω = ${fmt(shape.omegaDeg, 0)}°` : 'a circular orbit'} (line). Each of the ${visits.length} dots is a planned visit at its ` +
+      `Model curve for K = ${fmt(k, 2)} m/s on ${orbitText} (line). Each of the ${visits.length} dots is a planned visit at its ` +
       'predicted phase; vertical bars are the per-visit RV uncertainty (±σ with jitter), horizontal bars the 1σ phase uncertainty of the ephemeris.' +
       (fit
-        ? ` The curve is the orbit fitted to ${fit.points} RVs so far; the shaded band spans the curves for K ± σ_K = ${fmt(k, 2)} ± ${fmt(fit.kErrMps, 2)} m/s.`
+        ? ` The curve is the orbit fitted to ${fit.points} RVs so far; ` +
+          `the shaded band spans the curves for K ± σ_K = ${fmt(k, 2)} ± ${fmt(fit.kErrMps, 2)} m/s.`
         : '') +
       (keyed
         ? ` Each of the ${measured.length} diamonds is an RV already measured, folded on the ${fit ? 'fitted ' : ''}ephemeris, less its instrument's offset ` +
-          `(the weighted mean of RV − model for that instrument)${othersRemoved.length ? ` and the signal of ${othersRemoved.join(', ')}` : ''}; its bar is ±√(σ_RV² + jitter²).`
+          `(the weighted mean of RV − model for that instrument)${othersRemoved.length ? ` and the signal of ${othersRemoved.join(', ')}` : ''}; ` +
+          'its bar is ±√(σ_RV² + jitter²).'
         : ''),
     spec,
     columns: [
