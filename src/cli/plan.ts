@@ -8,6 +8,7 @@ import { checkOutFolder } from '../io/out-folder.js';
 import { writeOutputSet } from '../io/output-set.js';
 import { slug } from '../io/slug.js';
 import { buildPlan } from '../plan/build-plan.js';
+import { nightsSweep, withNightCount } from '../plan/nights-sweep.js';
 import { renderReportHtml } from '../report/html/report-html.js';
 import { renderPlanCsv } from '../report/plan-csv.js';
 import { withIcsSequences } from '../report/ics-sequence.js';
@@ -29,6 +30,7 @@ interface PlanFlags {
   seed?: number;
   now?: Date;
   lost?: string[];
+  sweepNights?: [number, number];
 }
 
 /** The campaign with the command line's lost nights added to its own. */
@@ -37,18 +39,30 @@ function withLost(campaign: Campaign, lost: string[] | undefined): Campaign {
   return { ...campaign, lostDates: [...new Set([...campaign.lostDates, ...lost])].sort() };
 }
 
+/** Refuses a night-count flag for a campaign that does not choose its nights. */
+function checkChoosesNights(campaign: Campaign, flag: string, value: string): void {
+  if (campaign.time.mode === 'choose-nights') return;
+  const allowed = `only for campaigns with time.mode choose-nights (${campaign.file} has ${campaign.time.mode})`;
+  throw inputError({ file: 'command line', field: flag, value, allowed });
+}
+
 /** The campaign with its number of nights to choose replaced; only choose-nights campaigns choose nights. */
 function withNights(campaign: Campaign, nights: number | undefined): Campaign {
   if (nights === undefined) return campaign;
-  if (campaign.time.mode !== 'choose-nights') {
-    throw inputError({
-      file: 'command line',
-      field: '--nights',
-      value: String(nights),
-      allowed: `only for campaigns with time.mode choose-nights (${campaign.file} has ${campaign.time.mode})`,
-    });
-  }
-  return { ...campaign, time: { mode: 'choose-nights', nights } };
+  checkChoosesNights(campaign, '--nights', String(nights));
+  return withNightCount(campaign, nights);
+}
+
+/** Most night counts one sweep plans (each is a whole plan). */
+const MAX_SWEEP_COUNTS = 40;
+
+/** `--sweep-nights A:B`: whole numbers 1 <= A < B <= 366, at most MAX_SWEEP_COUNTS counts. */
+function sweepFlag(text: string): [number, number] {
+  const allowed = `A:B, night counts with 1 <= A < B <= 366 and at most ${MAX_SWEEP_COUNTS} counts (B - A < ${MAX_SWEEP_COUNTS})`;
+  const m = /^(\d+):(\d+)$/.exec(text.trim());
+  const [a, b] = m ? [Number(m[1]), Number(m[2])] : [0, 0];
+  if (!(a >= 1 && a < b && b <= 366 && b - a < MAX_SWEEP_COUNTS)) throw inputError({ file: 'command line', field: '--sweep-nights', value: text, allowed });
+  return [a, b];
 }
 
 export function registerPlan(program: Command): Command {
@@ -69,10 +83,16 @@ export function registerPlan(program: Command): Command {
       instantFlag('--now'),
     )
     .option('--lost <dates>', "nights lost to weather or faults, YYYY-MM-DD,... (added to the campaign's lost list)", datesFlag('--lost'))
+    .option(
+      '--sweep-nights <A:B>',
+      'also plan every night count from A to B (choose-nights campaigns) and give, per count, each P(goal), P(all goals) and idle dark hours',
+      sweepFlag,
+    )
     .option('--json', 'print plan.json on stdout instead of the summary')
     .action(async (file: string | undefined, opts: PlanFlags) => {
       const campaignFile = file ?? path.relative(process.cwd(), DEMO_CAMPAIGN);
       const campaign = withLost(withNights(readCampaign(campaignFile), opts.nights), opts.lost);
+      if (opts.sweepNights) checkChoosesNights(campaign, '--sweep-nights', opts.sweepNights.join(':'));
       const outDir = opts.out ?? path.join('crest-out', slug(campaign.name));
       const inputs = [campaignFile, campaign.targetsFile, campaign.site.file, campaign.instrument.file, ...(campaign.observed ? [campaign.observed.file] : [])];
       checkOutFolder(outDir, PLAN_FILES, inputs);
@@ -80,7 +100,13 @@ export function registerPlan(program: Command): Command {
       // The plan the folder holds: its visits before --now are kept, and plan.ics cancels what it no longer has.
       const previous = previousPlan(outDir, campaign.name, (line) => console.error(line));
       const replan = opts.now ? { now: opts.now, ...(previous ? { previous } : {}) } : {};
-      const plan = withIcsSequences(buildPlan(campaign, { seed: opts.seed, ...replan }), previous);
+      const planOptions = { seed: opts.seed, ...replan };
+      const plan = withIcsSequences(buildPlan(campaign, planOptions), previous);
+      if (opts.sweepNights && campaign.time.mode === 'choose-nights') {
+        const [from, to] = opts.sweepNights;
+        const counts = Array.from({ length: to - from + 1 }, (_, i) => from + i);
+        plan.nightsSweep = nightsSweep(campaign, counts, planOptions, new Map([[campaign.time.nights, plan]]));
+      }
       const json = renderPlanJson(plan);
       const ics = renderPlanIcs(plan, { previous, stampMs });
       const written = writeOutputSet(

@@ -8,6 +8,7 @@ import {
   plannedVisitSchema,
   planTotalsSchema,
   replanSchema,
+  sweepRowSchema,
   targetSummarySchema,
   type Plan,
 } from '../plan/plan-schema.js';
@@ -122,7 +123,8 @@ const planSchema = z
     backups: z.array(backupNightSchema),
     visits: z.array(withoutNulls(plannedVisitSchema)),
     targets: z.array(withoutNulls(targetSummarySchema)),
-    totals: planTotalsSchema,
+    totals: withoutNulls(planTotalsSchema),
+    nightsSweep: z.array(sweepRowSchema).optional(),
     warnings: z.array(z.string()),
   })
   .superRefine((plan, ctx) => {

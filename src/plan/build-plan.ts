@@ -2,6 +2,7 @@
 // Pure: the campaign comes in already read and validated; nothing here reads or writes files.
 import { DateTime } from 'luxon';
 import { starBjdTdb } from '../astro/bjd.js';
+import type { Night } from '../model.js';
 import type { Campaign } from './campaign.js';
 import type { Plan, PlannedVisit, TargetSummary } from './plan-schema.js';
 import { phaseErrCycles } from '../orbit/ephemeris.js';
@@ -47,6 +48,7 @@ export function buildPlan(given: Campaign, options: PlanOptions = {}): Plan {
       : [...new Set([...left.spentDates, ...past.kept.map((v) => v.localDate), ...result.nightIndices.map((i) => nights[i]!.localDate)])].sort();
   const exposureHours = visits.reduce((sum, v) => sum + v.exposureSec, 0) / 3600;
   const totalHours = visits.reduce((sum, v) => sum + v.durationSec, 0) / 3600;
+  const dark = darkTime(nights, plannedDates, visits);
   const plan: Plan = {
     schemaVersion: 1,
     generator: GENERATOR,
@@ -67,11 +69,21 @@ export function buildPlan(given: Campaign, options: PlanOptions = {}): Plan {
       overheadHours: totalHours - exposureHours,
       totalHours,
       utility: result.utility,
+      ...dark,
+      allGoalsProbability: weather.allGoalsProbability,
     },
     warnings: [],
   };
   plan.warnings = [...rv.warnings, ...planWarnings(plan, setups, windows, transitRule(campaign))];
   return plan;
+}
+
+/** Dark hours of the planned nights, and those no visit uses (a visit's hours count on its own night). */
+function darkTime(nights: Night[], plannedDates: string[], visits: PlannedVisit[]): { darkHours: number; idleHours: number } {
+  const planned = new Set(plannedDates);
+  const darkHours = nights.filter((n) => planned.has(n.localDate)).reduce((sum, n) => sum + n.darkHours, 0);
+  const usedHours = visits.filter((v) => planned.has(v.localDate)).reduce((sum, v) => sum + v.durationSec, 0) / 3600;
+  return { darkHours, idleHours: Math.max(0, darkHours - usedHours) };
 }
 
 function plannedVisit(d: SlotDetail, campaign: Campaign): PlannedVisit {

@@ -114,8 +114,26 @@ export const planTotalsSchema = z.object({
   overheadHours: nonNegative,
   totalHours: nonNegative,
   utility: num,
+  /** Dark hours (the campaign's twilight) of the planned nights, and how many of them no visit uses. Absent in plans of older versions. */
+  darkHours: nonNegative.optional(),
+  idleHours: nonNegative.optional(),
+  /** Fraction of weather trials in which every planet and search reaches its goal. Absent in plans of older versions. */
+  allGoalsProbability: fraction.optional(),
 });
 export type PlanTotals = z.output<typeof planTotalsSchema>;
+
+/** One night count of a nights sweep: what the plan for that many nights gives. */
+export const sweepRowSchema = z.object({
+  nights: wholeNonNegative,
+  visits: wholeNonNegative,
+  totalHours: nonNegative,
+  darkHours: nonNegative,
+  idleHours: nonNegative,
+  allGoalsProbability: fraction,
+  /** P(goal) with weather of every planet and search, in the plan's target order. */
+  goals: z.array(z.object({ targetId: z.string(), goalProbability: fraction })),
+});
+export type SweepRow = z.output<typeof sweepRowSchema>;
 
 /** The whole plan (plan.json). The campaign and nights are the inputs and sky products as used. */
 export interface Plan {
@@ -134,5 +152,7 @@ export interface Plan {
   visits: PlannedVisit[];
   targets: TargetSummary[];
   totals: PlanTotals;
+  /** `crest plan --sweep-nights A:B`: the campaign planned for each night count from A to B. */
+  nightsSweep?: SweepRow[];
   warnings: string[];
 }

@@ -1,4 +1,5 @@
 import type { Plan } from '../plan/plan-schema.js';
+import { sweepColumns, sweepRows, sweepTitle } from './sweep-rows.js';
 import { markdownTable } from './markdown.js';
 import {
   ADVISORY,
@@ -37,6 +38,9 @@ export function renderPlanMarkdown(plan: Plan): string {
     '',
     ...(plan.observed?.length ? ['## Visits already made', '', markdownTable(OBSERVED_COLUMNS, observedRows(plan)), ''] : []),
     ...(rvUpdateLines(plan).length ? ['## What the RVs so far change', '', ...rvUpdateLines(plan).map((l) => `- ${l}`), ''] : []),
+    ...(plan.nightsSweep?.length
+      ? ['## How many nights', '', `${sweepTitle(plan)}.`, '', markdownTable(sweepColumns(plan.nightsSweep), sweepRows(plan.nightsSweep)), '']
+      : []),
     '## Nights',
     '',
   ];

@@ -1,4 +1,5 @@
 import type { Plan } from '../plan/plan-schema.js';
+import { sweepColumns, sweepRows, sweepTitle } from './sweep-rows.js';
 import { renderTable } from './table.js';
 import {
   ADVISORY,
@@ -47,6 +48,7 @@ export function renderPlanText(plan: Plan): string {
   }
   out.push('Targets', renderTable(targetColumns(plan), targetRows(plan)), '');
   out.push(totalsLine(plan));
+  if (plan.nightsSweep?.length) out.push('', sweepTitle(plan), renderTable(sweepColumns(plan.nightsSweep), sweepRows(plan.nightsSweep)));
   const warnings = [...plan.warnings, ...plan.targets.flatMap((t) => t.warnings.map((w) => `${t.targetId}: ${w}`))];
   if (warnings.length) out.push('', 'Warnings', ...warnings.map((w) => `- ${w}`));
   out.push('', ADVISORY);

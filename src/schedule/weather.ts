@@ -2,7 +2,8 @@
 // site's clear-night fraction, per month if given; common practice). A clouded night loses all
 // its visits. The plan is replayed over seeded random weather to estimate, per target, the
 // probability of reaching K/sigma_K >= goal, and the mean of K/sigma_K and of the utility, per
-// planet and per search (each star's information rebuilt from its clear visits every trial).
+// planet and per search (each star's information rebuilt from its clear visits every trial),
+// and the probability that every planet and search reaches its goal in the same trial.
 import { createRng } from '../rv/random.js';
 import { StarInformation } from '../rv/information.js';
 import { compileProblem, SlotVisit } from './compile.js';
@@ -24,6 +25,8 @@ export interface WeatherOutcome {
   /** Mean number of planned nights with visits that were clear. */
   meanClearNights: number;
   meanUtility: number;
+  /** Fraction of trials in which every planet and search reached its goal (1 when there is none). */
+  allGoalsProbability: number;
   targets: { targetId: string; goalProbability: number; meanKOverSigmaK: number }[];
 }
 
@@ -59,15 +62,19 @@ export function simulateWeather(problem: ScheduleProblem, result: ScheduleResult
   const variance = new Float64Array(Math.max(1, ...c.models.map((m) => m?.planetCount ?? 0)));
   let clearNights = 0;
   let utility = 0;
+  let allReached = 0;
+  let missed = false;
   // The plan state with prior visits alone gives each target's overshoot weight (utility.ts).
   const prior = new PlanState(c, Infinity, overshoot);
   const count = (slot: number, ratio: number, goalSignificance: number, priority: number, weight: number) => {
     sumRatio[slot] += ratio;
     // A hair of tolerance so a plan that reaches the goal exactly counts as reaching it.
     if (ratio >= goalSignificance * (1 - 1e-9)) reached[slot]++;
+    else missed = true;
     utility += priority * goalValue(ratio / goalSignificance, weight);
   };
   for (let trial = 0; trial < trials; trial++) {
+    missed = false;
     usedNights.forEach((n, i) => {
       clear[n] = rng.uniform() < clearProbability[i]! ? 1 : 0;
       clearNights += clear[n]!;
@@ -104,12 +111,14 @@ export function simulateWeather(problem: ScheduleProblem, result: ScheduleResult
       }
       if (grid) count(searchSlot[t]!, Math.exp(searchLogScore(stats, 0, grid)), c.searchGoalSignificance[t]!, c.searchPriority[t]!, prior.searchOvershoot[t]!);
     }
+    if (!missed) allReached++;
   }
   return {
     trials,
     seed,
     meanClearNights: clearNights / trials,
     meanUtility: utility / trials,
+    allGoalsProbability: allReached / trials,
     targets: ids.map((targetId, i) => ({ targetId, goalProbability: reached[i]! / trials, meanKOverSigmaK: sumRatio[i]! / trials })),
   };
 }

@@ -62,6 +62,7 @@ describe('simulateWeather', () => {
     const nights = [...new Set(visits.map((v) => v.nightIndex))];
     // Slow reference: enumerate all 2^n clear/cloudy patterns of the used nights with their probabilities.
     const exact = result.targets.map(() => 0);
+    let exactAll = 0;
     for (let mask = 0; mask < 1 << nights.length; mask++) {
       const clear = new Set(nights.filter((_, i) => mask & (1 << i)));
       const weight = nights.reduce((p, n) => p * (clear.has(n) ? 0.6 : 0.4), 1);
@@ -70,9 +71,11 @@ describe('simulateWeather', () => {
         visits.filter((v) => clear.has(v.nightIndex)),
         settings,
       );
-      ratios.forEach((r, i) => {
-        exact[i] += r >= 1 - 1e-9 ? weight : 0;
+      const reached = ratios.map((r, i) => r >= result.targets[i]!.goalSignificance * (1 - 1e-9));
+      reached.forEach((yes, i) => {
+        exact[i] += yes ? weight : 0;
       });
+      if (reached.every(Boolean)) exactAll += weight;
     }
     const trials = 1000;
     const outcome = simulateWeather(lowered, result, trials, 21, settings);
@@ -81,8 +84,46 @@ describe('simulateWeather', () => {
       const tolerance = 4 * Math.sqrt((exact[i]! * (1 - exact[i]!)) / trials) + 1e-9;
       expect(Math.abs(t.goalProbability - exact[i]!)).toBeLessThanOrEqual(tolerance);
     });
+    // Every goal in the same trial, on the exact sum (here 0: the search gets no visit).
+    expect(Math.abs(outcome.allGoalsProbability - exactAll)).toBeLessThanOrEqual(4 * Math.sqrt((exactAll * (1 - exactAll)) / trials) + 1e-9);
     // The same seed repeats; the mean number of clear nights is near 0.6 per used night.
     expect(simulateWeather(lowered, result, trials, 21, settings)).toEqual(outcome);
     expect(Math.abs(outcome.meanClearNights - 0.6 * nights.length)).toBeLessThan(4 * Math.sqrt((0.24 * nights.length) / trials));
+  });
+
+  it('gives the probability that every goal is reached in the same trial, against the exact sum', () => {
+    const problem = problemWith(0.6, 5);
+    // The two ephemeris planets only, each reached in some weather and missed in other.
+    const targets = problem.targets.filter((t) => !t.search).map((t) => ({ ...t, planets: t.planets.map((p) => ({ ...p, goalSignificance: 1 })) }));
+    const ids = new Set(targets.map((t) => t.id));
+    const two = { ...problem, targets, slots: problem.slots.filter((s) => ids.has(s.targetId)) };
+    const result = optimiseSchedule(two, { seed: 1, ...settings });
+    const byId = new Map(two.slots.map((s) => [s.slotId, s]));
+    const visits = result.slotIds.map((id) => byId.get(id)!);
+    const nights = [...new Set(visits.map((v) => v.nightIndex))];
+    let exactAll = 0;
+    const exact = result.targets.map(() => 0);
+    for (let mask = 0; mask < 1 << nights.length; mask++) {
+      const clear = new Set(nights.filter((_, i) => mask & (1 << i)));
+      const weight = nights.reduce((p, n) => p * (clear.has(n) ? 0.6 : 0.4), 1);
+      const reached = referenceKOverSigmaK(
+        two,
+        visits.filter((v) => clear.has(v.nightIndex)),
+        settings,
+      ).map((r) => r >= 1 - 1e-9);
+      reached.forEach((yes, i) => {
+        exact[i] += yes ? weight : 0;
+      });
+      if (reached.every(Boolean)) exactAll += weight;
+    }
+    // Not a trivial case: each goal is uncertain, and so is the joint.
+    for (const p of exact) expect(p > 0.05 && p < 0.95).toBe(true);
+    expect(exactAll).toBeGreaterThan(0.05);
+    // Enough trials that the product of the two probabilities (0.32 here) or the smaller one (0.36)
+    // lies outside four standard errors of the joint (0.34).
+    const trials = 20_000;
+    const outcome = simulateWeather(two, result, trials, 21, settings);
+    expect(Math.abs(outcome.allGoalsProbability - exactAll)).toBeLessThanOrEqual(4 * Math.sqrt((exactAll * (1 - exactAll)) / trials) + 1e-9);
+    expect(outcome.allGoalsProbability).toBeLessThanOrEqual(Math.min(...outcome.targets.map((t) => t.goalProbability)));
   });
 });

@@ -6,6 +6,7 @@ import { detectionMapFigure, type DetectionMapData } from './chart-detection-map
 import { kGrowthFigure } from './chart-k-growth.js';
 import { massLimitFigure } from './chart-mass-limit.js';
 import { nightFigure } from './chart-night.js';
+import { nightsSweepFigure } from './chart-nights-sweep.js';
 import { rvPhaseFigure } from './chart-rv-phase.js';
 import { renderFigure } from './figure.js';
 import { escapeHtml, htmlTable } from './html.js';
@@ -93,6 +94,7 @@ export async function renderReportHtml(plan: Plan, maps: ReadonlyMap<string, Det
     `<p class="proposal-text">${escapeHtml(proposalParagraph(plan))}</p>`,
     '<h2 id="calendar-section">Campaign calendar</h2>',
     await renderFigure(calendarFigure(plan)),
+    ...(plan.nightsSweep?.length ? ['<h2 id="sweep-section">How many nights</h2>', await renderFigure(nightsSweepFigure(plan.nightsSweep))] : []),
     '<h2 id="nights">Planned nights</h2>',
   ];
   for (const [date, visits] of visitsByNight(plan)) {

@@ -1,0 +1,33 @@
+// How many nights to ask for: the campaign planned in full for each night count of a range
+// (choose-nights), each plan with its own weather trials, so that a proposer can read, per count,
+// each goal's probability, the probability of reaching them all, and the dark time left idle.
+import type { Campaign } from './campaign.js';
+import { buildPlan, type PlanOptions } from './build-plan.js';
+import type { Plan, SweepRow } from './plan-schema.js';
+
+/** The campaign asking for `nights` nights (choose-nights). */
+export function withNightCount(campaign: Campaign, nights: number): Campaign {
+  return { ...campaign, time: { mode: 'choose-nights', nights } };
+}
+
+/** What one plan gives as a row of the sweep. */
+export function sweepRow(plan: Plan, nights: number): SweepRow {
+  const t = plan.totals;
+  return {
+    nights,
+    visits: t.visits,
+    totalHours: t.totalHours,
+    darkHours: t.darkHours ?? 0,
+    idleHours: t.idleHours ?? 0,
+    allGoalsProbability: t.allGoalsProbability ?? 0,
+    goals: plan.targets.flatMap((s) => (s.goalProbability === undefined ? [] : [{ targetId: s.targetId, goalProbability: s.goalProbability }])),
+  };
+}
+
+/**
+ * The sweep over `counts`: each count planned as `crest plan --nights n` would (same seed and
+ * options). `known` holds plans already built, by count, so the campaign's own plan is not built twice.
+ */
+export function nightsSweep(campaign: Campaign, counts: number[], options: PlanOptions = {}, known: ReadonlyMap<number, Plan> = new Map()): SweepRow[] {
+  return counts.map((n) => sweepRow(known.get(n) ?? buildPlan(withNightCount(campaign, n), options), n));
+}
