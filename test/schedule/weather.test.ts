@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { optimiseSchedule } from '../../src/schedule/optimise.js';
 import { referenceKOverSigmaK } from '../../reference/schedule.js';
 import { syntheticProblem } from '../../reference/synthetic.js';
-import type { ScheduleProblem } from '../../src/schedule/types.js';
+import type { ScheduleProblem, ScheduleResult } from '../../src/schedule/types.js';
 import { simulateWeather } from '../../src/schedule/weather.js';
 
 const settings = { searchGridSize: 16, overshootWeight: 0.1 };
@@ -22,6 +22,34 @@ function problemWith(clearProbability: number, seed: number): ScheduleProblem {
     phaseErrors: true,
   });
   return { ...base, nights: base.nights.map((n) => ({ ...n, clearProbability })) };
+}
+
+/**
+ * Slow reference: every 2^n clear/cloudy pattern of the nights the plan uses (each clear with
+ * probability 0.6), with its probability; per target, the probability of reaching its goal, and
+ * the probability of reaching every goal together.
+ */
+function exactOutcomes(problem: ScheduleProblem, result: ScheduleResult) {
+  const byId = new Map(problem.slots.map((s) => [s.slotId, s]));
+  const visits = result.slotIds.map((id) => byId.get(id)!);
+  const nights = [...new Set(visits.map((v) => v.nightIndex))];
+  const exact = result.targets.map(() => 0);
+  let exactAll = 0;
+  for (let mask = 0; mask < 1 << nights.length; mask++) {
+    const clear = new Set(nights.filter((_, i) => mask & (1 << i)));
+    const weight = nights.reduce((p, n) => p * (clear.has(n) ? 0.6 : 0.4), 1);
+    const ratios = referenceKOverSigmaK(
+      problem,
+      visits.filter((v) => clear.has(v.nightIndex)),
+      settings,
+    );
+    const reached = ratios.map((r, i) => r >= result.targets[i]!.goalSignificance * (1 - 1e-9));
+    reached.forEach((yes, i) => {
+      exact[i] += yes ? weight : 0;
+    });
+    if (reached.every(Boolean)) exactAll += weight;
+  }
+  return { exact, exactAll, nights };
 }
 
 describe('simulateWeather', () => {
@@ -57,26 +85,7 @@ describe('simulateWeather', () => {
       })),
     };
     const result = optimiseSchedule(lowered, { seed: 1, ...settings });
-    const byId = new Map(lowered.slots.map((s) => [s.slotId, s]));
-    const visits = result.slotIds.map((id) => byId.get(id)!);
-    const nights = [...new Set(visits.map((v) => v.nightIndex))];
-    // Slow reference: enumerate all 2^n clear/cloudy patterns of the used nights with their probabilities.
-    const exact = result.targets.map(() => 0);
-    let exactAll = 0;
-    for (let mask = 0; mask < 1 << nights.length; mask++) {
-      const clear = new Set(nights.filter((_, i) => mask & (1 << i)));
-      const weight = nights.reduce((p, n) => p * (clear.has(n) ? 0.6 : 0.4), 1);
-      const ratios = referenceKOverSigmaK(
-        lowered,
-        visits.filter((v) => clear.has(v.nightIndex)),
-        settings,
-      );
-      const reached = ratios.map((r, i) => r >= result.targets[i]!.goalSignificance * (1 - 1e-9));
-      reached.forEach((yes, i) => {
-        exact[i] += yes ? weight : 0;
-      });
-      if (reached.every(Boolean)) exactAll += weight;
-    }
+    const { exact, exactAll, nights } = exactOutcomes(lowered, result);
     const trials = 1000;
     const outcome = simulateWeather(lowered, result, trials, 21, settings);
     outcome.targets.forEach((t, i) => {
@@ -98,24 +107,7 @@ describe('simulateWeather', () => {
     const ids = new Set(targets.map((t) => t.id));
     const two = { ...problem, targets, slots: problem.slots.filter((s) => ids.has(s.targetId)) };
     const result = optimiseSchedule(two, { seed: 1, ...settings });
-    const byId = new Map(two.slots.map((s) => [s.slotId, s]));
-    const visits = result.slotIds.map((id) => byId.get(id)!);
-    const nights = [...new Set(visits.map((v) => v.nightIndex))];
-    let exactAll = 0;
-    const exact = result.targets.map(() => 0);
-    for (let mask = 0; mask < 1 << nights.length; mask++) {
-      const clear = new Set(nights.filter((_, i) => mask & (1 << i)));
-      const weight = nights.reduce((p, n) => p * (clear.has(n) ? 0.6 : 0.4), 1);
-      const reached = referenceKOverSigmaK(
-        two,
-        visits.filter((v) => clear.has(v.nightIndex)),
-        settings,
-      ).map((r) => r >= 1 - 1e-9);
-      reached.forEach((yes, i) => {
-        exact[i] += yes ? weight : 0;
-      });
-      if (reached.every(Boolean)) exactAll += weight;
-    }
+    const { exact, exactAll } = exactOutcomes(two, result);
     // Not a trivial case: each goal is uncertain, and so is the joint.
     for (const p of exact) expect(p > 0.05 && p < 0.95).toBe(true);
     expect(exactAll).toBeGreaterThan(0.05);
