@@ -1,4 +1,5 @@
 import { defineConfig } from 'vitest/config';
+import LongestFirst from './test/support/longest-first.js';
 
 export default defineConfig({
   test: {
@@ -12,8 +13,11 @@ export default defineConfig({
     // worker threads cannot). No test file may leave global state changed (process.env, cwd,
     // console, stdout) or mock modules.
     isolate: false,
-    // The demo plan is built once per run and shared (test/support/demo-plan.ts).
-    globalSetup: ['test/support/demo-plan-setup.ts'],
+    // The demo plan is built once per run and shared (test/support/demo-plan.ts), and so are the
+    // plans that several test files build (test/support/plan-cache.ts).
+    globalSetup: ['test/support/demo-plan-setup.ts', 'test/support/plan-cache-setup.ts'],
+    // Long files first (test/support/longest-first.ts).
+    sequence: { sequencer: LongestFirst },
     // The JSON report feeds the closing `N passed, N failed` line of .ci/run.
     reporters: ['default', ['json', { outputFile: 'test-output/vitest.json' }]],
   },

@@ -4,9 +4,10 @@
 // visits' true instants.
 import ICAL from 'ical.js';
 import { DateTime } from 'luxon';
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { readCampaign } from '../../src/io/campaign.js';
 import { readBundledSites } from '../../src/io/site-list.js';
+import type { Plan } from '../../src/plan/plan-schema.js';
 import { buildPlan } from '../../src/plan/build-plan.js';
 import { offsetChangesMs, vtimezone } from '../../src/report/plan-ics-zone.js';
 import { renderPlanIcs } from '../../src/report/plan-ics.js';
@@ -53,15 +54,19 @@ describe('VTIMEZONE against the time-zone database', () => {
 });
 
 describe('plan.ics in the week after 1 April 2029 at a Chilean site', () => {
+  // One plan for both tests (neither changes it).
+  let plan: Plan;
+  beforeAll(() => {
+    plan = buildPlan(readCampaign(fixture('chile-2029')), { weatherTrials: 10 });
+  });
+
   it('every event starts at its visit', () => {
-    const plan = buildPlan(readCampaign(fixture('chile-2029')), { weatherTrials: 10 });
     expect(plan.campaign.site.timeZone).toBe('America/Santiago');
     expect(plan.visits.length).toBeGreaterThan(3);
     expect(icsMismatches(plan, renderPlanIcs(plan))).toEqual([]);
   });
 
   it('re-planned without the nights of 7 and 8 April: their visits, either side of the change, are cancelled at their old instants', () => {
-    const plan = buildPlan(readCampaign(fixture('chile-2029')), { weatherTrials: 10 });
     // The change is 2029-04-08T03:00Z, in the night of 7 April.
     const next = { ...plan, visits: plan.visits.filter((v) => v.localDate < '2029-04-07') };
     expect(plan.visits.length - next.visits.length).toBeGreaterThan(0);

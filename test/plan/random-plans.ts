@@ -3,11 +3,18 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Plan } from '../../src/plan/plan-schema.js';
 import { buildPlan } from '../../src/plan/build-plan.js';
+import { sharedPlans } from '../support/plan-cache.js';
 import { describePlanProperties, WEATHER_TRIALS } from './plan-properties.js';
 import { randomCampaign } from './random-campaign.js';
 
 export const RANDOM_CAMPAIGNS = 50;
 const PER_FILE = 10;
+
+/** The plans of random campaigns first .. first + count - 1, built once per test run (replan.test.ts re-plans the first eight). */
+export function randomPlans(first: number, count: number): Promise<Plan[]> {
+  const indices = Array.from({ length: count }, (_, i) => first + i);
+  return sharedPlans(indices.map((i) => ({ key: `random-${i}`, build: () => buildPlan(randomCampaign(i), { weatherTrials: WEATHER_TRIALS }) })));
+}
 
 /**
  * Registers the tests of random campaigns first .. first + 9. Each ten hold at least 40 visits
@@ -21,9 +28,9 @@ export function describeRandomPlans(first: number): void {
   const planOf = (name: string) => plans.get(name)!;
 
   // Ten plans take up to 15 s on one core; the default hook limit is too tight on a loaded machine.
-  beforeAll(() => {
-    names.forEach((name, i) => {
-      plans.set(name, buildPlan(randomCampaign(first + i), { weatherTrials: WEATHER_TRIALS }));
+  beforeAll(async () => {
+    (await randomPlans(first, PER_FILE)).forEach((plan, i) => {
+      plans.set(names[i]!, plan);
     });
   }, 600_000);
 

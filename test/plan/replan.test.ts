@@ -6,7 +6,7 @@ import type { Plan } from '../../src/plan/plan-schema.js';
 import { buildPlan } from '../../src/plan/build-plan.js';
 import { demoPlan } from '../support/demo-plan.js';
 import { describePlanProperties, WEATHER_TRIALS } from './plan-properties.js';
-import { randomCampaign } from './random-campaign.js';
+import { randomPlans } from './random-plans.js';
 
 const CAMPAIGNS = 8;
 const key = (v: { starId: string; startUtc: string }) => `${v.starId} ${v.startUtc}`;
@@ -38,8 +38,11 @@ function replanCase(before: Plan, withLostBefore: boolean): Case {
 const cases = new Map<string, Case>();
 const names = [...Array.from({ length: CAMPAIGNS }, (_, i) => `random ${i}`), 'demo'];
 
-beforeAll(() => {
-  for (let i = 0; i < CAMPAIGNS; i++) cases.set(`random ${i}`, replanCase(buildPlan(randomCampaign(i), { weatherTrials: WEATHER_TRIALS }), true));
+beforeAll(async () => {
+  // The same plans as random-plans-0.test.ts's, shared (random-plans.ts).
+  (await randomPlans(0, CAMPAIGNS)).forEach((plan, i) => {
+    cases.set(`random ${i}`, replanCase(plan, true));
+  });
   cases.set('demo', replanCase(demoPlan(), false));
 }, 900_000);
 
