@@ -4,19 +4,30 @@
 // the heap stay valid (an entry records its target's version; older entries are skipped).
 import type { PlanState } from './state.js';
 
-/** Max-heap of (key, slot, version) in parallel growable arrays; equal keys go to the earlier slot. */
+/** Max-heap of (key, slot, version) in parallel typed arrays, grown as needed; equal keys go to the earlier slot. */
 class SlotHeap {
-  private keys: number[] = [];
-  private slots: number[] = [];
-  private versions: number[] = [];
-
-  get size(): number {
-    return this.keys.length;
-  }
+  private keys = new Float64Array(64);
+  private slots = new Int32Array(64);
+  private versions = new Int32Array(64);
+  size = 0;
+  /** The version of the entry the last pop returned. */
+  poppedVersion = 0;
 
   /** Whether entry i ranks above (key, slot). Ties go to the earlier slot, so the order is fully determined. */
   private above(i: number, key: number, slot: number): boolean {
     return this.keys[i]! > key || (this.keys[i] === key && this.slots[i]! < slot);
+  }
+
+  private grow(): void {
+    const keys = new Float64Array(this.keys.length * 2);
+    const slots = new Int32Array(this.keys.length * 2);
+    const versions = new Int32Array(this.keys.length * 2);
+    keys.set(this.keys);
+    slots.set(this.slots);
+    versions.set(this.versions);
+    this.keys = keys;
+    this.slots = slots;
+    this.versions = versions;
   }
 
   private put(i: number, key: number, slot: number, version: number): void {
@@ -25,36 +36,34 @@ class SlotHeap {
     this.versions[i] = version;
   }
 
-  private copy(to: number, from: number): void {
-    this.put(to, this.keys[from]!, this.slots[from]!, this.versions[from]!);
-  }
-
   push(key: number, slot: number, version: number): void {
-    let i = this.keys.length;
+    if (this.size === this.keys.length) this.grow();
+    let i = this.size++;
     while (i > 0) {
       const parent = (i - 1) >> 1;
       if (this.above(parent, key, slot)) break;
-      this.copy(i, parent);
+      this.put(i, this.keys[parent]!, this.slots[parent]!, this.versions[parent]!);
       i = parent;
     }
     this.put(i, key, slot, version);
   }
 
-  /** Removes the top entry and returns [slot, version]. */
-  pop(): [number, number] {
-    const top: [number, number] = [this.slots[0]!, this.versions[0]!];
-    const key = this.keys.pop()!;
-    const slot = this.slots.pop()!;
-    const version = this.versions.pop()!;
-    const n = this.keys.length;
+  /** Removes the top entry and returns its slot (its version in poppedVersion). */
+  pop(): number {
+    const top = this.slots[0]!;
+    this.poppedVersion = this.versions[0]!;
+    const n = --this.size;
     if (n === 0) return top;
+    const key = this.keys[n]!;
+    const slot = this.slots[n]!;
+    const version = this.versions[n]!;
     let i = 0;
     for (;;) {
       let child = 2 * i + 1;
       if (child >= n) break;
       if (child + 1 < n && this.above(child + 1, this.keys[child]!, this.slots[child]!)) child++;
       if (!this.above(child, key, slot)) break;
-      this.copy(i, child);
+      this.put(i, this.keys[child]!, this.slots[child]!, this.versions[child]!);
       i = child;
     }
     this.put(i, key, slot, version);
@@ -65,6 +74,29 @@ class SlotHeap {
 /** Smallest gain worth a visit. */
 const MIN_GAIN = 1e-12;
 
+/** The heap and per-star lists greedyFill reuses from call to call (one set per plan state). */
+interface GreedyScratch {
+  heap: SlotHeap;
+  /** Candidates grouped by star: star t's are byTarget[from[t] .. from[t] + count[t]). */
+  from: Int32Array;
+  count: Int32Array;
+  byTarget: Int32Array;
+}
+
+const scratchOf = new WeakMap<PlanState, GreedyScratch>();
+
+function scratch(state: PlanState, candidates: number): GreedyScratch {
+  let s = scratchOf.get(state);
+  if (!s) {
+    const T = state.c.targetCount;
+    s = { heap: new SlotHeap(), from: new Int32Array(T), count: new Int32Array(T), byTarget: new Int32Array(64) };
+    scratchOf.set(state, s);
+  }
+  if (s.byTarget.length < candidates) s.byTarget = new Int32Array(Math.max(candidates, 2 * s.byTarget.length));
+  s.heap.size = 0;
+  return s;
+}
+
 /**
  * Adds slots from `candidates` greedily (see the file comment); returns the slots added, in order,
  * and the sum of their ranking gains (state.rankingGain: a first ephemeris visit counts half a pair).
@@ -72,35 +104,42 @@ const MIN_GAIN = 1e-12;
  */
 export function greedyFill(state: PlanState, candidates: ArrayLike<number>, exact = false): { added: number[]; rankingValue: number } {
   const c = state.c;
-  const heap = new SlotHeap();
-  const byTarget = new Map<number, number[]>();
+  const { heap, from, count, byTarget } = scratch(state, candidates.length);
   const price = (j: number) => {
     if (!state.canAdd(j)) return;
     const g = exact ? state.gain(j) : state.rankingGain(j);
     const t = c.slotTarget[j]!;
     if (g > MIN_GAIN) heap.push(g / c.hours[j]!, j, state.targetVersion[t]!);
   };
+  // Group the candidates by star (a counting sort that keeps their order), pricing each.
+  for (let i = 0; i < candidates.length; i++) count[c.slotTarget[candidates[i]!]!] = 0;
+  for (let i = 0; i < candidates.length; i++) count[c.slotTarget[candidates[i]!]!]++;
+  let next = 0;
+  for (let i = 0; i < candidates.length; i++) {
+    const t = c.slotTarget[candidates[i]!]!;
+    if (count[t]! > 0) {
+      from[t] = next;
+      next += count[t]!;
+      count[t] = 0;
+    }
+  }
   for (let i = 0; i < candidates.length; i++) {
     const j = candidates[i]!;
     const t = c.slotTarget[j]!;
-    let list = byTarget.get(t);
-    if (!list) {
-      list = [];
-      byTarget.set(t, list);
-    }
-    list.push(j);
+    byTarget[from[t]! + count[t]!++] = j;
     price(j);
   }
   const added: number[] = [];
   let rankingValue = 0;
   while (heap.size > 0) {
-    const [j, version] = heap.pop();
+    const j = heap.pop();
     const t = c.slotTarget[j]!;
-    if (version !== state.targetVersion[t] || !state.canAdd(j)) continue;
+    if (heap.poppedVersion !== state.targetVersion[t] || !state.canAdd(j)) continue;
     rankingValue += state.rankingGain(j);
     state.add(j);
     added.push(j);
-    for (const k of byTarget.get(t)!) if (k !== j) price(k);
+    const end = from[t]! + count[t]!;
+    for (let i = from[t]!; i < end; i++) if (byTarget[i] !== j) price(byTarget[i]!);
   }
   return { added, rankingValue };
 }

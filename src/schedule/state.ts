@@ -189,19 +189,27 @@ export class PlanState {
     const t = c.slotTarget[j]!;
     const mine = this.targetVisits[t]!;
     const k = lowerBound(mine, j);
+    const start = c.startMs[j]!;
     // With onePerNight the star's visits of night n are contiguous around k (slots sorted by night,
     // then start): each is held to the same-night spacing and counted; the nearest visit of
     // another night on either side to minSpacing (the next ones are further still).
-    let sameNight = c.onePerNight ? (c.prior.inNight.get(t * c.nightCount + n) ?? 0) : 0;
-    for (const step of [-1, 1]) {
-      let at = step < 0 ? k - 1 : k;
-      for (; c.onePerNight && at >= 0 && at < mine.length && c.slotNight[mine[at]!] === n; at += step) {
-        if (Math.abs(c.startMs[mine[at]!]! - c.startMs[j]!) < c.sameNightSpacingMs) return false;
+    let sameNight = c.onePerNight && c.prior.inNight.size > 0 ? (c.prior.inNight.get(t * c.nightCount + n) ?? 0) : 0;
+    let below = k - 1;
+    let above = k;
+    if (c.onePerNight) {
+      for (; below >= 0 && c.slotNight[mine[below]!] === n; below--) {
+        if (Math.abs(c.startMs[mine[below]!]! - start) < c.sameNightSpacingMs) return false;
         sameNight++;
       }
-      const other = mine[at];
-      if (other !== undefined && Math.abs(c.startMs[other]! - c.startMs[j]!) < c.spacingMs) return false;
     }
+    if (below >= 0 && Math.abs(c.startMs[mine[below]!]! - start) < c.spacingMs) return false;
+    if (c.onePerNight) {
+      for (; above < mine.length && c.slotNight[mine[above]!] === n; above++) {
+        if (Math.abs(c.startMs[mine[above]!]! - start) < c.sameNightSpacingMs) return false;
+        sameNight++;
+      }
+    }
+    if (above < mine.length && Math.abs(c.startMs[mine[above]!]! - start) < c.spacingMs) return false;
     return !c.onePerNight || sameNight < c.visitsPerNight[t]!;
   }
 
