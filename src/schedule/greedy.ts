@@ -81,6 +81,8 @@ interface GreedyScratch {
   from: Int32Array;
   count: Int32Array;
   byTarget: Int32Array;
+  /** The stars among the candidates, in order of their first candidate. */
+  targets: Int32Array;
 }
 
 const scratchOf = new WeakMap<PlanState, GreedyScratch>();
@@ -89,7 +91,7 @@ function scratch(state: PlanState, candidates: number): GreedyScratch {
   let s = scratchOf.get(state);
   if (!s) {
     const T = state.c.targetCount;
-    s = { heap: new SlotHeap(), from: new Int32Array(T), count: new Int32Array(T), byTarget: new Int32Array(64) };
+    s = { heap: new SlotHeap(), from: new Int32Array(T), count: new Int32Array(T), byTarget: new Int32Array(64), targets: new Int32Array(T) };
     scratchOf.set(state, s);
   }
   if (s.byTarget.length < candidates) s.byTarget = new Int32Array(Math.max(candidates, 2 * s.byTarget.length));
@@ -104,20 +106,16 @@ function scratch(state: PlanState, candidates: number): GreedyScratch {
  */
 export function greedyFill(state: PlanState, candidates: ArrayLike<number>, exact = false): { added: number[]; rankingValue: number } {
   const c = state.c;
-  const { heap, from, count, byTarget } = scratch(state, candidates.length);
-  const price = (j: number) => {
-    if (!state.canAdd(j)) return;
-    const g = exact ? state.gain(j) : state.rankingGain(j);
-    const t = c.slotTarget[j]!;
-    if (g > MIN_GAIN) heap.push(g / c.hours[j]!, j, state.targetVersion[t]!);
-  };
-  // Group the candidates by star (a counting sort that keeps their order), pricing each.
+  const { heap, from, count, byTarget, targets } = scratch(state, candidates.length);
+  // Group the candidates by star (a counting sort that keeps their order).
   for (let i = 0; i < candidates.length; i++) count[c.slotTarget[candidates[i]!]!] = 0;
   for (let i = 0; i < candidates.length; i++) count[c.slotTarget[candidates[i]!]!]++;
   let next = 0;
+  let targetCount = 0;
   for (let i = 0; i < candidates.length; i++) {
     const t = c.slotTarget[candidates[i]!]!;
     if (count[t]! > 0) {
+      targets[targetCount++] = t;
       from[t] = next;
       next += count[t]!;
       count[t] = 0;
@@ -127,8 +125,24 @@ export function greedyFill(state: PlanState, candidates: ArrayLike<number>, exac
     const j = candidates[i]!;
     const t = c.slotTarget[j]!;
     byTarget[from[t]! + count[t]!++] = j;
-    price(j);
   }
+  // Prices star t's listed slots but `skip`, dropping those that cannot be added: the greedy only
+  // adds, and an add never makes another slot addable, so they stay out for the rest of the pass.
+  const price = (t: number, skip: number) => {
+    const start = from[t]!;
+    const end = start + count[t]!;
+    const version = state.targetVersion[t]!;
+    let kept = start;
+    for (let i = start; i < end; i++) {
+      const j = byTarget[i]!;
+      if (j === skip || !state.canAdd(j)) continue;
+      byTarget[kept++] = j;
+      const g = exact ? state.gain(j) : state.rankingGain(j);
+      if (g > MIN_GAIN) heap.push(g / c.hours[j]!, j, version);
+    }
+    count[t] = kept - start;
+  };
+  for (let i = 0; i < targetCount; i++) price(targets[i]!, -1);
   const added: number[] = [];
   let rankingValue = 0;
   while (heap.size > 0) {
@@ -138,8 +152,7 @@ export function greedyFill(state: PlanState, candidates: ArrayLike<number>, exac
     rankingValue += state.rankingGain(j);
     state.add(j);
     added.push(j);
-    const end = from[t]! + count[t]!;
-    for (let i = from[t]!; i < end; i++) if (byTarget[i] !== j) price(byTarget[i]!);
+    price(t, j);
   }
   return { added, rankingValue };
 }

@@ -3,8 +3,8 @@
 // visit costs what that star's model costs (O(samples x parameters^2), or O(observed nights^2)
 // with correlated activity), plus O(period grid) for a search: never a recomputation of the plan.
 import { StarInformation, type InformationVisit } from '../rv/information.js';
-import { SlotVisit, type CompiledProblem } from './compile.js';
-import { searchLogScore, updateSearchStats } from './objective-search.js';
+import { SlotVisit, slotTrig, type CompiledProblem } from './compile.js';
+import { searchLogScoreWith, updateSearchStatsWith } from './objective-search.js';
 import { seedInformation, seedSearchStats } from './prior.js';
 import { goalValue, overshootAfterPrior } from './utility.js';
 
@@ -100,9 +100,8 @@ export class PlanState {
   /** (K/sigma_K)/goal of star t's search with slot j added (sign 1), removed (-1), or as it is (0). */
   searchFractionOfGoal(t: number, sign: number, j: number): number {
     const c = this.c;
-    const w = sign === 0 ? 0 : c.weight[j]!;
-    const a = sign === 0 ? 0 : c.midBjdTdb[j]!;
-    return Math.exp(searchLogScore(this.stats, c.statsOffset[t]!, c.grids[t]!, sign, w, a)) / c.searchGoalSignificance[t]!;
+    const sw = sign === 0 ? 0 : sign * c.weight[j]!;
+    return Math.exp(searchLogScoreWith(this.stats, c.statsOffset[t]!, c.grids[t]!, sw, sw !== 0 ? slotTrig(c, j) : undefined)) / c.searchGoalSignificance[t]!;
   }
 
   /** Utility of star t with slot j added (sign 1), removed (-1), or as it is (0). */
@@ -242,7 +241,7 @@ export class PlanState {
     if (grid) {
       // No visits left: back to the prior's sums exactly rather than keep the rounding residue of the removals.
       if (mine.length === 0) seedSearchStats(this.stats, c, c.prior, t);
-      else updateSearchStats(this.stats, c.statsOffset[t]!, grid, c.weight[j]!, c.midBjdTdb[j]!, sign);
+      else updateSearchStatsWith(this.stats, c.statsOffset[t]!, grid, sign * c.weight[j]!, slotTrig(c, j));
     }
     const info = this.information[t];
     if (info) {
