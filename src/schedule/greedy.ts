@@ -1,72 +1,82 @@
 // Greedy by marginal utility per hour: repeatedly add the feasible slot with the largest
 // (ranking) gain per hour of telescope time, until none adds anything. Gains change only for the
 // target that just received a visit, so its slots are re-priced at once and the other entries of
-// the heap stay valid (an entry records its target's version; older entries are skipped).
+// the heap stay valid (each slot has at most one entry, changed in place when re-priced).
 import type { PlanState } from './state.js';
 
-/** Max-heap of (key, slot, version) in parallel typed arrays, grown as needed; equal keys go to the earlier slot. */
+/** Whether (keyA, slotA) ranks above (keyB, slotB): the larger key, and on equal keys the earlier slot, so the order is fully determined. */
+function ranksAbove(keyA: number, slotA: number, keyB: number, slotB: number): boolean {
+  return keyA > keyB || (keyA === keyB && slotA < slotB);
+}
+
+/** Max-heap of slots by key with at most one entry per slot, whose key can change in place (each slot's position is kept). */
 class SlotHeap {
   private keys = new Float64Array(64);
   private slots = new Int32Array(64);
-  private versions = new Int32Array(64);
+  /** Heap position of each slot; -1 without an entry. */
+  private readonly position: Int32Array;
   size = 0;
-  /** The version of the entry the last pop returned. */
-  poppedVersion = 0;
 
-  /** Whether entry i ranks above (key, slot). Ties go to the earlier slot, so the order is fully determined. */
-  private above(i: number, key: number, slot: number): boolean {
-    return this.keys[i]! > key || (this.keys[i] === key && this.slots[i]! < slot);
+  constructor(slotCount: number) {
+    this.position = new Int32Array(slotCount).fill(-1);
   }
 
-  private grow(): void {
-    const keys = new Float64Array(this.keys.length * 2);
-    const slots = new Int32Array(this.keys.length * 2);
-    const versions = new Int32Array(this.keys.length * 2);
-    keys.set(this.keys);
-    slots.set(this.slots);
-    versions.set(this.versions);
-    this.keys = keys;
-    this.slots = slots;
-    this.versions = versions;
-  }
-
-  private put(i: number, key: number, slot: number, version: number): void {
+  private put(i: number, key: number, slot: number): void {
     this.keys[i] = key;
     this.slots[i] = slot;
-    this.versions[i] = version;
+    this.position[slot] = i;
   }
 
-  push(key: number, slot: number, version: number): void {
-    if (this.size === this.keys.length) this.grow();
-    let i = this.size++;
+  /** Puts (key, slot) into hole i, moved up past the parents it ranks above, else down past the children that rank above it. */
+  private settle(i: number, key: number, slot: number): void {
+    const { keys, slots } = this;
     while (i > 0) {
       const parent = (i - 1) >> 1;
-      if (this.above(parent, key, slot)) break;
-      this.put(i, this.keys[parent]!, this.slots[parent]!, this.versions[parent]!);
+      if (!ranksAbove(key, slot, keys[parent]!, slots[parent]!)) break;
+      this.put(i, keys[parent]!, slots[parent]!);
       i = parent;
     }
-    this.put(i, key, slot, version);
-  }
-
-  /** Removes the top entry and returns its slot (its version in poppedVersion). */
-  pop(): number {
-    const top = this.slots[0]!;
-    this.poppedVersion = this.versions[0]!;
-    const n = --this.size;
-    if (n === 0) return top;
-    const key = this.keys[n]!;
-    const slot = this.slots[n]!;
-    const version = this.versions[n]!;
-    let i = 0;
     for (;;) {
       let child = 2 * i + 1;
-      if (child >= n) break;
-      if (child + 1 < n && this.above(child + 1, this.keys[child]!, this.slots[child]!)) child++;
-      if (!this.above(child, key, slot)) break;
-      this.put(i, this.keys[child]!, this.slots[child]!, this.versions[child]!);
+      if (child >= this.size) break;
+      if (child + 1 < this.size && ranksAbove(keys[child + 1]!, slots[child + 1]!, keys[child]!, slots[child]!)) child++;
+      if (!ranksAbove(keys[child]!, slots[child]!, key, slot)) break;
+      this.put(i, keys[child]!, slots[child]!);
       i = child;
     }
-    this.put(i, key, slot, version);
+    this.put(i, key, slot);
+  }
+
+  /** Sets the key of slot's entry, adding the entry if it has none. */
+  set(slot: number, key: number): void {
+    let i = this.position[slot]!;
+    if (i < 0) {
+      if (this.size === this.keys.length) {
+        const keys = new Float64Array(2 * this.size);
+        const slots = new Int32Array(2 * this.size);
+        keys.set(this.keys);
+        slots.set(this.slots);
+        this.keys = keys;
+        this.slots = slots;
+      }
+      i = this.size++;
+    }
+    this.settle(i, key, slot);
+  }
+
+  /** Removes slot's entry, if it has one. */
+  delete(slot: number): void {
+    const i = this.position[slot]!;
+    if (i < 0) return;
+    this.position[slot] = -1;
+    const last = --this.size;
+    if (i < last) this.settle(i, this.keys[last]!, this.slots[last]!);
+  }
+
+  /** Removes the top entry and returns its slot. */
+  pop(): number {
+    const top = this.slots[0]!;
+    this.delete(top);
     return top;
   }
 }
@@ -91,11 +101,10 @@ function scratch(state: PlanState, candidates: number): GreedyScratch {
   let s = scratchOf.get(state);
   if (!s) {
     const T = state.c.targetCount;
-    s = { heap: new SlotHeap(), from: new Int32Array(T), count: new Int32Array(T), byTarget: new Int32Array(64), targets: new Int32Array(T) };
+    s = { heap: new SlotHeap(state.c.slotCount), from: new Int32Array(T), count: new Int32Array(T), byTarget: new Int32Array(64), targets: new Int32Array(T) };
     scratchOf.set(state, s);
   }
   if (s.byTarget.length < candidates) s.byTarget = new Int32Array(Math.max(candidates, 2 * s.byTarget.length));
-  s.heap.size = 0;
   return s;
 }
 
@@ -131,14 +140,17 @@ export function greedyFill(state: PlanState, candidates: ArrayLike<number>, exac
   const price = (t: number, skip: number) => {
     const start = from[t]!;
     const end = start + count[t]!;
-    const version = state.targetVersion[t]!;
     let kept = start;
     for (let i = start; i < end; i++) {
       const j = byTarget[i]!;
-      if (j === skip || !state.canAdd(j)) continue;
+      if (j === skip || !state.canAdd(j)) {
+        heap.delete(j);
+        continue;
+      }
       byTarget[kept++] = j;
       const g = exact ? state.gain(j) : state.rankingGain(j);
-      if (g > MIN_GAIN) heap.push(g / c.hours[j]!, j, version);
+      if (g > MIN_GAIN) heap.set(j, g / c.hours[j]!);
+      else heap.delete(j);
     }
     count[t] = kept - start;
   };
@@ -148,7 +160,7 @@ export function greedyFill(state: PlanState, candidates: ArrayLike<number>, exac
   while (heap.size > 0) {
     const j = heap.pop();
     const t = c.slotTarget[j]!;
-    if (heap.poppedVersion !== state.targetVersion[t] || !state.canAdd(j)) continue;
+    if (!state.canAdd(j)) continue;
     rankingValue += state.rankingGain(j);
     state.add(j);
     added.push(j);

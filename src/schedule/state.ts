@@ -34,8 +34,6 @@ export class PlanState {
   /** Var(K) of every planet as the plan stands (compiled planet order). */
   readonly kVariance: Float64Array;
   readonly targetUtility: Float64Array;
-  /** Bumped whenever a star's visits change (cached gains of its slots go stale). */
-  readonly targetVersion: Int32Array;
   utility = 0;
   hoursUsed = 0;
   openNights = 0;
@@ -74,7 +72,6 @@ export class PlanState {
     this.planetOvershoot = this.priorPlanetFraction.map((x) => overshootAfterPrior(x, overshootWeight));
     this.searchOvershoot = this.priorSearchFraction.map((x) => overshootAfterPrior(x, overshootWeight));
     this.targetUtility = new Float64Array(c.targetCount);
-    this.targetVersion = new Int32Array(c.targetCount);
     for (let t = 0; t < c.targetCount; t++) {
       this.targetUtility[t] = this.targetValue(t, 0, 0);
       this.utility += this.targetUtility[t]!;
@@ -251,7 +248,6 @@ export class PlanState {
     const value = this.targetValue(t, 0, 0);
     this.utility += value - this.targetUtility[t]!;
     this.targetUtility[t] = value;
-    this.targetVersion[t]++;
   }
 
   /** kVariance of star t's planets from its information as it stands. */
