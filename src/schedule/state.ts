@@ -34,6 +34,11 @@ export class PlanState {
   /** Var(K) of every planet as the plan stands (compiled planet order). */
   readonly kVariance: Float64Array;
   readonly targetUtility: Float64Array;
+  /** Bumped whenever a star's visits change: a gain priced at the same version is still exact. */
+  private readonly targetVersion: Int32Array;
+  /** Per slot: the last gain priced and its star's version then (-1: none). */
+  private readonly gainValue: Float64Array;
+  private readonly gainVersion: Int32Array;
   utility = 0;
   hoursUsed = 0;
   openNights = 0;
@@ -72,6 +77,9 @@ export class PlanState {
     this.planetOvershoot = this.priorPlanetFraction.map((x) => overshootAfterPrior(x, overshootWeight));
     this.searchOvershoot = this.priorSearchFraction.map((x) => overshootAfterPrior(x, overshootWeight));
     this.targetUtility = new Float64Array(c.targetCount);
+    this.targetVersion = new Int32Array(c.targetCount);
+    this.gainValue = new Float64Array(c.slotCount);
+    this.gainVersion = new Int32Array(c.slotCount).fill(-1);
     for (let t = 0; t < c.targetCount; t++) {
       this.targetUtility[t] = this.targetValue(t, 0, 0);
       this.utility += this.targetUtility[t]!;
@@ -121,7 +129,11 @@ export class PlanState {
   /** Exact change of the total utility if slot j were added. */
   gain(j: number): number {
     const t = this.c.slotTarget[j]!;
-    return this.targetValue(t, 1, j) - this.targetUtility[t]!;
+    if (this.gainVersion[j] === this.targetVersion[t]) return this.gainValue[j]!;
+    const gain = this.targetValue(t, 1, j) - this.targetUtility[t]!;
+    this.gainValue[j] = gain;
+    this.gainVersion[j] = this.targetVersion[t]!;
+    return gain;
   }
 
   /** Exact change of the total utility if chosen slot j were removed (<= 0). */
@@ -248,6 +260,7 @@ export class PlanState {
     const value = this.targetValue(t, 0, 0);
     this.utility += value - this.targetUtility[t]!;
     this.targetUtility[t] = value;
+    this.targetVersion[t]++;
   }
 
   /** kVariance of star t's planets from its information as it stands. */
