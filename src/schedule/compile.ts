@@ -3,7 +3,7 @@
 // its running sums. Built once per optimisation.
 import { designRow, type StarModel } from '../rv/information-model.js';
 import type { InformationVisit } from '../rv/information.js';
-import { searchGrid, searchStatsLength, type SearchGrid } from './objective-search.js';
+import { searchGrid, searchStatsLength, trigValues, type SearchGrid } from './objective-search.js';
 import { compilePrior, type CompiledPrior } from './prior.js';
 import type { ScheduleProblem, ScheduleTarget } from './types.js';
 
@@ -29,6 +29,8 @@ export interface CompiledProblem {
   searchGoalSignificance: Float64Array;
   statsOffset: Int32Array;
   statsLength: number;
+  /** Per slot of a search star: its time's trigValues on the star's grid, filled on first use (slotTrig). */
+  slotTrig: (Float64Array | undefined)[];
   /** Per star: largest visit weight among its slots. */
   maxWeight: Float64Array;
   /** Per star: its slot positions in time order. */
@@ -153,6 +155,7 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
     searchGoalSignificance: Float64Array.from(problem.targets, (t) => t.search?.goalSignificance ?? 1),
     statsOffset: new Int32Array(T),
     statsLength: 0,
+    slotTrig: new Array(S),
     maxWeight: new Float64Array(T),
     targetSlots: [],
     slotCount: S,
@@ -236,6 +239,16 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
   c.statsLength = offset;
   c.prior = compilePrior(c);
   return c;
+}
+
+/** trigValues of slot j's time on its star's search grid, computed once per slot. */
+export function slotTrig(c: CompiledProblem, j: number): Float64Array {
+  let values = c.slotTrig[j];
+  if (!values) {
+    values = trigValues(c.grids[c.slotTarget[j]!]!, c.midBjdTdb[j]!);
+    c.slotTrig[j] = values;
+  }
+  return values;
 }
 
 /**

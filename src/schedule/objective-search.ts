@@ -33,16 +33,22 @@ export interface SearchGrid {
   trig: Map<number, Float64Array>;
 }
 
-/** [sin, cos] of angularFreq[p] * tDays for every grid period p, computed once per visit time. */
+/** [sin, cos] of angularFreq[p] * tDays for every grid period p. */
+export function trigValues(grid: SearchGrid, tDays: number): Float64Array {
+  const freq = grid.angularFreq;
+  const values = new Float64Array(2 * freq.length);
+  for (let p = 0; p < freq.length; p++) {
+    values[2 * p] = Math.sin(freq[p]! * tDays);
+    values[2 * p + 1] = Math.cos(freq[p]! * tDays);
+  }
+  return values;
+}
+
+/** trigValues, computed once per visit time. */
 function trigAt(grid: SearchGrid, tDays: number): Float64Array {
   let values = grid.trig.get(tDays);
   if (!values) {
-    const freq = grid.angularFreq;
-    values = new Float64Array(2 * freq.length);
-    for (let p = 0; p < freq.length; p++) {
-      values[2 * p] = Math.sin(freq[p]! * tDays);
-      values[2 * p + 1] = Math.cos(freq[p]! * tDays);
-    }
+    values = trigValues(grid, tDays);
     grid.trig.set(tDays, values);
   }
   return values;
@@ -69,9 +75,12 @@ export function searchGrid(periodMinDays: number, periodMaxDays: number, kMpsAtM
 
 /** Adds (sign 1) or removes (sign -1) a visit of weight w at time tDays. */
 export function updateSearchStats(stats: Float64Array, offset: number, grid: SearchGrid, w: number, tDays: number, sign: number): void {
-  const sw = sign * w;
+  updateSearchStatsWith(stats, offset, grid, sign * w, trigAt(grid, tDays));
+}
+
+/** updateSearchStats with the signed weight sw and the visit time's trigValues given. */
+export function updateSearchStatsWith(stats: Float64Array, offset: number, grid: SearchGrid, sw: number, trig: Float64Array): void {
   stats[offset] += sw;
-  const trig = trigAt(grid, tDays);
   for (let p = 0, o = offset + 1; p < grid.angularFreq.length; p++, o += 5) {
     const sn = trig[2 * p]!;
     const cs = trig[2 * p + 1]!;
@@ -86,11 +95,15 @@ export function updateSearchStats(stats: Float64Array, offset: number, grid: Sea
 /** log(K/sigma_K), the grid's mean (see the file comment), optionally with one visit added (sign 1) or removed (-1). */
 export function searchLogScore(stats: Float64Array, offset: number, grid: SearchGrid, sign = 0, w = 0, tDays = 0): number {
   const sw = sign * w;
+  return searchLogScoreWith(stats, offset, grid, sw, sw !== 0 ? trigAt(grid, tDays) : undefined);
+}
+
+/** searchLogScore with the signed weight sw of the visit added or removed and its time's trigValues (undefined: as it is). */
+export function searchLogScoreWith(stats: Float64Array, offset: number, grid: SearchGrid, sw: number, trig: Float64Array | undefined): number {
   const eps = grid.eps;
   const a = stats[offset]! + sw + eps;
   const logA = Math.log(a);
   const freq = grid.angularFreq;
-  const trig = sw !== 0 ? trigAt(grid, tDays) : undefined;
   // Sum of log det as the log of products of four determinants: a quarter of the logarithms, and
   // four determinants (each between eps^3 and (sum w)^3) stay far inside the range of a double.
   let logDetSum = 0;

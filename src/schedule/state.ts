@@ -3,8 +3,8 @@
 // visit costs what that star's model costs (O(samples x parameters^2), or O(observed nights^2)
 // with correlated activity), plus O(period grid) for a search: never a recomputation of the plan.
 import { StarInformation, type InformationVisit } from '../rv/information.js';
-import { SlotVisit, type CompiledProblem } from './compile.js';
-import { searchLogScore, updateSearchStats } from './objective-search.js';
+import { SlotVisit, slotTrig, type CompiledProblem } from './compile.js';
+import { searchLogScoreWith, updateSearchStatsWith } from './objective-search.js';
 import { seedInformation, seedSearchStats } from './prior.js';
 import { goalValue, overshootAfterPrior } from './utility.js';
 
@@ -34,8 +34,11 @@ export class PlanState {
   /** Var(K) of every planet as the plan stands (compiled planet order). */
   readonly kVariance: Float64Array;
   readonly targetUtility: Float64Array;
-  /** Bumped whenever a star's visits change (cached gains of its slots go stale). */
-  readonly targetVersion: Int32Array;
+  /** Bumped whenever a star's visits change: a gain priced at the same version is still exact. */
+  private readonly targetVersion: Int32Array;
+  /** Per slot: the last gain priced and its star's version then (-1: none). */
+  private readonly gainValue: Float64Array;
+  private readonly gainVersion: Int32Array;
   utility = 0;
   hoursUsed = 0;
   openNights = 0;
@@ -75,6 +78,8 @@ export class PlanState {
     this.searchOvershoot = this.priorSearchFraction.map((x) => overshootAfterPrior(x, overshootWeight));
     this.targetUtility = new Float64Array(c.targetCount);
     this.targetVersion = new Int32Array(c.targetCount);
+    this.gainValue = new Float64Array(c.slotCount);
+    this.gainVersion = new Int32Array(c.slotCount).fill(-1);
     for (let t = 0; t < c.targetCount; t++) {
       this.targetUtility[t] = this.targetValue(t, 0, 0);
       this.utility += this.targetUtility[t]!;
@@ -100,9 +105,8 @@ export class PlanState {
   /** (K/sigma_K)/goal of star t's search with slot j added (sign 1), removed (-1), or as it is (0). */
   searchFractionOfGoal(t: number, sign: number, j: number): number {
     const c = this.c;
-    const w = sign === 0 ? 0 : c.weight[j]!;
-    const a = sign === 0 ? 0 : c.midBjdTdb[j]!;
-    return Math.exp(searchLogScore(this.stats, c.statsOffset[t]!, c.grids[t]!, sign, w, a)) / c.searchGoalSignificance[t]!;
+    const sw = sign === 0 ? 0 : sign * c.weight[j]!;
+    return Math.exp(searchLogScoreWith(this.stats, c.statsOffset[t]!, c.grids[t]!, sw, sw !== 0 ? slotTrig(c, j) : undefined)) / c.searchGoalSignificance[t]!;
   }
 
   /** Utility of star t with slot j added (sign 1), removed (-1), or as it is (0). */
@@ -125,7 +129,11 @@ export class PlanState {
   /** Exact change of the total utility if slot j were added. */
   gain(j: number): number {
     const t = this.c.slotTarget[j]!;
-    return this.targetValue(t, 1, j) - this.targetUtility[t]!;
+    if (this.gainVersion[j] === this.targetVersion[t]) return this.gainValue[j]!;
+    const gain = this.targetValue(t, 1, j) - this.targetUtility[t]!;
+    this.gainValue[j] = gain;
+    this.gainVersion[j] = this.targetVersion[t]!;
+    return gain;
   }
 
   /** Exact change of the total utility if chosen slot j were removed (<= 0). */
@@ -189,19 +197,27 @@ export class PlanState {
     const t = c.slotTarget[j]!;
     const mine = this.targetVisits[t]!;
     const k = lowerBound(mine, j);
+    const start = c.startMs[j]!;
     // With onePerNight the star's visits of night n are contiguous around k (slots sorted by night,
     // then start): each is held to the same-night spacing and counted; the nearest visit of
     // another night on either side to minSpacing (the next ones are further still).
-    let sameNight = c.onePerNight ? (c.prior.inNight.get(t * c.nightCount + n) ?? 0) : 0;
-    for (const step of [-1, 1]) {
-      let at = step < 0 ? k - 1 : k;
-      for (; c.onePerNight && at >= 0 && at < mine.length && c.slotNight[mine[at]!] === n; at += step) {
-        if (Math.abs(c.startMs[mine[at]!]! - c.startMs[j]!) < c.sameNightSpacingMs) return false;
+    let sameNight = c.onePerNight && c.prior.inNight.size > 0 ? (c.prior.inNight.get(t * c.nightCount + n) ?? 0) : 0;
+    let below = k - 1;
+    let above = k;
+    if (c.onePerNight) {
+      for (; below >= 0 && c.slotNight[mine[below]!] === n; below--) {
+        if (Math.abs(c.startMs[mine[below]!]! - start) < c.sameNightSpacingMs) return false;
         sameNight++;
       }
-      const other = mine[at];
-      if (other !== undefined && Math.abs(c.startMs[other]! - c.startMs[j]!) < c.spacingMs) return false;
     }
+    if (below >= 0 && Math.abs(c.startMs[mine[below]!]! - start) < c.spacingMs) return false;
+    if (c.onePerNight) {
+      for (; above < mine.length && c.slotNight[mine[above]!] === n; above++) {
+        if (Math.abs(c.startMs[mine[above]!]! - start) < c.sameNightSpacingMs) return false;
+        sameNight++;
+      }
+    }
+    if (above < mine.length && Math.abs(c.startMs[mine[above]!]! - start) < c.spacingMs) return false;
     return !c.onePerNight || sameNight < c.visitsPerNight[t]!;
   }
 
@@ -234,7 +250,7 @@ export class PlanState {
     if (grid) {
       // No visits left: back to the prior's sums exactly rather than keep the rounding residue of the removals.
       if (mine.length === 0) seedSearchStats(this.stats, c, c.prior, t);
-      else updateSearchStats(this.stats, c.statsOffset[t]!, grid, c.weight[j]!, c.midBjdTdb[j]!, sign);
+      else updateSearchStatsWith(this.stats, c.statsOffset[t]!, grid, sign * c.weight[j]!, slotTrig(c, j));
     }
     const info = this.information[t];
     if (info) {

@@ -6,8 +6,8 @@
 // and the probability that every planet and search reaches its goal in the same trial.
 import { createRng } from '../rv/random.js';
 import { StarInformation } from '../rv/information.js';
-import { compileProblem, SlotVisit } from './compile.js';
-import { searchLogScore, searchStatsLength, updateSearchStats } from './objective-search.js';
+import { compileProblem, SlotVisit, slotTrig } from './compile.js';
+import { searchLogScore, searchStatsLength, updateSearchStatsWith } from './objective-search.js';
 import { seedInformation, seedSearchStats } from './prior.js';
 import { PlanState } from './state.js';
 import type { ScheduleProblem, ScheduleResult } from './types.js';
@@ -90,7 +90,7 @@ export function simulateWeather(problem: ScheduleProblem, result: ScheduleResult
       }
       for (const j of perTarget[t]!) {
         if (!clear[c.slotNight[j]!]) continue;
-        if (grid) updateSearchStats(stats, 0, grid, c.weight[j]!, c.midBjdTdb[j]!, 1);
+        if (grid) updateSearchStatsWith(stats, 0, grid, c.weight[j]!, slotTrig(c, j));
         if (info) {
           visit.slot = j;
           info.apply(visit, 1);
