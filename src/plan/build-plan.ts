@@ -106,6 +106,23 @@ function plannedVisit(d: SlotDetail, campaign: Campaign): PlannedVisit {
   };
 }
 
+/**
+ * K and σ_K as the summary quotes them, with their period. A search's score K/σ_K is the geometric
+ * mean over its log-spaced period grid of K(P)/σ_K(P) (src/schedule/objective-search.ts); with
+ * K ∝ P^(-1/3) [Kepler-RV] the geometric mean of K(P) is K at √(Pmin · Pmax), so K is quoted there
+ * and σ_K = K / score (the geometric mean of σ_K(P)). The scheduler itself takes K at Pmin.
+ */
+function quotedK(setup: TargetSetup, outcome: { sigmaKMps: number; kOverSigmaK: number }): { kMps?: number; kPeriodDays?: number; sigmaKMps: number } {
+  const { target } = setup;
+  if (setup.role !== 'search' || !target.search || setup.kMps === undefined) {
+    return { kMps: setup.kMps, ...(target.ephemeris ? { kPeriodDays: target.ephemeris.periodDays } : {}), sigmaKMps: outcome.sigmaKMps };
+  }
+  const { periodMinDays, periodMaxDays } = target.search;
+  const kPeriodDays = Math.sqrt(periodMinDays * periodMaxDays);
+  const kMps = setup.kMps * (kPeriodDays / periodMinDays) ** (-1 / 3);
+  return { kMps, kPeriodDays, sigmaKMps: outcome.kOverSigmaK > 0 ? kMps / outcome.kOverSigmaK : Infinity };
+}
+
 function targetSummary(
   setup: TargetSetup,
   result: ScheduleResult,
@@ -125,13 +142,13 @@ function targetSummary(
   if (target.ephemeris) summary.phaseErrAtEnd = phaseErrCycles(target.ephemeris, windowEndBjdTdb);
   const outcome = result.targets.find((t) => t.targetId === target.id);
   if (!setup.role || !outcome) return summary;
+  const quoted = quotedK(setup, outcome);
   return {
     ...summary,
-    kMps: setup.kMps,
+    ...quoted,
     visits: outcome.visits,
     hours: outcome.hours,
     ...(outcome.priorVisits > 0 ? { priorVisits: outcome.priorVisits, priorKOverSigmaK: outcome.priorKOverSigmaK } : {}),
-    sigmaKMps: outcome.sigmaKMps,
     kOverSigmaK: outcome.kOverSigmaK,
     goalSignificance: outcome.goalSignificance,
     goalProbability: weather.find((w) => w.targetId === target.id)?.goalProbability,

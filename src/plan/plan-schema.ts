@@ -80,6 +80,12 @@ export const targetSummarySchema = z.object({
   kind: z.enum(['ephemeris', 'search', 'monitor']),
   priority: positive,
   kMps: nonNegative.optional(),
+  /**
+   * The period at which kMps and sigmaKMps are quoted: the ephemeris period; for a blind search
+   * the logarithmic middle √(Pmin · Pmax) of its range, where K is the geometric mean of K(P)
+   * over the range (K ∝ P^(-1/3)). Absent in plans of older versions.
+   */
+  kPeriodDays: positive.optional(),
   visits: wholeNonNegative,
   hours: nonNegative,
   sigmaKMps: nonNegative.optional(),

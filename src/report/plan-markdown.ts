@@ -6,6 +6,7 @@ import {
   historyLine,
   rvUpdateLines,
   nightHeading,
+  searchKNote,
   OBSERVED_COLUMNS,
   observedRows,
   targetColumns,
@@ -36,6 +37,7 @@ export function renderPlanMarkdown(plan: Plan): string {
     '',
     markdownTable(targetColumns(plan), targetRows(plan)),
     '',
+    ...(searchKNote(plan) ? [searchKNote(plan)!, ''] : []),
     ...(plan.observed?.length ? ['## Visits already made', '', markdownTable(OBSERVED_COLUMNS, observedRows(plan)), ''] : []),
     ...(rvUpdateLines(plan).length ? ['## What the RVs so far change', '', ...rvUpdateLines(plan).map((l) => `- ${l}`), ''] : []),
     ...(plan.nightsSweep?.length

@@ -104,6 +104,17 @@ export function targetRows(plan: Plan): string[][] {
   });
 }
 
+/** What a search row's K and sigma_K mean (see quotedK in src/plan/build-plan.ts); undefined without search rows. */
+export function searchKNote(plan: Plan): string | undefined {
+  const rows = plan.targets.filter((t) => t.kind === 'search' && t.kPeriodDays !== undefined);
+  if (!rows.length) return undefined;
+  const periods = rows.map((t) => `${t.targetId} ${fmt(t.kPeriodDays, 1)} d`).join(', ');
+  return (
+    `Search rows: K of the search mass at the logarithmic middle of the period range (${periods}), the geometric mean of K over the range; ` +
+    'K/sigma_K is the geometric mean over the range of K(P)/sigma_K(P) from the phase coverage, and sigma_K = K / (K/sigma_K).'
+  );
+}
+
 /** Visits grouped by night, nights in date order, visits in time order. */
 export function visitsByNight(plan: Plan): [string, PlannedVisit[]][] {
   const groups = new Map<string, PlannedVisit[]>();

@@ -6,6 +6,7 @@ import {
   historyLine,
   rvUpdateLines,
   nightHeading,
+  searchKNote,
   OBSERVED_COLUMNS,
   observedRows,
   targetColumns,
@@ -46,7 +47,7 @@ export function renderPlanText(plan: Plan): string {
   if (plan.backups.length) {
     out.push(`Backup nights, best first: ${plan.backups.map((b) => b.localDate).join(', ')}`, '');
   }
-  out.push('Targets', renderTable(targetColumns(plan), targetRows(plan)), '');
+  out.push('Targets', renderTable(targetColumns(plan), targetRows(plan)), ...(searchKNote(plan) ? [searchKNote(plan)!] : []), '');
   out.push(totalsLine(plan));
   if (plan.nightsSweep?.length) out.push('', sweepTitle(plan), renderTable(sweepColumns(plan.nightsSweep), sweepRows(plan.nightsSweep)));
   const warnings = [...plan.warnings, ...plan.targets.flatMap((t) => t.warnings.map((w) => `${t.targetId}: ${w}`))];

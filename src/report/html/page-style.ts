@@ -20,6 +20,7 @@ h3 { font-size: 16px; margin: 20px 0 6px; }
 .facts dd { margin: 0; }
 .caution { border-left: 5px solid ${OKABE_ITO.orange}; background: ${CAUTION_PALE}; padding: 8px 12px; margin: 14px 0; }
 .proposal-text { background: ${ACCENT_PALE}; border-left: 5px solid ${OKABE_ITO.blue}; padding: 10px 14px; }
+.table-note { color: ${MUTED}; font-size: 0.9em; margin-top: 4px; }
 table { border-collapse: collapse; margin: 8px 0 14px; font-size: 13.5px; font-variant-numeric: tabular-nums; }
 caption { text-align: left; font-weight: 600; padding: 4px 0; }
 th, td { padding: 3px 10px 3px 0; border-bottom: 1px solid ${RULE}; text-align: left; vertical-align: top; }

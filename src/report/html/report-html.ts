@@ -1,6 +1,6 @@
 import type { SearchSpec, Target } from '../../model.js';
 import type { Plan, TargetSummary } from '../../plan/plan-schema.js';
-import { ADVISORY, targetColumns, targetRows, targetRvUpdateLines, totalsLine, visitsByNight } from '../plan-rows.js';
+import { ADVISORY, searchKNote, targetColumns, targetRows, targetRvUpdateLines, totalsLine, visitsByNight } from '../plan-rows.js';
 import { calendarFigure } from './chart-calendar.js';
 import { detectionMapFigure, type DetectionMapData } from './chart-detection-map.js';
 import { kGrowthFigure } from './chart-k-growth.js';
@@ -104,6 +104,7 @@ export async function renderReportHtml(plan: Plan, maps: ReadonlyMap<string, Det
   body.push(
     '<h2 id="detectability">Detectability of every target</h2>',
     `<div class="table-wrap">${htmlTable(targetColumns(plan), targetRows(plan), 'Expected result per target')}</div>`,
+    searchKNote(plan) ? `<p class="table-note">${escapeHtml(searchKNote(plan)!)}</p>` : '',
     warnings(plan),
     `<footer>Written by ${escapeHtml(plan.generator)} from plan schema version ${plan.schemaVersion}. ` +
       'Chart colours: the Okabe–Ito palette (Okabe & Ito 2008, Color Universal Design), safe for common colour-vision deficiencies.</footer>',
