@@ -17,9 +17,9 @@ describe('nights sweep', () => {
   it('gives for each count what a plan built for that count alone gives', () => {
     // Random campaign 14 chooses 1 of its nights; from 2 nights on its goals are neither sure nor hopeless.
     const campaign = randomCampaign(14);
-    const counts = [2, 3, 4];
+    const counts = [2, 3];
     const sweep = nightsSweep(campaign, counts, { weatherTrials: TRIALS });
-    const alone = [4, 2, 3].map((n) => sweepRow(buildPlan(withNightCount(campaign, n), { weatherTrials: TRIALS }), n)).sort((a, b) => a.nights - b.nights);
+    const alone = [3, 2].map((n) => sweepRow(buildPlan(withNightCount(campaign, n), { weatherTrials: TRIALS }), n)).sort((a, b) => a.nights - b.nights);
     expect(sweep).toEqual(alone);
     for (const row of sweep) {
       expect(row.goals.length).toBeGreaterThan(0);
