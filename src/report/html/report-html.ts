@@ -91,6 +91,7 @@ export async function renderReportHtml(plan: Plan, maps: ReadonlyMap<string, Det
     head(plan),
     '<h2 id="proposal">Proposal summary</h2>',
     `<div class="table-wrap">${htmlTable(PROPOSAL_COLUMNS, proposalRows(plan), 'Time request by target')}</div>`,
+    searchKNote(plan) ? `<p class="table-note">${escapeHtml(searchKNote(plan)!)}</p>` : '',
     `<p class="proposal-text">${escapeHtml(proposalParagraph(plan))}</p>`,
     '<h2 id="calendar-section">Campaign calendar</h2>',
     await renderFigure(calendarFigure(plan)),
