@@ -200,6 +200,13 @@ function violationsOf(problem: ScheduleProblem): (visits: CandidateSlot[]) => st
     if (time.mode === 'choose-nights' && hoursByNight.size > time.nights) problems.push(`${hoursByNight.size} nights used, ${time.nights} allowed`);
     const total = visits.reduce((sum, v) => sum + v.durationSec / 3600, 0);
     if (time.mode === 'hours' && total > time.hours + 1e-9) problems.push(`${total} h used, ${time.hours} allowed`);
+    // Each star's caps on the visits and hours planned for it (prior visits do not count).
+    for (const t of problem.targets) {
+      const mine = visits.filter((v) => v.targetId === t.id);
+      const hours = mine.reduce((sum, v) => sum + v.durationSec / 3600, 0);
+      if (t.maxVisits !== undefined && mine.length > t.maxVisits) problems.push(`${t.id} has ${mine.length} visits, ${t.maxVisits} allowed`);
+      if (t.maxHours !== undefined && hours > t.maxHours + 1e-9) problems.push(`${t.id} has ${hours} h, ${t.maxHours} allowed`);
+    }
     return problems;
   };
 }

@@ -19,6 +19,14 @@ export const constraintsSchema = z.strictObject({
    * for stars with visitsPerNight > 1 (hours).
    */
   sameNightSpacingHours: z.number({ error: 'hours from 0 to 12' }).min(0, 'hours from 0 to 12').max(12, 'hours from 0 to 12').default(2),
+  /** Defaults for every star without its own maxVisits / maxHours column: caps on the visits and hours planned for it. */
+  maxVisitsPerStar: z
+    .number({ error: 'a whole number of visits from 1 to 100000' })
+    .int('a whole number of visits')
+    .min(1, 'at least 1 visit')
+    .max(1e5, 'at most 100000 visits')
+    .optional(),
+  maxHoursPerStar: z.number({ error: 'hours, more than 0 and at most 10000' }).positive('more than 0 hours').max(1e4, 'at most 10000 hours').optional(),
   /** Windows shorter than this are dropped (minutes). */
   minWindowMinutes: z.number({ error: 'minutes, 0 or more' }).min(0, 'minutes, 0 or more').max(600, 'minutes, at most 600').default(20),
 });

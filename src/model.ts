@@ -75,6 +75,9 @@ export interface Target {
   visitSigmaMps?: number;
   /** Visits of the star allowed in one night (default 1), spaced by the campaign's sameNightSpacingHours. */
   visitsPerNight?: number;
+  /** Caps on what the campaign plans for the star ahead (visits already made do not count); the campaign's constraints give defaults. */
+  maxVisits?: number;
+  maxHours?: number;
   /** How the jitter was found: "as given", or the relations behind the default. */
   jitterSource?: string;
   /** Names of fields filled with documented defaults rather than given. */

@@ -54,6 +54,8 @@ const targetSchema = z.object({
   logg: optional(num),
   exposureSec: optional(positive),
   visitSigmaMps: optional(positive),
+  maxVisits: optional(positive),
+  maxHours: optional(positive),
   jitterSource: z.string().optional(),
   priority: positive,
   goalSignificance: optional(positive),

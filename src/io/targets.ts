@@ -52,6 +52,8 @@ const rowSchema = z.strictObject({
   activitymps: numberField('activity amplitude in m/s, 0 to 1000', 0, 1000),
   activitycoherencedays: numberField('activity coherence time in days, more than 0.1 and at most 10000', 0.1, 1e4, { exclusiveMin: true }),
   visitspernight: numberField('visits of the star in one night, a whole number from 1 to 12', 1, 12),
+  maxvisits: numberField('most visits of the star this campaign plans, a whole number from 1 to 100000', 1, 1e5),
+  maxhours: numberField('most hours of visit blocks of the star this campaign plans, more than 0 and at most 10000', 0, 1e4, { exclusiveMin: true }),
   priority: numberField('a priority weight, more than 0 and at most 100', 0, 100, { exclusiveMin: true }),
   goalsignificance: numberField('K/sigma_K to reach, more than 0 and at most 100', 0, 100, { exclusiveMin: true }),
   perioddays: numberField('orbital period in days, more than 0 and at most 100000', 0, 1e5, { exclusiveMin: true }),
@@ -112,6 +114,8 @@ const CANONICAL: Record<string, string> = {
   exposuresec: 'exposureSec',
   visitsigmamps: 'visitSigmaMps',
   visitspernight: 'visitsPerNight',
+  maxvisits: 'maxVisits',
+  maxhours: 'maxHours',
 };
 /** Magnitude columns other than V, by band. */
 const BAND_COLUMNS: [BandId, 'rmag' | 'imag' | 'jmag' | 'hmag' | 'gmag'][] = [
@@ -149,6 +153,8 @@ const STAR_COLUMNS = [
   'exposuresec',
   'visitsigmamps',
   'visitspernight',
+  'maxvisits',
+  'maxhours',
 ] as const;
 
 interface Place {
@@ -178,6 +184,8 @@ function buildTarget(row: Row, place: Place): Target {
     fail(place, 'vmag', 'required: V magnitude from -2 to 20, or a magnitude in another band (rmag, imag, jmag, hmag, gmag)');
   if (row.visitspernight !== undefined && !Number.isInteger(row.visitspernight))
     fail(place, 'visitspernight', 'visits of the star in one night, a whole number from 1 to 12');
+  if (row.maxvisits !== undefined && !Number.isInteger(row.maxvisits))
+    fail(place, 'maxvisits', 'most visits of the star this campaign plans, a whole number from 1 to 100000');
   if (row.exposuresec !== undefined && row.visitsigmamps !== undefined) fail(place, 'visitsigmamps', 'give exposureSec or visitSigmaMps, not both');
   const withDefault = <T>(value: T | undefined, name: string, fallback: T): T => {
     if (value !== undefined) return value;
@@ -241,6 +249,8 @@ function buildTarget(row: Row, place: Place): Target {
     ['exposureSec', row.exposuresec],
     ['visitSigmaMps', row.visitsigmamps],
     ['visitsPerNight', row.visitspernight],
+    ['maxVisits', row.maxvisits],
+    ['maxHours', row.maxhours],
   ] as const) {
     if (value !== undefined) target[key] = value;
   }

@@ -115,6 +115,9 @@ export function setupStars(campaign: Campaign, setups: TargetSetup[]): StarSetup
     if (planets.length === 0 && !searchRow) return star;
     const target: ScheduleTarget = { id: starId, planets };
     if (lead.target.visitsPerNight !== undefined && lead.target.visitsPerNight > 1) target.visitsPerNight = lead.target.visitsPerNight;
+    const caps = starCaps(campaign, lead.target);
+    if (caps.maxVisits !== undefined) target.maxVisits = caps.maxVisits;
+    if (caps.maxHours !== undefined) target.maxHours = caps.maxHours;
     const model = starModel(rows, campaign);
     if (model) target.model = model;
     if (searchRow) {
@@ -139,15 +142,21 @@ export function starTargets(stars: StarSetup[]): Target[] {
 }
 
 /**
- * The most visits one target can get: its visitsPerNight a night when visits are at least 12 h
+ * The most visits one target can get: its cap (maxVisits), and its visitsPerNight a night when visits are at least 12 h
  * apart (the scheduler's onePerNight), over the campaign's nights; no cap in hours mode or with
  * closer spacing.
  */
 function visitCap(campaign: Campaign, target: Target): number {
-  if (campaign.constraints.minSpacingHours < 12) return Infinity;
+  const capped = starCaps(campaign, target).maxVisits ?? Infinity;
+  if (campaign.constraints.minSpacingHours < 12) return capped;
   const time = campaign.time;
   const nights = time.mode === 'choose-nights' ? time.nights : time.mode === 'given-nights' ? time.dates.length : Infinity;
-  return nights * (target.visitsPerNight ?? 1);
+  return Math.min(capped, nights * (target.visitsPerNight ?? 1));
+}
+
+/** A star's caps on visits and hours planned: its own columns, else the campaign's defaults. */
+function starCaps(campaign: Campaign, target: Target): { maxVisits?: number; maxHours?: number } {
+  return { maxVisits: target.maxVisits ?? campaign.constraints.maxVisitsPerStar, maxHours: target.maxHours ?? campaign.constraints.maxHoursPerStar };
 }
 
 /** Clear-night probability of a night: the site's fraction, per month when given (common practice). */

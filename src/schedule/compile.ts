@@ -69,6 +69,9 @@ export interface CompiledProblem {
   /** With onePerNight: spacing of one star's visits within a night, and per star how many one night holds (prior visits on that date included). */
   sameNightSpacingMs: number;
   visitsPerNight: Int32Array;
+  /** Per target: the most visits and hours the plan may give it (Infinity without a cap). */
+  maxVisits: Float64Array;
+  maxHours: Float64Array;
   /** Visits already made (prior.ts). */
   prior: CompiledPrior;
 }
@@ -181,6 +184,8 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
     onePerNight: problem.constraints.onePerNight,
     sameNightSpacingMs: Math.max(0, problem.constraints.sameNightSpacingHours ?? 0) * 3_600_000,
     visitsPerNight: Int32Array.from(problem.targets, (t) => t.visitsPerNight ?? 1),
+    maxVisits: Float64Array.from(problem.targets, (t) => t.maxVisits ?? Infinity),
+    maxHours: Float64Array.from(problem.targets, (t) => t.maxHours ?? Infinity),
     prior: { visits: [], stats: new Float64Array(0), count: new Int32Array(T), weightSum: new Float64Array(T), inNight: new Map() },
   };
   const perTarget: number[][] = problem.targets.map(() => []);

@@ -27,6 +27,8 @@ export class PlanState {
   readonly nightVisits: number[][];
   readonly targetVisits: number[][];
   readonly nightUsedHours: Float64Array;
+  /** Hours of visit blocks chosen per star (for its maxHours cap). */
+  readonly targetHours: Float64Array;
   /** Search running sums. */
   readonly stats: Float64Array;
   /** Per star: its information on its planets' K (null without planets). */
@@ -63,6 +65,7 @@ export class PlanState {
     this.nightVisits = Array.from({ length: c.nightCount }, () => []);
     this.targetVisits = Array.from({ length: c.targetCount }, () => []);
     this.nightUsedHours = new Float64Array(c.nightCount);
+    this.targetHours = new Float64Array(c.targetCount);
     this.stats = c.prior.stats.slice();
     this.information = c.models.map((model) => (model ? new StarInformation(model) : null));
     this.kVariance = new Float64Array(c.planetK.length).fill(Infinity);
@@ -181,7 +184,7 @@ export class PlanState {
     return Math.max(gain, credit);
   }
 
-  /** Whether slot j can be added: open night, budgets, no overlap in its night, spacing and visits a night for its target. */
+  /** Whether slot j can be added: open night, budgets, its star's caps, no overlap in its night, spacing and visits a night for its target. */
   canAdd(j: number): boolean {
     const c = this.c;
     if (this.chosen[j]) return false;
@@ -196,6 +199,7 @@ export class PlanState {
     if (at < inNight.length && c.startMs[inNight[at]!]! < c.endMs[j]!) return false;
     const t = c.slotTarget[j]!;
     const mine = this.targetVisits[t]!;
+    if (mine.length >= c.maxVisits[t]! || this.targetHours[t]! + h > c.maxHours[t]! + 1e-9) return false;
     const k = lowerBound(mine, j);
     const start = c.startMs[j]!;
     // With onePerNight the star's visits of night n are contiguous around k (slots sorted by night,
@@ -246,6 +250,7 @@ export class PlanState {
     }
     this.nightUsedHours[n] += sign * c.hours[j]!;
     this.hoursUsed += sign * c.hours[j]!;
+    this.targetHours[t] += sign * c.hours[j]!;
     const grid = c.grids[t];
     if (grid) {
       // No visits left: back to the prior's sums exactly rather than keep the rounding residue of the removals.

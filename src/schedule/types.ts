@@ -74,6 +74,9 @@ export interface ScheduleTarget {
   search?: ScheduleSearch;
   /** With constraints.onePerNight: how many visits of the star one night may hold (default 1). */
   visitsPerNight?: number;
+  /** Caps on the visits and on the hours (visit blocks) the plan gives the star; prior visits do not count (default: none). */
+  maxVisits?: number;
+  maxHours?: number;
 }
 
 /**
