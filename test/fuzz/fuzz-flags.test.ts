@@ -35,6 +35,9 @@ fuzzKind(
           '{dir}/plan.json',
         ],
         ['report', '{dir}/plan.json', '--out', '{dir}/plan.json'],
+        ['plan', '{dir}/campaign.yaml', '--sweep-nights', '2:3', '--out', '{dir}/campaign.yaml'],
+        ['map', '--plan', '{dir}/plan.json', '--grid', '3x3', '--trials', '20', '--shard', '0/2', '--out', '{dir}/plan.json'],
+        ['map', '--plan', '{dir}/plan.json', '--grid', '3x3', '--trials', '20', '--merge'],
       ]);
       let args = mutateArgs(template, rng);
       if (rng.uniform() < 0.3) args = mutateArgs(args, rng);
