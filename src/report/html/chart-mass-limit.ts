@@ -95,7 +95,8 @@ export function massLimitFigure(plan: Plan, summary: TargetSummary, target: Targ
     caption:
       `Planets above the line (shaded) reach K/σ_K ≥ ${fmt(goalSignificance, 1)} with the ${limit.visits} planned visits ` +
       `(equivalent σ = ${fmt(effectiveSigmaMps, 2)} m/s per visit, star ${fmt(target.massSun, 2)} M☉, circular orbits). ` +
-      'It uses the random-phase rule σ_K ≈ σ√(2/N) and the exact inverse of K; the dashed line is the mass the search aims at.',
+      'An analytic limit: it uses the random-phase rule σ_K ≈ σ√(2/N) and the exact inverse of K; the dashed line is the mass the search aims at. ' +
+      '`crest map` simulates the search itself (injection–recovery).',
     spec,
     columns: [
       { header: 'period (d)', align: 'right' },

@@ -1,6 +1,8 @@
 import { extent } from '../../extent.js';
 import type { Plan, TargetSummary } from '../../plan/plan-schema.js';
 import { fmt, percent, type Column } from '../table.js';
+import { type LevelMass, type LevelRow, levelRows } from '../../rv/injection-map.js';
+import type { DetectionMapData } from './chart-detection-map.js';
 import { searchMassLimit } from './chart-mass-limit.js';
 import { equivalentSigmaMps, targetOf, visitsOf } from './target-visits.js';
 
@@ -70,10 +72,27 @@ function ephemerisSentence(plan: Plan, summaries: TargetSummary[]): string {
   );
 }
 
-function searchSentence(plan: Plan, summaries: TargetSummary[]): string {
+/** A level's mass as words: the value, or the side of the grid it lies beyond. */
+function levelText(mass: LevelMass, masses: number[]): string {
+  if (mass.where === 'inside') return fmt(mass.msiniEarth, 1);
+  return mass.where === 'below grid' ? `below ${fmt(masses[0], 1)}` : `above ${fmt(masses.at(-1), 1)}`;
+}
+
+/** The simulated limits of a saved injection–recovery map: 50% and 90% detection at its shortest and longest period. */
+function simulatedSentence(s: TargetSummary, map: DetectionMapData): string {
+  const rows = levelRows(map.periodsDays, map.msinisEarth, map.panels[0]!.detection);
+  const at = (row: LevelRow) => `${row.levels.map((l) => levelText(l.mass, map.msinisEarth)).join(' and ')} M⊕ at ${fmt(row.periodDays, 0)} d`;
+  return `${at(rows[0]!)} and ${at(rows.at(-1)!)} around ${s.targetId} (${s.visits} planned visits)`;
+}
+
+function searchSentence(plan: Plan, summaries: TargetSummary[], maps: ReadonlyMap<string, DetectionMapData>): string {
+  const simulated = summaries.flatMap((s) => {
+    const map = maps.get(s.targetId);
+    return map ? [simulatedSentence(s, map)] : [];
+  });
   const parts = summaries.flatMap((s) => {
     const target = targetOf(plan, s.targetId);
-    if (!target?.search) return [];
+    if (!target?.search || maps.has(s.targetId)) return [];
     const { periodMinDays, periodMaxDays } = target.search;
     const limit = searchMassLimit(plan, s, target, [periodMinDays, periodMaxDays]);
     if (!limit) return [];
@@ -83,18 +102,21 @@ function searchSentence(plan: Plan, summaries: TargetSummary[]): string {
         `${fmt(periodMaxDays, 0)} d around ${s.targetId} (${limit.visits} visits)`,
     ];
   });
-  if (!parts.length) return '';
-  return (
-    ` In the blind search, planets are detectable at K/σ_K = ${fmt(plan.campaign.goals.significance, 0)} (random orbital phases, ` +
-    `circular orbits) down to a minimum mass m sin i of ${list(parts)}.`
-  );
+  const analytic = parts.length
+    ? ` In the blind search, by the analytic limit, planets are detectable at K/σ_K = ${fmt(plan.campaign.goals.significance, 0)} ` +
+      `(random orbital phases, circular orbits) down to a minimum mass m sin i of ${list(parts)}.`
+    : '';
+  const injected = simulated.length
+    ? ' Simulated blind searches of the planned visits (injection–recovery, `crest map`) detect 50% and 90% of planets at ' + `m sin i of ${list(simulated)}.`
+    : '';
+  return analytic + injected;
 }
 
 /**
  * A short justification paragraph with the plan's numbers filled in, in plain scientific
  * English, for a proposer to adapt.
  */
-export function proposalParagraph(plan: Plan): string {
+export function proposalParagraph(plan: Plan, maps: ReadonlyMap<string, DetectionMapData> = new Map()): string {
   const c = plan.campaign;
   const t = plan.totals;
   const observed = plan.targets.filter((s) => s.visits > 0);
@@ -112,7 +134,7 @@ export function proposalParagraph(plan: Plan): string {
       'including the instrumental floor and stellar jitter.',
   ];
   if (ephemeris.length) sentences.push(ephemerisSentence(plan, ephemeris));
-  let text = sentences.join(' ') + searchSentence(plan, search);
+  let text = sentences.join(' ') + searchSentence(plan, search, maps);
   if (probabilities.length) {
     text +=
       ` With the site's fraction of clear nights (${clearText(c.site.clearFraction)}), simulated weather gives each target a ` +

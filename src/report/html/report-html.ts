@@ -92,7 +92,7 @@ export async function renderReportHtml(plan: Plan, maps: ReadonlyMap<string, Det
     '<h2 id="proposal">Proposal summary</h2>',
     `<div class="table-wrap">${htmlTable(PROPOSAL_COLUMNS, proposalRows(plan), 'Time request by target')}</div>`,
     searchKNote(plan) ? `<p class="table-note">${escapeHtml(searchKNote(plan)!)}</p>` : '',
-    `<p class="proposal-text">${escapeHtml(proposalParagraph(plan))}</p>`,
+    `<p class="proposal-text">${escapeHtml(proposalParagraph(plan, maps))}</p>`,
     '<h2 id="calendar-section">Campaign calendar</h2>',
     await renderFigure(calendarFigure(plan)),
     ...(plan.nightsSweep?.length ? ['<h2 id="sweep-section">How many nights</h2>', await renderFigure(nightsSweepFigure(plan.nightsSweep))] : []),
