@@ -286,7 +286,9 @@ async function runShard(opts: MapFlags, shard: ShardSpec, jobs: MapJob[], reques
   const cells = await computeShard(jobs, shard, threads, stderrProgress());
   const written = writeOutputSet(outDir, { [name]: mapShardText(shardOf(opts.plan, request, shard, cells)) }, [opts.plan]);
   const searches = jobs.filter((j) => j.kind === 'search').length;
-  console.log(`Part ${shard.index} of ${shard.count} (counting from 0): ${cells.length} blind-search cells of ${searches} targets.`);
+  console.log(
+    `Part ${shard.index} of ${shard.count} (counting from 0): ${cells.length} blind-search cells of ${searches} targets; known-phase maps are made by --merge.`,
+  );
   console.log(`Wrote ${written.join(', ')}; when every part is written, run the same command with --merge instead of --shard.`);
 }
 
