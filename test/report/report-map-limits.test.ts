@@ -44,7 +44,8 @@ describe('report paragraph and simulated maps', () => {
     const [s50, s90] = words(detection[0]!);
     const [l50, l90] = words(detection.at(-1)!);
     expect(text).toContain(
-      `Simulated blind searches of the planned visits (injection–recovery, \`crest map\`) detect 50% and 90% of planets at m sin i of ${s50} and ${s90} M⊕ at 2 d and ${l50} and ${l90} M⊕ at 60 d around Vira (14 planned visits).`,
+      'Simulated blind searches of the planned visits (injection–recovery, `crest map`) detect 50% and 90% of planets at m sin i of ' +
+        `${s50} and ${s90} M⊕ at 2 d and ${l50} and ${l90} M⊕ at 60 d around Vira (14 planned visits).`,
     );
   });
 });
