@@ -85,6 +85,8 @@ function simulatedSentence(s: TargetSummary, map: DetectionMapData): string {
   return `${at(rows[0]!)} and ${at(rows.at(-1)!)} around ${s.targetId} (${s.visits} planned visits)`;
 }
 
+const SIMULATED_LEAD = 'Simulated blind searches of the planned visits (injection–recovery, `crest map`) detect 50% and 90% of planets at m sin i of';
+
 function searchSentence(plan: Plan, summaries: TargetSummary[], maps: ReadonlyMap<string, DetectionMapData>): string {
   const simulated = summaries.flatMap((s) => {
     const map = maps.get(s.targetId);
@@ -106,10 +108,18 @@ function searchSentence(plan: Plan, summaries: TargetSummary[], maps: ReadonlyMa
     ? ` In the blind search, by the analytic limit, planets are detectable at K/σ_K = ${fmt(plan.campaign.goals.significance, 0)} ` +
       `(random orbital phases, circular orbits) down to a minimum mass m sin i of ${list(parts)}.`
     : '';
-  const injected = simulated.length
-    ? ' Simulated blind searches of the planned visits (injection–recovery, `crest map`) detect 50% and 90% of planets at ' + `m sin i of ${list(simulated)}.`
-    : '';
+  const injected = simulated.length ? ` ${SIMULATED_LEAD} ${list(simulated)}.` : '';
   return analytic + injected;
+}
+
+/** The dark time of the nights asked for that no visit uses, and what can be done with it; '' when it is small. */
+function idleSentence(plan: Plan): string {
+  const { darkHours, idleHours } = plan.totals;
+  if (plan.campaign.time.mode !== 'choose-nights' || darkHours === undefined || idleHours === undefined || idleHours < 0.1 * darkHours) return '';
+  return (
+    ` Of the ${fmt(darkHours, 1)} dark hours of these nights, ${fmt(idleHours, 1)} h (${percent(idleHours / darkHours)}) hold no visit: ` +
+    'fewer or shorter nights would do for these targets, or that time can go to other programmes.'
+  );
 }
 
 /**
@@ -141,5 +151,5 @@ export function proposalParagraph(plan: Plan, maps: ReadonlyMap<string, Detectio
       `probability of ${spread(probabilities, 0)}% of reaching its goal`;
     text += plan.backups.length ? `; ${plan.backups.length} backup nights are ranked in case planned nights are lost.` : '.';
   }
-  return text;
+  return text + idleSentence(plan);
 }
