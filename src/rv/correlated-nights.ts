@@ -34,8 +34,16 @@ export class CorrelatedNights {
   private changes = 0;
   private scratchA = new Float64Array(0);
   private scratchB = new Float64Array(0);
+  /** A column of P, for commits. */
+  private scratchColumn = new Float64Array(0);
+  /** The night time whose ā and b = P ā scratchA and scratchB hold (with āᵀ b), until the next commit; NaN when none. */
+  private borderBjdTdb = Number.NaN;
+  private borderAb = 0;
+  private readonly kernelAtZero: number;
   private readonly d: Float64Array;
   private readonly x: Float64Array;
+  /** The residuals of a new night, sampleCount × p. */
+  private readonly rs: Float64Array;
 
   constructor(
     private readonly activity: ActivityInput,
@@ -48,6 +56,8 @@ export class CorrelatedNights {
     this.g = new Float64Array(samples * this.packed);
     this.d = new Float64Array(p);
     this.x = new Float64Array(p);
+    this.rs = new Float64Array(this.row);
+    this.kernelAtZero = activityCovariance(activity, 0);
   }
 
   clear(): void {
@@ -56,6 +66,7 @@ export class CorrelatedNights {
     this.position.clear();
     this.g.fill(0);
     this.changes = 0;
+    this.borderBjdTdb = Number.NaN;
   }
 
   /** work += G of sample s. */
@@ -81,22 +92,31 @@ export class CorrelatedNights {
     this.cap = cap;
     this.scratchA = new Float64Array(cap);
     this.scratchB = new Float64Array(cap);
+    this.scratchColumn = new Float64Array(cap);
+    this.borderBjdTdb = Number.NaN;
   }
 
-  /** ā (kernel to the existing nights) in scratchA, b = P ā in scratchB; returns s = a − āᵀ b. */
+  /**
+   * ā (kernel to the existing nights) in scratchA, b = P ā in scratchB; returns s = a − āᵀ b. ā, b and āᵀ b are
+   * kept until the next commit: every slot of one night shares them.
+   */
   private border(nightBjdTdb: number, weight: number): number {
-    const { m, cap, pm } = this;
-    const a = this.scratchA;
-    const b = this.scratchB;
-    for (let i = 0; i < m; i++) a[i] = activityCovariance(this.activity, nightBjdTdb - this.times[i]!);
-    let ab = 0;
-    for (let i = 0; i < m; i++) {
-      let sum = 0;
-      for (let k = 0; k < m; k++) sum += pm[i * cap + k]! * a[k]!;
-      b[i] = sum;
-      ab += a[i]! * sum;
+    if (nightBjdTdb !== this.borderBjdTdb) {
+      const { m, cap, pm } = this;
+      const a = this.scratchA;
+      const b = this.scratchB;
+      for (let i = 0; i < m; i++) a[i] = activityCovariance(this.activity, nightBjdTdb - this.times[i]!);
+      let ab = 0;
+      for (let i = 0; i < m; i++) {
+        let sum = 0;
+        for (let k = 0; k < m; k++) sum += pm[i * cap + k]! * a[k]!;
+        b[i] = sum;
+        ab += a[i]! * sum;
+      }
+      this.borderBjdTdb = nightBjdTdb;
+      this.borderAb = ab;
     }
-    return 1 / weight + this.tau2 + activityCovariance(this.activity, 0) - ab;
+    return 1 / weight + this.tau2 + this.kernelAtZero - this.borderAb;
   }
 
   /** r = j − Hᵀ ā for sample s, into this.d. */
@@ -115,46 +135,43 @@ export class CorrelatedNights {
       const s = this.border(v.nightBjdTdb, v.weight);
       for (let k = 0; k < this.samples; k++) {
         this.residual(v.rows, v.offset, k);
-        addOuter(out, k * this.packed, this.p, this.d, this.d, 1 / s);
+        addOuter(out, k * this.packed, this.p, this.d, 0, this.d, 0, 1 / s);
       }
       return;
     }
-    this.changeTerms(v, sign, nightWeight, nightU!, q, (k, h, pqq, beta) => {
-      const { d, x, p } = this;
+    const { d, x, p, h } = this;
+    const w = v.weight;
+    const after = nightWeight + sign * w;
+    const pqq = this.pm[q * this.cap + q]!;
+    for (let k = 0; k < this.samples; k++) {
       const at = k * this.packed;
-      if (beta === undefined) return addOuter(out, at, p, h, h, -1 / pqq);
-      addOuter(out, at, p, h, d, 1);
-      addOuter(out, at, p, d, h, 1);
-      addOuter(out, at, p, d, d, pqq);
-      for (let c = 0; c < p; c++) x[c] = h[c]! + pqq * d[c]!;
-      addOuter(out, at, p, x, x, -beta);
-    });
+      const hAt = q * this.row + k * p;
+      if (after <= 1e-9 * w) {
+        addOuter(out, at, p, h, hAt, h, hAt, -1 / pqq);
+        continue;
+      }
+      const beta = this.meanChange(v, sign, nightWeight, nightU!, pqq, k);
+      addOuter(out, at, p, h, hAt, d, 0, 1);
+      addOuter(out, at, p, d, 0, h, hAt, 1);
+      addOuter(out, at, p, d, 0, d, 0, pqq);
+      for (let c = 0; c < p; c++) x[c] = h[hAt + c]! + pqq * d[c]!;
+      addOuter(out, at, p, x, 0, x, 0, -beta);
+    }
   }
 
   /**
-   * For a change to existing night q: per sample k, calls visit(k, h, P_qq, β) with this.d = ū' − ū;
-   * β undefined when the night loses its last visit.
+   * For a change to existing night q that keeps some of its visits (P_qq = pqq): this.d = ū' − ū of sample k;
+   * returns β.
    */
-  private changeTerms(
-    v: InformationVisit,
-    sign: 1 | -1,
-    nightWeight: number,
-    nightU: Float64Array,
-    q: number,
-    visit: (k: number, h: Float64Array, pqq: number, beta: number | undefined) => void,
-  ): void {
-    const after = nightWeight + sign * v.weight;
-    const pqq = this.pm[q * this.cap + q]!;
-    const removed = after <= 1e-9 * v.weight;
-    const delta = removed ? 0 : 1 / after - 1 / nightWeight;
-    const beta = removed ? undefined : delta / (1 + delta * pqq);
+  private meanChange(v: InformationVisit, sign: 1 | -1, nightWeight: number, nightU: Float64Array, pqq: number, k: number): number {
     const { p, d } = this;
-    for (let k = 0; k < this.samples; k++) {
-      const h = this.h.subarray(q * this.row + k * p, q * this.row + (k + 1) * p);
-      if (!removed)
-        for (let c = 0; c < p; c++) d[c] = (nightU[k * p + c]! + sign * v.weight * v.rows[v.offset + k * p + c]!) / after - nightU[k * p + c]! / nightWeight;
-      visit(k, h, pqq, beta);
-    }
+    const w = v.weight;
+    const rows = v.rows;
+    const from = v.offset + k * p;
+    const after = nightWeight + sign * w;
+    const delta = 1 / after - 1 / nightWeight;
+    for (let c = 0; c < p; c++) d[c] = (nightU[k * p + c]! + sign * w * rows[from + c]!) / after - nightU[k * p + c]! / nightWeight;
+    return delta / (1 + delta * pqq);
   }
 
   /** Applies the change of addDelta to G, P and H. */
@@ -167,19 +184,24 @@ export class CorrelatedNights {
       const after = nightWeight + sign * v.weight;
       if (after <= 1e-9 * v.weight) this.deleteNight(q);
       else {
-        const column = Float64Array.from({ length: this.m }, (_, i) => this.pm[i * cap + q]!);
+        const column = this.scratchColumn;
+        for (let i = 0; i < this.m; i++) column[i] = this.pm[i * cap + q]!;
+        const pqq = column[q]!;
         let betaUsed = 0;
-        this.changeTerms(v, sign, nightWeight, nightU!, q, (k, h, pqq, beta) => {
-          betaUsed = beta!;
-          const { d, x } = this;
-          for (let c = 0; c < p; c++) x[c] = d[c]! - beta! * (h[c]! + pqq * d[c]!);
-          for (let i = 0; i < this.m; i++) for (let c = 0; c < p; c++) this.h[i * row + k * p + c] += column[i]! * x[c]!;
+        const { d, x, h } = this;
+        for (let k = 0; k < this.samples; k++) {
+          const beta = this.meanChange(v, sign, nightWeight, nightU!, pqq, k);
+          betaUsed = beta;
+          const hAt = q * row + k * p;
+          for (let c = 0; c < p; c++) x[c] = d[c]! - beta * (h[hAt + c]! + pqq * d[c]!);
+          for (let i = 0; i < this.m; i++) for (let c = 0; c < p; c++) h[i * row + k * p + c] += column[i]! * x[c]!;
           for (let c = 0; c < p; c++) this.ubar[q * row + k * p + c] += d[c]!;
-        });
+        }
         for (let i = 0; i < this.m; i++) for (let k = 0; k < this.m; k++) this.pm[i * cap + k] -= betaUsed * column[i]! * column[k]!;
         this.weights[q] = after;
       }
     }
+    this.borderBjdTdb = Number.NaN;
     if (++this.changes % REFRESH_EVERY === 0) this.refresh();
   }
 
@@ -187,7 +209,7 @@ export class CorrelatedNights {
     const { m, cap, p, row, pm } = this;
     const s = this.border(v.nightBjdTdb, v.weight);
     const b = this.scratchB;
-    const rs = new Float64Array(row);
+    const rs = this.rs;
     for (let k = 0; k < this.samples; k++) {
       this.residual(v.rows, v.offset, k);
       rs.set(this.d, k * p);
@@ -212,7 +234,8 @@ export class CorrelatedNights {
     const { cap, row, pm } = this;
     const m = this.m;
     const pqq = pm[q * cap + q]!;
-    const column = Float64Array.from({ length: m }, (_, i) => pm[i * cap + q]!);
+    const column = this.scratchColumn;
+    for (let i = 0; i < m; i++) column[i] = pm[i * cap + q]!;
     for (let i = 0; i < m; i++) {
       if (i === q) continue;
       for (let k = 0; k < m; k++) if (k !== q) pm[i * cap + k] -= (column[i]! * column[k]!) / pqq;
@@ -262,21 +285,16 @@ export class CorrelatedNights {
       for (let k = 0; k < m; k++) for (let c = 0; c < row; c++) this.h[i * row + c] += this.pm[i * cap + k]! * this.ubar[k * row + c]!;
     this.g.fill(0);
     for (let s = 0; s < this.samples; s++) {
-      for (let i = 0; i < m; i++)
-        addOuter(
-          this.g,
-          s * this.packed,
-          p,
-          this.ubar.subarray(i * row + s * p, i * row + (s + 1) * p),
-          this.h.subarray(i * row + s * p, i * row + (s + 1) * p),
-          1,
-        );
+      for (let i = 0; i < m; i++) addOuter(this.g, s * this.packed, p, this.ubar, i * row + s * p, this.h, i * row + s * p, 1);
     }
   }
 }
 
-/** out[at ..] (packed lower) += scale × x yᵀ (only the lower triangle of x yᵀ is read: add both orders for a symmetric sum). */
-function addOuter(out: Float64Array, at: number, p: number, x: ArrayLike<number>, y: ArrayLike<number>, scale: number): void {
+/**
+ * out[at ..] (packed lower) += scale × x yᵀ with x and y the p entries of xs from xAt and of ys from yAt (only the
+ * lower triangle of x yᵀ is read: add both orders for a symmetric sum).
+ */
+function addOuter(out: Float64Array, at: number, p: number, xs: Float64Array, xAt: number, ys: Float64Array, yAt: number, scale: number): void {
   let idx = at;
-  for (let r = 0; r < p; r++) for (let c = 0; c <= r; c++) out[idx++] += scale * x[r]! * y[c]!;
+  for (let r = 0; r < p; r++) for (let c = 0; c <= r; c++) out[idx++] += scale * xs[xAt + r]! * ys[yAt + c]!;
 }

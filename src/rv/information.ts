@@ -90,7 +90,7 @@ export class StarInformation {
       this.factorOk[s] = choleskyInPlace(this.factor, p, s * packed) ? 1 : 0;
       if (!this.factorOk[s]) continue;
       one.fill(0);
-      addVariancesFromFactor(this.factor, s * packed, p, planetCount, 1, one);
+      addVariancesFromFactor(this.factor, s * packed, p, planetCount, 1, one, this.scratch.y1);
       for (let k = 0; k < planetCount; k++) this.current[s * planetCount + k] = one[k]!;
     }
     this.stale = false;
@@ -176,7 +176,7 @@ export class StarInformation {
       const at = s * packed;
       for (let i = 0; i < packed; i++) this.work[i] = this.base[at + i]! + (v ? this.delta[at + i]! : 0);
       if (this.correlated) this.correlated.addTo(this.work, s);
-      addTrailingVariances(this.work, p, planetCount, this.model.samples[s]!.weight, out);
+      addTrailingVariances(this.work, p, planetCount, this.model.samples[s]!.weight, out, this.scratch.y1);
     }
     return out;
   }

@@ -11,18 +11,30 @@ const PIVOT_TOLERANCE = 1e-10;
 
 /**
  * Adds weight × Var(θ_k) for the last `trailing` of the p parameters to out[0 .. trailing)
- * (Infinity when F is singular), overwriting `a` (packed, p(p+1)/2) with its Cholesky factor.
+ * (Infinity when F is singular), overwriting `a` (packed, p(p+1)/2) with its Cholesky factor;
+ * `column` is scratch of at least `trailing` entries.
  */
-export function addTrailingVariances(a: Float64Array, p: number, trailing: number, weight: number, out: Float64Array): void {
+export function addTrailingVariances(a: Float64Array, p: number, trailing: number, weight: number, out: Float64Array, column: Float64Array): void {
   if (!choleskyInPlace(a, p)) {
     for (let k = 0; k < trailing; k++) out[k] = Infinity;
     return;
   }
-  addVariancesFromFactor(a, 0, p, trailing, weight, out);
+  addVariancesFromFactor(a, 0, p, trailing, weight, out, column);
 }
 
-/** Adds weight × Var(θ_k) of the last `trailing` parameters to out, from the Cholesky factor l (packed, at lAt). */
-export function addVariancesFromFactor(l: Float64Array, lAt: number, p: number, trailing: number, weight: number, out: Float64Array): void {
+/**
+ * Adds weight × Var(θ_k) of the last `trailing` parameters to out, from the Cholesky factor l (packed, at lAt);
+ * `column` is scratch of at least `trailing` entries.
+ */
+export function addVariancesFromFactor(
+  l: Float64Array,
+  lAt: number,
+  p: number,
+  trailing: number,
+  weight: number,
+  out: Float64Array,
+  column: Float64Array,
+): void {
   const first = p - trailing;
   if (trailing === 1) {
     const d = l[lAt + packedIndex(p - 1, p - 1)]!;
@@ -30,9 +42,9 @@ export function addVariancesFromFactor(l: Float64Array, lAt: number, p: number, 
     return;
   }
   // Columns of L_T⁻¹ by forward substitution: L_T x = e_c.
-  const x = new Float64Array(trailing);
+  const x = column;
   for (let c = 0; c < trailing; c++) {
-    x.fill(0);
+    x.fill(0, 0, trailing);
     let norm = 0;
     for (let r = c; r < trailing; r++) {
       const row = first + r;
@@ -124,14 +136,13 @@ export function addRankTwoVariances(
   weight: number,
   out: Float64Array,
 ): boolean {
+  if (m12 === 0 && m22 === 0) return addRankOneVariances(l, lAt, p, trailing, current, currentAt, x1, x1At, m11, scratch.y1, weight, out);
   const { y1, y2 } = scratch;
   forward(l, lAt, p, x1, x1At, y1);
-  const rankTwo = m12 !== 0 || m22 !== 0;
-  if (rankTwo) forward(l, lAt, p, x2, x2At, y2);
-  else y2.fill(0);
+  forward(l, lAt, p, x2, x2At, y2);
   const g11 = dot(y1, y1, p);
-  const g12 = rankTwo ? dot(y1, y2, p) : 0;
-  const g22 = rankTwo ? dot(y2, y2, p) : 0;
+  const g12 = dot(y1, y2, p);
+  const g22 = dot(y2, y2, p);
   // A = I + M G, N = A⁻¹ M.
   const a11 = 1 + m11 * g11 + m12 * g12;
   const a12 = m11 * g12 + m12 * g22;
@@ -144,11 +155,42 @@ export function addRankTwoVariances(
   const n21 = (-a21 * m11 + a11 * m12) / det;
   const n22 = (-a21 * m12 + a11 * m22) / det;
   backTrailing(l, lAt, p, trailing, y1);
-  if (rankTwo) backTrailing(l, lAt, p, trailing, y2);
+  backTrailing(l, lAt, p, trailing, y2);
   for (let k = 0; k < trailing; k++) {
     const z1 = y1[p - trailing + k]!;
     const z2 = y2[p - trailing + k]!;
     out[k] += weight * (current[currentAt + k]! - (z1 * (n11 * z1 + n12 * z2) + z2 * (n21 * z1 + n22 * z2)));
+  }
+  return true;
+}
+
+/**
+ * addRankTwoVariances with x2 = 0 (m12 = m22 = 0): the Sherman–Morrison case ([Golub-VanLoan2013] §2.1.4),
+ * F⁻¹ − m11 F⁻¹x1 x1ᵀF⁻¹ / (1 + m11 g11). The same numbers as the rank-two formulas bit for bit: what they add
+ * for x2 = 0 is only exact identities (x + 0, x × 1, x − 0 with the zero terms of G, A and N), dropped here.
+ */
+function addRankOneVariances(
+  l: Float64Array,
+  lAt: number,
+  p: number,
+  trailing: number,
+  current: Float64Array,
+  currentAt: number,
+  x1: Float64Array,
+  x1At: number,
+  m11: number,
+  y1: Float64Array,
+  weight: number,
+  out: Float64Array,
+): boolean {
+  forward(l, lAt, p, x1, x1At, y1);
+  const a11 = 1 + m11 * dot(y1, y1, p);
+  if (!(Math.abs(a11) > 1e-9 * Math.max(1, Math.abs(a11)))) return false;
+  const n11 = m11 / a11;
+  backTrailing(l, lAt, p, trailing, y1);
+  for (let k = 0; k < trailing; k++) {
+    const z1 = y1[p - trailing + k]!;
+    out[k] += weight * (current[currentAt + k]! - z1 * (n11 * z1));
   }
   return true;
 }
