@@ -27,6 +27,7 @@ const EXPECTED_SEC: Record<string, number> = {
   'plan/ics-cli.test.ts': 8,
   'plan/nights-sweep.test.ts': 8,
   'cli/map-shard.test.ts': 7,
+  'plan/caps-plan.test.ts': 7,
   'plan/warnings.test.ts': 7,
   'plan/ics-zone.test.ts': 6,
   'rv/monte-carlo-k-two-planets.test.ts': 6,
