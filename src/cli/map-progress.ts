@@ -1,4 +1,4 @@
-// A progress bar for long map runs, on stderr only: drawn once the run has taken more than two
+// A progress bar for long runs (maps, nights sweeps), on stderr only: drawn once the run has taken more than two
 // seconds and only when stderr is a terminal, so pipes, files and tests never see it.
 
 const SHOW_AFTER_MS = 2000;
@@ -10,7 +10,7 @@ export interface Progress {
   end(): void;
 }
 
-export function stderrProgress(stream: NodeJS.WriteStream = process.stderr): Progress {
+export function stderrProgress(stream: NodeJS.WriteStream = process.stderr, unit = 'cells'): Progress {
   const startMs = Date.now();
   let drawn = false;
   let lastPercent = -1;
@@ -21,7 +21,7 @@ export function stderrProgress(stream: NodeJS.WriteStream = process.stderr): Pro
       if (percent === lastPercent) return;
       lastPercent = percent;
       const filled = Math.round((BAR_WIDTH * done) / total);
-      stream.write(`\r${label} [${'#'.repeat(filled)}${'.'.repeat(BAR_WIDTH - filled)}] ${String(percent).padStart(3)}% (${done}/${total} cells)`);
+      stream.write(`\r${label} [${'#'.repeat(filled)}${'.'.repeat(BAR_WIDTH - filled)}] ${String(percent).padStart(3)}% (${done}/${total} ${unit})`);
       drawn = true;
     },
     end() {

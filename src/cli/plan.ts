@@ -9,6 +9,7 @@ import { writeOutputSet } from '../io/output-set.js';
 import { slug } from '../io/slug.js';
 import { buildPlan } from '../plan/build-plan.js';
 import { nightsSweep, withNightCount } from '../plan/nights-sweep.js';
+import { stderrProgress } from './map-progress.js';
 import { renderReportHtml } from '../report/html/report-html.js';
 import { renderPlanCsv } from '../report/plan-csv.js';
 import { withIcsSequences } from '../report/ics-sequence.js';
@@ -105,7 +106,11 @@ export function registerPlan(program: Command): Command {
       if (opts.sweepNights && campaign.time.mode === 'choose-nights') {
         const [from, to] = opts.sweepNights;
         const counts = Array.from({ length: to - from + 1 }, (_, i) => from + i);
-        plan.nightsSweep = nightsSweep(campaign, counts, planOptions, new Map([[campaign.time.nights, plan]]));
+        const progress = stderrProgress(process.stderr, 'plans');
+        plan.nightsSweep = nightsSweep(campaign, counts, planOptions, new Map([[campaign.time.nights, plan]]), (done, total) =>
+          progress.update('nights sweep', done, total),
+        );
+        progress.end();
       }
       const json = renderPlanJson(plan);
       const ics = renderPlanIcs(plan, { previous, stampMs });

@@ -28,6 +28,17 @@ export function sweepRow(plan: Plan, nights: number): SweepRow {
  * The sweep over `counts`: each count planned as `crest plan --nights n` would (same seed and
  * options). `known` holds plans already built, by count, so the campaign's own plan is not built twice.
  */
-export function nightsSweep(campaign: Campaign, counts: number[], options: PlanOptions = {}, known: ReadonlyMap<number, Plan> = new Map()): SweepRow[] {
-  return counts.map((n) => sweepRow(known.get(n) ?? buildPlan(withNightCount(campaign, n), options), n));
+export function nightsSweep(
+  campaign: Campaign,
+  counts: number[],
+  options: PlanOptions = {},
+  known: ReadonlyMap<number, Plan> = new Map(),
+  /** Called after each count with (counts done, counts in all). */
+  onProgress?: (done: number, total: number) => void,
+): SweepRow[] {
+  return counts.map((n, i) => {
+    const row = sweepRow(known.get(n) ?? buildPlan(withNightCount(campaign, n), options), n);
+    onProgress?.(i + 1, counts.length);
+    return row;
+  });
 }
