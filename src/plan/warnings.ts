@@ -36,6 +36,18 @@ export function recoveryVisits(kMps: number, effectiveSigmaMps: number): number 
   return Math.max(3, Math.ceil((2 * effectiveSigmaMps * effectiveSigmaMps) / (kMps * 2 * Math.PI * RECOVERED_PHASE_ERR_CYCLES) ** 2));
 }
 
+/** Which cap the star's visits reached (its own column or the campaign's default), or '' (src/plan/candidates.ts starCaps). */
+function capText(plan: Plan, summary: TargetSummary, setup: TargetSetup): string {
+  const { constraints } = plan.campaign;
+  const maxVisits = setup.target.maxVisits ?? constraints.maxVisitsPerStar;
+  const maxHours = setup.target.maxHours ?? constraints.maxHoursPerStar;
+  if (maxVisits !== undefined && summary.visits >= maxVisits) return `at its cap of ${maxVisits} visits (maxVisits)`;
+  const blockHours = setup.durationSec / 3600;
+  if (maxHours !== undefined && summary.hours + blockHours > maxHours + 1e-9)
+    return `at its cap of ${maxHours} h (maxHours): another visit would not fit in it`;
+  return '';
+}
+
 /** Fills each target's warnings in place and returns the plan-wide ones. */
 export function planWarnings(plan: Plan, setups: TargetSetup[], windows: Window[], rule: TransitRule): string[] {
   const observable = new Set(windows.map((w) => w.targetId));
@@ -60,6 +72,8 @@ export function planWarnings(plan: Plan, setups: TargetSetup[], windows: Window[
           `beyond what the plan's linearised model can trust; about ${n} visits spread in phase bring it to ±${RECOVERED_PHASE_ERR_CYCLES} cycles`,
       );
     }
+    const cap = capText(plan, summary, setup);
+    if (cap) w.push(cap);
     const eph = setup.target.ephemeris;
     if (
       eph?.transitDurationHours !== undefined &&

@@ -25,11 +25,16 @@ function example(column: string, value: string, extra = ''): string {
   return path.join(dir, 'campaign.yaml');
 }
 
-const visitsOf = (file: string, star: string) => buildPlan(readCampaign(file), { weatherTrials: 50 }).visits.filter((v) => v.starId === star);
+const planOf = (file: string) => buildPlan(readCampaign(file), { weatherTrials: 50 });
+const visitsOf = (file: string, star: string) => planOf(file).visits.filter((v) => v.starId === star);
 
 describe('caps in the plan', () => {
   it("a star's maxVisits and maxHours columns, and the campaign's default", () => {
-    expect(visitsOf(example('maxVisits', '5'), 'TARN-9').length).toBe(5);
+    const capped = planOf(example('maxVisits', '5'));
+    expect(capped.visits.filter((v) => v.starId === 'TARN-9').length).toBe(5);
+    // The summary says the star stopped at its cap, and only that star.
+    expect(capped.targets.find((t) => t.targetId === 'TARN-9')!.warnings).toContain('at its cap of 5 visits (maxVisits)');
+    expect(capped.targets.filter((t) => t.warnings.some((w) => w.startsWith('at its cap'))).map((t) => t.targetId)).toEqual(['TARN-9']);
     const hours = visitsOf(example('maxHours', '1'), 'TARN-9').reduce((sum, v) => sum + v.durationSec / 3600, 0);
     expect(hours).toBeLessThanOrEqual(1 + 1e-9);
     expect(hours).toBeGreaterThan(0.5);
