@@ -11,7 +11,7 @@ import path from 'node:path';
 import { inputError } from '../errors.js';
 import { fileSha256, MAP_SHARD_NAME, type MapShard, mapShardFile, readMapShard, type ShardCell } from '../io/map-shard-file.js';
 import { injectionCellsParallel } from '../rv/injection-worker-pool.js';
-import type { Progress } from './map-progress.js';
+import type { Progress } from './progress.js';
 import type { MapJob, MapSettings } from './map-targets.js';
 
 /** Most parts a map may be split into. */
@@ -51,19 +51,23 @@ interface JobCell {
   cell: number;
 }
 
-/** The blind-search cells of part `shard`, in target then cell order. */
-function cellsOfShard(jobs: MapJob[], shard: ShardSpec): JobCell[] {
-  const all = jobs.flatMap((job, k) =>
+/** Every blind-search cell of the run, in target then cell order. */
+function allCells(jobs: MapJob[]): JobCell[] {
+  return jobs.flatMap((job, k) =>
     job.kind === 'search'
       ? Array.from({ length: job.input.periodsDays.length * job.input.msinisEarth.length }, (_, cell) => ({ job: k, targetId: job.targetId, cell }))
       : [],
   );
+}
+
+/** The cells of part `shard`: every shard.count-th of `all` from the shard.index-th. */
+function cellsOfShard(all: JobCell[], shard: ShardSpec): JobCell[] {
   return all.filter((_, u) => u % shard.count === shard.index);
 }
 
 /** Computes part `shard` of the run: its cells' detection probabilities, target by target. */
 export async function computeShard(jobs: MapJob[], shard: ShardSpec, threads: number, progress: Progress): Promise<ShardCell[]> {
-  const mine = cellsOfShard(jobs, shard);
+  const mine = cellsOfShard(allCells(jobs), shard);
   const out: ShardCell[] = [];
   for (const [k, job] of jobs.entries()) {
     if (job.kind !== 'search') continue;
@@ -109,6 +113,7 @@ function partFiles(outDir: string): string[] {
  */
 export function mergeShards(outDir: string, planFile: string, request: string, jobs: MapJob[]): Map<number, number[]> {
   const planSha256 = fileSha256(planFile);
+  const all = allCells(jobs);
   const flat = new Map<number, number[]>();
   for (const file of partFiles(outDir)) {
     const part = readMapShard(file);
@@ -124,7 +129,7 @@ export function mergeShards(outDir: string, planFile: string, request: string, j
       });
     if (part.request !== request)
       throw inputError({ file, field: 'request', value: part.request, allowed: `the request of this merge, ${request}: give --merge the flags the parts had` });
-    const expected = cellsOfShard(jobs, part.shard);
+    const expected = cellsOfShard(all, part.shard);
     const at = part.cells.findIndex((c, i) => c.targetId !== expected[i]?.targetId || c.cell !== expected[i]?.cell);
     if (at >= 0 || part.cells.length !== expected.length) {
       const k = at >= 0 ? at : Math.min(part.cells.length, expected.length);

@@ -11,7 +11,7 @@ import { detectionMapFigure, type DetectionMapData } from '../report/html/chart-
 import { renderSvg } from '../report/html/vega-svg.js';
 import { toCsv } from '../report/csv.js';
 import { fmt, percent } from '../report/table.js';
-import { DEFAULT_FAP_THRESHOLD } from '../rv/injection.js';
+import { DEFAULT_FAP_THRESHOLD, rowsOfCells } from '../rv/injection.js';
 import { levelRows, type LevelRow } from '../rv/injection-map.js';
 import { injectionRecoveryParallel } from '../rv/injection-worker-pool.js';
 import { knownPhaseMapAnalytic, knownPhaseMapSimulated } from '../rv/known-phase-map.js';
@@ -21,7 +21,7 @@ import { computeShard, mergeShards, requestText, type ShardSpec, shardFlag, shar
 import { mapDataFile, reportWithMaps } from './map-report.js';
 import { mapJobs, type MapJob, type MapSettings } from './map-targets.js';
 import { levelTableText, mapTableText } from './map-text.js';
-import { stderrProgress, type Progress } from './map-progress.js';
+import { stderrProgress, type Progress } from './progress.js';
 import { numberFlag, printJson } from './options.js';
 
 interface MapFlags {
@@ -80,10 +80,7 @@ interface MapResult {
 type SearchSource = { threads: number; progress: Progress } | { merged: number[] };
 
 async function searchDetection(job: MapJob & { kind: 'search' }, source: SearchSource): Promise<number[][]> {
-  if ('merged' in source) {
-    const masses = job.input.msinisEarth.length;
-    return job.input.periodsDays.map((_, i) => source.merged.slice(i * masses, (i + 1) * masses));
-  }
+  if ('merged' in source) return rowsOfCells(source.merged, job.input.periodsDays.length, job.input.msinisEarth.length);
   const { threads, progress } = source;
   const map = await injectionRecoveryParallel(job.input, { threads, onProgress: (done, total) => progress.update(job.targetId, done, total) });
   progress.end();

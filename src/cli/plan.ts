@@ -9,7 +9,7 @@ import { writeOutputSet } from '../io/output-set.js';
 import { slug } from '../io/slug.js';
 import { buildPlan } from '../plan/build-plan.js';
 import { nightsSweep, withNightCount } from '../plan/nights-sweep.js';
-import { stderrProgress } from './map-progress.js';
+import { stderrProgress } from './progress.js';
 import { renderReportHtml } from '../report/html/report-html.js';
 import { renderPlanCsv } from '../report/plan-csv.js';
 import { withIcsSequences } from '../report/ics-sequence.js';

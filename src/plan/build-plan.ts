@@ -109,7 +109,7 @@ function plannedVisit(d: SlotDetail, campaign: Campaign): PlannedVisit {
 /**
  * K and σ_K as the summary quotes them, with their period. A search's score K/σ_K is the geometric
  * mean over its log-spaced period grid of K(P)/σ_K(P) (src/schedule/objective-search.ts); with
- * K ∝ P^(-1/3) [Kepler-RV] the geometric mean of K(P) is K at √(Pmin · Pmax), so K is quoted there
+ * K ∝ P^(-1/3) for fixed masses [K-formula] the geometric mean of K(P) is K at √(Pmin · Pmax), so K is quoted there
  * and σ_K = K / score (the geometric mean of σ_K(P)). The scheduler itself takes K at Pmin.
  */
 function quotedK(setup: TargetSetup, outcome: { sigmaKMps: number; kOverSigmaK: number }): { kMps?: number; kPeriodDays?: number; sigmaKMps: number } {

@@ -155,7 +155,7 @@ function visitCap(campaign: Campaign, target: Target): number {
 }
 
 /** A star's caps on visits and hours planned: its own columns, else the campaign's defaults. */
-function starCaps(campaign: Campaign, target: Target): { maxVisits?: number; maxHours?: number } {
+export function starCaps(campaign: Campaign, target: Target): { maxVisits?: number; maxHours?: number } {
   return { maxVisits: target.maxVisits ?? campaign.constraints.maxVisitsPerStar, maxHours: target.maxHours ?? campaign.constraints.maxHoursPerStar };
 }
 

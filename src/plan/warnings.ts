@@ -5,7 +5,7 @@ import type { Window } from '../model.js';
 import type { Plan, TargetSummary } from './plan-schema.js';
 import { nearestEpoch, type TransitRule, transitHalfWidthDays } from '../orbit/ephemeris.js';
 import { visitsNeeded } from '../rv/detect.js';
-import type { TargetSetup } from './candidates.js';
+import { starCaps, type TargetSetup } from './candidates.js';
 
 /**
  * Phase error (cycles) above which the linearised information model stops being trustworthy:
@@ -36,11 +36,9 @@ export function recoveryVisits(kMps: number, effectiveSigmaMps: number): number 
   return Math.max(3, Math.ceil((2 * effectiveSigmaMps * effectiveSigmaMps) / (kMps * 2 * Math.PI * RECOVERED_PHASE_ERR_CYCLES) ** 2));
 }
 
-/** Which cap the star's visits reached (its own column or the campaign's default), or '' (src/plan/candidates.ts starCaps). */
+/** Which cap the star's visits reached (its own column or the campaign's default), or ''. */
 function capText(plan: Plan, summary: TargetSummary, setup: TargetSetup): string {
-  const { constraints } = plan.campaign;
-  const maxVisits = setup.target.maxVisits ?? constraints.maxVisitsPerStar;
-  const maxHours = setup.target.maxHours ?? constraints.maxHoursPerStar;
+  const { maxVisits, maxHours } = starCaps(plan.campaign, setup.target);
   if (maxVisits !== undefined && summary.visits >= maxVisits) return `at its cap of ${maxVisits} visits (maxVisits)`;
   const blockHours = setup.durationSec / 3600;
   if (maxHours !== undefined && summary.hours + blockHours > maxHours + 1e-9)
@@ -51,7 +49,8 @@ function capText(plan: Plan, summary: TargetSummary, setup: TargetSetup): string
 /** Fills each target's warnings in place and returns the plan-wide ones. */
 export function planWarnings(plan: Plan, setups: TargetSetup[], windows: Window[], rule: TransitRule): string[] {
   const observable = new Set(windows.map((w) => w.targetId));
-  const windowEndBjdTdb = Math.max(...plan.nights.map((n) => (n.darkEnd ? n.darkEnd.getTime() / 86_400_000 + 2_440_587.5 : -Infinity)));
+  // JD (UTC) of the window's last dark end: within minutes of its BJD_TDB, enough to pick the transit epoch.
+  const windowEndJd = Math.max(...plan.nights.map((n) => (n.darkEnd ? n.darkEnd.getTime() / 86_400_000 + 2_440_587.5 : -Infinity)));
   for (const summary of plan.targets) {
     const setup = setups.find((s) => s.target.id === summary.targetId)!;
     const w = summary.warnings;
@@ -75,11 +74,7 @@ export function planWarnings(plan: Plan, setups: TargetSetup[], windows: Window[
     const cap = capText(plan, summary, setup);
     if (cap) w.push(cap);
     const eph = setup.target.ephemeris;
-    if (
-      eph?.transitDurationHours !== undefined &&
-      Number.isFinite(windowEndBjdTdb) &&
-      transitHalfWidthDays(eph, nearestEpoch(eph, windowEndBjdTdb), rule) === 0
-    ) {
+    if (eph?.transitDurationHours !== undefined && Number.isFinite(windowEndJd) && transitHalfWidthDays(eph, nearestEpoch(eph, windowEndJd), rule) === 0) {
       w.push(
         "transit time too uncertain to avoid by the window's end " +
           `(keeping out of it would remove more than ${Math.round(rule.maxOrbitFraction * 100)}% of the orbit): visits may fall in transit`,

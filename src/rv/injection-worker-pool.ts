@@ -23,6 +23,11 @@ export interface ParallelOptions {
 export async function injectionCellsParallel(input: InjectionInput, cells: number[], options: ParallelOptions): Promise<number[]> {
   // Validates the input before any thread starts.
   prepareInjection(input);
+  return cellsOnWorkers(input, cells, options);
+}
+
+/** injectionCellsParallel on an input already validated. */
+async function cellsOnWorkers(input: InjectionInput, cells: number[], options: ParallelOptions): Promise<number[]> {
   const total = cells.length;
   const out = new Array<number>(total);
   if (total === 0) return out;
@@ -64,7 +69,7 @@ export async function injectionCellsParallel(input: InjectionInput, cells: numbe
 export async function injectionRecoveryParallel(input: InjectionInput, options: ParallelOptions): Promise<InjectionMap> {
   const setup = prepareInjection(input);
   const { periodsDays, msinisEarth } = input;
-  const flat = await injectionCellsParallel(
+  const flat = await cellsOnWorkers(
     input,
     Array.from({ length: periodsDays.length * msinisEarth.length }, (_, cell) => cell),
     options,

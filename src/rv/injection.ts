@@ -148,6 +148,11 @@ export function injectionRecovery(input: InjectionInput): InjectionMap {
   return injectionMapFromCells(setup, flat);
 }
 
+/** Cell values flat in cell order (period index · masses + mass index) as rows per period. */
+export function rowsOfCells(flat: number[], periods: number, masses: number): number[][] {
+  return Array.from({ length: periods }, (_, i) => flat.slice(i * masses, (i + 1) * masses));
+}
+
 /** The map from every cell's detection probability, flat in cell order (period index · masses + mass index). */
 export function injectionMapFromCells(setup: InjectionSetup, flat: number[]): InjectionMap {
   const { periodsDays, msinisEarth, starMassSun } = setup.input;
@@ -156,7 +161,7 @@ export function injectionMapFromCells(setup: InjectionSetup, flat: number[]): In
     msinisEarth,
     trialsPerCell: setup.input.trialsPerCell,
     fapThreshold: setup.fapThreshold,
-    detection: periodsDays.map((_, i) => flat.slice(i * msinisEarth.length, (i + 1) * msinisEarth.length)),
+    detection: rowsOfCells(flat, periodsDays.length, msinisEarth.length),
     kCircularMps: periodsDays.map((periodDays) => msinisEarth.map((planetMassEarth) => semiAmplitudeMps({ starMassSun, planetMassEarth, periodDays }))),
     grid: setup.grid,
   };

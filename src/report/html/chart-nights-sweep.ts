@@ -3,7 +3,7 @@ import type { SweepRow } from '../../plan/plan-schema.js';
 import { sweepColumns, sweepRows } from '../sweep-rows.js';
 import { percent } from '../table.js';
 import type { ChartFigure } from './figure.js';
-import { INK, MUTED, OKABE_ITO, RULE } from './palette.js';
+import { MUTED, OKABE_ITO, RULE } from './palette.js';
 
 /**
  * How many nights: above, P(all goals) (thick) and each goal's probability (thin) against the
@@ -65,7 +65,6 @@ export function nightsSweepFigure(sweep: SweepRow[]): ChartFigure {
         },
       },
     ],
-    config: { axis: { labelColor: INK } },
   } as unknown as TopLevelSpec;
   const best = sweep.find((r) => r.allGoalsProbability >= 0.9);
   return {
