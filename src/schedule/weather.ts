@@ -4,11 +4,9 @@
 // probability of reaching K/sigma_K >= goal, and the mean of K/sigma_K and of the utility, per
 // planet and per search (each star's information rebuilt from its clear visits every trial),
 // and the probability that every planet and search reaches its goal in the same trial.
-import { createRng } from '../rv/random.js';
-import { StarInformation } from '../rv/information.js';
-import { compileProblem, SlotVisit, slotTrig } from './compile.js';
-import { searchLogScore, searchStatsLength, updateSearchStatsWith } from './objective-search.js';
-import { seedInformation, seedSearchStats } from './prior.js';
+import { createRng, type Rng } from '../rv/random.js';
+import { type CompiledProblem, compileProblem } from './compile.js';
+import { StarOutcomes } from './star-outcomes.js';
 import { PlanState } from './state.js';
 import type { ScheduleProblem, ScheduleResult } from './types.js';
 import { goalValue } from './utility.js';
@@ -30,10 +28,9 @@ export interface WeatherOutcome {
   targets: { targetId: string; goalProbability: number; meanKOverSigmaK: number }[];
 }
 
-/** Replays `result`'s visits of `problem` under `trials` seeded weather draws. */
-export function simulateWeather(problem: ScheduleProblem, result: ScheduleResult, trials: number, seed: number, options: WeatherOptions = {}): WeatherOutcome {
-  const c = compileProblem(problem, options.searchGridSize ?? 48);
-  const overshoot = options.overshootWeight ?? 0.1;
+/** The plan's visits as compiled slot positions, each star's in time order, and the nights they use with their clear probabilities. */
+export function plannedSlots(c: CompiledProblem, result: ScheduleResult): { perTarget: number[][]; usedNights: number[]; clearProbability: number[] } {
+  const problem = c.problem;
   const byId = new Map<string, number>();
   for (let j = 0; j < c.slotCount; j++) byId.set(problem.slots[c.slotSource[j]!]!.slotId, j);
   const visits = result.slotIds.map((id) => {
@@ -45,71 +42,59 @@ export function simulateWeather(problem: ScheduleProblem, result: ScheduleResult
   const clearProbability = usedNights.map((n) => problem.nights[c.nightOrder[n]!]!.clearProbability);
   const perTarget: number[][] = problem.targets.map(() => []);
   for (const j of visits) perTarget[c.slotTarget[j]!]!.push(j);
+  return { perTarget, usedNights, clearProbability };
+}
 
+/**
+ * The weather draws of one trial: clear[n] = 1 for each used night that is clear. The same seed
+ * gives the same sequence of draws in every replay of the same plan (weather.ts, need.ts).
+ */
+export function drawWeather(rng: Rng, usedNights: number[], clearProbability: number[], clear: Uint8Array): number {
+  let clearNights = 0;
+  usedNights.forEach((n, i) => {
+    clear[n] = rng.uniform() < clearProbability[i]! ? 1 : 0;
+    clearNights += clear[n]!;
+  });
+  return clearNights;
+}
+
+/** A hair of tolerance so a plan that reaches the goal exactly counts as reaching it. */
+export const reachesGoal = (value: number, goal: number) => value >= goal * (1 - 1e-9);
+
+/** Replays `result`'s visits of `problem` under `trials` seeded weather draws. */
+export function simulateWeather(problem: ScheduleProblem, result: ScheduleResult, trials: number, seed: number, options: WeatherOptions = {}): WeatherOutcome {
+  const c = compileProblem(problem, options.searchGridSize ?? 48);
+  const overshoot = options.overshootWeight ?? 0.1;
+  const { perTarget, usedNights, clearProbability } = plannedSlots(c, result);
   const rng = createRng(seed);
   const clear = new Uint8Array(c.nightCount);
-  // Outcome slots: the planets in compiled order, then one per search.
-  const searchSlot = new Int32Array(c.targetCount).fill(-1);
-  const ids = problem.targets.flatMap((t) => t.planets.map((p) => p.id));
-  problem.targets.forEach((t, i) => {
-    if (t.search) searchSlot[i] = ids.push(t.search.id) - 1;
+  const outcomes = new StarOutcomes(c);
+  const reached = new Float64Array(outcomes.ids.length);
+  const sumRatio = new Float64Array(outcomes.ids.length);
+  const value = new Float64Array(outcomes.ids.length);
+  // The plan state with prior visits alone gives each target's overshoot weight (utility.ts).
+  const prior = new PlanState(c, Infinity, overshoot);
+  const weight = Float64Array.from(outcomes.ids, (_, i) => (i < c.planetK.length ? prior.planetOvershoot[i]! : 0));
+  outcomes.searchOutcome.forEach((at, t) => {
+    if (at >= 0) weight[at] = prior.searchOvershoot[t]!;
   });
-  const reached = new Float64Array(ids.length);
-  const sumRatio = new Float64Array(ids.length);
-  const stats = new Float64Array(Math.max(1, ...c.grids.map((g) => (g ? searchStatsLength(g) : 0))));
-  const information = c.models.map((model) => (model ? new StarInformation(model) : null));
-  const visit = new SlotVisit(c);
-  const variance = new Float64Array(Math.max(1, ...c.models.map((m) => m?.planetCount ?? 0)));
   let clearNights = 0;
   let utility = 0;
   let allReached = 0;
-  let missed = false;
-  // The plan state with prior visits alone gives each target's overshoot weight (utility.ts).
-  const prior = new PlanState(c, Infinity, overshoot);
-  const count = (slot: number, ratio: number, goalSignificance: number, priority: number, weight: number) => {
-    sumRatio[slot] += ratio;
-    // A hair of tolerance so a plan that reaches the goal exactly counts as reaching it.
-    if (ratio >= goalSignificance * (1 - 1e-9)) reached[slot]++;
-    else missed = true;
-    utility += priority * goalValue(ratio / goalSignificance, weight);
-  };
   for (let trial = 0; trial < trials; trial++) {
-    missed = false;
-    usedNights.forEach((n, i) => {
-      clear[n] = rng.uniform() < clearProbability[i]! ? 1 : 0;
-      clearNights += clear[n]!;
-    });
+    let missed = false;
+    clearNights += drawWeather(rng, usedNights, clearProbability, clear);
     for (let t = 0; t < c.targetCount; t++) {
-      const grid = c.grids[t];
-      const info = information[t];
       // Prior visits were made whatever the weather ahead.
-      seedSearchStats(stats, c, c.prior, t, 0);
-      if (info) {
-        info.clear();
-        seedInformation(info, c.prior, t);
+      outcomes.start(t);
+      for (const j of perTarget[t]!) if (clear[c.slotNight[j]!]) outcomes.add(j);
+      outcomes.values(value);
+      for (const at of outcomes.ofStar[t]!) {
+        sumRatio[at] += value[at]!;
+        if (reachesGoal(value[at]!, outcomes.goal[at]!)) reached[at]++;
+        else missed = true;
+        utility += outcomes.priority[at]! * goalValue(value[at]! / outcomes.goal[at]!, weight[at]!);
       }
-      for (const j of perTarget[t]!) {
-        if (!clear[c.slotNight[j]!]) continue;
-        if (grid) updateSearchStatsWith(stats, 0, grid, c.weight[j]!, slotTrig(c, j));
-        if (info) {
-          visit.slot = j;
-          info.apply(visit, 1);
-        }
-      }
-      if (info) {
-        info.variances(variance);
-        for (let i = 0; i < info.planetCount; i++) {
-          const at = c.planetFrom[t]! + i;
-          count(
-            at,
-            variance[i] === Infinity ? 0 : c.planetK[at]! / Math.sqrt(variance[i]!),
-            c.planetGoalSignificance[at]!,
-            c.planetPriority[at]!,
-            prior.planetOvershoot[at]!,
-          );
-        }
-      }
-      if (grid) count(searchSlot[t]!, Math.exp(searchLogScore(stats, 0, grid)), c.searchGoalSignificance[t]!, c.searchPriority[t]!, prior.searchOvershoot[t]!);
     }
     if (!missed) allReached++;
   }
@@ -119,6 +104,6 @@ export function simulateWeather(problem: ScheduleProblem, result: ScheduleResult
     meanClearNights: clearNights / trials,
     meanUtility: utility / trials,
     allGoalsProbability: allReached / trials,
-    targets: ids.map((targetId, i) => ({ targetId, goalProbability: reached[i]! / trials, meanKOverSigmaK: sumRatio[i]! / trials })),
+    targets: outcomes.ids.map((targetId, i) => ({ targetId, goalProbability: reached[i]! / trials, meanKOverSigmaK: sumRatio[i]! / trials })),
   };
 }
