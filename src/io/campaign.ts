@@ -41,7 +41,16 @@ export const campaignSchema = z.strictObject({
   ),
   time: timeSchema,
   constraints: constraintsSchema.default(DEFAULT_CONSTRAINTS),
-  goals: z.strictObject({ significance: z.number().positive('a positive K/sigma_K').max(100, 'at most 100').default(5) }).default({ significance: 5 }),
+  goals: z
+    .strictObject({
+      significance: z.number().positive('a positive K/sigma_K').max(100, 'at most 100').default(5),
+      probability: z
+        .number({ error: 'a probability from 0.5 to 0.99' })
+        .min(0.5, 'a probability from 0.5 to 0.99')
+        .max(0.99, 'a probability from 0.5 to 0.99')
+        .default(0.9),
+    })
+    .default({ significance: 5, probability: 0.9 }),
   noise: z
     .strictObject({
       nightlyJitterFraction: z

@@ -90,7 +90,7 @@ const campaignSchema = z.object({
   window: z.object({ start: localDate, end: localDate }),
   time: timeSchema,
   constraints: constraintsSchema,
-  goals: z.object({ significance: positive }),
+  goals: z.object({ significance: positive, probability: fraction.default(0.9) }),
   noise: z.object({ nightlyJitterFraction: fraction }),
   transits: z.object({ confidence: fraction, maxOrbitFraction: fraction }),
   seed: num.int('a whole number').min(0, 'a whole number, 0 or more'),

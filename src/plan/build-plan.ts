@@ -10,7 +10,9 @@ import { optimiseSchedule } from '../schedule/optimise.js';
 import type { ScheduleResult } from '../schedule/types.js';
 import { simulateWeather } from '../schedule/weather.js';
 import { transitRule, type SlotDetail, type TargetSetup } from './candidates.js';
+import { needFromPlan } from '../schedule/need.js';
 import { planInputs } from './plan-inputs.js';
+import { planRequest } from './request.js';
 import type { ReplanOptions } from './replan.js';
 import { planWarnings } from './warnings.js';
 
@@ -30,22 +32,34 @@ export function buildPlan(given: Campaign, options: PlanOptions = {}): Plan {
   const { site, window, time } = given;
   const { campaign, rv, setups, windows, nights, observed, past, left, details, problem } = planInputs(given, options);
   const result = optimiseSchedule(problem, { seed });
-  const weather = simulateWeather(problem, result, options.weatherTrials ?? WEATHER_TRIALS, seed);
+  const trials = options.weatherTrials ?? WEATHER_TRIALS;
+  const weather = simulateWeather(problem, result, trials, seed);
   const bySlot = new Map(details.map((d) => [d.slot.slotId, d]));
   const ahead = result.slotIds.map((id) => plannedVisit(bySlot.get(id)!, campaign));
   const visits = [...past.kept, ...ahead].sort((a, b) => a.startUtc.localeCompare(b.startUtc));
   const windowEndBjdTdb = (t: TargetSetup) => starBjdTdb(DateTime.fromISO(window.end, { zone: site.timeZone }).plus({ days: 1 }).toJSDate(), t.target);
-  const targets = setups.map((setup) => {
-    const summary = targetSummary(setup, result, weather.targets, windowEndBjdTdb(setup));
-    const fit = rv.fits.get(setup.target.id);
-    const peak = rv.peaks.get(setup.target.id);
-    return { ...summary, ...(fit ? { fit } : {}), ...(peak ? { peak } : {}) };
-  });
   const lost = new Set(campaign.lostDates);
   const plannedDates =
     time.mode === 'given-nights'
       ? time.dates.filter((d) => !lost.has(d)).sort()
       : [...new Set([...left.spentDates, ...past.kept.map((v) => v.localDate), ...result.nightIndices.map((i) => nights[i]!.localDate)])].sort();
+  const request = planRequest(
+    needFromPlan(problem, result, campaign.goals.probability, trials, seed),
+    new Map(result.slotIds.map((id) => [id, { ...bySlot.get(id)!.slot, localDate: bySlot.get(id)!.localDate }])),
+    nights,
+    plannedDates,
+  );
+  result.slotIds.forEach((id, i) => {
+    if (!request.requestedSlotIds.has(id)) ahead[i]!.spare = true;
+  });
+  const targets = setups.map((setup) => {
+    const summary = targetSummary(setup, result, weather.targets, windowEndBjdTdb(setup));
+    const need = request.byTarget.get(setup.target.id);
+    if (need && summary.goalProbability !== undefined) summary.request = need;
+    const fit = rv.fits.get(setup.target.id);
+    const peak = rv.peaks.get(setup.target.id);
+    return { ...summary, ...(fit ? { fit } : {}), ...(peak ? { peak } : {}) };
+  });
   const exposureHours = visits.reduce((sum, v) => sum + v.exposureSec, 0) / 3600;
   const totalHours = visits.reduce((sum, v) => sum + v.durationSec, 0) / 3600;
   const dark = darkTime(nights, plannedDates, visits);
@@ -71,6 +85,7 @@ export function buildPlan(given: Campaign, options: PlanOptions = {}): Plan {
       utility: result.utility,
       ...dark,
       allGoalsProbability: weather.allGoalsProbability,
+      request: request.totals,
     },
     warnings: [],
   };

@@ -20,6 +20,8 @@ export interface TransitAvoidance {
 export interface Goals {
   /** K / sigma_K to reach for targets with an ephemeris. */
   significance: number;
+  /** The probability under the site's weather with which the time request (from need) reaches each goal. */
+  probability: number;
 }
 
 /** One row of a campaign's observed file (src/io/observed.ts), before its time is resolved. */

@@ -1,6 +1,7 @@
 // How many nights to ask for: the campaign planned in full for each night count of a range
 // (choose-nights), each plan with its own weather trials, so that a proposer can read, per count,
-// each goal's probability, the probability of reaching them all, and the dark time left idle.
+// each goal's probability, the probability of reaching them all, the dark time left idle, and
+// what the request from need asks at that count.
 import type { Campaign } from './campaign.js';
 import { buildPlan, type PlanOptions } from './build-plan.js';
 import type { Plan, SweepRow } from './plan-schema.js';
@@ -20,6 +21,13 @@ export function sweepRow(plan: Plan, nights: number): SweepRow {
     darkHours: t.darkHours ?? 0,
     idleHours: t.idleHours ?? 0,
     allGoalsProbability: t.allGoalsProbability ?? 0,
+    ...(t.request
+      ? {
+          requestedVisits: t.request.visits,
+          requestedHours: t.request.hours,
+          goalsAtProbability: plan.targets.filter((s) => s.request?.reachable).length,
+        }
+      : {}),
     goals: plan.targets.flatMap((s) => (s.goalProbability === undefined ? [] : [{ targetId: s.targetId, goalProbability: s.goalProbability }])),
   };
 }

@@ -37,6 +37,8 @@ export const plannedVisitSchema = z.object({
   snrPerPixel: positive,
   /** A visit before the re-planning time (`--now`), kept as it was planned; absent for visits ahead. */
   kept: z.literal(true).optional(),
+  /** A visit beyond the time request (time from need): it uses spare time of the nights asked for. Absent for visits the request holds. */
+  spare: z.literal(true).optional(),
   /** plan.ics SEQUENCE (RFC 5545 3.8.7.4) of this visit's event, counted across re-plans; absent when 0. */
   icsSequence: wholeNonNegative.optional(),
 });
@@ -93,6 +95,20 @@ export const targetSummarySchema = z.object({
   goalSignificance: positive.optional(),
   /** Probability of reaching the goal under the site's weather (simulated). */
   goalProbability: fraction.optional(),
+  /** Time from need: what the goal asks of this target's star (src/schedule/need.ts). Absent in plans of older versions. */
+  request: z
+    .object({
+      /** Fewest of the planned visits (in order of value) that reach this target's goal with the campaign's probability; all of them when none do. */
+      neededVisits: wholeNonNegative,
+      /** Whether that probability is reached at all with the planned visits. */
+      reachable: z.boolean(),
+      /** The star's request: the largest need of its planets and search, and the hours of those visits with overheads. */
+      visits: wholeNonNegative,
+      hours: nonNegative,
+      /** Probability of reaching this target's goal with the star's requested visits alone. */
+      goalProbability: fraction,
+    })
+    .optional(),
   /** (sigma^2/N) / Var(K): 1 is the best any schedule can do. */
   informationEfficiency: nonNegative.optional(),
   /** 1-sigma phase error at the window's end. */
@@ -112,6 +128,20 @@ export type TargetSummary = z.output<typeof targetSummarySchema>;
 /** A next-best night in choose-nights mode (rank 1 is the best). */
 export const backupNightSchema = z.object({ localDate: isoDate, rank: num, utilityGain: num });
 
+/** Time from need over the whole plan: the visits the goals need, the nights that hold them and the spare time. */
+export const requestTotalsSchema = z.object({
+  /** The chosen probability of reaching each goal under the weather (campaign goals.probability). */
+  probability: fraction,
+  visits: wholeNonNegative,
+  hours: nonNegative,
+  /** Nights holding requested visits, and those of them whose requested visits all fit in one half of the dark time. */
+  nights: wholeNonNegative,
+  halfNights: z.array(z.object({ localDate: isoDate, half: z.enum(['first', 'second']) })),
+  /** Dark hours of the planned nights that no requested visit uses. */
+  spareHours: nonNegative,
+});
+export type RequestTotals = z.output<typeof requestTotalsSchema>;
+
 /** The plan's sums over all visits. */
 export const planTotalsSchema = z.object({
   nights: nonNegative,
@@ -125,6 +155,8 @@ export const planTotalsSchema = z.object({
   idleHours: nonNegative.optional(),
   /** Fraction of weather trials in which every planet and search reaches its goal. Absent in plans of older versions. */
   allGoalsProbability: fraction.optional(),
+  /** Time from need. Absent in plans of older versions. */
+  request: requestTotalsSchema.optional(),
 });
 export type PlanTotals = z.output<typeof planTotalsSchema>;
 
@@ -136,6 +168,10 @@ export const sweepRowSchema = z.object({
   darkHours: nonNegative,
   idleHours: nonNegative,
   allGoalsProbability: fraction,
+  /** Time from need at that count: the visits and hours requested, and how many goals reach the campaign's probability. Absent in plans of older versions. */
+  requestedVisits: wholeNonNegative.optional(),
+  requestedHours: nonNegative.optional(),
+  goalsAtProbability: wholeNonNegative.optional(),
   /** P(goal) with weather of every planet and search, in the plan's target order. */
   goals: z.array(z.object({ targetId: z.string(), goalProbability: fraction })),
 });

@@ -6,7 +6,8 @@ import {
   historyLine,
   rvUpdateLines,
   nightHeading,
-  searchKNote,
+  targetNotes,
+  requestLine,
   OBSERVED_COLUMNS,
   observedRows,
   targetColumns,
@@ -29,6 +30,7 @@ export function renderPlanMarkdown(plan: Plan): string {
     `- Window: ${c.window.start} to ${c.window.end}; ` +
       `twilight ${c.constraints.twilight}, airmass ≤ ${c.constraints.maxAirmass}, Moon ≥ ${c.constraints.moonSeparationDeg}°`,
     `- ${totalsLine(plan)}`,
+    ...(requestLine(plan) ? [`- ${requestLine(plan)}`] : []),
     ...(historyLine(plan) ? [`- ${historyLine(plan)}`] : []),
     '',
     `> ${ADVISORY}`,
@@ -37,11 +39,18 @@ export function renderPlanMarkdown(plan: Plan): string {
     '',
     markdownTable(targetColumns(plan), targetRows(plan)),
     '',
-    ...(searchKNote(plan) ? [searchKNote(plan)!, ''] : []),
+    ...targetNotes(plan).flatMap((note) => [note, '']),
     ...(plan.observed?.length ? ['## Visits already made', '', markdownTable(OBSERVED_COLUMNS, observedRows(plan)), ''] : []),
     ...(rvUpdateLines(plan).length ? ['## What the RVs so far change', '', ...rvUpdateLines(plan).map((l) => `- ${l}`), ''] : []),
     ...(plan.nightsSweep?.length
-      ? ['## How many nights', '', `${sweepTitle(plan)}.`, '', markdownTable(sweepColumns(plan.nightsSweep), sweepRows(plan.nightsSweep)), '']
+      ? [
+          '## How many nights',
+          '',
+          `${sweepTitle(plan)}.`,
+          '',
+          markdownTable(sweepColumns(plan.nightsSweep), sweepRows(plan.nightsSweep, plan.campaign.goals.probability)),
+          '',
+        ]
       : []),
     '## Nights',
     '',

@@ -63,6 +63,7 @@ const TARGET_COLUMNS: Column[] = [
   { header: 'kind' },
   { header: 'K (m/s)', align: 'right' },
   { header: 'visits', align: 'right' },
+  { header: 'needed', align: 'right' },
   { header: 'sigma_K (m/s)', align: 'right' },
   { header: 'K/sigma_K', align: 'right' },
   { header: 'goal', align: 'right' },
@@ -92,6 +93,7 @@ export function targetRows(plan: Plan): string[][] {
       t.kind,
       fmt(t.kMps, 2),
       String(t.visits),
+      neededText(t),
       fmt(t.sigmaKMps, 2),
       fmt(t.kOverSigmaK, 1),
       fmt(t.goalSignificance, 1),
@@ -105,7 +107,7 @@ export function targetRows(plan: Plan): string[][] {
 }
 
 /** What a search row's K and sigma_K mean (see quotedK in src/plan/build-plan.ts); undefined without search rows. */
-export function searchKNote(plan: Plan): string | undefined {
+function searchKNote(plan: Plan): string | undefined {
   const rows = plan.targets.filter((t) => t.kind === 'search' && t.kPeriodDays !== undefined);
   if (!rows.length) return undefined;
   const periods = rows.map((t) => `${t.targetId} ${fmt(t.kPeriodDays, 1)} d`).join(', ');
@@ -125,6 +127,35 @@ export function visitsByNight(plan: Plan): [string, PlannedVisit[]][] {
   }
   for (const visits of groups.values()) visits.sort((a, b) => a.startUtc.localeCompare(b.startUtc));
   return [...groups.entries()].sort((a, b) => a[0].localeCompare(b[0]));
+}
+
+/** A target's visits needed for its goal at the campaign's probability: `11`, `>14` when all its planned visits fall short, `-` without a goal. */
+export function neededText(t: TargetSummary): string {
+  if (!t.request) return '-';
+  return t.request.reachable ? String(t.request.neededVisits) : `>${t.request.neededVisits}`;
+}
+
+/** The time request from need in one line; undefined for plans without it. */
+export function requestLine(plan: Plan): string | undefined {
+  const r = plan.totals.request;
+  if (!r) return undefined;
+  const n = r.halfNights.length;
+  const half = n ? ` (${n === 1 ? 'one could be a half night' : `${n} of them could be half nights`})` : '';
+  const dark = plan.totals.darkHours !== undefined ? `; ${fmt(r.spareHours, 1)} of their ${fmt(plan.totals.darkHours, 1)} dark hours are spare` : '';
+  return (
+    `Request from need (each goal with ${percent(r.probability)} probability under the weather): ` +
+    `${r.visits} of the ${plan.visits.filter((v) => !v.kept).length} visits, ${fmt(r.hours, 1)} h on ${r.nights} nights${half}${dark}`
+  );
+}
+
+/** The notes under a target table: what `needed` counts, and what a search row's K means. */
+export function targetNotes(plan: Plan): string[] {
+  const r = plan.totals.request;
+  const needed = r
+    ? `needed: the fewest planned visits of the star that reach the goal with ${percent(r.probability)} probability under the weather; ` +
+      '">N": all N planned visits fall short.'
+    : undefined;
+  return [needed, searchKNote(plan)].filter((note): note is string => note !== undefined);
 }
 
 export function totalsLine(plan: Plan): string {

@@ -6,7 +6,8 @@ import {
   historyLine,
   rvUpdateLines,
   nightHeading,
-  searchKNote,
+  targetNotes,
+  requestLine,
   OBSERVED_COLUMNS,
   observedRows,
   targetColumns,
@@ -47,9 +48,10 @@ export function renderPlanText(plan: Plan): string {
   if (plan.backups.length) {
     out.push(`Backup nights, best first: ${plan.backups.map((b) => b.localDate).join(', ')}`, '');
   }
-  out.push('Targets', renderTable(targetColumns(plan), targetRows(plan)), ...(searchKNote(plan) ? [searchKNote(plan)!] : []), '');
-  out.push(totalsLine(plan));
-  if (plan.nightsSweep?.length) out.push('', sweepTitle(plan), renderTable(sweepColumns(plan.nightsSweep), sweepRows(plan.nightsSweep)));
+  out.push('Targets', renderTable(targetColumns(plan), targetRows(plan)), ...targetNotes(plan), '');
+  out.push(totalsLine(plan), ...(requestLine(plan) ? [requestLine(plan)!] : []));
+  if (plan.nightsSweep?.length)
+    out.push('', sweepTitle(plan), renderTable(sweepColumns(plan.nightsSweep), sweepRows(plan.nightsSweep, plan.campaign.goals.probability)));
   const warnings = [...plan.warnings, ...plan.targets.flatMap((t) => t.warnings.map((w) => `${t.targetId}: ${w}`))];
   if (warnings.length) out.push('', 'Warnings', ...warnings.map((w) => `- ${w}`));
   out.push('', ADVISORY);

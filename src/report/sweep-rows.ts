@@ -13,7 +13,8 @@ export function sweepColumns(sweep: SweepRow[]): Column[] {
   return [{ header: 'nights' }, ...sweep.map((r) => ({ header: String(r.nights), align: 'right' as const }))];
 }
 
-export function sweepRows(sweep: SweepRow[]): string[][] {
+/** The sweep's rows; q is the campaign's goal probability (time from need). */
+export function sweepRows(sweep: SweepRow[], q: number): string[][] {
   const row = (label: string, cell: (r: SweepRow) => string) => [label, ...sweep.map(cell)];
   const ids = sweep[0]?.goals.map((g) => g.targetId) ?? [];
   return [
@@ -22,6 +23,13 @@ export function sweepRows(sweep: SweepRow[]): string[][] {
     row('dark hours', (r) => fmt(r.darkHours, 1)),
     row('idle dark hours', (r) => fmt(r.idleHours, 1)),
     row('P(all goals)', (r) => percent(r.allGoalsProbability)),
+    ...(sweep.every((r) => r.requestedVisits !== undefined)
+      ? [
+          row('visits requested', (r) => String(r.requestedVisits)),
+          row('hours requested', (r) => fmt(r.requestedHours, 1)),
+          row(`goals at ${percent(q)}`, (r) => `${r.goalsAtProbability} of ${r.goals.length}`),
+        ]
+      : []),
     ...ids.map((id) => row(`P(goal) ${id}`, (r) => percent(r.goals.find((g) => g.targetId === id)?.goalProbability))),
   ];
 }

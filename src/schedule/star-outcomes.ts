@@ -17,6 +17,8 @@ export class StarOutcomes {
   readonly searchOutcome: Int32Array;
   /** Per star: the outcome positions of its planets, then of its search. */
   readonly ofStar: number[][];
+  /** Per outcome: its star. */
+  readonly starOfOutcome: Int32Array;
   private readonly information: (StarInformation | null)[];
   private readonly stats: Float64Array;
   private readonly visit: SlotVisit;
@@ -42,6 +44,10 @@ export class StarOutcomes {
     this.ofStar = Array.from({ length: c.targetCount }, (_, t) => {
       const planets = Array.from({ length: c.planetFrom[t + 1]! - c.planetFrom[t]! }, (_, i) => c.planetFrom[t]! + i);
       return this.searchOutcome[t]! >= 0 ? [...planets, this.searchOutcome[t]!] : planets;
+    });
+    this.starOfOutcome = new Int32Array(this.ids.length);
+    this.ofStar.forEach((positions, t) => {
+      for (const at of positions) this.starOfOutcome[at] = t;
     });
     this.information = c.models.map((model) => (model ? new StarInformation(model) : null));
     this.stats = new Float64Array(Math.max(1, ...c.grids.map((g) => (g ? searchStatsLength(g) : 0))));

@@ -62,7 +62,7 @@ describe('campaign files', () => {
       sameNightSpacingHours: 2,
       minWindowMinutes: 20,
     });
-    expect(c.goals).toEqual({ significance: 5 });
+    expect(c.goals).toEqual({ significance: 5, probability: 0.9 });
     expect(c.seed).toBe(1);
   });
 
@@ -118,6 +118,11 @@ describe('campaign files', () => {
       /campaign\.yaml: window\.end = "2027-02-30": a date as YYYY-MM-DD/,
     ],
     ['no time model', BASE, /campaign\.yaml: time = \(missing\)/],
+    [
+      'a goal probability above 0.99',
+      `${BASE}time: { mode: hours, hours: 5 }\ngoals: { probability: 1 }\n`,
+      /campaign\.yaml: goals\.probability = 1: a probability from 0\.5 to 0\.99$/,
+    ],
     [
       'hours mode without hours',
       `${BASE}time: { mode: hours }\n`,

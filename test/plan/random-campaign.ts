@@ -84,6 +84,9 @@ function timeModel(rng: Rng, window: { start: string; end: string }, nights: num
 }
 
 /** The index-th random campaign (same index, same campaign). */
+/** The goal probability varies with the significance (no draw of its own, so the campaigns' other draws stay as they were). */
+const goalsOf = (significance: number) => ({ significance, probability: ({ 3: 0.8, 5: 0.9, 8: 0.95 } as Record<number, number>)[significance]! });
+
 export function randomCampaign(index: number): Campaign {
   const rng = createRng(7_200_000 + index);
   const siteFile = index % 10 === 9 ? MASKED_SITE : path.join(SITES_DIR, `${pick(rng, index % 2 === 0 ? SOUTH : NORTH)}.json`);
@@ -135,7 +138,7 @@ export function randomCampaign(index: number): Campaign {
       sameNightSpacingHours: 2,
       minWindowMinutes: 20,
     },
-    goals: { significance: pick(rng, [3, 5, 8]) },
+    goals: goalsOf(pick(rng, [3, 5, 8])),
     noise: { nightlyJitterFraction: pick(rng, [0, 0.5, 0.8]) },
     transits: { confidence: 0.95, maxOrbitFraction: 0.2 },
     seed: index,

@@ -169,7 +169,7 @@ describe('proposal summary', () => {
     expect(rows.map((r) => r[0])).toEqual(plan.targets.map((t) => t.targetId));
     const idle = rows.find((r) => r[0] === 'Quena-2')!;
     expect(idle[3]).toBe('-');
-    expect(idle[5]).toBe('0');
+    expect(idle[9]).toBe('0');
   });
 
   it('fills the paragraph with the plan totals', () => {

@@ -9,7 +9,7 @@ import { MUTED, OKABE_ITO, RULE } from './palette.js';
  * How many nights: above, P(all goals) (thick) and each goal's probability (thin) against the
  * night count; below, each count's dark hours split into used and idle.
  */
-export function nightsSweepFigure(sweep: SweepRow[]): ChartFigure {
+export function nightsSweepFigure(sweep: SweepRow[], goalProbability: number): ChartFigure {
   const counts = sweep.map((r) => r.nights);
   const x = {
     field: 'nights',
@@ -66,7 +66,7 @@ export function nightsSweepFigure(sweep: SweepRow[]): ChartFigure {
       },
     ],
   } as unknown as TopLevelSpec;
-  const best = sweep.find((r) => r.allGoalsProbability >= 0.9);
+  const best = sweep.find((r) => r.allGoalsProbability >= goalProbability);
   return {
     id: 'nights-sweep',
     kind: 'nights-sweep',
@@ -76,10 +76,11 @@ export function nightsSweepFigure(sweep: SweepRow[]): ChartFigure {
       'that every planet and search reaches its goal in the same season (thick blue line) and that each one does (thin grey lines). ' +
       `Below: the dark hours of the chosen nights, used by visits (green) or idle (grey). ` +
       (best
-        ? `${best.nights} nights are the fewest giving every goal at least 90% (${percent(best.allGoalsProbability)}).`
-        : 'No count of the range gives every goal 90%.'),
+        ? `${best.nights} nights are the fewest that reach every goal together with the campaign's probability of ${percent(goalProbability)} ` +
+          `(${percent(best.allGoalsProbability)}).`
+        : `No count of the range reaches every goal together with the campaign's probability of ${percent(goalProbability)}.`),
     spec,
     columns: sweepColumns(sweep),
-    rows: sweepRows(sweep),
+    rows: sweepRows(sweep, goalProbability),
   };
 }

@@ -1,5 +1,6 @@
 import { extent } from '../../extent.js';
 import type { Plan, TargetSummary } from '../../plan/plan-schema.js';
+import { neededText } from '../plan-rows.js';
 import { fmt, percent, type Column } from '../table.js';
 import { type LevelMass, type LevelRow, levelRows } from '../../rv/injection-map.js';
 import type { DetectionMapData } from './chart-detection-map.js';
@@ -12,10 +13,12 @@ export const PROPOSAL_COLUMNS: Column[] = [
   { header: 'K (m/s)', align: 'right' },
   { header: 'σ per visit (m/s)', align: 'right' },
   { header: 'exposure (s)', align: 'right' },
-  { header: 'visits', align: 'right' },
-  { header: 'hours', align: 'right' },
-  { header: 'expected K/σ_K', align: 'right' },
+  { header: 'visits needed', align: 'right' },
+  { header: 'visits requested', align: 'right' },
+  { header: 'hours requested', align: 'right' },
   { header: 'P(goal) with weather', align: 'right' },
+  { header: 'visits planned', align: 'right' },
+  { header: 'K/σ_K planned, all clear', align: 'right' },
 ];
 
 /** `600` when all equal, `300-900` otherwise, `-` when empty. */
@@ -25,7 +28,12 @@ function spread(values: number[], decimals: number, dash = '–'): string {
   return lo.toFixed(decimals) === hi.toFixed(decimals) ? lo.toFixed(decimals) : `${lo.toFixed(decimals)}${dash}${hi.toFixed(decimals)}`;
 }
 
-/** One row per target: what a time request needs (σ per visit is the visits' equivalent σ with jitter). */
+/**
+ * One row per target: what a time request needs (σ per visit is the visits' equivalent σ with
+ * jitter). The request is the star's visits needed for the goal with the campaign's probability
+ * under the weather (time from need), and P(goal) is for those visits alone; the planned visits
+ * add the spare ones, and their K/σ_K assumes every night clear. Plans without a request show the planned visits.
+ */
 export function proposalRows(plan: Plan): string[][] {
   return plan.targets.map((s) => {
     const visits = visitsOf(plan, s.starId);
@@ -39,10 +47,12 @@ export function proposalRows(plan: Plan): string[][] {
         0,
         '-',
       ),
+      neededText(s),
+      String(s.request?.visits ?? s.visits),
+      fmt(s.request?.hours ?? s.hours, 1),
+      percent(s.request?.goalProbability ?? s.goalProbability),
       String(s.visits),
-      fmt(s.hours, 1),
       fmt(s.kOverSigmaK, 1),
-      percent(s.goalProbability),
     ];
   });
 }
@@ -112,13 +122,51 @@ function searchSentence(plan: Plan, summaries: TargetSummary[], maps: ReadonlyMa
   return analytic + injected;
 }
 
-/** The dark time of the nights asked for that no visit uses, and what can be done with it; '' when it is small. */
-function idleSentence(plan: Plan): string {
-  const { darkHours, idleHours } = plan.totals;
-  if (plan.campaign.time.mode !== 'choose-nights' || darkHours === undefined || idleHours === undefined || idleHours < 0.1 * darkHours) return '';
+/** Targets that fall short of the chosen probability, lowest priority first, with their probability. */
+function shortTargets(plan: Plan): TargetSummary[] {
+  return plan.targets.filter((s) => s.request && !s.request.reachable).sort((a, b) => a.priority - b.priority || a.targetId.localeCompare(b.targetId));
+}
+
+/** At most `most` items as words, the rest counted: `A, B, C and 4 more`. */
+function listAtMost(items: string[], most: number): string {
+  return items.length <= most ? list(items) : `${items.slice(0, most).join(', ')} and ${items.length - most} more`;
+}
+
+/** What the request needs: the goals at the chosen probability, and the targets that fall short of it. */
+function needSentence(plan: Plan): string {
+  const r = plan.totals.request!;
+  const short = shortTargets(plan);
+  const lead = ` These are the visits that reach each target's goal with ${percent(r.probability)} probability under the site's weather (time from need)`;
+  if (!short.length) return `${lead}.`;
+  const lowest = short.reduce((a, b) => (b.request!.goalProbability < a.request!.goalProbability ? b : a));
+  const withGoal = plan.targets.filter((s) => s.request).length;
   return (
-    ` Of the ${fmt(darkHours, 1)} dark hours of these nights, ${fmt(idleHours, 1)} h (${percent(idleHours / darkHours)}) hold no visit: ` +
-    'fewer or shorter nights would do for these targets, or that time can go to other programmes.'
+    `${lead}; for ${short.length} of the ${withGoal} targets even all planned visits fall short of that probability ` +
+    `(lowest: ${lowest.targetId}, ${percent(lowest.request!.goalProbability)}), so all their visits are asked for.`
+  );
+}
+
+/** The dark time of the nights asked for that the request leaves free, and the two honest uses of it; '' when it is small. */
+function spareSentence(plan: Plan): string {
+  const r = plan.totals.request!;
+  const { darkHours } = plan.totals;
+  if (darkHours === undefined || r.spareHours < 0.1 * darkHours) return '';
+  const halves = r.halfNights.length
+    ? `the requested visits fit in one half of the night on ${r.halfNights.length} of the ${r.nights} nights (${listAtMost(
+        r.halfNights.map((h) => `${h.localDate}, ${h.half} half`),
+        3,
+      )})`
+    : "no night's requested visits fit in one half of it";
+  const short = shortTargets(plan);
+  const use = short.length
+    ? `, or be used for the targets that fall short, lowest priority first: ${listAtMost(
+        short.map((t) => t.targetId),
+        5,
+      )}`
+    : ', or go to other programmes';
+  return (
+    ` Of the ${fmt(darkHours, 1)} dark hours of these nights, ${fmt(r.spareHours, 1)} h (${percent(r.spareHours / darkHours)}) hold no requested visit. ` +
+    `They could be given back by asking for fewer nights or for half nights (${halves})${use}.`
   );
 }
 
@@ -135,11 +183,13 @@ export function proposalParagraph(plan: Plan, maps: ReadonlyMap<string, Detectio
   const ephemeris = observed.filter((s) => s.kind === 'ephemeris');
   const search = observed.filter((s) => s.kind === 'search');
   const probabilities = observed.flatMap((s) => (s.goalProbability === undefined ? [] : [s.goalProbability * 100]));
-  const nightsAsked = c.time.mode === 'choose-nights' ? `${t.nights} nights` : `${fmt(t.totalHours, 1)} hours on ${t.nights} nights`;
+  const asked = askedFor(plan);
+  const nightsAsked = c.time.mode === 'choose-nights' ? `${asked.nights} nights` : `${fmt(asked.hours, 1)} hours on ${asked.nights} nights`;
   const sentences = [
     `We request ${nightsAsked} between ${c.window.start} and ${c.window.end} with ${c.instrument.name} at ${c.site.name}, ` +
-      `for ${t.visits} radial-velocity visits of ${observed.length} stars: ${fmt(t.totalHours, 1)} h in total, ` +
-      `of which ${fmt(t.exposureHours, 1)} h are exposure and ${fmt(t.overheadHours, 1)} h readout and acquisition.`,
+      `for ${asked.visits} radial-velocity visits of ${observed.length} stars: ${fmt(asked.hours, 1)} h in total, ` +
+      `of which ${fmt(asked.exposureHours, 1)} h are exposure and ${fmt(asked.hours - asked.exposureHours, 1)} h readout and acquisition.` +
+      (t.request ? needSentence(plan) : ''),
     `Exposures of ${spread(exposures, 0)} s give an expected precision of ${spread(sigmas, 1)} m/s per visit, ` +
       'including the instrumental floor and stellar jitter.',
   ];
@@ -151,5 +201,17 @@ export function proposalParagraph(plan: Plan, maps: ReadonlyMap<string, Detectio
       `probability of ${spread(probabilities, 0)}% of reaching its goal`;
     text += plan.backups.length ? `; ${plan.backups.length} backup nights are ranked in case planned nights are lost.` : '.';
   }
-  return text + idleSentence(plan);
+  return text + (t.request ? spareSentence(plan) : '');
+}
+
+/** What the request asks for: the requested visits (time from need), or every planned visit in plans without a request. */
+function askedFor(plan: Plan): { nights: number; visits: number; hours: number; exposureHours: number } {
+  const r = plan.totals.request;
+  const visits = plan.visits.filter((v) => !v.kept && !(r && v.spare));
+  return {
+    nights: r ? r.nights : plan.totals.nights,
+    visits: visits.length,
+    hours: visits.reduce((sum, v) => sum + v.durationSec, 0) / 3600,
+    exposureHours: visits.reduce((sum, v) => sum + v.exposureSec, 0) / 3600,
+  };
 }

@@ -1,6 +1,6 @@
 import type { SearchSpec, Target } from '../../model.js';
 import type { Plan, TargetSummary } from '../../plan/plan-schema.js';
-import { ADVISORY, searchKNote, targetColumns, targetRows, targetRvUpdateLines, totalsLine, visitsByNight } from '../plan-rows.js';
+import { ADVISORY, requestLine, targetColumns, targetNotes, targetRows, targetRvUpdateLines, totalsLine, visitsByNight } from '../plan-rows.js';
 import { calendarFigure } from './chart-calendar.js';
 import { detectionMapFigure, type DetectionMapData } from './chart-detection-map.js';
 import { kGrowthFigure } from './chart-k-growth.js';
@@ -24,6 +24,7 @@ function head(plan: Plan): string {
     ['Window', `${c.window.start} to ${c.window.end}`],
     ['Constraints', `${c.constraints.twilight} twilight, airmass ≤ ${c.constraints.maxAirmass}, Moon ≥ ${c.constraints.moonSeparationDeg}°`],
     ['Plan', totalsLine(plan)],
+    ...(requestLine(plan) ? [['Request', requestLine(plan)!] as [string, string]] : []),
   ];
   return [
     '<header class="report-head">',
@@ -75,6 +76,8 @@ async function targetSections(plan: Plan, maps: ReadonlyMap<string, DetectionMap
   return out;
 }
 
+const tableNotes = (plan: Plan) => targetNotes(plan).map((note) => `<p class="table-note">${escapeHtml(note)}</p>`);
+
 function warnings(plan: Plan): string {
   const all = [...plan.warnings, ...plan.targets.flatMap((t) => t.warnings.map((w) => `${t.targetId}: ${w}`))];
   if (!all.length) return '';
@@ -91,11 +94,13 @@ export async function renderReportHtml(plan: Plan, maps: ReadonlyMap<string, Det
     head(plan),
     '<h2 id="proposal">Proposal summary</h2>',
     `<div class="table-wrap">${htmlTable(PROPOSAL_COLUMNS, proposalRows(plan), 'Time request by target')}</div>`,
-    searchKNote(plan) ? `<p class="table-note">${escapeHtml(searchKNote(plan)!)}</p>` : '',
+    ...tableNotes(plan),
     `<p class="proposal-text">${escapeHtml(proposalParagraph(plan, maps))}</p>`,
     '<h2 id="calendar-section">Campaign calendar</h2>',
     await renderFigure(calendarFigure(plan)),
-    ...(plan.nightsSweep?.length ? ['<h2 id="sweep-section">How many nights</h2>', await renderFigure(nightsSweepFigure(plan.nightsSweep))] : []),
+    ...(plan.nightsSweep?.length
+      ? ['<h2 id="sweep-section">How many nights</h2>', await renderFigure(nightsSweepFigure(plan.nightsSweep, plan.campaign.goals.probability))]
+      : []),
     '<h2 id="nights">Planned nights</h2>',
   ];
   for (const [date, visits] of visitsByNight(plan)) {
@@ -105,7 +110,7 @@ export async function renderReportHtml(plan: Plan, maps: ReadonlyMap<string, Det
   body.push(
     '<h2 id="detectability">Detectability of every target</h2>',
     `<div class="table-wrap">${htmlTable(targetColumns(plan), targetRows(plan), 'Expected result per target')}</div>`,
-    searchKNote(plan) ? `<p class="table-note">${escapeHtml(searchKNote(plan)!)}</p>` : '',
+    ...tableNotes(plan),
     warnings(plan),
     `<footer>Written by ${escapeHtml(plan.generator)} from plan schema version ${plan.schemaVersion}. ` +
       'Chart colours: the Okabe–Ito palette (Okabe & Ito 2008, Color Universal Design), safe for common colour-vision deficiencies.</footer>',
