@@ -4,6 +4,7 @@
 import { optimiseSchedule } from '../src/schedule/optimise.js';
 import { exhaustiveOptimum, referenceGreedy } from '../reference/schedule.js';
 import { syntheticProblem, type SyntheticSpec } from '../reference/synthetic.js';
+import { needFromPlan } from '../src/schedule/need.js';
 import { simulateWeather } from '../src/schedule/weather.js';
 import { timeSec, type BenchModule } from './types.js';
 
@@ -27,11 +28,14 @@ function runCampaign(targets: number, nights: number): Record<string, unknown> {
   const problem = syntheticProblem(campaign(targets, nights, 1));
   const { value: result, sec } = timeSec(() => optimiseSchedule(problem, { seed: 1 }));
   const weather = timeSec(() => simulateWeather(problem, result, 1000, 1));
+  const need = timeSec(() => needFromPlan(problem, result, 0.9, 1000, 1));
   return {
     case: `${targets} targets, ${nights} nights, choose 20`,
     slots: problem.slots.length,
     optimiseSec: Number(sec.toFixed(2)),
     weather1000Sec: Number(weather.sec.toFixed(2)),
+    need1000Sec: Number(need.sec.toFixed(2)),
+    requestedVisits: need.value.stars.reduce((sum, s) => sum + s.requestedVisits, 0),
     utility: Number(result.utility.toFixed(3)),
     visits: result.slotIds.length,
     targetsAtGoal: result.targets.filter((t) => t.kOverSigmaK >= t.goalSignificance).length,
