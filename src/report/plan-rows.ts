@@ -36,7 +36,7 @@ export function visitRow(visit: PlannedVisit, zone: string): string[] {
   return [
     clock(visit.startUtc, zone),
     clock(visit.startUtc, 'UTC'),
-    visit.kept ? `${visit.starId} (kept)` : visit.starId,
+    visit.kept ? `${visit.starId} (kept)` : visit.spare ? `${visit.starId} (spare)` : visit.starId,
     fmt(visit.exposureSec, 0),
     fmt(visit.airmass, 2),
     phasesText(visit),
