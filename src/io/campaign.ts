@@ -5,7 +5,7 @@ import { constraintsSchema, eachDateOnce, timeSchema } from '../constraints.js';
 import { FIRST_YEAR, isoDate, LAST_YEAR } from '../field-schemas.js';
 import { inputError } from '../errors.js';
 import type { Constraints, Target } from '../model.js';
-import type { Campaign } from '../plan/campaign.js';
+import { type Campaign, DEFAULT_SEARCH_COMPLETENESS } from '../plan/campaign.js';
 import { readInstrument } from './instrument.js';
 import { INSTRUMENTS_DIR, SITES_DIR } from './paths.js';
 import { readStructured } from './read-text.js';
@@ -41,7 +41,16 @@ export const campaignSchema = z.strictObject({
   ),
   time: timeSchema,
   constraints: constraintsSchema.default(DEFAULT_CONSTRAINTS),
-  goals: z.strictObject({ significance: z.number().positive('a positive K/sigma_K').max(100, 'at most 100').default(5) }).default({ significance: 5 }),
+  goals: z
+    .strictObject({
+      significance: z.number().positive('a positive K/sigma_K').max(100, 'at most 100').default(5),
+      searchCompleteness: z
+        .number({ error: 'a completeness above 0 and at most 1' })
+        .gt(0, 'a completeness above 0 and at most 1')
+        .max(1, 'a completeness above 0 and at most 1')
+        .default(DEFAULT_SEARCH_COMPLETENESS),
+    })
+    .default({ significance: 5, searchCompleteness: DEFAULT_SEARCH_COMPLETENESS }),
   noise: z
     .strictObject({
       nightlyJitterFraction: z

@@ -60,7 +60,7 @@ function outcomes(state: PlanState): TargetOutcome[] {
         targetId: planet.id,
         kind: 'ephemeris',
         ...shared,
-        priorKOverSigmaK: state.priorPlanetFraction[at]! * planet.goalSignificance,
+        priorValue: state.priorPlanetFraction[at]! * planet.goalSignificance,
         informationPerMps2: 1 / variance,
         sigmaKMps: Math.sqrt(variance),
         kOverSigmaK,
@@ -72,18 +72,16 @@ function outcomes(state: PlanState): TargetOutcome[] {
       return outcome;
     });
     if (star.search) {
-      const kOverSigmaK = state.searchFractionOfGoal(t, 0, 0) * star.search.goalSignificance;
-      const info = (kOverSigmaK / star.search.kMps) ** 2;
+      const goal = star.search.goalCompleteness;
+      const completeness = state.searchCompleteness(t, 0, 0);
       out.push({
         targetId: star.search.id,
         kind: 'search',
         ...shared,
-        priorKOverSigmaK: state.priorSearchFraction[t]! * star.search.goalSignificance,
-        informationPerMps2: info,
-        sigmaKMps: info > 0 ? 1 / Math.sqrt(info) : Infinity,
-        kOverSigmaK,
-        goalSignificance: star.search.goalSignificance,
-        utility: star.search.priority * goalValue(kOverSigmaK / star.search.goalSignificance, state.searchOvershoot[t]!),
+        priorValue: state.priorSearchFraction[t]! * goal,
+        completeness,
+        goalCompleteness: goal,
+        utility: star.search.priority * goalValue(completeness / goal, state.searchOvershoot[t]!),
       });
     }
     return out;
@@ -190,7 +188,7 @@ export function optimiseCompiled(c: CompiledProblem, options: ScheduleOptions): 
  * Throws a plain Error if the problem is inconsistent (unknown target or night, missing phase).
  */
 export function optimiseSchedule(problem: ScheduleProblem, options: ScheduleOptions): ScheduleResult {
-  const c = compileProblem(problem, options.searchGridSize ?? 48);
+  const c = compileProblem(problem);
   const state = optimiseCompiled(c, options);
   const chosen = state.chosenSlots();
   const targets = outcomes(state);

@@ -135,7 +135,7 @@ export function randomCampaign(index: number): Campaign {
       sameNightSpacingHours: 2,
       minWindowMinutes: 20,
     },
-    goals: { significance: pick(rng, [3, 5, 8]) },
+    goals: { significance: pick(rng, [3, 5, 8]), searchCompleteness: 0.5 },
     noise: { nightlyJitterFraction: pick(rng, [0, 0.5, 0.8]) },
     transits: { confidence: 0.95, maxOrbitFraction: 0.2 },
     seed: index,
