@@ -129,14 +129,21 @@ export class PlanState {
    * The credit of a search's first visits: completeness rises slowly over its first visits (the
    * threshold falls as they add up), so each visit while the star has fewer than n0 is credited
    * U(n0) / n0, U(n) the utility of n ideal visits of the star's median weight (objective-search.ts
-   * idealCompleteness) and n0 the count with the best utility per visit.
+   * idealCompleteness) and n0 the count with the best utility per visit, at most the star's slots.
    */
   private setSearchCredit(t: number): void {
     const c = this.c;
     const grid = c.grids[t]!;
     let best = 0;
     let bestN = 0;
-    for (let n = MIN_SEARCH_VISITS; n <= 4 * MIN_SEARCH_VISITS + 40; n++) {
+    // No more visits than the star's slots, its cap and (one a night) the nights it can have allow.
+    const time = c.problem.time;
+    const nights = c.onePerNight ? (time.mode === 'choose-nights' ? time.nights + c.nightGranted.reduce((x, y) => x + y, 0) : c.nightCount) : Infinity;
+    const most = Math.min(
+      4 * MIN_SEARCH_VISITS + 40,
+      c.prior.count[t]! + Math.min(c.targetSlots[t]!.length, c.maxVisits[t]!, nights * c.visitsPerNight[t]!),
+    );
+    for (let n = MIN_SEARCH_VISITS; n <= most; n++) {
       const x = idealCompleteness(grid, n, c.searchMedianWeight[t]!) / c.searchGoalCompleteness[t]!;
       const rate = (c.searchPriority[t]! * goalValue(x, this.searchOvershoot[t]!)) / n;
       if (rate > best) {
