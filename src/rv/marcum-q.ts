@@ -52,18 +52,29 @@ export function marcumQ1Table(): Float64Array {
   return table;
 }
 
-/** Q1(a, b) by bilinear interpolation in the table (error below 3e-4 at step 0.05); a past the table counts as 1, b past it as 0. */
-export function marcumQ1Lookup(q: Float64Array, a: number, b: number): number {
-  const x = a / MARCUM_TABLE_STEP;
+/** The table's row position of b: the row below and the fraction towards the next (b past the table: row -1). */
+export function marcumRow(b: number): { row: number; fraction: number } {
   const y = b / MARCUM_TABLE_STEP;
-  if (x >= A_COUNT - 1) return 1;
-  if (y >= B_COUNT - 1) return 0;
-  const i = Math.floor(x);
+  if (y >= B_COUNT - 1) return { row: -1, fraction: 0 };
   const k = Math.floor(y);
+  return { row: k * A_COUNT, fraction: y - k };
+}
+
+/** marcumQ1Lookup with b's row found once (marcumRow): the hot loop's form. */
+export function marcumQ1InRow(q: Float64Array, a: number, row: number, fy: number): number {
+  if (row < 0) return 0;
+  const x = a / MARCUM_TABLE_STEP;
+  if (x >= A_COUNT - 1) return 1;
+  const i = Math.floor(x);
   const fx = x - i;
-  const fy = y - k;
-  const at = k * A_COUNT + i;
+  const at = row + i;
   const lo = q[at]! + fx * (q[at + 1]! - q[at]!);
   const hi = q[at + A_COUNT]! + fx * (q[at + A_COUNT + 1]! - q[at + A_COUNT]!);
   return lo + fy * (hi - lo);
+}
+
+/** Q1(a, b) by bilinear interpolation in the table (error below 3e-4 at step 0.05); a past the table counts as 1, b past it as 0. */
+export function marcumQ1Lookup(q: Float64Array, a: number, b: number): number {
+  const { row, fraction } = marcumRow(b);
+  return marcumQ1InRow(q, a, row, fraction);
 }

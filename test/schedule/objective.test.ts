@@ -80,7 +80,7 @@ describe('search completeness', () => {
     expect(before).toBeGreaterThan(0);
   });
 
-  it('the table and four phase nodes stay within 0.002 of the Poisson series integrated over 64 phases (slow reference)', () => {
+  it('the table and two phase nodes stay within 0.002 of the Poisson series integrated over 64 phases (slow reference)', () => {
     const rng = createRng(8);
     for (let trial = 0; trial < 6; trial++) {
       const slots = Array.from({ length: c.slotCount }, (_, j) => j).filter(() => rng.uniform() < 0.1 + 0.05 * trial);
