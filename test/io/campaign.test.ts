@@ -62,7 +62,7 @@ describe('campaign files', () => {
       sameNightSpacingHours: 2,
       minWindowMinutes: 20,
     });
-    expect(c.goals).toEqual({ significance: 5 });
+    expect(c.goals).toEqual({ significance: 5, searchCompleteness: 0.5 });
     expect(c.seed).toBe(1);
   });
 
