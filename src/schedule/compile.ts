@@ -245,7 +245,10 @@ export function compileProblem(problem: ScheduleProblem): CompiledProblem {
     const median = weights.length ? weights[weights.length >> 1]! : 1;
     c.searchMedianWeight[i] = median;
     // The span the star's visits can cover: its candidate slots and its prior visits.
-    const times = [...Array.from(c.targetSlots[i]!, (j) => c.midBjdTdb[j]!), ...(problem.prior ?? []).filter((v) => v.targetId === t.id).map((v) => v.midBjdTdb)];
+    const times = [
+      ...Array.from(c.targetSlots[i]!, (j) => c.midBjdTdb[j]!),
+      ...(problem.prior ?? []).filter((v) => v.targetId === t.id).map((v) => v.midBjdTdb),
+    ];
     const { min, max } = times.length ? extent(times) : { min: 0, max: 0 };
     const grid = searchGrid({
       periodMinDays: t.search.periodMinDays,

@@ -146,15 +146,7 @@ export function updateSearchStats(stats: Float64Array, offset: number, grid: Sea
 }
 
 /** updateSearchStats with the visit time's trigValues given. */
-export function updateSearchStatsWith(
-  stats: Float64Array,
-  offset: number,
-  grid: SearchGrid,
-  sign: number,
-  w: number,
-  tDays: number,
-  trig: Float64Array,
-): void {
+export function updateSearchStatsWith(stats: Float64Array, offset: number, grid: SearchGrid, sign: number, w: number, tDays: number, trig: Float64Array): void {
   const sw = sign * w;
   const tau = tDays - grid.epochDays;
   stats[offset] += sw;

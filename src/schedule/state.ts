@@ -139,10 +139,7 @@ export class PlanState {
     // No more visits than the star's slots, its cap and (one a night) the nights it can have allow.
     const time = c.problem.time;
     const nights = c.onePerNight ? (time.mode === 'choose-nights' ? time.nights + c.nightGranted.reduce((x, y) => x + y, 0) : c.nightCount) : Infinity;
-    const most = Math.min(
-      4 * MIN_SEARCH_VISITS + 40,
-      c.prior.count[t]! + Math.min(c.targetSlots[t]!.length, c.maxVisits[t]!, nights * c.visitsPerNight[t]!),
-    );
+    const most = Math.min(4 * MIN_SEARCH_VISITS + 40, c.prior.count[t]! + Math.min(c.targetSlots[t]!.length, c.maxVisits[t]!, nights * c.visitsPerNight[t]!));
     for (let n = MIN_SEARCH_VISITS; n <= most; n++) {
       const x = idealCompleteness(grid, n, c.searchMedianWeight[t]!) / c.searchGoalCompleteness[t]!;
       const rate = (c.searchPriority[t]! * goalValue(x, this.searchOvershoot[t]!)) / n;

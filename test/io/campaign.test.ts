@@ -133,6 +133,11 @@ describe('campaign files', () => {
       `${BASE.replace('targets.csv', 'other.csv')}time: { mode: hours, hours: 5 }\n`,
       /campaign\.yaml: targets = "other\.csv": a target list file \(.*other\.csv does not exist\)$/,
     ],
+    [
+      'a search completeness goal above 1',
+      `${BASE}time: { mode: hours, hours: 5 }\ngoals: { searchCompleteness: 1.5 }\n`,
+      /campaign\.yaml: goals\.searchCompleteness = 1\.5: a completeness above 0 and at most 1$/,
+    ],
   ])('names the key of a bad value: %s', (_name, text, message) => {
     expect(() => readCampaign(campaignFile(text))).toThrow(message);
   });

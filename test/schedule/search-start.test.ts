@@ -28,7 +28,7 @@ function problem(): ScheduleProblem {
     targets: [
       // One day a night, 1/0.37 days per cycle: the phase steps by 0.37 cycles a night, as before.
       onePlanetStar('E', { kMps: 2, periodDays: 1 / 0.37, tcBjdTdb: 0 }, [0, 30]),
-      { id: 'S', planets: [], search: { id: "S", priority: 1, kMps: 3, goalCompleteness: 0.5, periodMinDays: 2, periodMaxDays: 20 } },
+      { id: 'S', planets: [], search: { id: 'S', priority: 1, kMps: 3, goalCompleteness: 0.5, periodMinDays: 2, periodMaxDays: 20 } },
     ],
     slots,
     time: { mode: 'hours', hours: 6 },

@@ -7,7 +7,7 @@ import { simulateWeather } from '../../src/schedule/weather.js';
 
 const settings = { overshootWeight: 0.1 };
 /** What a planet or search reaches (K/sigma_K, or completeness) and its goal. */
-const valueOf = (t: TargetOutcome) => (t.kind === 'search' ? t.completeness! : t.kOverSigmaK!);
+const reachedValue = (t: TargetOutcome) => (t.kind === 'search' ? t.completeness! : t.kOverSigmaK!);
 const goalOf = (t: TargetOutcome) => (t.kind === 'search' ? t.goalCompleteness! : t.goalSignificance!);
 
 function problemWith(clearProbability: number, seed: number): ScheduleProblem {
@@ -61,8 +61,8 @@ describe('simulateWeather', () => {
     const outcome = simulateWeather(problem, result, 50, 9, settings);
     outcome.targets.forEach((t, i) => {
       const planned = result.targets[i]!;
-      expect(t.goalProbability).toBe(valueOf(planned) >= goalOf(planned) * (1 - 1e-9) ? 1 : 0);
-      expect(t.meanKOverSigmaK).toBeCloseTo(valueOf(planned), 8);
+      expect(t.goalProbability).toBe(reachedValue(planned) >= goalOf(planned) * (1 - 1e-9) ? 1 : 0);
+      expect(t.meanKOverSigmaK).toBeCloseTo(reachedValue(planned), 8);
     });
     expect(outcome.meanUtility).toBeCloseTo(result.utility, 8);
   });

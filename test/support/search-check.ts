@@ -25,7 +25,9 @@ export function searchChecks(campaign: Campaign, plan: Plan, minVisits: number, 
     .map((s, k) => {
       const target = campaign.targets.find((t) => t.id === s.targetId)!;
       const search: SearchCase = { ...target.search!, starMassSun: target.massSun };
-      const planned: Visit[] = plan.visits.filter((v) => v.starId === target.starId).map((v) => ({ bjdTdb: v.midBjdTdb, sigmaMps: v.effectiveSigmaMps, night: v.localDate }));
+      const planned: Visit[] = plan.visits
+        .filter((v) => v.starId === target.starId)
+        .map((v) => ({ bjdTdb: v.midBjdTdb, sigmaMps: v.effectiveSigmaMps, night: v.localDate }));
       const candidates: Visit[] = inputs.details
         .filter((d) => d.slot.targetId === target.starId)
         .map((d) => ({ bjdTdb: d.midBjdTdb, sigmaMps: d.effectiveSigmaMps, night: d.localDate }));
@@ -43,6 +45,13 @@ export function searchChecks(campaign: Campaign, plan: Plan, minVisits: number, 
         2,
         seed + 10 * k + 2,
       );
-      return { targetId: s.targetId, visits: planned.length, claimed: s.completeness ?? 0, planned: p, random: r && margin(p, r), randomPlanNights: rn && margin(p, rn) };
+      return {
+        targetId: s.targetId,
+        visits: planned.length,
+        claimed: s.completeness ?? 0,
+        planned: p,
+        random: r && margin(p, r),
+        randomPlanNights: rn && margin(p, rn),
+      };
     });
 }

@@ -21,7 +21,13 @@ export interface Visit {
 }
 
 /** Detections and trials: `periods` log-uniform periods (seeded), `trialsPerPeriod` phases and noise draws each. */
-export function injectedCompleteness(visits: Visit[], search: SearchCase, periods: number, trialsPerPeriod: number, seed: number): { detected: number; trials: number } {
+export function injectedCompleteness(
+  visits: Visit[],
+  search: SearchCase,
+  periods: number,
+  trialsPerPeriod: number,
+  seed: number,
+): { detected: number; trials: number } {
   const rng = createRng(seed);
   const logMin = Math.log(search.periodMinDays);
   const logSpan = Math.log(search.periodMaxDays / search.periodMinDays);
@@ -103,7 +109,10 @@ export function randomCompleteness(
 }
 
 /** planned − random and its standard error (independent binomial trials). */
-export function margin(planned: { detected: number; trials: number }, random: { detected: number; trials: number }): { diff: number; se: number; p: number; r: number } {
+export function margin(
+  planned: { detected: number; trials: number },
+  random: { detected: number; trials: number },
+): { diff: number; se: number; p: number; r: number } {
   const p = planned.detected / planned.trials;
   const r = random.detected / random.trials;
   return { diff: p - r, se: Math.sqrt((p * (1 - p)) / planned.trials + (r * (1 - r)) / random.trials), p, r };

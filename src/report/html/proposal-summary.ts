@@ -14,7 +14,7 @@ export const PROPOSAL_COLUMNS: Column[] = [
   { header: 'exposure (s)', align: 'right' },
   { header: 'visits', align: 'right' },
   { header: 'hours', align: 'right' },
-  { header: 'expected K/σ_K', align: 'right' },
+  { header: 'expected K/σ_K (search: completeness)', align: 'right' },
   { header: 'P(goal) with weather', align: 'right' },
 ];
 
@@ -41,7 +41,7 @@ export function proposalRows(plan: Plan): string[][] {
       ),
       String(s.visits),
       fmt(s.hours, 1),
-      fmt(s.kOverSigmaK, 1),
+      s.completeness !== undefined ? fmt(s.completeness, 2) : fmt(s.kOverSigmaK, 1),
       percent(s.goalProbability),
     ];
   });
