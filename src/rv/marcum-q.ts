@@ -28,7 +28,10 @@ export function marcumQ1(a: number, b: number): number {
   return Math.min(1, sum);
 }
 
-/** Step and extent of the table in a and b (Q1 is 1 to 1e-14 beyond a = b + 8, and b = 14 is z* = 196, beyond any threshold a search reaches with 8 visits or more). */
+/**
+ * Step and extent of the table in a and b: Q1 is 1 to 1e-14 beyond a = b + 9; b stops at 14
+ * (z* = 196): a larger threshold (only with the fewest visits) counts as no detection.
+ */
 export const MARCUM_TABLE_STEP = 0.05;
 const A_MAX = 24;
 const B_MAX = 14;
