@@ -11,7 +11,7 @@ import { referenceUtility } from '../reference/schedule.js';
 import { timeSec, type BenchModule } from './types.js';
 
 const INSTANTS = ['2027-03-21T00:30:00Z', '2027-03-21T03:40:00Z', '2027-03-21T06:10:00Z', '2027-03-21T08:50:00Z', '2027-03-22T02:00:00Z'];
-const SETTINGS = { searchGridSize: 48, overshootWeight: 0.1 };
+const SETTINGS = { overshootWeight: 0.1 };
 
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[xs.length >> 1]!;
 

@@ -3,43 +3,24 @@
 // straight from the constraints, and exhaustive search for the best schedule of a small problem.
 import { compileProblem } from '../src/schedule/compile.js';
 import type { SearchGrid } from '../src/schedule/objective-search.js';
+import { referenceCompleteness } from './search-completeness.js';
 import { informationVisits, kVariances } from '../src/rv/information.js';
 import type { CandidateSlot, PriorVisit, ScheduleProblem } from '../src/schedule/types.js';
 import { goalValue, overshootAfterPrior } from '../src/schedule/utility.js';
 
 export interface ReferenceSettings {
-  searchGridSize: number;
   overshootWeight: number;
 }
 
-/** Determinant by Gaussian elimination with partial pivoting (common practice). */
-function determinant(matrix: number[][]): number {
-  const a = matrix.map((row) => [...row]);
-  let det = 1;
-  for (let col = 0; col < a.length; col++) {
-    let pivot = col;
-    for (let r = col + 1; r < a.length; r++) if (Math.abs(a[r]![col]!) > Math.abs(a[pivot]![col]!)) pivot = r;
-    if (a[pivot]![col] === 0) return 0;
-    if (pivot !== col) {
-      [a[pivot], a[col]] = [a[col]!, a[pivot]!];
-      det = -det;
-    }
-    det *= a[col]![col]!;
-    for (let r = col + 1; r < a.length; r++) {
-      const f = a[r]![col]! / a[col]![col]!;
-      for (let k = col; k < a.length; k++) a[r]![k]! -= f * a[col]![k]!;
-    }
-  }
-  return det;
-}
-
-/** K/sigma_K of each planet and search for the given visits, from scratch, in the order of ScheduleResult.targets. */
-export function referenceKOverSigmaK(problem: ScheduleProblem, visits: CandidateSlot[], settings: ReferenceSettings): number[] {
-  return kOverSigmaKOnGrids(problem, visits, compileProblem(problem, settings.searchGridSize).grids).map((r) => r.ratio);
+/** K/sigma_K of each planet and completeness of each search for the given visits, from scratch, in the order of ScheduleResult.targets. */
+export function referenceKOverSigmaK(problem: ScheduleProblem, visits: CandidateSlot[]): number[] {
+  return kOverSigmaKOnGrids(problem, visits, compileProblem(problem).grids).map((r) => r.ratio);
 }
 
 interface Ratio {
+  /** K/sigma_K, or a search's completeness. */
   ratio: number;
+  /** Its goal. */
   goalSignificance: number;
   priority: number;
 }
@@ -105,17 +86,13 @@ function targetRatios(problem: ScheduleProblem, grids: (SearchGrid | null)[]): (
     }
     const grid = grids[t];
     if (grid && target.search) {
-      const w = mine.map((v) => 1 / v.whiteSigmaMps ** 2);
-      let total = 0;
-      for (let p = 0; p < grid.angularFreq.length; p++) {
-        const m = [0, 1, 2].map((r) => [0, 1, 2].map((k) => (r === k ? grid.eps : 0)));
-        mine.forEach((v, i) => {
-          const x = [1, Math.sin(grid.angularFreq[p]! * v.midBjdTdb), Math.cos(grid.angularFreq[p]! * v.midBjdTdb)];
-          for (let r = 0; r < 3; r++) for (let k = 0; k < 3; k++) m[r]![k]! += w[i]! * x[r]! * x[k]!;
-        });
-        total += grid.logK[p]! + 0.25 * Math.log(determinant(m) / m[0]![0]!);
-      }
-      out.push({ ratio: Math.exp(total / grid.angularFreq.length), goalSignificance: target.search.goalSignificance, priority: target.search.priority });
+      const ratio = referenceCompleteness(
+        grid,
+        mine.map((v) => v.midBjdTdb),
+        mine.map((v) => 1 / v.whiteSigmaMps ** 2),
+        'scheduler',
+      );
+      out.push({ ratio, goalSignificance: target.search.goalCompleteness, priority: target.search.priority });
     }
     return out;
   };
@@ -133,7 +110,7 @@ function nightMiddles(problem: ScheduleProblem): Map<number, number> {
 
 /** Total utility of the given visits, from scratch. */
 export function referenceUtility(problem: ScheduleProblem, visits: CandidateSlot[], settings: ReferenceSettings): number {
-  return utilityOnGrids(problem, visits, compileProblem(problem, settings.searchGridSize).grids, settings.overshootWeight);
+  return utilityOnGrids(problem, visits, compileProblem(problem).grids, settings.overshootWeight);
 }
 
 function utilityOnGrids(problem: ScheduleProblem, visits: CandidateSlot[], grids: (SearchGrid | null)[], overshootWeight: number): number {
@@ -237,7 +214,7 @@ function combinations(n: number, k: number): number[][] {
  * list of its visits and reused by every schedule that gives it the same list.
  */
 export function exhaustiveOptimum(problem: ScheduleProblem, settings: ReferenceSettings): { utility: number; visits: CandidateSlot[] } {
-  const grids = compileProblem(problem, settings.searchGridSize).grids;
+  const grids = compileProblem(problem).grids;
   const ratios = targetRatios(problem, grids);
   const prior = kOverSigmaKOnGrids(problem, [], grids);
   const known = problem.targets.map(() => new Map<string, Ratio[]>());
@@ -289,7 +266,7 @@ export function exhaustiveOptimum(problem: ScheduleProblem, settings: ReferenceS
  * hours budget; a step adds the best feasible slot while any adds utility).
  */
 export function referenceGreedy(problem: ScheduleProblem, settings: ReferenceSettings): { utility: number; visits: CandidateSlot[] } {
-  const grids = compileProblem(problem, settings.searchGridSize).grids;
+  const grids = compileProblem(problem).grids;
   let chosen: CandidateSlot[] = [];
   let utility = utilityOnGrids(problem, chosen, grids, settings.overshootWeight);
   for (;;) {

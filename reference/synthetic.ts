@@ -53,7 +53,7 @@ function syntheticTarget(rng: Rng, i: number, search: boolean, orbit: SyntheticO
     return {
       id,
       planets: [],
-      search: { id, priority, goalSignificance: 5, kMps: between(rng, 2, 8), periodMinDays, periodMaxDays: periodMinDays * between(rng, 2, 8) },
+      search: { id, priority, goalCompleteness: 0.5, kMps: between(rng, 2, 8), periodMinDays, periodMaxDays: periodMinDays * between(rng, 2, 8) },
     };
   }
   const kMps = between(rng, 2, 12);

@@ -5,7 +5,7 @@ import { constraintsSchema, eachDateOnce, timeSchema } from '../constraints.js';
 import { FIRST_YEAR, isoDate, LAST_YEAR } from '../field-schemas.js';
 import { inputError } from '../errors.js';
 import type { Constraints, Target } from '../model.js';
-import type { Campaign } from '../plan/campaign.js';
+import { type Campaign, DEFAULT_SEARCH_COMPLETENESS } from '../plan/campaign.js';
 import { readInstrument } from './instrument.js';
 import { INSTRUMENTS_DIR, SITES_DIR } from './paths.js';
 import { readStructured } from './read-text.js';
@@ -49,8 +49,13 @@ export const campaignSchema = z.strictObject({
         .min(0.5, 'a probability from 0.5 to 0.99')
         .max(0.99, 'a probability from 0.5 to 0.99')
         .default(0.9),
+      searchCompleteness: z
+        .number({ error: 'a completeness above 0 and at most 1' })
+        .gt(0, 'a completeness above 0 and at most 1')
+        .max(1, 'a completeness above 0 and at most 1')
+        .default(DEFAULT_SEARCH_COMPLETENESS),
     })
-    .default({ significance: 5, probability: 0.9 }),
+    .default({ significance: 5, probability: 0.9, searchCompleteness: DEFAULT_SEARCH_COMPLETENESS }),
   noise: z
     .strictObject({
       nightlyJitterFraction: z

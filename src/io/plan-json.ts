@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { inputError } from '../errors.js';
 import { bjd, fraction, isoDate, isoInstant, nonNegative, num, positive } from '../field-schemas.js';
-import type { Campaign } from '../plan/campaign.js';
+import { type Campaign, DEFAULT_SEARCH_COMPLETENESS } from '../plan/campaign.js';
 import {
   backupNightSchema,
   observedVisitSchema,
@@ -90,7 +90,7 @@ const campaignSchema = z.object({
   window: z.object({ start: localDate, end: localDate }),
   time: timeSchema,
   constraints: constraintsSchema,
-  goals: z.object({ significance: positive, probability: fraction.default(0.9) }),
+  goals: z.object({ significance: positive, probability: fraction.default(0.9), searchCompleteness: positive.max(1).default(DEFAULT_SEARCH_COMPLETENESS) }),
   noise: z.object({ nightlyJitterFraction: fraction }),
   transits: z.object({ confidence: fraction, maxOrbitFraction: fraction }),
   seed: num.int('a whole number').min(0, 'a whole number, 0 or more'),

@@ -122,20 +122,19 @@ function plannedVisit(d: SlotDetail, campaign: Campaign): PlannedVisit {
 }
 
 /**
- * K and σ_K as the summary quotes them, with their period. A search's score K/σ_K is the geometric
- * mean over its log-spaced period grid of K(P)/σ_K(P) (src/schedule/objective-search.ts); with
- * K ∝ P^(-1/3) for fixed masses [K-formula] the geometric mean of K(P) is K at √(Pmin · Pmax), so K is quoted there
- * and σ_K = K / score (the geometric mean of σ_K(P)). The scheduler itself takes K at Pmin.
+ * K as the summary quotes it, with its period: a planet's at its period; a search's (K of the
+ * search mass) at the logarithmic middle √(Pmin · Pmax) of its range, the geometric mean of K(P)
+ * over the range for K ∝ P^(-1/3) at fixed mass [K-formula]. The scheduler itself takes K at Pmin.
+ * A search has no σ_K: its score is its detection completeness (src/schedule/objective-search.ts).
  */
-function quotedK(setup: TargetSetup, outcome: { sigmaKMps: number; kOverSigmaK: number }): { kMps?: number; kPeriodDays?: number; sigmaKMps: number } {
+function quotedK(setup: TargetSetup): { kMps?: number; kPeriodDays?: number } {
   const { target } = setup;
   if (setup.role !== 'search' || !target.search || setup.kMps === undefined) {
-    return { kMps: setup.kMps, ...(target.ephemeris ? { kPeriodDays: target.ephemeris.periodDays } : {}), sigmaKMps: outcome.sigmaKMps };
+    return { kMps: setup.kMps, ...(target.ephemeris ? { kPeriodDays: target.ephemeris.periodDays } : {}) };
   }
   const { periodMinDays, periodMaxDays } = target.search;
   const kPeriodDays = Math.sqrt(periodMinDays * periodMaxDays);
-  const kMps = setup.kMps * (kPeriodDays / periodMinDays) ** (-1 / 3);
-  return { kMps, kPeriodDays, sigmaKMps: outcome.kOverSigmaK > 0 ? kMps / outcome.kOverSigmaK : Infinity };
+  return { kMps: setup.kMps * (kPeriodDays / periodMinDays) ** (-1 / 3), kPeriodDays };
 }
 
 function targetSummary(
@@ -157,15 +156,18 @@ function targetSummary(
   if (target.ephemeris) summary.phaseErrAtEnd = phaseErrCycles(target.ephemeris, windowEndBjdTdb);
   const outcome = result.targets.find((t) => t.targetId === target.id);
   if (!setup.role || !outcome) return summary;
-  const quoted = quotedK(setup, outcome);
+  const prior = outcome.kind === 'search' ? { priorCompleteness: outcome.priorValue } : { priorKOverSigmaK: outcome.priorValue };
   return {
     ...summary,
-    ...quoted,
+    ...quotedK(setup),
     visits: outcome.visits,
     hours: outcome.hours,
-    ...(outcome.priorVisits > 0 ? { priorVisits: outcome.priorVisits, priorKOverSigmaK: outcome.priorKOverSigmaK } : {}),
+    ...(outcome.priorVisits > 0 ? { priorVisits: outcome.priorVisits, ...prior } : {}),
+    sigmaKMps: outcome.sigmaKMps,
     kOverSigmaK: outcome.kOverSigmaK,
     goalSignificance: outcome.goalSignificance,
+    completeness: outcome.completeness,
+    goalCompleteness: outcome.goalCompleteness,
     goalProbability: weather.find((w) => w.targetId === target.id)?.goalProbability,
     informationEfficiency: outcome.informationEfficiency,
   };

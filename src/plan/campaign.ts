@@ -22,7 +22,12 @@ export interface Goals {
   significance: number;
   /** The probability under the site's weather with which the time request (from need) reaches each goal. */
   probability: number;
+  /** Detection completeness to reach for a blind search (src/schedule/objective-search.ts); default 0.5. */
+  searchCompleteness: number;
 }
+
+/** The default completeness goal of a blind search: an even chance of detecting a planet of the search mass. */
+export const DEFAULT_SEARCH_COMPLETENESS = 0.5;
 
 /** One row of a campaign's observed file (src/io/observed.ts), before its time is resolved. */
 export interface ObservedRow {

@@ -126,7 +126,7 @@ export function setupStars(campaign: Campaign, setups: TargetSetup[]): StarSetup
         id: searchRow.target.id,
         priority: searchRow.target.priority,
         kMps: searchRow.kMps!,
-        goalSignificance: goalOf(searchRow.target),
+        goalCompleteness: campaign.goals.searchCompleteness,
         periodMinDays,
         periodMaxDays,
       };

@@ -11,7 +11,6 @@ import { eveningDate } from './observed-visits.js';
 import { planInputs } from './plan-inputs.js';
 
 /** The search grid the plan's objective uses (optimise.ts default). */
-const SEARCH_GRID = 48;
 const OVERSHOOT = 0.1;
 /** Phases within this of a quadrature or a conjunction are called so (Crest's wording). */
 const NEAR_CYCLES = 0.08;
@@ -24,7 +23,7 @@ export interface NextChoice {
   /** Exact utility gain of the visit, and per hour of telescope time. */
   gain: number;
   gainPerHour: number;
-  /** Per planet or search of the star: K/sigma_K before and after the visit, and its goal. */
+  /** Per planet or search of the star: K/sigma_K (a search: its completeness) before and after the visit, and its goal. */
   effects: { targetId: string; before: number; after: number; goalSignificance: number }[];
   airmass: number;
   /** Minutes left in the star's window from the visit's start. */
@@ -60,7 +59,7 @@ export function nextVisits(given: Campaign, at: Date): NextAnswer {
   const night: Campaign = { ...given, window: { start: localDate, end: localDate }, time: { mode: 'given-nights', dates: [localDate] }, lostDates: [] };
   const inputs = planInputs(night, { now: at });
   const { problem, details } = inputs;
-  const c = compileProblem(problem, SEARCH_GRID);
+  const c = compileProblem(problem);
   const state = new PlanState(c, Infinity, OVERSHOOT);
   for (let n = 0; n < c.nightCount; n++) state.openNight(n);
   const detailOf = new Map(details.map((d) => [d.slot.slotId, d]));
@@ -78,12 +77,16 @@ export function nextVisits(given: Campaign, at: Date): NextAnswer {
       targetId: p.id,
       ratio: state.planetFractionOfGoal(c.planetFrom[t]! + i) * p.goalSignificance,
       goalSignificance: p.goalSignificance,
+      measure: 'K/sigma_K',
+      digits: 1,
     }));
     if (star.search)
       out.push({
         targetId: star.search.id,
-        ratio: state.searchFractionOfGoal(t, 0, 0) * star.search.goalSignificance,
-        goalSignificance: star.search.goalSignificance,
+        ratio: state.searchCompleteness(t, 0, 0),
+        goalSignificance: star.search.goalCompleteness,
+        measure: 'completeness',
+        digits: 2,
       });
     return out;
   };
@@ -102,8 +105,8 @@ export function nextVisits(given: Campaign, at: Date): NextAnswer {
     const name = (id: string) => (before.length > 1 ? `${id} ` : '');
     const goalWords = before.map((b) =>
       b.ratio >= b.goalSignificance
-        ? `${name(b.targetId)}goal reached (K/sigma_K ${b.ratio.toFixed(1)})`
-        : `${name(b.targetId)}K/sigma_K ${b.ratio.toFixed(1)} of ${b.goalSignificance}`,
+        ? `${name(b.targetId)}goal reached (${b.measure} ${b.ratio.toFixed(b.digits)})`
+        : `${name(b.targetId)}${b.measure} ${b.ratio.toFixed(b.digits)} of ${b.goalSignificance}`,
     );
     choices.push({
       starId: d.slot.targetId,

@@ -83,9 +83,9 @@ export const targetSummarySchema = z.object({
   priority: positive,
   kMps: nonNegative.optional(),
   /**
-   * The period at which kMps and sigmaKMps are quoted: the ephemeris period; for a blind search
-   * the logarithmic middle √(Pmin · Pmax) of its range, where K is the geometric mean of K(P)
-   * over the range (K ∝ P^(-1/3)). Absent in plans of older versions.
+   * The period at which kMps is quoted: the ephemeris period; for a blind search (K of its search
+   * mass) the logarithmic middle √(Pmin · Pmax) of its range, where K is the geometric mean of
+   * K(P) over the range (K ∝ P^(-1/3)). Absent in plans of older versions.
    */
   kPeriodDays: positive.optional(),
   visits: wholeNonNegative,
@@ -93,6 +93,9 @@ export const targetSummarySchema = z.object({
   sigmaKMps: nonNegative.optional(),
   kOverSigmaK: nonNegative.optional(),
   goalSignificance: positive.optional(),
+  /** Blind search: expected detection completeness at the search mass over its period range, and its goal (src/schedule/objective-search.ts). */
+  completeness: fraction.optional(),
+  goalCompleteness: fraction.optional(),
   /** Probability of reaching the goal under the site's weather (simulated). */
   goalProbability: fraction.optional(),
   /** Time from need: what the goal asks of this target's star (src/schedule/need.ts). Absent in plans of older versions. */
@@ -117,6 +120,8 @@ export const targetSummarySchema = z.object({
   priorVisits: nonNegative.optional(),
   /** K/sigma_K the prior visits alone give (ephemeris targets). */
   priorKOverSigmaK: nonNegative.optional(),
+  /** Completeness the prior visits alone give (searches). */
+  priorCompleteness: fraction.optional(),
   /** The orbit fitted to the RVs so far, beside the catalogue values the plan started from. */
   fit: orbitUpdateSchema.optional(),
   /** Blind search: the strongest periodogram peak of the RVs so far (offered, never adopted). */

@@ -64,6 +64,9 @@ export function planWarnings(plan: Plan, setups: TargetSetup[], windows: Window[
           `${summary.kOverSigmaK.toFixed(1)} with ${summary.visits} visits${visitsHint(summary, setup)}`,
       );
     }
+    if (!neverObservable && summary.goalCompleteness !== undefined && summary.completeness !== undefined && summary.completeness < summary.goalCompleteness) {
+      w.push(`goal completeness = ${summary.goalCompleteness} not reached: ${summary.completeness.toFixed(2)} with ${summary.visits} visits`);
+    }
     if (summary.phaseErrAtEnd !== undefined && summary.phaseErrAtEnd > LOST_PHASE_ERR_CYCLES && summary.kMps !== undefined) {
       const n = recoveryVisits(summary.kMps, setup.exposure.budget.effectiveSigmaMps);
       w.push(

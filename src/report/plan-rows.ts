@@ -72,7 +72,10 @@ const TARGET_COLUMNS: Column[] = [
   { header: 'hours', align: 'right' },
 ];
 
-/** Columns for what was done before the plan: visits made or kept, and the K/sigma_K they give. */
+/** A search's expected detection completeness at its search mass (src/schedule/objective-search.ts). */
+const COMPLETENESS_COLUMN: Column = { header: 'completeness', align: 'right' };
+
+/** Columns for what was done before the plan: visits made or kept, and the K/sigma_K (a search: completeness) they give. */
 const DONE_COLUMNS: Column[] = [
   { header: 'done', align: 'right' },
   { header: 'K/sigma_K done', align: 'right' },
@@ -81,12 +84,18 @@ const DONE_COLUMNS: Column[] = [
 /** A plan made with visits already done (observed or kept) shows them beside the visits ahead. */
 const showsDone = (plan: Plan) => plan.replan !== undefined || plan.observed !== undefined;
 
-/** The target table's columns: `visits` counts the visits ahead; `done` those already made or kept. */
+const hasSearch = (plan: Plan) => plan.targets.some((t) => t.kind === 'search');
+
+/** The target table's columns: `visits` counts the visits ahead; `done` those already made or kept; `completeness` when a search is planned. */
 export function targetColumns(plan: Plan): Column[] {
-  return showsDone(plan) ? [...TARGET_COLUMNS.slice(0, 3), ...DONE_COLUMNS, ...TARGET_COLUMNS.slice(3)] : TARGET_COLUMNS;
+  // The completeness column follows K/sigma_K, as in targetRows.
+  const at = TARGET_COLUMNS.findIndex((c) => c.header === 'K/sigma_K') + 1;
+  const columns = hasSearch(plan) ? [...TARGET_COLUMNS.slice(0, at), COMPLETENESS_COLUMN, ...TARGET_COLUMNS.slice(at)] : TARGET_COLUMNS;
+  return showsDone(plan) ? [...columns.slice(0, 3), ...DONE_COLUMNS, ...columns.slice(3)] : columns;
 }
 
 export function targetRows(plan: Plan): string[][] {
+  const search = hasSearch(plan);
   return plan.targets.map((t) => {
     const row = [
       t.targetId,
@@ -96,24 +105,28 @@ export function targetRows(plan: Plan): string[][] {
       neededText(t),
       fmt(t.sigmaKMps, 2),
       fmt(t.kOverSigmaK, 1),
-      fmt(t.goalSignificance, 1),
+      ...(search ? [fmt(t.completeness, 2)] : []),
+      t.goalCompleteness !== undefined ? fmt(t.goalCompleteness, 2) : fmt(t.goalSignificance, 1),
       percent(t.goalProbability),
       fmt(t.informationEfficiency, 2),
       fmt(t.hours, 1),
     ];
     if (!showsDone(plan)) return row;
-    return [...row.slice(0, 3), String(t.priorVisits ?? 0), fmt(t.priorKOverSigmaK, 1), ...row.slice(3)];
+    const done = t.priorCompleteness !== undefined ? fmt(t.priorCompleteness, 2) : fmt(t.priorKOverSigmaK, 1);
+    return [...row.slice(0, 3), String(t.priorVisits ?? 0), done, ...row.slice(3)];
   });
 }
 
-/** What a search row's K and sigma_K mean (see quotedK in src/plan/build-plan.ts); undefined without search rows. */
+/** What a search row's K and completeness mean (see quotedK in src/plan/build-plan.ts); undefined without search rows. */
 function searchKNote(plan: Plan): string | undefined {
   const rows = plan.targets.filter((t) => t.kind === 'search' && t.kPeriodDays !== undefined);
   if (!rows.length) return undefined;
   const periods = rows.map((t) => `${t.targetId} ${fmt(t.kPeriodDays, 1)} d`).join(', ');
   return (
     `Search rows: K of the search mass at the logarithmic middle of the period range (${periods}), the geometric mean of K over the range; ` +
-    'K/sigma_K is the geometric mean over the range of K(P)/sigma_K(P) from the phase coverage, and sigma_K = K / (K/sigma_K).'
+    'completeness is the expected fraction of planets of the search mass (period log-uniform over the range, circular, random phase) ' +
+    'that a periodogram of the planned visits detects at 1% false-alarm probability (analytic, clear weather); ' +
+    'its goal is in the goal column; search rows have no sigma_K.'
   );
 }
 

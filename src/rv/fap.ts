@@ -83,6 +83,28 @@ export function fapBaluev(power: number, ctx: FapContext): number {
   return Math.min(1, -Math.expm1(-tau) + single * Math.exp(-tau));
 }
 
+/**
+ * The power p* whose Baluev FAP equals `fap` for N points, band width and T_eff, by 32 bisection
+ * steps on p (to 2e-10), with γ_H computed once: powerAtFap's Baluev case for hot loops.
+ */
+export function baluevPowerAtFap(fap: number, n: number, bandPerDay: number, effectiveSpanDays: number): number {
+  const nH = n - 1;
+  const nK = n - 3;
+  const gammaH = Math.sqrt(2 / nH) * Math.exp(logGamma(nH / 2) - logGamma((nH - 1) / 2));
+  const w = bandPerDay * effectiveSpanDays;
+  let lo = 0;
+  let hi = 1;
+  for (let i = 0; i < 32; i++) {
+    const p = 0.5 * (lo + hi);
+    // fapBaluev's formula (above).
+    const tau = gammaH * w * (1 - p) ** ((nK - 1) / 2) * Math.sqrt((nH * p) / 2);
+    const value = -Math.expm1(-tau) + (1 - p) ** (nK / 2) * Math.exp(-tau);
+    if (value > fap) lo = p;
+    else hi = p;
+  }
+  return 0.5 * (lo + hi);
+}
+
 export type FapMethod = 'baluev' | 'independent';
 
 /** FAP of a power by the chosen method. */

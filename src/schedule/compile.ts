@@ -4,6 +4,7 @@
 import { designRow, type StarModel } from '../rv/information-model.js';
 import type { InformationVisit } from '../rv/information.js';
 import { searchGrid, searchStatsLength, trigValues, type SearchGrid } from './objective-search.js';
+import { extent } from '../extent.js';
 import { compilePrior, type CompiledPrior } from './prior.js';
 import type { ScheduleProblem, ScheduleTarget } from './types.js';
 
@@ -26,11 +27,14 @@ export interface CompiledProblem {
   grids: (SearchGrid | null)[];
   searchPriority: Float64Array;
   searchK: Float64Array;
-  searchGoalSignificance: Float64Array;
+  /** Per star: the completeness its search aims at. */
+  searchGoalCompleteness: Float64Array;
   statsOffset: Int32Array;
   statsLength: number;
   /** Per slot of a search star: its time's trigValues on the star's grid, filled on first use (slotTrig). */
   slotTrig: (Float64Array | undefined)[];
+  /** Per star with a search: the median weight of its slots. */
+  searchMedianWeight: Float64Array;
   /** Per star: largest visit weight among its slots. */
   maxWeight: Float64Array;
   /** Per star: its slot positions in time order. */
@@ -81,16 +85,17 @@ function fail(message: string): never {
 }
 
 function checkTarget(t: ScheduleTarget): void {
-  const positive = (x: { priority: number; kMps: number; goalSignificance: number }) => x.priority > 0 && x.kMps > 0 && x.goalSignificance > 0;
+  const positive = (x: { priority: number; kMps: number }) => x.priority > 0 && x.kMps > 0;
   if (t.planets.length === 0 && !t.search) fail(`star ${t.id} has neither planets nor a search`);
   if (t.planets.length > 0 && t.model?.planetCount !== t.planets.length) fail(`star ${t.id} needs a model with one planet per planet`);
-  for (const planet of t.planets) if (!positive(planet)) fail(`planet ${planet.id} needs priority, kMps and goal > 0`);
+  for (const planet of t.planets) if (!(positive(planet) && planet.goalSignificance > 0)) fail(`planet ${planet.id} needs priority, kMps and goal > 0`);
   const search = t.search;
-  if (search && !(positive(search) && search.periodMinDays > 0 && search.periodMaxDays >= search.periodMinDays))
-    fail(`search ${search.id} needs priority, kMps, goal > 0 and 0 < periodMinDays <= periodMaxDays`);
+  const goal = search?.goalCompleteness ?? 0;
+  if (search && !(positive(search) && goal > 0 && goal <= 1 && search.periodMinDays > 0 && search.periodMaxDays >= search.periodMinDays))
+    fail(`search ${search.id} needs priority, kMps > 0, a completeness goal in (0, 1] and 0 < periodMinDays <= periodMaxDays`);
 }
 
-export function compileProblem(problem: ScheduleProblem, searchGridSize: number): CompiledProblem {
+export function compileProblem(problem: ScheduleProblem): CompiledProblem {
   const targetPos = new Map<string, number>();
   problem.targets.forEach((t, i) => {
     if (targetPos.has(t.id)) fail(`star ${t.id} appears twice`);
@@ -155,10 +160,11 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
     grids: [],
     searchPriority: Float64Array.from(problem.targets, (t) => t.search?.priority ?? 0),
     searchK: Float64Array.from(problem.targets, (t) => t.search?.kMps ?? 0),
-    searchGoalSignificance: Float64Array.from(problem.targets, (t) => t.search?.goalSignificance ?? 1),
+    searchGoalCompleteness: Float64Array.from(problem.targets, (t) => t.search?.goalCompleteness ?? 1),
     statsOffset: new Int32Array(T),
     statsLength: 0,
     slotTrig: new Array(S),
+    searchMedianWeight: new Float64Array(T),
     maxWeight: new Float64Array(T),
     targetSlots: [],
     slotCount: S,
@@ -237,7 +243,21 @@ export function compileProblem(problem: ScheduleProblem, searchGridSize: number)
     }
     const weights = Array.from(c.targetSlots[i]!, (j) => c.weight[j]!).sort((a, b) => a - b);
     const median = weights.length ? weights[weights.length >> 1]! : 1;
-    const grid = searchGrid(t.search.periodMinDays, t.search.periodMaxDays, t.search.kMps, searchGridSize, SEARCH_RIDGE_FRACTION * median);
+    c.searchMedianWeight[i] = median;
+    // The span the star's visits can cover: its candidate slots and its prior visits.
+    const times = [
+      ...Array.from(c.targetSlots[i]!, (j) => c.midBjdTdb[j]!),
+      ...(problem.prior ?? []).filter((v) => v.targetId === t.id).map((v) => v.midBjdTdb),
+    ];
+    const { min, max } = times.length ? extent(times) : { min: 0, max: 0 };
+    const grid = searchGrid({
+      periodMinDays: t.search.periodMinDays,
+      periodMaxDays: t.search.periodMaxDays,
+      kMpsAtMin: t.search.kMps,
+      eps: SEARCH_RIDGE_FRACTION * median,
+      fromDays: min,
+      toDays: max,
+    });
     c.grids.push(grid);
     offset += searchStatsLength(grid);
   });

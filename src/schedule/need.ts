@@ -4,7 +4,7 @@
 // Order of value: each star's planned visits are dropped one at a time (backward elimination, a
 // standard subset-selection scheme: Miller 2002, Subset Selection in Regression, ch. 3, from
 // memory), always the visit whose removal leaves the largest sum over the star's outcomes of
-// log(value/goal) on clear nights (K/sigma_K for a planet, the score for a search: balanced, so
+// log(value/goal) on clear nights (K/sigma_K for a planet, the completeness for a search: balanced, so
 // no outcome is starved for another); read backwards, the drops rank the visits most valuable first.
 //
 // Probability: the weather trials of weather.ts are replayed with the same seed (the same clear
@@ -46,11 +46,6 @@ export interface NeedResult {
   stars: StarNeed[];
 }
 
-export interface NeedOptions {
-  /** Must match the optimiser's (default 48). */
-  searchGridSize?: number;
-}
-
 const logFraction = (value: number, goal: number) => Math.log(1e-12 + value / goal);
 
 /** Star t's planned slots (compiled positions), most valuable first, by backward elimination on clear nights. */
@@ -83,15 +78,8 @@ function byValue(outcomes: StarOutcomes, t: number, slots: number[]): number[] {
  * The visits each star of `result` needs to reach its goals with `probability` under `trials`
  * weather draws of `seed` (those of simulateWeather with the same seed).
  */
-export function needFromPlan(
-  problem: ScheduleProblem,
-  result: ScheduleResult,
-  probability: number,
-  trials: number,
-  seed: number,
-  options: NeedOptions = {},
-): NeedResult {
-  const c = compileProblem(problem, options.searchGridSize ?? 48);
+export function needFromPlan(problem: ScheduleProblem, result: ScheduleResult, probability: number, trials: number, seed: number): NeedResult {
+  const c = compileProblem(problem);
   const { perTarget, usedNights, clearProbability } = plannedSlots(c, result);
   const outcomes = new StarOutcomes(c);
   const order = perTarget.map((slots, t) => byValue(outcomes, t, slots));

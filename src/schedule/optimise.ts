@@ -6,7 +6,8 @@
 //    the plan so far (by ranking gains, so that a night holding a target's first visit counts);
 //    values are re-computed lazily (a night's cached value is re-checked only
 //    when it reaches the top, the usual lazy-greedy device for diminishing returns, Minoux 1978).
-// 2. Local search (local-search.ts) to a local optimum: add, replace (move and swap), night swap.
+// 2. Local search (local-search.ts) to a local optimum: add, replace (move and swap), night swap;
+//    a star whose visits are together worth nothing gives them up, and local search runs again.
 // 3. Restarts (iterated local search, below), keeping the best plan.
 // 4. choose-nights: every night left out is valued given the final plan; the best are backups.
 import { createRng, type Rng } from '../rv/random.js';
@@ -60,7 +61,7 @@ function outcomes(state: PlanState): TargetOutcome[] {
         targetId: planet.id,
         kind: 'ephemeris',
         ...shared,
-        priorKOverSigmaK: state.priorPlanetFraction[at]! * planet.goalSignificance,
+        priorValue: state.priorPlanetFraction[at]! * planet.goalSignificance,
         informationPerMps2: 1 / variance,
         sigmaKMps: Math.sqrt(variance),
         kOverSigmaK,
@@ -72,18 +73,16 @@ function outcomes(state: PlanState): TargetOutcome[] {
       return outcome;
     });
     if (star.search) {
-      const kOverSigmaK = state.searchFractionOfGoal(t, 0, 0) * star.search.goalSignificance;
-      const info = (kOverSigmaK / star.search.kMps) ** 2;
+      const goal = star.search.goalCompleteness;
+      const completeness = state.searchCompleteness(t, 0, 0);
       out.push({
         targetId: star.search.id,
         kind: 'search',
         ...shared,
-        priorKOverSigmaK: state.priorSearchFraction[t]! * star.search.goalSignificance,
-        informationPerMps2: info,
-        sigmaKMps: info > 0 ? 1 / Math.sqrt(info) : Infinity,
-        kOverSigmaK,
-        goalSignificance: star.search.goalSignificance,
-        utility: star.search.priority * goalValue(kOverSigmaK / star.search.goalSignificance, state.searchOvershoot[t]!),
+        priorValue: state.priorSearchFraction[t]! * goal,
+        completeness,
+        goalCompleteness: goal,
+        utility: star.search.priority * goalValue(completeness / goal, state.searchOvershoot[t]!),
       });
     }
     return out;
@@ -138,6 +137,27 @@ function perturb(state: PlanState, nights: number, rng: Rng): void {
   greedyFill(state, rest);
 }
 
+/**
+ * Removes the visits of every star whose visits together are worth nothing (a search that has not
+ * reached its first detectable completeness: the greedy's first-visit credit started it, and no
+ * single move of local search sees that its visits are wasted); true if any went.
+ */
+function dropWorthless(state: PlanState): boolean {
+  let dropped = false;
+  state.targetVisits.forEach((visits, t) => {
+    if (visits.length === 0 || state.targetUtility[t]! > 0) return;
+    for (const j of [...visits]) state.remove(j);
+    dropped = true;
+  });
+  return dropped;
+}
+
+/** Local search, then again after dropWorthless if it freed any time. */
+function polish(state: PlanState, settings: LocalSearchSettings): void {
+  localSearch(state, settings);
+  if (dropWorthless(state)) localSearch(state, settings);
+}
+
 /** Builds the plan state from a compiled problem: greedy, local search, then seeded restarts. */
 export function optimiseCompiled(c: CompiledProblem, options: ScheduleOptions): PlanState {
   const time = c.problem.time;
@@ -164,7 +184,7 @@ export function optimiseCompiled(c: CompiledProblem, options: ScheduleOptions): 
     rng,
     ...(options.onProgress ? { onProgress: options.onProgress } : {}),
   };
-  localSearch(state, settings);
+  polish(state, settings);
   // Restarts cost a full local search each: many on small problems, none above 20,000 slots.
   const restarts = options.restarts ?? Math.min(30, Math.floor(20_000 / Math.max(1, c.slotCount)));
   let best = snapshot(state);
@@ -173,7 +193,7 @@ export function optimiseCompiled(c: CompiledProblem, options: ScheduleOptions): 
     // Restarts explore from a copy of the best plan; only a better plan is kept (and reported).
     const quiet = { ...settings, onProgress: undefined };
     perturb(state, nights, rng);
-    localSearch(state, quiet);
+    polish(state, quiet);
     if (improves(bestUtility, state.utility)) {
       best = snapshot(state);
       bestUtility = state.utility;
@@ -190,7 +210,7 @@ export function optimiseCompiled(c: CompiledProblem, options: ScheduleOptions): 
  * Throws a plain Error if the problem is inconsistent (unknown target or night, missing phase).
  */
 export function optimiseSchedule(problem: ScheduleProblem, options: ScheduleOptions): ScheduleResult {
-  const c = compileProblem(problem, options.searchGridSize ?? 48);
+  const c = compileProblem(problem);
   const state = optimiseCompiled(c, options);
   const chosen = state.chosenSlots();
   const targets = outcomes(state);

@@ -1,10 +1,10 @@
 // One star at a time, what a chosen set of its visits reaches: K/sigma_K of each of its planets
-// (its information model, src/rv/information.ts) and its search's score (objective-search.ts),
+// (its information model, src/rv/information.ts) and its search's completeness (objective-search.ts),
 // the visits already made always included (prior.ts). The weather replay (weather.ts) and the
 // sizing of the request from need (need.ts) share it, so both count exactly what the optimiser does.
 import { StarInformation } from '../rv/information.js';
 import { type CompiledProblem, SlotVisit, slotTrig } from './compile.js';
-import { searchLogScoreWith, searchStatsLength, updateSearchStatsWith } from './objective-search.js';
+import { searchCompletenessWith, searchStatsLength, updateSearchStatsWith } from './objective-search.js';
 import { seedInformation, seedSearchStats } from './prior.js';
 
 export class StarOutcomes {
@@ -38,7 +38,7 @@ export class StarOutcomes {
     this.priority.set(c.planetPriority);
     this.searchOutcome.forEach((at, t) => {
       if (at < 0) return;
-      this.goal[at] = c.searchGoalSignificance[t]!;
+      this.goal[at] = c.searchGoalCompleteness[t]!;
       this.priority[at] = c.searchPriority[t]!;
     });
     this.ofStar = Array.from({ length: c.targetCount }, (_, t) => {
@@ -70,7 +70,7 @@ export class StarOutcomes {
   add(j: number): void {
     const c = this.c;
     const grid = c.grids[this.star];
-    if (grid) updateSearchStatsWith(this.stats, 0, grid, c.weight[j]!, slotTrig(c, j));
+    if (grid) updateSearchStatsWith(this.stats, 0, grid, 1, c.weight[j]!, c.midBjdTdb[j]!, slotTrig(c, j));
     const info = this.information[this.star];
     if (info) {
       this.visit.slot = j;
@@ -80,7 +80,7 @@ export class StarOutcomes {
 
   /**
    * Writes the started star's outcomes into out (at their outcome positions): K/sigma_K of each
-   * planet (0 while undetermined) and the search's score, as the visits stand or with added slot
+   * planet (0 while undetermined) and the search's completeness, as the visits stand or with added slot
    * `without` left out (its removal is priced, never applied).
    */
   values(out: Float64Array, without = -1): void {
@@ -98,8 +98,10 @@ export class StarOutcomes {
     }
     const grid = c.grids[t];
     if (grid) {
-      const sw = without >= 0 ? -c.weight[without]! : 0;
-      out[this.searchOutcome[t]!] = Math.exp(searchLogScoreWith(this.stats, 0, grid, sw, without >= 0 ? slotTrig(c, without) : undefined));
+      out[this.searchOutcome[t]!] =
+        without >= 0
+          ? searchCompletenessWith(this.stats, 0, grid, -1, c.weight[without]!, c.midBjdTdb[without]!, slotTrig(c, without))
+          : searchCompletenessWith(this.stats, 0, grid, 0, 0, 0, undefined);
     }
   }
 }

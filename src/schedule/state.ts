@@ -4,7 +4,7 @@
 // with correlated activity), plus O(period grid) for a search: never a recomputation of the plan.
 import { StarInformation, type InformationVisit } from '../rv/information.js';
 import { SlotVisit, slotTrig, type CompiledProblem } from './compile.js';
-import { searchLogScoreWith, updateSearchStatsWith } from './objective-search.js';
+import { idealCompleteness, MIN_SEARCH_VISITS, searchCompletenessWith, updateSearchStatsWith } from './objective-search.js';
 import { seedInformation, seedSearchStats } from './prior.js';
 import { goalValue, overshootAfterPrior } from './utility.js';
 
@@ -46,10 +46,13 @@ export class PlanState {
   openNights = 0;
   /** Overshoot weight of each planet (compiled order) and of each star's search (utility.ts overshootAfterPrior). */
   readonly planetOvershoot: Float64Array;
-  /** (K/sigma_K)/goal of each planet and search from the prior visits alone. */
+  /** (K/sigma_K)/goal of each planet, and completeness/goal of each search, from the prior visits alone. */
   readonly priorPlanetFraction: Float64Array;
   readonly priorSearchFraction: Float64Array;
   readonly searchOvershoot: Float64Array;
+  /** Per search star: visits below which each is credited the ideal rate (rankingGain), and that credit. */
+  private readonly searchCreditVisits: Int32Array;
+  private readonly searchCredit: Float64Array;
   private readonly visit: SlotVisit;
   private readonly trialVariance: Float64Array;
 
@@ -79,6 +82,11 @@ export class PlanState {
     this.priorSearchFraction = Float64Array.from(c.grids, (grid, t) => (grid && c.prior.count[t]! > 0 ? this.searchFractionOfGoal(t, 0, 0) : 0));
     this.planetOvershoot = this.priorPlanetFraction.map((x) => overshootAfterPrior(x, overshootWeight));
     this.searchOvershoot = this.priorSearchFraction.map((x) => overshootAfterPrior(x, overshootWeight));
+    this.searchCreditVisits = new Int32Array(c.targetCount);
+    this.searchCredit = new Float64Array(c.targetCount);
+    c.grids.forEach((grid, t) => {
+      if (grid) this.setSearchCredit(t);
+    });
     this.targetUtility = new Float64Array(c.targetCount);
     this.targetVersion = new Int32Array(c.targetCount);
     this.gainValue = new Float64Array(c.slotCount);
@@ -105,11 +113,43 @@ export class PlanState {
     return this.planetFraction(i, this.kVariance[i]!);
   }
 
-  /** (K/sigma_K)/goal of star t's search with slot j added (sign 1), removed (-1), or as it is (0). */
-  searchFractionOfGoal(t: number, sign: number, j: number): number {
+  /** Completeness of star t's search with slot j added (sign 1), removed (-1), or as it is (0). */
+  searchCompleteness(t: number, sign: number, j: number): number {
     const c = this.c;
-    const sw = sign === 0 ? 0 : sign * c.weight[j]!;
-    return Math.exp(searchLogScoreWith(this.stats, c.statsOffset[t]!, c.grids[t]!, sw, sw !== 0 ? slotTrig(c, j) : undefined)) / c.searchGoalSignificance[t]!;
+    if (sign === 0) return searchCompletenessWith(this.stats, c.statsOffset[t]!, c.grids[t]!, 0, 0, 0, undefined);
+    return searchCompletenessWith(this.stats, c.statsOffset[t]!, c.grids[t]!, sign, c.weight[j]!, c.midBjdTdb[j]!, slotTrig(c, j));
+  }
+
+  /** Completeness/goal of star t's search with slot j added (sign 1), removed (-1), or as it is (0). */
+  searchFractionOfGoal(t: number, sign: number, j: number): number {
+    return this.searchCompleteness(t, sign, j) / this.c.searchGoalCompleteness[t]!;
+  }
+
+  /**
+   * The credit of a search's first visits: completeness rises slowly over its first visits (the
+   * threshold falls as they add up), so each visit while the star has fewer than n0 is credited
+   * U(n0) / n0, U(n) the utility of n ideal visits of the star's median weight (objective-search.ts
+   * idealCompleteness) and n0 the count with the best utility per visit, at most the star's slots.
+   */
+  private setSearchCredit(t: number): void {
+    const c = this.c;
+    const grid = c.grids[t]!;
+    let best = 0;
+    let bestN = 0;
+    // No more visits than the star's slots, its cap and (one a night) the nights it can have allow.
+    const time = c.problem.time;
+    const nights = c.onePerNight ? (time.mode === 'choose-nights' ? time.nights + c.nightGranted.reduce((x, y) => x + y, 0) : c.nightCount) : Infinity;
+    const most = Math.min(4 * MIN_SEARCH_VISITS + 40, c.prior.count[t]! + Math.min(c.targetSlots[t]!.length, c.maxVisits[t]!, nights * c.visitsPerNight[t]!));
+    for (let n = MIN_SEARCH_VISITS; n <= most; n++) {
+      const x = idealCompleteness(grid, n, c.searchMedianWeight[t]!) / c.searchGoalCompleteness[t]!;
+      const rate = (c.searchPriority[t]! * goalValue(x, this.searchOvershoot[t]!)) / n;
+      if (rate > best) {
+        best = rate;
+        bestN = n;
+      }
+    }
+    this.searchCreditVisits[t] = bestN;
+    this.searchCredit[t] = best;
   }
 
   /** Utility of star t with slot j added (sign 1), removed (-1), or as it is (0). */
@@ -152,10 +192,7 @@ export class PlanState {
    * half the utility of a pair made with an ideal partner (the star's
    * largest weight at the opposite extreme of each planet's signal; two visits with K alone free
    * give I = w1 w2 / (w1 + w2) (s1 - s2)^2), so that greedy starts new stars. Likewise a search's
-   * first three visits (offset, sine and cosine need three before the ridge stops dominating):
-   * each is credited at least a third of the utility of three visits of its weight spread evenly
-   * in phase, where the sine/cosine information is 3w/2 on both axes at every period, so
-   * K/sigma_K = K_geo sqrt(3w/2) with K_geo the grid's geometric-mean K.
+   * first visits (setSearchCredit).
    */
   rankingGain(j: number): number {
     const c = this.c;
@@ -163,11 +200,7 @@ export class PlanState {
     const visits = this.targetVisits[t]!.length + c.prior.count[t]!;
     const gain = this.gain(j);
     let credit = 0;
-    const grid = c.grids[t];
-    if (grid && visits < 3)
-      credit +=
-        (c.searchPriority[t]! * goalValue((Math.exp(grid.meanLogK) * Math.sqrt(1.5 * c.weight[j]!)) / c.searchGoalSignificance[t]!, this.searchOvershoot[t]!)) /
-        3;
+    if (c.grids[t] && visits < this.searchCreditVisits[t]!) credit += this.searchCredit[t]!;
     // Until the star's visits determine its K's (one visit per planet beyond the offset), each is credited as half a pair.
     if (this.information[t] && this.kVariance[c.planetFrom[t]!] === Infinity) {
       const w = c.weight[j]!;
@@ -255,7 +288,7 @@ export class PlanState {
     if (grid) {
       // No visits left: back to the prior's sums exactly rather than keep the rounding residue of the removals.
       if (mine.length === 0) seedSearchStats(this.stats, c, c.prior, t);
-      else updateSearchStatsWith(this.stats, c.statsOffset[t]!, grid, sign * c.weight[j]!, slotTrig(c, j));
+      else updateSearchStatsWith(this.stats, c.statsOffset[t]!, grid, sign, c.weight[j]!, c.midBjdTdb[j]!, slotTrig(c, j));
     }
     const info = this.information[t];
     if (info) {

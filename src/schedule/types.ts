@@ -51,13 +51,14 @@ export interface SchedulePlanet {
   goalSignificance: number;
 }
 
-/** A blind search: phase coverage over a period range; K scales as P^(-1/3) from periodMinDays. */
+/** A blind search: detection completeness over a period range (objective-search.ts); K scales as P^(-1/3) from periodMinDays. */
 export interface ScheduleSearch {
   id: string;
   priority: number;
-  /** Semi-amplitude at periodMinDays. */
+  /** Semi-amplitude of the search mass at periodMinDays. */
   kMps: number;
-  goalSignificance: number;
+  /** Completeness to reach, in (0, 1]. */
+  goalCompleteness: number;
   periodMinDays: number;
   periodMaxDays: number;
 }
@@ -137,8 +138,6 @@ export interface ScheduleOptions {
   seed: number;
   /** Backup nights to rank (choose-nights mode). Default 5. */
   backups?: number;
-  /** Periods in the log-spaced grid of a search target. Default 48. */
-  searchGridSize?: number;
   /** Height of the soft cap above the goal (see utility.ts). Default 0.1. */
   overshootWeight?: number;
   /** Perturb-and-repair restarts after the first local optimum. Default: 30 up to 666 slots, then fewer (20,000 / slots), none above 20,000. */
@@ -157,18 +156,18 @@ export interface TargetOutcome {
   kind: 'ephemeris' | 'search';
   /** Visits and hours of the star chosen by the plan (prior visits not included). */
   visits: number;
-  /** The star's prior visits (ScheduleProblem.prior), and the K/sigma_K they alone give. */
+  /** The star's prior visits (ScheduleProblem.prior), and what they alone give (K/sigma_K, or a search's completeness). */
   priorVisits: number;
-  priorKOverSigmaK: number;
+  priorValue: number;
   hours: number;
-  /**
-   * Ephemeris: 1 / Var(K), every other parameter marginalised, in (m/s)^-2.
-   * Search: the same quantity implied by the grid's geometric-mean K/sigma_K at kMps.
-   */
-  informationPerMps2: number;
-  sigmaKMps: number;
-  kOverSigmaK: number;
-  goalSignificance: number;
+  /** Ephemeris: 1 / Var(K), every other parameter marginalised, in (m/s)^-2; sigma_K and K/sigma_K from it. */
+  informationPerMps2?: number;
+  sigmaKMps?: number;
+  kOverSigmaK?: number;
+  goalSignificance?: number;
+  /** Search: the detection completeness at the search mass (objective-search.ts) and its goal. */
+  completeness?: number;
+  goalCompleteness?: number;
   /** This target's term of the total utility. */
   utility: number;
   /** Ephemeris targets: information / sum w; 1 is the best a white-noise, known-phase schedule can do. */

@@ -1,8 +1,8 @@
 // Weather: each night is clear with its own probability, independently of the others (the
 // site's clear-night fraction, per month if given; common practice). A clouded night loses all
 // its visits. The plan is replayed over seeded random weather to estimate, per target, the
-// probability of reaching K/sigma_K >= goal, and the mean of K/sigma_K and of the utility, per
-// planet and per search (each star's information rebuilt from its clear visits every trial),
+// probability of reaching K/sigma_K >= goal (a search: its completeness goal), and the mean of
+// K/sigma_K (a search: of its completeness) and of the utility, per planet and per search (each star's information rebuilt from its clear visits every trial),
 // and the probability that every planet and search reaches its goal in the same trial.
 import { createRng, type Rng } from '../rv/random.js';
 import { type CompiledProblem, compileProblem } from './compile.js';
@@ -12,8 +12,7 @@ import type { ScheduleProblem, ScheduleResult } from './types.js';
 import { goalValue } from './utility.js';
 
 export interface WeatherOptions {
-  /** Must match the optimiser's (default 48 and 0.1). */
-  searchGridSize?: number;
+  /** Must match the optimiser's (default 0.1). */
   overshootWeight?: number;
 }
 
@@ -25,6 +24,7 @@ export interface WeatherOutcome {
   meanUtility: number;
   /** Fraction of trials in which every planet and search reached its goal (1 when there is none). */
   allGoalsProbability: number;
+  /** meanKOverSigmaK of a search is its mean completeness. */
   targets: { targetId: string; goalProbability: number; meanKOverSigmaK: number }[];
 }
 
@@ -63,7 +63,7 @@ export const reachesGoal = (value: number, goal: number) => value >= goal * (1 -
 
 /** Replays `result`'s visits of `problem` under `trials` seeded weather draws. */
 export function simulateWeather(problem: ScheduleProblem, result: ScheduleResult, trials: number, seed: number, options: WeatherOptions = {}): WeatherOutcome {
-  const c = compileProblem(problem, options.searchGridSize ?? 48);
+  const c = compileProblem(problem);
   const overshoot = options.overshootWeight ?? 0.1;
   const { perTarget, usedNights, clearProbability } = plannedSlots(c, result);
   const rng = createRng(seed);

@@ -62,7 +62,7 @@ describe('campaign files', () => {
       sameNightSpacingHours: 2,
       minWindowMinutes: 20,
     });
-    expect(c.goals).toEqual({ significance: 5, probability: 0.9 });
+    expect(c.goals).toEqual({ significance: 5, probability: 0.9, searchCompleteness: 0.5 });
     expect(c.seed).toBe(1);
   });
 
@@ -137,6 +137,11 @@ describe('campaign files', () => {
       'a missing target list',
       `${BASE.replace('targets.csv', 'other.csv')}time: { mode: hours, hours: 5 }\n`,
       /campaign\.yaml: targets = "other\.csv": a target list file \(.*other\.csv does not exist\)$/,
+    ],
+    [
+      'a search completeness goal above 1',
+      `${BASE}time: { mode: hours, hours: 5 }\ngoals: { searchCompleteness: 1.5 }\n`,
+      /campaign\.yaml: goals\.searchCompleteness = 1\.5: a completeness above 0 and at most 1$/,
     ],
   ])('names the key of a bad value: %s', (_name, text, message) => {
     expect(() => readCampaign(campaignFile(text))).toThrow(message);

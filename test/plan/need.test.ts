@@ -95,7 +95,10 @@ function referenceNeed(plan: Plan, starId: string): StarCheck | undefined {
   }
   const probability = reached.map((counts) => {
     let sum = 0;
-    return counts.map((k) => (sum += k) / REFERENCE_TRIALS);
+    return counts.map((k) => {
+      sum += k;
+      return sum / REFERENCE_TRIALS;
+    });
   });
   return { starId, planned: visits.length, requested: summaries[0]!.request!.visits, reachable: summaries.every((s) => s.request!.reachable), probability };
 }

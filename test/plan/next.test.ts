@@ -16,7 +16,7 @@ import { starTargets, transitRule } from '../../src/plan/candidates.js';
 import { referenceWindows } from '../../reference/sky-sampler.js';
 
 const CAMPAIGN = path.join(path.dirname(fileURLToPath(import.meta.url)), '../../examples/under-way/campaign.yaml');
-const SETTINGS = { searchGridSize: 48, overshootWeight: 0.1 };
+const SETTINGS = { overshootWeight: 0.1 };
 /** Edge tolerance of the window comparison (minutes): the sampler steps by one minute. */
 const EDGE_MIN = 2;
 const INSTANTS = [

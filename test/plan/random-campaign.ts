@@ -85,7 +85,11 @@ function timeModel(rng: Rng, window: { start: string; end: string }, nights: num
 
 /** The index-th random campaign (same index, same campaign). */
 /** The goal probability varies with the significance (no draw of its own, so the campaigns' other draws stay as they were). */
-const goalsOf = (significance: number) => ({ significance, probability: ({ 3: 0.8, 5: 0.9, 8: 0.95 } as Record<number, number>)[significance]! });
+const goalsOf = (significance: number) => ({
+  significance,
+  probability: ({ 3: 0.8, 5: 0.9, 8: 0.95 } as Record<number, number>)[significance]!,
+  searchCompleteness: 0.5,
+});
 
 export function randomCampaign(index: number): Campaign {
   const rng = createRng(7_200_000 + index);

@@ -93,7 +93,7 @@ export const CAMPAIGN: Campaign = {
   window: { start: '2027-04-10', end: '2027-04-21' },
   time: { mode: 'choose-nights', nights: 5 },
   constraints: { twilight: 'nautical', maxAirmass: 2, moonSeparationDeg: 30, minSpacingHours: 20, sameNightSpacingHours: 2, minWindowMinutes: 30 },
-  goals: { significance: 5, probability: 0.9 },
+  goals: { significance: 5, probability: 0.9, searchCompleteness: 0.5 },
   noise: { nightlyJitterFraction: 0.5 },
   transits: { confidence: 0.95, maxOrbitFraction: 0.2 },
   seed: 7,

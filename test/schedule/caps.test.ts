@@ -7,7 +7,7 @@ import { syntheticProblem } from '../../reference/synthetic.js';
 import { optimiseSchedule } from '../../src/schedule/optimise.js';
 import type { ScheduleProblem, ScheduleTimeModel } from '../../src/schedule/types.js';
 
-const settings = { searchGridSize: 16, overshootWeight: 0.1 };
+const settings = { overshootWeight: 0.1 };
 
 function problem(time: ScheduleTimeModel, seed: number): ScheduleProblem {
   return syntheticProblem({

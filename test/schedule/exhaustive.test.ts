@@ -4,7 +4,7 @@ import { optimiseSchedule } from '../../src/schedule/optimise.js';
 import { exhaustiveOptimum, referenceUtility, scheduleViolations } from '../../reference/schedule.js';
 import { syntheticProblem, type SyntheticSpec } from '../../reference/synthetic.js';
 
-const settings = { searchGridSize: 12, overshootWeight: 0.1 };
+const settings = { overshootWeight: 0.1 };
 
 const families: { name: string; spec: Omit<SyntheticSpec, 'seed' | 'searchFraction' | 'phaseErrors'> }[] = [
   {

@@ -9,7 +9,7 @@ import { syntheticProblem } from '../../reference/synthetic.js';
 import type { CandidateSlot, PriorVisit, ScheduleProblem } from '../../src/schedule/types.js';
 import { simulateWeather } from '../../src/schedule/weather.js';
 
-const SETTINGS = { searchGridSize: 48, overshootWeight: 0.1 };
+const SETTINGS = { overshootWeight: 0.1 };
 
 /** A synthetic problem whose first nights are already observed: some of their slots become prior visits. */
 function withPrior(seed: number, sharedNight: boolean): ScheduleProblem {
@@ -83,7 +83,7 @@ describe('prior visits in the optimiser', () => {
     const clear = { ...problem, nights: problem.nights.map((n) => ({ ...n, clearProbability: 1 })) };
     const result = optimiseSchedule(clear, { seed: 1, restarts: 1 });
     const weather = simulateWeather(clear, result, 3, 1);
-    const reference = referenceKOverSigmaK(clear, chosen(clear, result.slotIds), SETTINGS);
+    const reference = referenceKOverSigmaK(clear, chosen(clear, result.slotIds));
     weather.targets.forEach((t, i) => {
       expect(t.meanKOverSigmaK).toBeCloseTo(reference[i]!, 9);
     });
@@ -139,7 +139,7 @@ describe('prior visits in the optimiser', () => {
       constraints: { minSpacingHours: 20, onePerNight: true },
       prior,
     };
-    const before = referenceKOverSigmaK({ ...problem, slots: [] }, [], SETTINGS);
+    const before = referenceKOverSigmaK({ ...problem, slots: [] }, []);
     expect(before[0]).toBeGreaterThan(5);
     const result = optimiseSchedule(problem, { seed: 1 });
     expect(result.targets[0]!.priorVisits).toBe(12);

@@ -4,7 +4,7 @@ import { syntheticProblem } from '../../reference/synthetic.js';
 
 describe('the from-scratch greedy of the bench', () => {
   it('returns a feasible schedule whose utility it reports honestly, and stops when nothing adds', () => {
-    const settings = { searchGridSize: 16, overshootWeight: 0.1 };
+    const settings = { overshootWeight: 0.1 };
     for (const seed of [1, 2, 3]) {
       const problem = syntheticProblem({
         targets: 3,

@@ -28,7 +28,7 @@ function problem(): ScheduleProblem {
     targets: [
       // One day a night, 1/0.37 days per cycle: the phase steps by 0.37 cycles a night, as before.
       onePlanetStar('E', { kMps: 2, periodDays: 1 / 0.37, tcBjdTdb: 0 }, [0, 30]),
-      { id: 'S', planets: [], search: { id: 'S', priority: 1, kMps: 3, goalSignificance: 5, periodMinDays: 2, periodMaxDays: 20 } },
+      { id: 'S', planets: [], search: { id: 'S', priority: 1, kMps: 3, goalCompleteness: 0.5, periodMinDays: 2, periodMaxDays: 20 } },
     ],
     slots,
     time: { mode: 'hours', hours: 6 },
@@ -39,7 +39,7 @@ function problem(): ScheduleProblem {
 describe('a search target competing for an hours budget', () => {
   it('is started, and the plan beats a simple hand-made alternative (property: never worse than a feasible schedule)', () => {
     const p = problem();
-    const settings = { searchGridSize: 48, overshootWeight: 0.1 };
+    const settings = { overshootWeight: 0.1 };
     const result = optimiseSchedule(p, { seed: 1 });
     const byId = new Map(p.slots.map((s) => [s.slotId, s]));
     const chosen = result.slotIds.map((id) => byId.get(id)!);

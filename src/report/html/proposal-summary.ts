@@ -52,7 +52,7 @@ export function proposalRows(plan: Plan): string[][] {
       fmt(s.request?.hours ?? s.hours, 1),
       percent(s.request?.goalProbability ?? s.goalProbability),
       String(s.visits),
-      fmt(s.kOverSigmaK, 1),
+      s.completeness !== undefined ? fmt(s.completeness, 2) : fmt(s.kOverSigmaK, 1),
     ];
   });
 }
