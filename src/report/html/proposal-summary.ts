@@ -115,11 +115,28 @@ function searchSentence(plan: Plan, summaries: TargetSummary[], maps: ReadonlyMa
     ];
   });
   const analytic = parts.length
-    ? ` In the blind search, by the analytic limit, planets are detectable at K/σ_K = ${fmt(plan.campaign.goals.significance, 0)} ` +
+    ? ` For a planet whose period is already known, by the analytic limit, K/σ_K = ${fmt(plan.campaign.goals.significance, 0)} is reached ` +
       `(random orbital phases, circular orbits) down to a minimum mass m sin i of ${list(parts)}.`
     : '';
   const injected = simulated.length ? ` ${SIMULATED_LEAD} ${list(simulated)}.` : '';
-  return analytic + injected;
+  return completenessSentence(plan, summaries) + analytic + injected;
+}
+
+/** What the plan's own search objective promises: each search's expected completeness at its search mass (analytic, clear weather). */
+function completenessSentence(plan: Plan, summaries: TargetSummary[]): string {
+  const parts = summaries.flatMap((s) => {
+    const search = targetOf(plan, s.targetId)?.search;
+    if (!search || s.completeness === undefined) return [];
+    return [
+      `${percent(s.completeness)} of planets of ${fmt(search.msiniEarth, 0)} M⊕ with periods of ${fmt(search.periodMinDays, 0)}–` +
+        `${fmt(search.periodMaxDays, 0)} d around ${s.targetId}`,
+    ];
+  });
+  if (!parts.length) return '';
+  return (
+    ` The blind-search visits are placed for detection: a periodogram of them at 1% false-alarm probability is expected to find ${list(parts)} ` +
+    '(periods log-uniform, circular orbits, random phases; analytic, every night clear).'
+  );
 }
 
 /** Targets that fall short of the chosen probability, lowest priority first, with their probability. */

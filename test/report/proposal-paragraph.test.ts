@@ -1,9 +1,21 @@
-// The proposal paragraph says how much of the dark time asked for holds no requested visit, and
+// The proposal paragraph: each search's expected completeness, and how much of the dark time asked for holds no requested visit;
 // the plan's totals give it: the planned nights' dark hours less the hours of the visits the
 // request holds (idle: less every planned visit, spare ones included).
 import { describe, expect, it } from 'vitest';
 import { proposalParagraph } from '../../src/report/html/proposal-summary.js';
 import { demoPlan } from '../support/demo-plan.js';
+
+describe('the search sentence', () => {
+  it("quotes each search's expected completeness at its search mass, the number the planner optimised", () => {
+    const plan = demoPlan();
+    const text = proposalParagraph(plan);
+    for (const id of ['Vira', 'Castell']) {
+      const s = plan.targets.find((t) => t.targetId === id)!;
+      const search = plan.campaign.targets.find((t) => t.id === id)!.search!;
+      expect(text).toContain(`${Math.round(s.completeness! * 100)}% of planets of ${search.msiniEarth} M⊕ with periods of 2–60 d around ${id}`);
+    }
+  });
+});
 
 describe('spare dark time', () => {
   it('is the dark hours of the planned nights less the requested visit blocks, and the paragraph says so', () => {
