@@ -1,13 +1,13 @@
 import { z } from 'zod';
-import { isoDate } from './field-schemas.js';
+import { isoDate, numberIn } from './field-schemas.js';
 
 // A campaign's observing constraints and time model: the campaign file's schemas (read by
 // src/io/campaign.ts) and the types inferred from them. Units are in the names.
 
 export const constraintsSchema = z.strictObject({
   twilight: z.enum(['civil', 'nautical', 'astronomical'], { error: 'one of civil, nautical, astronomical' }).default('nautical'),
-  maxAirmass: z.number({ error: 'an airmass from 1 to 5' }).min(1, 'an airmass from 1 to 5').max(5, 'an airmass from 1 to 5').default(2),
-  moonSeparationDeg: z.number({ error: 'degrees from 0 to 180' }).min(0, 'degrees from 0 to 180').max(180, 'degrees from 0 to 180').default(30),
+  maxAirmass: numberIn(1, 5, 'an airmass from 1 to 5').default(2),
+  moonSeparationDeg: numberIn(0, 180, 'degrees from 0 to 180').default(30),
   /** Minimum spacing between two visits of one target (hours). */
   minSpacingHours: z
     .number({ error: 'hours, 0 or more' })
@@ -18,7 +18,7 @@ export const constraintsSchema = z.strictObject({
    * When visits are one a night (minSpacingHours >= 12): least spacing of a star's visits within one night, start to start,
    * for stars with visitsPerNight > 1 (hours).
    */
-  sameNightSpacingHours: z.number({ error: 'hours from 0 to 12' }).min(0, 'hours from 0 to 12').max(12, 'hours from 0 to 12').default(2),
+  sameNightSpacingHours: numberIn(0, 12, 'hours from 0 to 12').default(2),
   /** Defaults for every star without its own maxVisits / maxHours column: caps on the visits and hours planned for it. */
   maxVisitsPerStar: z
     .number({ error: 'a whole number of visits from 1 to 100000' })

@@ -12,6 +12,8 @@ export const num = z.number();
 export const nonNegative = num.min(0, 'zero or more');
 export const positive = num.positive('more than zero');
 export const fraction = num.min(0, 'a fraction from 0 to 1').max(1, 'a fraction from 0 to 1');
+/** A number from min to max where every failure, a value of the wrong type included, is told by the one phrase `allowed`. */
+export const numberIn = (min: number, max: number, allowed: string) => z.number({ error: allowed }).min(min, allowed).max(max, allowed);
 export const wholeNonNegative = num.int('a whole number').min(0, 'a whole number, 0 or more');
 export const bjd = num.min(MIN_BJD, 'a full BJD_TDB, 2400000 to 2600000').max(MAX_BJD, 'a full BJD_TDB, 2400000 to 2600000');
 export const isoInstant = z.iso.datetime({ offset: true, error: 'an ISO 8601 instant' });

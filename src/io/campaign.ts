@@ -2,7 +2,7 @@ import path from 'node:path';
 import { z } from 'zod';
 import { DateTime } from 'luxon';
 import { constraintsSchema, eachDateOnce, timeSchema } from '../constraints.js';
-import { FIRST_YEAR, isoDate, LAST_YEAR } from '../field-schemas.js';
+import { FIRST_YEAR, isoDate, LAST_YEAR, numberIn } from '../field-schemas.js';
 import { inputError } from '../errors.js';
 import type { Constraints, Target } from '../model.js';
 import { type Campaign, DEFAULT_SEARCH_COMPLETENESS } from '../plan/campaign.js';
@@ -44,11 +44,7 @@ export const campaignSchema = z.strictObject({
   goals: z
     .strictObject({
       significance: z.number().positive('a positive K/sigma_K').max(100, 'at most 100').default(5),
-      probability: z
-        .number({ error: 'a probability from 0.5 to 0.99' })
-        .min(0.5, 'a probability from 0.5 to 0.99')
-        .max(0.99, 'a probability from 0.5 to 0.99')
-        .default(0.9),
+      probability: numberIn(0.5, 0.99, 'a probability from 0.5 to 0.99').default(0.9),
       searchCompleteness: z
         .number({ error: 'a completeness above 0 and at most 1' })
         .gt(0, 'a completeness above 0 and at most 1')
@@ -58,25 +54,13 @@ export const campaignSchema = z.strictObject({
     .default({ significance: 5, probability: 0.9, searchCompleteness: DEFAULT_SEARCH_COMPLETENESS }),
   noise: z
     .strictObject({
-      nightlyJitterFraction: z
-        .number({ error: 'a fraction from 0 to 1' })
-        .min(0, 'a fraction from 0 to 1')
-        .max(1, 'a fraction from 0 to 1')
-        .default(DEFAULT_NIGHTLY_JITTER_FRACTION),
+      nightlyJitterFraction: numberIn(0, 1, 'a fraction from 0 to 1').default(DEFAULT_NIGHTLY_JITTER_FRACTION),
     })
     .default({ nightlyJitterFraction: DEFAULT_NIGHTLY_JITTER_FRACTION }),
   transits: z
     .strictObject({
-      confidence: z
-        .number({ error: 'a probability from 0.5 to 0.9999' })
-        .min(0.5, 'a probability from 0.5 to 0.9999')
-        .max(0.9999, 'a probability from 0.5 to 0.9999')
-        .default(0.95),
-      maxOrbitFraction: z
-        .number({ error: 'a fraction of the orbit from 0 to 0.5' })
-        .min(0, 'a fraction of the orbit from 0 to 0.5')
-        .max(0.5, 'a fraction of the orbit from 0 to 0.5')
-        .default(0.2),
+      confidence: numberIn(0.5, 0.9999, 'a probability from 0.5 to 0.9999').default(0.95),
+      maxOrbitFraction: numberIn(0, 0.5, 'a fraction of the orbit from 0 to 0.5').default(0.2),
     })
     .default({ confidence: 0.95, maxOrbitFraction: 0.2 }),
   seed: z.number().int('a whole number').min(0, 'a whole number, 0 or more').default(1),

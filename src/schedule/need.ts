@@ -98,9 +98,10 @@ export function needFromPlan(problem: ScheduleProblem, result: ScheduleResult, p
       for (const j of order[t]!) if (clear[c.slotNight[j]!]) outcomes.add(j);
       outcomes.values(value);
       let open = positions.filter((at) => reachesGoal(value[at]!, outcomes.goal[at]!));
+      if (!open.length) continue;
+      // Then the prefixes, from the visits already made alone (n = 0), which may reach a goal by themselves.
       outcomes.start(t);
-      // The visits already made may reach a goal alone.
-      if (open.length) outcomes.values(value);
+      outcomes.values(value);
       for (let n = 0; open.length; n++) {
         open = open.filter((at) => {
           if (!reachesGoal(value[at]!, outcomes.goal[at]!)) return true;
