@@ -8,6 +8,7 @@ import type { Plan, PlannedVisit, TargetSummary } from './plan-schema.js';
 import { phaseErrCycles } from '../orbit/ephemeris.js';
 import { optimiseSchedule } from '../schedule/optimise.js';
 import type { ScheduleResult } from '../schedule/types.js';
+import { problemWeatherMargin } from '../schedule/utility.js';
 import { simulateWeather } from '../schedule/weather.js';
 import { transitRule, type SlotDetail, type TargetSetup } from './candidates.js';
 import { needFromPlan } from '../schedule/need.js';
@@ -31,9 +32,11 @@ export function buildPlan(given: Campaign, options: PlanOptions = {}): Plan {
   const seed = options.seed ?? given.seed;
   const { site, window, time } = given;
   const { campaign, rv, setups, windows, nights, observed, past, left, details, problem } = planInputs(given, options);
-  const result = optimiseSchedule(problem, { seed });
+  // The margin over each goal the plan values, from the weather over the nights it may use (utility.ts).
+  const overshootWeight = problemWeatherMargin(problem, campaign.goals.probability);
+  const result = optimiseSchedule(problem, { seed, overshootWeight });
   const trials = options.weatherTrials ?? WEATHER_TRIALS;
-  const weather = simulateWeather(problem, result, trials, seed);
+  const weather = simulateWeather(problem, result, trials, seed, { overshootWeight });
   const bySlot = new Map(details.map((d) => [d.slot.slotId, d]));
   const ahead = result.slotIds.map((id) => plannedVisit(bySlot.get(id)!, campaign));
   const visits = [...past.kept, ...ahead].sort((a, b) => a.startUtc.localeCompare(b.startUtc));
@@ -83,6 +86,7 @@ export function buildPlan(given: Campaign, options: PlanOptions = {}): Plan {
       overheadHours: totalHours - exposureHours,
       totalHours,
       utility: result.utility,
+      weatherMargin: overshootWeight,
       ...dark,
       allGoalsProbability: weather.allGoalsProbability,
       request: request.totals,

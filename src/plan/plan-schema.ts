@@ -155,6 +155,8 @@ export const planTotalsSchema = z.object({
   overheadHours: nonNegative,
   totalHours: nonNegative,
   utility: num,
+  /** The margin over each goal the planner values (the overshoot weight, src/schedule/utility.ts weatherMargin). Absent in plans of older versions. */
+  weatherMargin: nonNegative.optional(),
   /** Dark hours (the campaign's twilight) of the planned nights, and how many of them no visit uses. Absent in plans of older versions. */
   darkHours: nonNegative.optional(),
   idleHours: nonNegative.optional(),

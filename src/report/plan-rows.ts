@@ -168,7 +168,12 @@ export function targetNotes(plan: Plan): string[] {
     ? `needed: the fewest planned visits of the star that reach the goal with ${percent(r.probability)} probability under the weather; ` +
       '">N": all N planned visits fall short.'
     : undefined;
-  return [needed, searchKNote(plan)].filter((note): note is string => note !== undefined);
+  const margin = plan.totals.weatherMargin;
+  const weather =
+    r && margin !== undefined && margin > 0
+      ? `The planner values up to ${percent(margin)} above each goal: the margin that ${percent(r.probability)} odds under the site's weather ask for.`
+      : undefined;
+  return [needed, weather, searchKNote(plan)].filter((note): note is string => note !== undefined);
 }
 
 export function totalsLine(plan: Plan): string {

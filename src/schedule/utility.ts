@@ -10,6 +10,10 @@
 // time flows to the others, while a little margin for bad weather still counts.
 // (A saturating, priority-weighted sum of concave terms is the usual form for a diminishing-
 // returns objective on which greedy choice works well: Nemhauser, Wolsey & Fisher 1978.)
+// Crest's plans take b from the weather (weatherMargin below): the margin a goal needs to survive
+// the nights the clouds may take.
+import { normalQuantile } from '../rv/normal-cdf.js';
+import type { ScheduleProblem } from './types.js';
 
 /** g(x) above: the value of reaching the fraction x of the goal. */
 export function goalValue(fractionOfGoal: number, overshootWeight: number): number {
@@ -27,4 +31,29 @@ export function goalValue(fractionOfGoal: number, overshootWeight: number): numb
  */
 export function overshootAfterPrior(priorFractionOfGoal: number, overshootWeight: number): number {
   return priorFractionOfGoal >= 1 ? 0 : overshootWeight;
+}
+
+/**
+ * The overshoot weight a campaign's weather asks for. With n nights each clear with probability
+ * f (their mean), the fraction of a target's clear-sky information that survives is about
+ * Binomial(n, f) / n; its lower (1 - p) quantile is F = f - z_p sqrt(f (1 - f) / n) by the
+ * normal approximation, and K/sigma_K scales as sqrt(F). Reaching the goal with probability p
+ * then asks a clear-sky fraction of the goal x >= 1 / sqrt(F), and the soft cap's scale b is that
+ * margin, 1 / sqrt(F) - 1: 0 under a sure sky, at most 1 (where F is a quarter or less).
+ */
+export function weatherMargin(meanClearProbability: number, nights: number, probability: number): number {
+  const f = meanClearProbability;
+  if (f >= 1 || nights <= 0) return 0;
+  const quantile = f - normalQuantile(probability) * Math.sqrt((f * (1 - f)) / nights);
+  return quantile <= 0.25 ? 1 : Math.min(1, 1 / Math.sqrt(quantile) - 1);
+}
+
+/** weatherMargin for a problem: its nights' mean clear probability over the nights the time model can use. */
+export function problemWeatherMargin(problem: ScheduleProblem, probability: number): number {
+  const { nights, time } = problem;
+  if (nights.length === 0) return 0;
+  const meanClear = nights.reduce((sum, n) => sum + n.clearProbability, 0) / nights.length;
+  const granted = nights.filter((n) => n.granted).length;
+  const used = time.mode === 'choose-nights' ? Math.min(nights.length, time.nights + granted) : nights.length;
+  return weatherMargin(meanClear, used, probability);
 }

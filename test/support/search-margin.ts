@@ -11,11 +11,16 @@ function line(c: SearchCheck): string {
   );
 }
 
+/** Each check as a line of the test output. */
+export function printChecks(checks: SearchCheck[]): void {
+  for (const c of checks) console.log(line(c));
+}
+
 /** Planned minus random above three standard errors for every check (and at least one check). */
 export function expectMargin(checks: SearchCheck[]): void {
   expect(checks.length).toBeGreaterThan(0);
+  printChecks(checks);
   for (const c of checks) {
-    console.log(line(c));
     expect(c.random).toBeDefined();
     expect(c.random!.diff).toBeGreaterThan(3 * c.random!.se);
   }
