@@ -36,14 +36,22 @@ export type TwilightLevel = Constraints['twilight'];
 export const timeSchema = z.discriminatedUnion(
   'mode',
   [
-    z.strictObject({
-      mode: z.literal('choose-nights'),
-      nights: z
-        .number({ error: 'a whole number of nights, 1 to 366' })
-        .int('a whole number of nights')
-        .min(1, 'at least 1 night')
-        .max(366, 'at most 366 nights'),
-    }),
+    z
+      .strictObject({
+        mode: z.literal('choose-nights'),
+        nights: z.number({ error: 'a whole number of nights, 1 to 366 (halves with halfNights)' }).min(1, 'at least 1 night').max(366, 'at most 366 nights'),
+        /** The planner chooses half nights (first or second half of the dark time), two to a night. */
+        halfNights: z.boolean({ error: 'true or false' }).optional(),
+      })
+      .superRefine((time, ctx) => {
+        const step = time.halfNights ? 0.5 : 1;
+        if (!Number.isInteger(time.nights / step))
+          ctx.addIssue({
+            code: 'custom',
+            path: ['nights'],
+            message: time.halfNights ? 'a multiple of 0.5 nights' : 'a whole number of nights (or set halfNights: true)',
+          });
+      }),
     z.strictObject({ mode: z.literal('given-nights'), dates: z.array(isoDate).min(1, 'at least one date').superRefine(eachDateOnce) }),
     z.strictObject({
       mode: z.literal('hours'),

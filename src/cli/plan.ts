@@ -27,6 +27,7 @@ const PLAN_FILES = ['plan.md', 'plan.csv', 'plan.json', 'plan.ics', 'report.html
 interface PlanFlags {
   out?: string;
   nights?: number;
+  halfNights?: boolean;
   json?: boolean;
   seed?: number;
   now?: Date;
@@ -47,10 +48,24 @@ function checkChoosesNights(campaign: Campaign, flag: string, value: string): vo
   throw inputError({ file: 'command line', field: flag, value, allowed });
 }
 
-/** The campaign with its number of nights to choose replaced; only choose-nights campaigns choose nights. */
+/** The campaign choosing half nights when the flag asks; only choose-nights campaigns choose nights. */
+function withHalves(campaign: Campaign, halfNights: boolean | undefined): Campaign {
+  if (!halfNights || campaign.time.mode !== 'choose-nights') {
+    if (halfNights) checkChoosesNights(campaign, '--half-nights', 'true');
+    return campaign;
+  }
+  return { ...campaign, time: { ...campaign.time, halfNights: true } };
+}
+
+/** The campaign with its number of nights to choose replaced: whole nights, or halves with half nights. */
 function withNights(campaign: Campaign, nights: number | undefined): Campaign {
   if (nights === undefined) return campaign;
   checkChoosesNights(campaign, '--nights', String(nights));
+  const halves = campaign.time.mode === 'choose-nights' && campaign.time.halfNights;
+  if (!Number.isInteger(nights * (halves ? 2 : 1))) {
+    const allowed = halves ? 'a multiple of 0.5 nights from 1 to 366' : 'a whole number of nights from 1 to 366 (halves with --half-nights)';
+    throw inputError({ file: 'command line', field: '--nights', value: String(nights), allowed });
+  }
   return withNightCount(campaign, nights);
 }
 
@@ -76,8 +91,9 @@ export function registerPlan(program: Command): Command {
     .option(
       '--nights <n>',
       "choose this many nights instead of the campaign's number (choose-nights campaigns: how many nights to ask for?)",
-      numberFlag('--nights', 'a whole number of nights from 1 to 366', 1, 366, { integer: true }),
+      numberFlag('--nights', 'a number of nights from 1 to 366', 1, 366),
     )
+    .option('--half-nights', 'choose half nights (the first or second half of the dark time) rather than whole ones; two halves make a night')
     .option(
       '--now <time>',
       're-plan from this instant (ISO 8601 with zone, or "now"): visits before it stay as planned in the --out folder\'s plan.json or as observed',
@@ -92,7 +108,7 @@ export function registerPlan(program: Command): Command {
     .option('--json', 'print plan.json on stdout instead of the summary')
     .action(async (file: string | undefined, opts: PlanFlags) => {
       const campaignFile = file ?? path.relative(process.cwd(), DEMO_CAMPAIGN);
-      const campaign = withLost(withNights(readCampaign(campaignFile), opts.nights), opts.lost);
+      const campaign = withLost(withNights(withHalves(readCampaign(campaignFile), opts.halfNights), opts.nights), opts.lost);
       if (opts.sweepNights) checkChoosesNights(campaign, '--sweep-nights', opts.sweepNights.join(':'));
       const outDir = opts.out ?? path.join('crest-out', slug(campaign.name));
       const inputs = [campaignFile, campaign.targetsFile, campaign.site.file, campaign.instrument.file, ...(campaign.observed ? [campaign.observed.file] : [])];

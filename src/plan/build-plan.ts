@@ -12,6 +12,7 @@ import { problemWeatherMargin } from '../schedule/utility.js';
 import { simulateWeather } from '../schedule/weather.js';
 import { transitRule, type SlotDetail, type TargetSetup } from './candidates.js';
 import { needFromPlan } from '../schedule/need.js';
+import { chosenHalves, type PlannedHalf, plannedDarkHours } from './half-nights.js';
 import { planInputs } from './plan-inputs.js';
 import { planRequest } from './request.js';
 import type { ReplanOptions } from './replan.js';
@@ -42,15 +43,19 @@ export function buildPlan(given: Campaign, options: PlanOptions = {}): Plan {
   const visits = [...past.kept, ...ahead].sort((a, b) => a.startUtc.localeCompare(b.startUtc));
   const windowEndBjdTdb = (t: TargetSetup) => starBjdTdb(DateTime.fromISO(window.end, { zone: site.timeZone }).plus({ days: 1 }).toJSDate(), t.target);
   const lost = new Set(campaign.lostDates);
+  const halvesChosen = time.mode === 'choose-nights' && time.halfNights;
+  const chosen = halvesChosen ? chosenHalves(result.nightIndices, nights) : { dates: result.nightIndices.map((i) => nights[i]!.localDate), halves: [] };
   const plannedDates =
     time.mode === 'given-nights'
       ? time.dates.filter((d) => !lost.has(d)).sort()
-      : [...new Set([...left.spentDates, ...past.kept.map((v) => v.localDate), ...result.nightIndices.map((i) => nights[i]!.localDate)])].sort();
+      : [...new Set([...left.spentDates, ...past.kept.map((v) => v.localDate), ...chosen.dates])].sort();
+  const plannedHalves = chosen.halves.filter((h) => !past.kept.some((v) => v.localDate === h.localDate));
   const request = planRequest(
     needFromPlan(problem, result, campaign.goals.probability, trials, seed),
     new Map(result.slotIds.map((id) => [id, { ...bySlot.get(id)!.slot, localDate: bySlot.get(id)!.localDate }])),
     nights,
     plannedDates,
+    plannedHalves,
   );
   result.slotIds.forEach((id, i) => {
     if (!request.requestedSlotIds.has(id)) ahead[i]!.spare = true;
@@ -65,7 +70,7 @@ export function buildPlan(given: Campaign, options: PlanOptions = {}): Plan {
   });
   const exposureHours = visits.reduce((sum, v) => sum + v.exposureSec, 0) / 3600;
   const totalHours = visits.reduce((sum, v) => sum + v.durationSec, 0) / 3600;
-  const dark = darkTime(nights, plannedDates, visits);
+  const dark = darkTime(nights, plannedDates, plannedHalves, visits);
   const plan: Plan = {
     schemaVersion: 1,
     generator: GENERATOR,
@@ -76,11 +81,12 @@ export function buildPlan(given: Campaign, options: PlanOptions = {}): Plan {
     campaign: { ...campaign, seed },
     nights,
     plannedDates,
-    backups: result.backups.map((b) => ({ localDate: b.localDate, rank: b.rank, utilityGain: b.utilityGain })),
+    ...(halvesChosen ? { plannedHalves } : {}),
+    backups: backupNights(result.backups),
     visits,
     targets,
     totals: {
-      nights: plannedDates.length,
+      nights: plannedDates.length - plannedHalves.length / 2,
       visits: visits.length,
       exposureHours,
       overheadHours: totalHours - exposureHours,
@@ -97,10 +103,18 @@ export function buildPlan(given: Campaign, options: PlanOptions = {}): Plan {
   return plan;
 }
 
-/** Dark hours of the planned nights, and those no visit uses (a visit's hours count on its own night). */
-function darkTime(nights: Night[], plannedDates: string[], visits: PlannedVisit[]): { darkHours: number; idleHours: number } {
+/** Backup nights by date, best first: the two halves of a night appear once, where the better one ranks. */
+function backupNights(backups: ScheduleResult['backups']): Plan['backups'] {
+  const seen = new Set<string>();
+  return backups
+    .filter((b) => !seen.has(b.localDate) && seen.add(b.localDate))
+    .map((b, i) => ({ localDate: b.localDate, rank: i + 1, utilityGain: b.utilityGain }));
+}
+
+/** Dark hours of the planned nights (half of those planned by one half), and those no visit uses (a visit's hours count on its own night). */
+function darkTime(nights: Night[], plannedDates: string[], plannedHalves: PlannedHalf[], visits: PlannedVisit[]): { darkHours: number; idleHours: number } {
   const planned = new Set(plannedDates);
-  const darkHours = nights.filter((n) => planned.has(n.localDate)).reduce((sum, n) => sum + n.darkHours, 0);
+  const darkHours = plannedDarkHours(nights, plannedDates, plannedHalves);
   const usedHours = visits.filter((v) => planned.has(v.localDate)).reduce((sum, v) => sum + v.durationSec, 0) / 3600;
   return { darkHours, idleHours: Math.max(0, darkHours - usedHours) };
 }

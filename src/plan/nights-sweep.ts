@@ -8,7 +8,8 @@ import type { Plan, SweepRow } from './plan-schema.js';
 
 /** The campaign asking for `nights` nights (choose-nights). */
 export function withNightCount(campaign: Campaign, nights: number): Campaign {
-  return { ...campaign, time: { mode: 'choose-nights', nights } };
+  const halfNights = campaign.time.mode === 'choose-nights' && campaign.time.halfNights;
+  return { ...campaign, time: { mode: 'choose-nights', nights, ...(halfNights ? { halfNights } : {}) } };
 }
 
 /** What one plan gives as a row of the sweep. */

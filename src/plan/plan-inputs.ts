@@ -8,6 +8,7 @@ import type { ScheduleProblem } from '../schedule/types.js';
 import { computeNights } from '../sky/nights.js';
 import { computeWindows } from '../sky/visibility.js';
 import { candidateSlots, scheduleNights, setupStars, setupTargets, starTargets, type SlotDetail, type StarSetup, type TargetSetup } from './candidates.js';
+import { splitHalves } from './half-nights.js';
 import { observedVisits } from './observed-visits.js';
 import { updateFromRvs, type RvUpdate } from './orbit-update.js';
 import { history, openSlot, priorVisits, remaining, type History, type Remaining, type ReplanOptions } from './replan.js';
@@ -45,7 +46,7 @@ export function planInputs(given: Campaign, options: ReplanOptions): PlanInputs 
   const left = remaining(campaign, past, options.previous, allNights);
   const dates = new Set(left.nights.map((n) => n.localDate));
   const details = candidateSlots(campaign, nights, windows, stars).filter((d) => dates.has(d.localDate) && open(d));
-  const problem: ScheduleProblem = {
+  const whole: ScheduleProblem = {
     nights: left.nights,
     targets: stars.flatMap((s) => (s.scheduleTarget ? [s.scheduleTarget] : [])),
     slots: details.map((d) => d.slot),
@@ -57,5 +58,6 @@ export function planInputs(given: Campaign, options: ReplanOptions): PlanInputs 
     },
     prior: priorVisits(past, rv.fittedStars, allNights),
   };
+  const problem = campaign.time.mode === 'choose-nights' && campaign.time.halfNights ? splitHalves(whole, nights) : whole;
   return { campaign, rv, setups, stars, nights, windows, observed, past, left, details, problem };
 }

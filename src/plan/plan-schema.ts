@@ -130,6 +130,9 @@ export const targetSummarySchema = z.object({
 });
 export type TargetSummary = z.output<typeof targetSummarySchema>;
 
+/** A planned night held by one half of its dark time (half-nights.ts). */
+export const plannedHalfSchema = z.object({ localDate: isoDate, half: z.enum(['first', 'second']) });
+
 /** A next-best night in choose-nights mode (rank 1 is the best). */
 export const backupNightSchema = z.object({ localDate: isoDate, rank: num, utilityGain: num });
 
@@ -140,8 +143,9 @@ export const requestTotalsSchema = z.object({
   visits: wholeNonNegative,
   hours: nonNegative,
   /** Nights holding requested visits, and those of them whose requested visits all fit in one half of the dark time. */
-  nights: wholeNonNegative,
-  halfNights: z.array(z.object({ localDate: isoDate, half: z.enum(['first', 'second']) })),
+  /** A night planned by one half counts one half. */
+  nights: nonNegative,
+  halfNights: z.array(plannedHalfSchema),
   /** Dark hours of the planned nights that no requested visit uses. */
   spareHours: nonNegative,
 });
@@ -196,6 +200,8 @@ export interface Plan {
   nights: Night[];
   /** Nights chosen (choose-nights), given, or used (hours). */
   plannedDates: string[];
+  /** choose-nights with halfNights: the planned dates of which the plan holds one half only (the rest are whole). */
+  plannedHalves?: z.output<typeof plannedHalfSchema>[];
   /** Next-best nights in choose-nights mode, best first. */
   backups: z.output<typeof backupNightSchema>[];
   visits: PlannedVisit[];

@@ -85,10 +85,13 @@ export function openSlot(campaign: Campaign, h: History, now: Date | undefined):
 }
 
 /** The dates before the night in progress that are spent, and whether the night in progress is. */
-function spentNights(campaign: Campaign, h: History, previous: Plan | undefined): { before: string[]; current: boolean } {
+function spentNights(campaign: Campaign, h: History, previous: Plan | undefined): { before: string[]; nightsBefore: number; current: boolean } {
   const { start, end } = campaign.window;
   const dates = new Set([...(previous?.plannedDates ?? []), ...[...h.kept, ...h.observed].map((v) => v.localDate)].filter((d) => d >= start && d <= end));
-  return { before: [...dates].filter((d) => d < h.nowDate!).sort(), current: dates.has(h.nowDate!) };
+  const before = [...dates].filter((d) => d < h.nowDate!).sort();
+  // A night the previous plan held only half of counts as half a night (half-nights.ts).
+  const halves = new Set((previous?.plannedHalves ?? []).map((p) => p.localDate));
+  return { before, nightsBefore: before.reduce((sum, d) => sum + (halves.has(d) ? 0.5 : 1), 0), current: dates.has(h.nowDate!) };
 }
 
 export interface Remaining {
@@ -114,9 +117,9 @@ export function remaining(campaign: Campaign, h: History, previous: Plan | undef
   if (!h.nowDate) return { time, nights: ahead, spentDates: [] };
   const spent = spentNights(campaign, h, previous);
   const granted = spent.current && !lost.has(h.nowDate);
-  const left = Math.max(0, time.nights - spent.before.length - (granted ? 1 : 0));
+  const left = Math.max(0, time.nights - spent.nightsBefore - (granted ? 1 : 0));
   return {
-    time: { mode: 'choose-nights', nights: left },
+    time: { ...time, nights: left },
     nights: ahead.map((n) => (granted && n.localDate === h.nowDate ? { ...n, granted: true } : n)),
     spentDates: spent.before,
   };

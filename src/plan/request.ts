@@ -4,6 +4,7 @@
 // (first: before the middle of the dark span; second: after it).
 import type { Night } from '../model.js';
 import type { NeedResult } from '../schedule/need.js';
+import { darkMiddleMs, type Half, type PlannedHalf, plannedDarkHours } from './half-nights.js';
 import type { RequestTotals, TargetSummary } from './plan-schema.js';
 
 /** What the request needs of one planned visit. */
@@ -22,16 +23,22 @@ export interface PlanRequest {
   totals: RequestTotals;
 }
 
-function halfOf(night: Night | undefined, visits: RequestSlot[]): 'first' | 'second' | undefined {
+function halfOf(night: Night | undefined, visits: RequestSlot[]): Half | undefined {
   if (!night?.darkStart || !night.darkEnd) return undefined;
-  const middleMs = (night.darkStart.getTime() + night.darkEnd.getTime()) / 2;
+  const middleMs = darkMiddleMs(night);
   if (visits.every((v) => v.startMs + v.durationSec * 1000 <= middleMs)) return 'first';
   if (visits.every((v) => v.startMs >= middleMs)) return 'second';
   return undefined;
 }
 
-/** The plan's request from the need of each star, its planned slots by id and the nights planned. */
-export function planRequest(need: NeedResult, slots: ReadonlyMap<string, RequestSlot>, nights: Night[], plannedDates: string[]): PlanRequest {
+/** The plan's request from the need of each star, its planned slots by id and the nights planned (and those planned by one half). */
+export function planRequest(
+  need: NeedResult,
+  slots: ReadonlyMap<string, RequestSlot>,
+  nights: Night[],
+  plannedDates: string[],
+  plannedHalves: PlannedHalf[] = [],
+): PlanRequest {
   const requestedSlotIds = new Set<string>();
   const starHours = new Map<string, { visits: number; hours: number }>();
   for (const star of need.stars) {
@@ -53,19 +60,23 @@ export function planRequest(need: NeedResult, slots: ReadonlyMap<string, Request
   const requested = [...requestedSlotIds].map((id) => slots.get(id)!);
   const dates = [...new Set(requested.map((v) => v.localDate))].sort();
   const nightOf = new Map(nights.map((n) => [n.localDate, n]));
-  const halfNights = dates.flatMap((localDate) => {
-    const half = halfOf(
-      nightOf.get(localDate),
-      requested.filter((v) => v.localDate === localDate),
-    );
-    return half ? [{ localDate, half }] : [];
-  });
-  const planned = new Set(plannedDates);
-  const darkHours = nights.filter((n) => planned.has(n.localDate)).reduce((sum, n) => sum + n.darkHours, 0);
+  // Dates already planned by one half count half a night, and are not offered as half nights again.
+  const plannedHalf = new Set(plannedHalves.map((h) => h.localDate));
+  const nightsHeld = dates.reduce((sum, d) => sum + (plannedHalf.has(d) ? 0.5 : 1), 0);
+  const halfNights = dates
+    .filter((d) => !plannedHalf.has(d))
+    .flatMap((localDate) => {
+      const half = halfOf(
+        nightOf.get(localDate),
+        requested.filter((v) => v.localDate === localDate),
+      );
+      return half ? [{ localDate, half }] : [];
+    });
+  const darkHours = plannedDarkHours(nights, plannedDates, plannedHalves);
   const hours = requested.reduce((sum, v) => sum + v.durationSec, 0) / 3600;
   return {
     requestedSlotIds,
     byTarget,
-    totals: { probability: need.probability, visits: requested.length, hours, nights: dates.length, halfNights, spareHours: Math.max(0, darkHours - hours) },
+    totals: { probability: need.probability, visits: requested.length, hours, nights: nightsHeld, halfNights, spareHours: Math.max(0, darkHours - hours) },
   };
 }

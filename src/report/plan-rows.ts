@@ -1,5 +1,6 @@
 import { DateTime } from 'luxon';
 import type { Plan, PlannedVisit, TargetSummary } from '../plan/plan-schema.js';
+import { darkMiddleMs } from '../plan/half-nights.js';
 import { clockTime } from '../sky/local-time.js';
 import { fmt, percent, type Column } from './table.js';
 
@@ -54,7 +55,16 @@ export function nightHeading(plan: Plan, localDate: string): string {
   if (!night.darkStart || !night.darkEnd) return `${localDate} ${weekday}  no dark span${night.note ? ` (${night.note})` : ''}`;
   const moon = `Moon ${percent(night.moon.illumination)}${night.moon.upDuringDark ? ' (up)' : ' (down)'}`;
   const plannedHours = plan.visits.filter((v) => v.localDate === localDate).reduce((sum, v) => sum + v.durationSec, 0) / 3600;
-  const dark = `dark ${clock(night.darkStart, zone)}-${clock(night.darkEnd, zone)} local (${fmt(night.darkHours, 1)} h, ${fmt(plannedHours, 1)} h planned)`;
+  const half = plan.plannedHalves?.find((h) => h.localDate === localDate)?.half;
+  const middle = new Date(darkMiddleMs(night));
+  const [from, to, hours] =
+    half === 'first'
+      ? [night.darkStart, middle, night.darkHours / 2]
+      : half === 'second'
+        ? [middle, night.darkEnd, night.darkHours / 2]
+        : [night.darkStart, night.darkEnd, night.darkHours];
+  const span = `${half ? `${half} half, ` : ''}dark ${clock(from, zone)}-${clock(to, zone)} local`;
+  const dark = `${span} (${fmt(hours, 1)} h, ${fmt(plannedHours, 1)} h planned)`;
   return `${localDate} ${weekday}  ${dark}, ${moon}`;
 }
 
@@ -157,7 +167,7 @@ export function requestLine(plan: Plan): string | undefined {
   const dark = plan.totals.darkHours !== undefined ? `; ${fmt(r.spareHours, 1)} of their ${fmt(plan.totals.darkHours, 1)} dark hours are spare` : '';
   return (
     `Request from need (each goal with ${percent(r.probability)} probability under the weather): ` +
-    `${r.visits} of the ${plan.visits.filter((v) => !v.kept).length} visits, ${fmt(r.hours, 1)} h on ${r.nights} nights${half}${dark}`
+    `${r.visits} of the ${plan.visits.filter((v) => !v.kept).length} visits, ${fmt(r.hours, 1)} h on ${nightCount(r.nights)} nights${half}${dark}`
   );
 }
 
@@ -176,9 +186,20 @@ export function targetNotes(plan: Plan): string[] {
   return [needed, weather, searchKNote(plan)].filter((note): note is string => note !== undefined);
 }
 
+/** A count of nights: whole, or to the half night. */
+export const nightCount = (nights: number) => fmt(nights, Number.isInteger(nights) ? 0 : 1);
+
+/** "14 nights", or with half nights planned "10 nights (20 dates, 20 of them half nights)". */
+export function nightsText(plan: Plan): string {
+  const halves = plan.plannedHalves?.length ?? 0;
+  const nights = `${nightCount(plan.totals.nights)} nights`;
+  return halves ? `${nights} (${plan.plannedDates.length} dates, ${halves} of them half nights)` : nights;
+}
+
 export function totalsLine(plan: Plan): string {
   const t = plan.totals;
-  return `${t.visits} visits on ${t.nights} nights: ${fmt(t.exposureHours, 1)} h exposure + ${fmt(t.overheadHours, 1)} h overheads = ${fmt(t.totalHours, 1)} h`;
+  const hours = `${fmt(t.exposureHours, 1)} h exposure + ${fmt(t.overheadHours, 1)} h overheads = ${fmt(t.totalHours, 1)} h`;
+  return `${t.visits} visits on ${nightsText(plan)}: ${hours}`;
 }
 
 export const ADVISORY =

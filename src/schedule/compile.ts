@@ -46,6 +46,8 @@ export interface CompiledProblem {
   slotTarget: Int32Array;
   /** Position of the slot's night in `nightOrder`. */
   slotNight: Int32Array;
+  /** The slot's calendar night (nightDay of its night). */
+  slotDay: Int32Array;
   startMs: Float64Array;
   endMs: Float64Array;
   hours: Float64Array;
@@ -61,6 +63,9 @@ export interface CompiledProblem {
   /** Problem nights sorted by their first slot's start (nights without slots last). */
   nightOrder: number[];
   nightHours: Float64Array;
+  /** Per night position: its calendar night, 0 .. dayCount - 1 in time order (types.ts ScheduleNight.calendarNight). */
+  nightDay: Int32Array;
+  dayCount: number;
   /** Per night position: 1 for a granted night (types.ts ScheduleNight.granted). */
   nightGranted: Uint8Array;
   /** Per night position: the night's middle (midBjdTdb scale), where nightly activity is evaluated. */
@@ -93,6 +98,17 @@ function checkTarget(t: ScheduleTarget): void {
   const goal = search?.goalCompleteness ?? 0;
   if (search && !(positive(search) && goal > 0 && goal <= 1 && search.periodMinDays > 0 && search.periodMaxDays >= search.periodMinDays))
     fail(`search ${search.id} needs priority, kMps > 0, a completeness goal in (0, 1] and 0 < periodMinDays <= periodMaxDays`);
+}
+
+/** Calendar night of each night position, numbered in the order they first appear. */
+function calendarNights(problem: ScheduleProblem, nightOrder: number[]): { nightDay: Int32Array; dayCount: number } {
+  const ids = new Map<number, number>();
+  const nightDay = Int32Array.from(nightOrder, (n) => {
+    const key = problem.nights[n]!.calendarNight ?? problem.nights[n]!.index;
+    if (!ids.has(key)) ids.set(key, ids.size);
+    return ids.get(key)!;
+  });
+  return { nightDay, dayCount: ids.size };
 }
 
 export function compileProblem(problem: ScheduleProblem): CompiledProblem {
@@ -171,6 +187,7 @@ export function compileProblem(problem: ScheduleProblem): CompiledProblem {
     slotSource: Int32Array.from(order),
     slotTarget: new Int32Array(S),
     slotNight: new Int32Array(S),
+    slotDay: new Int32Array(S),
     startMs: new Float64Array(S),
     endMs: new Float64Array(S),
     hours: new Float64Array(S),
@@ -182,6 +199,7 @@ export function compileProblem(problem: ScheduleProblem): CompiledProblem {
     nightCount: N,
     nightOrder,
     nightHours: Float64Array.from(nightOrder, (n) => problem.nights[n]!.hoursAvailable),
+    ...calendarNights(problem, nightOrder),
     nightGranted: Uint8Array.from(nightOrder, (n) => (problem.nights[n]!.granted ? 1 : 0)),
     nightMidBjdTdb: Float64Array.from(nightOrder, (n) => problem.nights[n]!.midBjdTdb ?? (midCount[n]! > 0 ? midSum[n]! / midCount[n]! : 0)),
     nightFrom: new Int32Array(N),
@@ -203,6 +221,7 @@ export function compileProblem(problem: ScheduleProblem): CompiledProblem {
     const n = rank[nightPos.get(s.nightIndex)!]!;
     c.slotTarget[j] = t;
     c.slotNight[j] = n;
+    c.slotDay[j] = c.nightDay[n]!;
     c.startMs[j] = s.startMs;
     c.endMs[j] = s.startMs + s.durationSec * 1000;
     c.hours[j] = s.durationSec / 3600;
@@ -294,7 +313,7 @@ export class SlotVisit implements InformationVisit {
     return this.c.weight[this.slot]!;
   }
   get night(): number {
-    return this.c.slotNight[this.slot]!;
+    return this.c.slotDay[this.slot]!;
   }
   get nightBjdTdb(): number {
     return this.c.nightMidBjdTdb[this.c.slotNight[this.slot]!]!;

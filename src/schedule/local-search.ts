@@ -84,8 +84,8 @@ function splitPass(state: PlanState, settings: LocalSearchSettings): boolean {
   for (const a of shuffled(state.chosenSlots(), settings.rng)) {
     const t = c.slotTarget[a]!;
     if (!state.chosen[a] || c.visitsPerNight[t]! < 2) continue;
-    const n = c.slotNight[a]!;
-    const mine = Array.from(c.targetSlots[t]!).filter((j) => c.slotNight[j] === n);
+    const day = c.slotDay[a]!;
+    const mine = Array.from(c.targetSlots[t]!).filter((j) => c.slotDay[j] === day);
     const before = state.utility;
     state.remove(a);
     let best: [number, number] | undefined;

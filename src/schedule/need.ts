@@ -86,7 +86,7 @@ export function needFromPlan(problem: ScheduleProblem, result: ScheduleResult, p
   // firstReached[at][n]: trials in which outcome at is first reached by the first n visits of its star.
   const firstReached = outcomes.ids.map((_, at) => new Float64Array(order[outcomes.starOfOutcome[at]!]!.length + 1));
   const value = new Float64Array(outcomes.ids.length);
-  const clear = new Uint8Array(c.nightCount);
+  const clear = new Uint8Array(c.dayCount);
   const rng = createRng(seed);
   for (let trial = 0; trial < trials; trial++) {
     drawWeather(rng, usedNights, clearProbability, clear);
@@ -95,7 +95,7 @@ export function needFromPlan(problem: ScheduleProblem, result: ScheduleResult, p
       if (!positions.length) continue;
       // All the clear visits first: an outcome they leave short is short for every prefix.
       outcomes.start(t);
-      for (const j of order[t]!) if (clear[c.slotNight[j]!]) outcomes.add(j);
+      for (const j of order[t]!) if (clear[c.slotDay[j]!]) outcomes.add(j);
       outcomes.values(value);
       let open = positions.filter((at) => reachesGoal(value[at]!, outcomes.goal[at]!));
       if (!open.length) continue;
@@ -110,7 +110,7 @@ export function needFromPlan(problem: ScheduleProblem, result: ScheduleResult, p
         });
         const j = order[t]![n];
         if (j === undefined || !open.length) break;
-        if (!clear[c.slotNight[j]!]) continue;
+        if (!clear[c.slotDay[j]!]) continue;
         outcomes.add(j);
         outcomes.values(value);
       }

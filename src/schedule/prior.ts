@@ -15,7 +15,7 @@ export interface CompiledPrior {
   /** Per star: number of prior visits and the sum of their weights. */
   count: Int32Array;
   weightSum: Float64Array;
-  /** Prior visits of star t on the date of problem night position n, keyed t * nightCount + n (counted against visitsPerNight). */
+  /** Prior visits of star t on the date of calendar night d, keyed t * nightCount + d (counted against visitsPerNight). */
   inNight: Map<number, number>;
 }
 
@@ -23,10 +23,12 @@ export function compilePrior(c: CompiledProblem): CompiledPrior {
   const { problem } = c;
   const prior = problem.prior ?? [];
   const targetPos = new Map(problem.targets.map((t, i) => [t.id, i]));
-  // Night keys: the compiled position of a problem night with that date, else one past them.
+  // Night keys: the calendar night of a problem night with that date, else one past them.
   const problemKey = new Map<string, number>();
+  const dayMid = new Float64Array(c.nightCount);
   c.nightOrder.forEach((n, position) => {
-    problemKey.set(problem.nights[n]!.localDate, position);
+    problemKey.set(problem.nights[n]!.localDate, c.nightDay[position]!);
+    dayMid[c.nightDay[position]!] = c.nightMidBjdTdb[position]!;
   });
   const otherNights = new Map<string, { key: number; sumDays: number; count: number }>();
   for (const v of prior) {
@@ -60,7 +62,7 @@ export function compilePrior(c: CompiledProblem): CompiledPrior {
     if (!model) continue;
     const other = otherNights.get(v.localDate);
     const night = position ?? other!.key;
-    const nightBjdTdb = position !== undefined ? c.nightMidBjdTdb[position]! : other!.sumDays / other!.count;
+    const nightBjdTdb = position !== undefined ? dayMid[position]! : other!.sumDays / other!.count;
     const rows = designRows(model, v.midBjdTdb);
     if (v.phaseInPrior) keepOffsetAndK(rows, model);
     out.visits[t]!.push({ rows, offset: 0, weight, night, nightBjdTdb });

@@ -235,21 +235,22 @@ export class PlanState {
     if (mine.length >= c.maxVisits[t]! || this.targetHours[t]! + h > c.maxHours[t]! + 1e-9) return false;
     const k = lowerBound(mine, j);
     const start = c.startMs[j]!;
-    // With onePerNight the star's visits of night n are contiguous around k (slots sorted by night,
-    // then start): each is held to the same-night spacing and counted; the nearest visit of
+    // With onePerNight the star's visits of its calendar night are contiguous around k (slots sorted
+    // by night, then start; the halves of a night follow each other): each is held to the same-night spacing and counted; the nearest visit of
     // another night on either side to minSpacing (the next ones are further still).
-    let sameNight = c.onePerNight && c.prior.inNight.size > 0 ? (c.prior.inNight.get(t * c.nightCount + n) ?? 0) : 0;
+    const day = c.slotDay[j]!;
+    let sameNight = c.onePerNight && c.prior.inNight.size > 0 ? (c.prior.inNight.get(t * c.nightCount + day) ?? 0) : 0;
     let below = k - 1;
     let above = k;
     if (c.onePerNight) {
-      for (; below >= 0 && c.slotNight[mine[below]!] === n; below--) {
+      for (; below >= 0 && c.slotDay[mine[below]!] === day; below--) {
         if (Math.abs(c.startMs[mine[below]!]! - start) < c.sameNightSpacingMs) return false;
         sameNight++;
       }
     }
     if (below >= 0 && Math.abs(c.startMs[mine[below]!]! - start) < c.spacingMs) return false;
     if (c.onePerNight) {
-      for (; above < mine.length && c.slotNight[mine[above]!] === n; above++) {
+      for (; above < mine.length && c.slotDay[mine[above]!] === day; above++) {
         if (Math.abs(c.startMs[mine[above]!]! - start) < c.sameNightSpacingMs) return false;
         sameNight++;
       }

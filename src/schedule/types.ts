@@ -23,6 +23,12 @@ export interface ScheduleNight {
    * start, never closed, and not counted in `time.nights`.
    */
   granted?: boolean;
+  /**
+   * The calendar night this one is part of (default: its own index). Nights that share it are
+   * halves of one night, each chosen on its own: one weather draw, one nightly noise term, and one
+   * count of a star's visits under constraints.onePerNight. Their slots must not overlap in time.
+   */
+  calendarNight?: number;
 }
 
 /** One possible visit: a star observed from `startMs` for `durationSec` in one night. */

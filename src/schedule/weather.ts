@@ -28,7 +28,7 @@ export interface WeatherOutcome {
   targets: { targetId: string; goalProbability: number; meanKOverSigmaK: number }[];
 }
 
-/** The plan's visits as compiled slot positions, each star's in time order, and the nights they use with their clear probabilities. */
+/** The plan's visits as compiled slot positions, each star's in time order, and the calendar nights they use with their clear probabilities. */
 export function plannedSlots(c: CompiledProblem, result: ScheduleResult): { perTarget: number[][]; usedNights: number[]; clearProbability: number[] } {
   const problem = c.problem;
   const byId = new Map<string, number>();
@@ -38,15 +38,17 @@ export function plannedSlots(c: CompiledProblem, result: ScheduleResult): { perT
     if (j === undefined) throw new Error(`schedule result names slot ${id}, which the problem does not have`);
     return j;
   });
-  const usedNights = [...new Set(visits.map((j) => c.slotNight[j]!))].sort((a, b) => a - b);
-  const clearProbability = usedNights.map((n) => problem.nights[c.nightOrder[n]!]!.clearProbability);
+  const usedNights = [...new Set(visits.map((j) => c.slotDay[j]!))].sort((a, b) => a - b);
+  const dayNight = new Map<number, number>();
+  for (const j of visits) dayNight.set(c.slotDay[j]!, c.slotNight[j]!);
+  const clearProbability = usedNights.map((d) => problem.nights[c.nightOrder[dayNight.get(d)!]!]!.clearProbability);
   const perTarget: number[][] = problem.targets.map(() => []);
   for (const j of visits) perTarget[c.slotTarget[j]!]!.push(j);
   return { perTarget, usedNights, clearProbability };
 }
 
 /**
- * The weather draws of one trial: clear[n] = 1 for each used night that is clear. The same seed
+ * The weather draws of one trial: clear[d] = 1 for each used calendar night that is clear. The same seed
  * gives the same sequence of draws in every replay of the same plan (weather.ts, need.ts).
  */
 export function drawWeather(rng: Rng, usedNights: number[], clearProbability: number[], clear: Uint8Array): number {
@@ -67,7 +69,7 @@ export function simulateWeather(problem: ScheduleProblem, result: ScheduleResult
   const overshoot = options.overshootWeight ?? 0.1;
   const { perTarget, usedNights, clearProbability } = plannedSlots(c, result);
   const rng = createRng(seed);
-  const clear = new Uint8Array(c.nightCount);
+  const clear = new Uint8Array(c.dayCount);
   const outcomes = new StarOutcomes(c);
   const reached = new Float64Array(outcomes.ids.length);
   const sumRatio = new Float64Array(outcomes.ids.length);
@@ -87,7 +89,7 @@ export function simulateWeather(problem: ScheduleProblem, result: ScheduleResult
     for (let t = 0; t < c.targetCount; t++) {
       // Prior visits were made whatever the weather ahead.
       outcomes.start(t);
-      for (const j of perTarget[t]!) if (clear[c.slotNight[j]!]) outcomes.add(j);
+      for (const j of perTarget[t]!) if (clear[c.slotDay[j]!]) outcomes.add(j);
       outcomes.values(value);
       for (const at of outcomes.ofStar[t]!) {
         sumRatio[at] += value[at]!;

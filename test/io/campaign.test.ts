@@ -124,6 +124,16 @@ describe('campaign files', () => {
       /campaign\.yaml: goals\.probability = 1: a probability from 0\.5 to 0\.99$/,
     ],
     [
+      'half a night without half nights',
+      `${BASE}time: { mode: choose-nights, nights: 6.5 }\n`,
+      /campaign\.yaml: time\.nights = 6\.5: a whole number of nights \(or set halfNights: true\)$/,
+    ],
+    [
+      'a quarter night with half nights',
+      `${BASE}time: { mode: choose-nights, nights: 6.25, halfNights: true }\n`,
+      /campaign\.yaml: time\.nights = 6\.25: a multiple of 0\.5 nights$/,
+    ],
+    [
       'hours mode without hours',
       `${BASE}time: { mode: hours }\n`,
       /campaign\.yaml: time\.hours = \(missing\): required: a positive number of hours, at most 5000$/,
@@ -131,7 +141,7 @@ describe('campaign files', () => {
     [
       'nights given as text',
       `${BASE}time: { mode: choose-nights, nights: ten }\n`,
-      /campaign\.yaml: time\.nights = "ten": a whole number of nights, 1 to 366$/,
+      /campaign\.yaml: time\.nights = "ten": a whole number of nights, 1 to 366 \(halves with halfNights\)$/,
     ],
     [
       'a missing target list',

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { optimiseSchedule } from '../../src/schedule/optimise.js';
 import { referenceKOverSigmaK } from '../../reference/schedule.js';
 import { syntheticProblem } from '../../reference/synthetic.js';
-import type { ScheduleProblem, ScheduleResult, TargetOutcome } from '../../src/schedule/types.js';
+import type { CandidateSlot, ScheduleProblem, ScheduleResult, TargetOutcome } from '../../src/schedule/types.js';
 import { simulateWeather } from '../../src/schedule/weather.js';
 
 const settings = { overshootWeight: 0.1 };
@@ -32,10 +32,10 @@ function problemWith(clearProbability: number, seed: number): ScheduleProblem {
  * probability 0.6), with its probability; per target, the probability of reaching its goal, and
  * the probability of reaching every goal together.
  */
-function exactOutcomes(problem: ScheduleProblem, result: ScheduleResult) {
+function exactOutcomes(problem: ScheduleProblem, result: ScheduleResult, nightOf = (s: CandidateSlot) => s.nightIndex) {
   const byId = new Map(problem.slots.map((s) => [s.slotId, s]));
   const visits = result.slotIds.map((id) => byId.get(id)!);
-  const nights = [...new Set(visits.map((v) => v.nightIndex))];
+  const nights = [...new Set(visits.map(nightOf))];
   const exact = result.targets.map(() => 0);
   let exactAll = 0;
   for (let mask = 0; mask < 1 << nights.length; mask++) {
@@ -43,7 +43,7 @@ function exactOutcomes(problem: ScheduleProblem, result: ScheduleResult) {
     const weight = nights.reduce((p, n) => p * (clear.has(n) ? 0.6 : 0.4), 1);
     const ratios = referenceKOverSigmaK(
       problem,
-      visits.filter((v) => clear.has(v.nightIndex)),
+      visits.filter((v) => clear.has(nightOf(v))),
     );
     const reached = ratios.map((r, i) => r >= goalOf(result.targets[i]!) * (1 - 1e-9));
     reached.forEach((yes, i) => {
@@ -52,6 +52,19 @@ function exactOutcomes(problem: ScheduleProblem, result: ScheduleResult) {
     if (reached.every(Boolean)) exactAll += weight;
   }
   return { exact, exactAll, nights };
+}
+
+/** problemWith(0.6, seed) with low goals, so that reaching them is a matter of luck with the weather. */
+function loweredProblem(seed: number): ScheduleProblem {
+  const problem = problemWith(0.6, seed);
+  return {
+    ...problem,
+    targets: problem.targets.map((t) => ({
+      ...t,
+      planets: t.planets.map((p) => ({ ...p, goalSignificance: 1 })),
+      ...(t.search ? { search: { ...t.search, goalSignificance: 1 } } : {}),
+    })),
+  };
 }
 
 describe('simulateWeather', () => {
@@ -76,16 +89,7 @@ describe('simulateWeather', () => {
   });
 
   it('agrees with an exact sum over every weather outcome, within Monte Carlo error', () => {
-    const problem = problemWith(0.6, 5);
-    // Low goals so that reaching them is a matter of luck with the weather.
-    const lowered = {
-      ...problem,
-      targets: problem.targets.map((t) => ({
-        ...t,
-        planets: t.planets.map((p) => ({ ...p, goalSignificance: 1 })),
-        ...(t.search ? { search: { ...t.search, goalSignificance: 1 } } : {}),
-      })),
-    };
+    const lowered = loweredProblem(5);
     const result = optimiseSchedule(lowered, { seed: 1, ...settings });
     const { exact, exactAll, nights } = exactOutcomes(lowered, result);
     const trials = 1000;
@@ -119,5 +123,34 @@ describe('simulateWeather', () => {
     const outcome = simulateWeather(two, result, trials, 21, settings);
     expect(Math.abs(outcome.allGoalsProbability - exactAll)).toBeLessThanOrEqual(4 * Math.sqrt((exactAll * (1 - exactAll)) / trials) + 1e-9);
     expect(outcome.allGoalsProbability).toBeLessThanOrEqual(Math.min(...outcome.targets.map((t) => t.goalProbability)));
+  });
+
+  it('draws one weather for the two halves of a night (calendarNight), against the exact sum over calendar nights', () => {
+    const whole = loweredProblem(5);
+    // Each night split at its middle (3 h after the synthetic night's start); a slot across it is dropped.
+    const middleMs = (s: CandidateSlot) => Date.UTC(2027, 0, 1, 20) + s.nightIndex * 86_400_000 + 3 * 3_600_000;
+    const inHalf = (s: CandidateSlot) => (s.startMs + s.durationSec * 1000 <= middleMs(s) ? 0 : s.startMs >= middleMs(s) ? 1 : -1);
+    const split: ScheduleProblem = {
+      ...whole,
+      nights: whole.nights.flatMap((n) => [0, 1].map((k) => ({ ...n, index: 2 * n.index + k, calendarNight: n.index, hoursAvailable: n.hoursAvailable / 2 }))),
+      slots: whole.slots.filter((s) => inHalf(s) >= 0).map((s) => ({ ...s, nightIndex: 2 * s.nightIndex + inHalf(s) })),
+      // 20 of the 28 halves: some nights are planned in both.
+      time: { mode: 'choose-nights', nights: 20 },
+    };
+    const result = optimiseSchedule(split, { seed: 1, ...settings });
+    const byId = new Map(split.slots.map((s) => [s.slotId, s]));
+    const visits = result.slotIds.map((id) => byId.get(id)!);
+    // One visit of a star a calendar night (onePerNight), and some night planned in both halves.
+    const starNights = visits.map((v) => `${v.targetId}/${v.nightIndex >> 1}`);
+    expect(new Set(starNights).size).toBe(starNights.length);
+    const halvesUsed = new Set(visits.map((v) => v.nightIndex));
+    expect([...halvesUsed].some((h) => h % 2 === 0 && halvesUsed.has(h + 1))).toBe(true);
+    const { exact } = exactOutcomes(split, result, (s) => s.nightIndex >> 1);
+    const trials = 4000;
+    const outcome = simulateWeather(split, result, trials, 21, settings);
+    outcome.targets.forEach((t, i) => {
+      const tolerance = 4 * Math.sqrt((exact[i]! * (1 - exact[i]!)) / trials) + 1e-9;
+      expect(Math.abs(t.goalProbability - exact[i]!)).toBeLessThanOrEqual(tolerance);
+    });
   });
 });

@@ -1,6 +1,6 @@
 import { extent } from '../../extent.js';
 import type { Plan, TargetSummary } from '../../plan/plan-schema.js';
-import { neededText } from '../plan-rows.js';
+import { nightCount, neededText } from '../plan-rows.js';
 import { fmt, percent, type Column } from '../table.js';
 import { type LevelMass, type LevelRow, levelRows } from '../../rv/injection-map.js';
 import type { DetectionMapData } from './chart-detection-map.js';
@@ -201,7 +201,9 @@ export function proposalParagraph(plan: Plan, maps: ReadonlyMap<string, Detectio
   const search = observed.filter((s) => s.kind === 'search');
   const probabilities = observed.flatMap((s) => (s.goalProbability === undefined ? [] : [s.goalProbability * 100]));
   const asked = askedFor(plan);
-  const nightsAsked = c.time.mode === 'choose-nights' ? `${asked.nights} nights` : `${fmt(asked.hours, 1)} hours on ${asked.nights} nights`;
+  const halves = plan.plannedHalves?.length ? ` (the plan's ${plan.plannedDates.length} dates, ${plan.plannedHalves.length} of them half nights)` : '';
+  const nightsAsked =
+    c.time.mode === 'choose-nights' ? `${nightCount(asked.nights)} nights${halves}` : `${fmt(asked.hours, 1)} hours on ${nightCount(asked.nights)} nights`;
   const sentences = [
     `We request ${nightsAsked} between ${c.window.start} and ${c.window.end} with ${c.instrument.name} at ${c.site.name}, ` +
       `for ${asked.visits} radial-velocity visits of ${observed.length} stars: ${fmt(asked.hours, 1)} h in total, ` +
