@@ -174,6 +174,11 @@ function spareSentence(plan: Plan): string {
         3,
       )})`
     : "no night's requested visits fit in one half of it";
+  // A plan that already chose half nights has nothing more to gain from that advice.
+  const planHalves =
+    plan.campaign.time.mode === 'choose-nights' && !plan.campaign.time.halfNights
+      ? '; crest plan --half-nights plans the same count as half nights on up to twice as many dates'
+      : '';
   const short = shortTargets(plan);
   const use = short.length
     ? `, or be used for the targets that fall short, lowest priority first: ${listAtMost(
@@ -183,7 +188,7 @@ function spareSentence(plan: Plan): string {
     : ', or go to other programmes';
   return (
     ` Of the ${fmt(darkHours, 1)} dark hours of these nights, ${fmt(r.spareHours, 1)} h (${percent(r.spareHours / darkHours)}) hold no requested visit. ` +
-    `They could be given back by asking for fewer nights or for half nights (${halves})${use}.`
+    `They could be given back by asking for fewer nights or for half nights (${halves}${planHalves})${use}.`
   );
 }
 
