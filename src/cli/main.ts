@@ -1,5 +1,6 @@
 import { CommanderError } from 'commander';
 import { CrestError } from '../errors.js';
+import { commandLineMessage } from './command-line-error.js';
 import { buildProgram } from './program.js';
 
 /**
@@ -17,7 +18,8 @@ export async function main(argv: string[]): Promise<number> {
   } catch (err) {
     if (err instanceof CommanderError) {
       if (err.code === 'commander.helpDisplayed' || err.code === 'commander.version' || err.exitCode === 0) return 0;
-      return 2; // commander has already printed its one-line message
+      process.stderr.write(`crest: command line: ${commandLineMessage(err.message)}\n`);
+      return 2;
     }
     if (err instanceof CrestError) {
       process.stderr.write(`crest: ${err.message}\n`);

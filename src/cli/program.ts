@@ -17,8 +17,8 @@ export function buildProgram(): Command {
     .description('Plan radial-velocity exoplanet campaigns: visibility, detectability and phase-aware scheduling.')
     .version('0.1.0')
     .option('--debug', 'show stack traces for internal errors')
-    // Commander's own messages (unknown option, missing argument) as one line, like Crest's.
-    .configureOutput({ outputError: (text, write) => write(`crest: ${text.trim().replace(/\s*\n\s*/g, ' ')}\n`) })
+    // Commander's own messages (unknown option, missing argument) are printed by main.ts in Crest's shape.
+    .configureOutput({ outputError: () => undefined })
     .exitOverride();
   const commands: ((program: Command) => Command)[] = [
     registerAmplitude,

@@ -66,7 +66,11 @@ const CASES: [string, string[], RegExp][] = [
   ],
   ['--now without a zone', ['plan', '--now', '2027-03-15T02:00'], /^crest: command line: --now = "2027-03-15T02:00"/],
   ['--lost with a bad date', ['plan', '--lost', '2027-02-30'], /^crest: command line: --lost = "2027-02-30"/],
-  ['next without --at', ['next'], /^crest: error: required option '--at <time>' not specified/],
+  ['next without --at', ['next'], /^crest: command line: --at: required option not specified$/],
+  ['an unknown option, with the nearest', ['amplitude', '--star-mas', '1'], /^crest: command line: --star-mas: unknown option \(did you mean --star-mass\?\)$/],
+  ['an unknown command', ['plot'], /^crest: command line: plot: unknown command \(did you mean plan\?\)$/],
+  ['a flag without its value', ['plan', '--seed'], /^crest: command line: --seed: option argument missing$/],
+  ['too many arguments', ['plan', 'a.yaml', 'b.yaml'], /^crest: command line: plan: too many arguments \(at most 1, got 2\)$/],
   ['negative period flag', [...AMP.slice(0, 3), '--period', '-3', '--k', '2'], /^crest: command line: --period = "-3"/],
   [
     'e >= 1 in the target list',

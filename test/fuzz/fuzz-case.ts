@@ -98,7 +98,7 @@ export function caseFaults(c: FuzzCase, run: CaseRun, dir: string): string[] {
 }
 
 /**
- * A located message: `crest: command line: --flag ...`, commander's `crest: error: ... '--flag'`,
+ * A located message: `crest: command line: --flag ...` (the parser's own complaints too),
  * or `crest: <one of the case's files or a bundled file>: ...`.
  */
 function hasPlace(line: string, c: FuzzCase): boolean {
@@ -106,7 +106,6 @@ function hasPlace(line: string, c: FuzzCase): boolean {
   if (!m) return false;
   const place = m[1]!;
   if (place === 'command line') return /^crest: command line: \S/.test(line);
-  if (place === 'error') return /'[^']+'/.test(line);
   // Messages are one line: a file name with a line break in it is shown with a space.
   const norm = (text: string) => path.basename(text.replace(/\s+/g, ' ').trim());
   const base = norm(place);
