@@ -1,6 +1,7 @@
 import { Command } from 'commander';
 import { registerAmplitude } from './amplitude.js';
 import { registerDetect } from './detect.js';
+import { registerInstruments } from './instruments.js';
 import { registerMap } from './map.js';
 import { registerNext } from './next.js';
 import { registerNights } from './nights.js';
@@ -23,6 +24,7 @@ export function buildProgram(): Command {
   const commands: ((program: Command) => Command)[] = [
     registerAmplitude,
     registerDetect,
+    registerInstruments,
     registerMap,
     registerNext,
     registerNights,

@@ -11,6 +11,11 @@ export function readBundledSites(): Site[] {
   return listIds(SITES_DIR).map((id) => readSite(path.join(SITES_DIR, `${id}.json`)));
 }
 
+/** Every bundled instrument profile, sorted by id. */
+export function readBundledInstruments(): Instrument[] {
+  return listIds(INSTRUMENTS_DIR).map((id) => readInstrument(path.join(INSTRUMENTS_DIR, `${id}.json`)));
+}
+
 /** A site from a command-line `--site` value: a bundled id or a path. */
 export function siteFromFlag(ref: string): Site {
   return readSite(resolveRef(ref, SITES_DIR, 'site', { file: 'command line', field: '--site', baseDir: process.cwd() }));
