@@ -40,6 +40,7 @@ interface MapFlags {
   csv?: boolean;
   shard?: ShardSpec;
   merge?: boolean;
+  quiet?: boolean;
 }
 
 /** `A:B` with 0 < A < B ≤ max, as a flag parser. */
@@ -218,7 +219,7 @@ async function runMap(opts: MapFlags): Promise<void> {
   const svgName = (targetId: string) => `map-${slug(targetId)}.svg`;
   const names = jobs.flatMap((j) => (j.kind === 'search' ? [svgName(j.targetId), mapDataFile(j.targetId)] : [svgName(j.targetId)]));
   checkOutFolder(outDir, [...names, 'report.html'], [opts.plan]);
-  const progress = stderrProgress();
+  const progress = stderrProgress({ quiet: opts.quiet });
   const results: MapResult[] = [];
   for (const [k, job] of jobs.entries()) {
     const result = await runJob(job, settings, merged ? { merged: merged.get(k) ?? [] } : { threads, progress });
@@ -280,7 +281,7 @@ async function runShard(opts: MapFlags, shard: ShardSpec, jobs: MapJob[], reques
   }
   const name = mapShardFile(shard.index, shard.count);
   checkOutFolder(outDir, [name], [opts.plan]);
-  const cells = await computeShard(jobs, shard, threads, stderrProgress());
+  const cells = await computeShard(jobs, shard, threads, stderrProgress({ quiet: opts.quiet }));
   const written = writeOutputSet(outDir, { [name]: mapShardText(shardOf(opts.plan, request, shard, cells)) }, [opts.plan]);
   const searches = jobs.filter((j) => j.kind === 'search').length;
   console.log(
@@ -335,5 +336,6 @@ export function registerMap(program: Command): Command {
     .option('--csv', 'print CSV, one row per cell and method')
     .option('--shard <i/n>', 'compute part i (from 0) of n of the blind-search cells into map-shard-<i>-of-<n>.json in the --out folder', shardFlag)
     .option('--merge', 'join the parts in the --out folder and write what one run writes (same flags as the parts)')
+    .option('--quiet', 'no progress bar on stderr (it is shown only on a terminal)')
     .action(runMap);
 }

@@ -6,10 +6,12 @@ import { readCampaign } from '../io/campaign.js';
 import { DEMO_CAMPAIGN } from '../io/paths.js';
 import { checkOutFolder } from '../io/out-folder.js';
 import { writeOutputSet } from '../io/output-set.js';
+import { planWithPathsFrom } from '../io/plan-paths.js';
 import { slug } from '../io/slug.js';
 import { buildPlan } from '../plan/build-plan.js';
+import { PLAN_STAGES } from '../plan/plan-stages.js';
 import { nightsSweep, withNightCount } from '../plan/nights-sweep.js';
-import { stderrProgress } from './progress.js';
+import { type Progress, stderrProgress } from './progress.js';
 import { renderReportHtml } from '../report/html/report-html.js';
 import { renderPlanCsv } from '../report/plan-csv.js';
 import { withIcsSequences } from '../report/ics-sequence.js';
@@ -33,7 +35,11 @@ interface PlanFlags {
   now?: Date;
   lost?: string[];
   sweepNights?: [number, number];
+  quiet?: boolean;
 }
+
+/** What a plan run reports as it goes: the plan's own stages, then the files. */
+const RUN_STAGES = [...PLAN_STAGES, 'report', 'files'] as const;
 
 /** The campaign with the command line's lost nights added to its own. */
 function withLost(campaign: Campaign, lost: string[] | undefined): Campaign {
@@ -106,43 +112,59 @@ export function registerPlan(program: Command): Command {
       sweepFlag,
     )
     .option('--json', 'print plan.json on stdout instead of the summary')
+    .option('--quiet', 'no progress line on stderr (it is shown only on a terminal)')
     .action(async (file: string | undefined, opts: PlanFlags) => {
-      const campaignFile = file ?? path.relative(process.cwd(), DEMO_CAMPAIGN);
-      const campaign = withLost(withNights(withHalves(readCampaign(campaignFile), opts.halfNights), opts.nights), opts.lost);
-      if (opts.sweepNights) checkChoosesNights(campaign, '--sweep-nights', opts.sweepNights.join(':'));
-      const outDir = opts.out ?? path.join('crest-out', slug(campaign.name));
-      const inputs = [campaignFile, campaign.targetsFile, campaign.site.file, campaign.instrument.file, ...(campaign.observed ? [campaign.observed.file] : [])];
-      checkOutFolder(outDir, PLAN_FILES, inputs);
-      const stampMs = sourceDateEpochMs(process.env.SOURCE_DATE_EPOCH);
-      // The plan the folder holds: its visits before --now are kept, and plan.ics cancels what it no longer has.
-      const previous = previousPlan(outDir, campaign.name, (line) => console.error(line));
-      const replan = opts.now ? { now: opts.now, ...(previous ? { previous } : {}) } : {};
-      const planOptions = { seed: opts.seed, ...replan };
-      const plan = withIcsSequences(buildPlan(campaign, planOptions), previous);
-      if (opts.sweepNights && campaign.time.mode === 'choose-nights') {
-        const [from, to] = opts.sweepNights;
-        const counts = Array.from({ length: to - from + 1 }, (_, i) => from + i);
-        const progress = stderrProgress(process.stderr, 'plans');
-        plan.nightsSweep = nightsSweep(campaign, counts, planOptions, new Map([[campaign.time.nights, plan]]), (done, total) =>
-          progress.update('nights sweep', done, total),
-        );
-        progress.end();
+      // The stage line is cleared however the run ends, so an error message starts its own line.
+      const stages = stderrProgress({ unit: 'stages', quiet: opts.quiet, showAfterMs: 0 });
+      try {
+        await runPlan(file, opts, stages);
+      } finally {
+        stages.end();
       }
-      const json = renderPlanJson(plan);
-      const ics = renderPlanIcs(plan, { previous, stampMs });
-      const written = writeOutputSet(
-        outDir,
-        {
-          'plan.md': renderPlanMarkdown(plan),
-          'plan.csv': renderPlanCsv(plan),
-          'plan.json': json,
-          'plan.ics': ics,
-          'report.html': await renderReportHtml(plan),
-        },
-        inputs,
-      );
-      if (opts.json) return void process.stdout.write(json);
-      console.log(renderPlanText(plan));
-      console.log(`\nWrote ${written.join(', ')}`);
     });
+}
+
+/** Reads the campaign, plans it (and the sweep, when asked), writes the files and prints the summary or plan.json. */
+async function runPlan(file: string | undefined, opts: PlanFlags, stages: Progress): Promise<void> {
+  const campaignFile = file ?? path.relative(process.cwd(), DEMO_CAMPAIGN);
+  const campaign = withLost(withNights(withHalves(readCampaign(campaignFile), opts.halfNights), opts.nights), opts.lost);
+  if (opts.sweepNights) checkChoosesNights(campaign, '--sweep-nights', opts.sweepNights.join(':'));
+  const outDir = opts.out ?? path.join('crest-out', slug(campaign.name));
+  const inputs = [campaignFile, campaign.targetsFile, campaign.site.file, campaign.instrument.file, ...(campaign.observed ? [campaign.observed.file] : [])];
+  checkOutFolder(outDir, PLAN_FILES, inputs);
+  const stampMs = sourceDateEpochMs(process.env.SOURCE_DATE_EPOCH);
+  // The plan the folder holds: its visits before --now are kept, and plan.ics cancels what it no longer has.
+  const previous = previousPlan(outDir, campaign.name, (line) => console.error(line));
+  const replan = opts.now ? { now: opts.now, ...(previous ? { previous } : {}) } : {};
+  const planOptions = { seed: opts.seed, ...replan };
+  const stage = (name: (typeof RUN_STAGES)[number]) => stages.update(`crest plan: ${name}`, RUN_STAGES.indexOf(name), RUN_STAGES.length);
+  const plan = withIcsSequences(buildPlan(campaign, { ...planOptions, onStage: stage }), previous);
+  if (opts.sweepNights && campaign.time.mode === 'choose-nights') {
+    const [from, to] = opts.sweepNights;
+    const counts = Array.from({ length: to - from + 1 }, (_, i) => from + i);
+    stages.end();
+    const progress = stderrProgress({ unit: 'plans', quiet: opts.quiet });
+    plan.nightsSweep = nightsSweep(campaign, counts, planOptions, new Map([[campaign.time.nights, plan]]), (done, total) =>
+      progress.update('nights sweep', done, total),
+    );
+    progress.end();
+  }
+  // The files name their inputs from the folder they are written to; the terminal from here.
+  const saved = planWithPathsFrom(plan, outDir);
+  stage('report');
+  const json = renderPlanJson(saved);
+  const ics = renderPlanIcs(saved, { previous, stampMs });
+  const files = {
+    'plan.md': renderPlanMarkdown(saved),
+    'plan.csv': renderPlanCsv(saved),
+    'plan.json': json,
+    'plan.ics': ics,
+    'report.html': await renderReportHtml(saved),
+  };
+  stage('files');
+  const written = writeOutputSet(outDir, files, inputs);
+  stages.end();
+  if (opts.json) return void process.stdout.write(json);
+  console.log(renderPlanText(plan));
+  console.log(`\nWrote ${written.join(', ')}`);
 }

@@ -1,5 +1,7 @@
-// A progress bar for long runs (maps, nights sweeps), on stderr only: drawn once the run has taken more than two
-// seconds and only when stderr is a terminal, so pipes, files and tests never see it.
+// A progress bar for long runs (maps, nights sweeps, the stages of a plan), on stderr only: drawn
+// once the run has taken more than two seconds (stages: at once, since one stage may take a
+// minute) and only when stderr is a terminal and the command was not given --quiet, so pipes,
+// files, --json output and tests never see it.
 
 const SHOW_AFTER_MS = 2000;
 const BAR_WIDTH = 30;
@@ -10,18 +12,27 @@ export interface Progress {
   end(): void;
 }
 
-export function stderrProgress(stream: NodeJS.WriteStream = process.stderr, unit = 'cells'): Progress {
+export interface ProgressOptions {
+  stream?: NodeJS.WriteStream;
+  /** What `done` and `total` count: cells, plans, stages. */
+  unit?: string;
+  quiet?: boolean;
+  showAfterMs?: number;
+}
+
+export function stderrProgress(options: ProgressOptions = {}): Progress {
+  const { stream = process.stderr, unit = 'cells', quiet = false, showAfterMs = SHOW_AFTER_MS } = options;
   const startMs = Date.now();
   let drawn = false;
   let lastPercent = -1;
   return {
     update(label, done, total) {
-      if (!stream.isTTY || Date.now() - startMs < SHOW_AFTER_MS) return;
+      if (quiet || !stream.isTTY || Date.now() - startMs < showAfterMs) return;
       const percent = Math.floor((100 * done) / total);
       if (percent === lastPercent) return;
       lastPercent = percent;
       const filled = Math.round((BAR_WIDTH * done) / total);
-      stream.write(`\r${label} [${'#'.repeat(filled)}${'.'.repeat(BAR_WIDTH - filled)}] ${String(percent).padStart(3)}% (${done}/${total} ${unit})`);
+      stream.write(`\r\x1b[K${label} [${'#'.repeat(filled)}${'.'.repeat(BAR_WIDTH - filled)}] ${String(percent).padStart(3)}% (${done}/${total} ${unit})`);
       drawn = true;
     },
     end() {

@@ -14,6 +14,7 @@ import { transitRule, type SlotDetail, type TargetSetup } from './candidates.js'
 import { needFromPlan } from '../schedule/need.js';
 import { chosenHalves, type PlannedHalf, plannedDarkHours } from './half-nights.js';
 import { planInputs } from './plan-inputs.js';
+import type { StageListener } from './plan-stages.js';
 import { planRequest } from './request.js';
 import type { ReplanOptions } from './replan.js';
 import { planWarnings } from './warnings.js';
@@ -26,6 +27,7 @@ export interface PlanOptions extends ReplanOptions {
   /** Overrides the campaign's seed. */
   seed?: number;
   weatherTrials?: number;
+  onStage?: StageListener;
 }
 
 /** Builds the observing plan for a campaign. Deterministic for a seed. */
@@ -35,8 +37,10 @@ export function buildPlan(given: Campaign, options: PlanOptions = {}): Plan {
   const { campaign, rv, setups, windows, nights, observed, past, left, details, problem } = planInputs(given, options);
   // The margin over each goal the plan values, from the weather over the nights it may use (utility.ts).
   const overshootWeight = problemWeatherMargin(problem, campaign.goals.probability);
+  options.onStage?.('optimisation');
   const result = optimiseSchedule(problem, { seed, overshootWeight });
   const trials = options.weatherTrials ?? WEATHER_TRIALS;
+  options.onStage?.('weather trials');
   const weather = simulateWeather(problem, result, trials, seed, { overshootWeight });
   const bySlot = new Map(details.map((d) => [d.slot.slotId, d]));
   const ahead = result.slotIds.map((id) => plannedVisit(bySlot.get(id)!, campaign));
@@ -50,6 +54,7 @@ export function buildPlan(given: Campaign, options: PlanOptions = {}): Plan {
       ? time.dates.filter((d) => !lost.has(d)).sort()
       : [...new Set([...left.spentDates, ...past.kept.map((v) => v.localDate), ...chosen.dates])].sort();
   const plannedHalves = chosen.halves.filter((h) => !past.kept.some((v) => v.localDate === h.localDate));
+  options.onStage?.('time request');
   const request = planRequest(
     needFromPlan(problem, result, campaign.goals.probability, trials, seed),
     new Map(result.slotIds.map((id) => [id, { ...bySlot.get(id)!.slot, localDate: bySlot.get(id)!.localDate }])),

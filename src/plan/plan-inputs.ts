@@ -11,6 +11,7 @@ import { candidateSlots, scheduleNights, setupStars, setupTargets, starTargets, 
 import { splitHalves } from './half-nights.js';
 import { observedVisits } from './observed-visits.js';
 import { updateFromRvs, type RvUpdate } from './orbit-update.js';
+import type { StageListener } from './plan-stages.js';
 import { history, openSlot, priorVisits, remaining, type History, type Remaining, type ReplanOptions } from './replan.js';
 
 export interface PlanInputs {
@@ -29,8 +30,9 @@ export interface PlanInputs {
   problem: ScheduleProblem;
 }
 
-export function planInputs(given: Campaign, options: ReplanOptions): PlanInputs {
+export function planInputs(given: Campaign, options: ReplanOptions & { onStage?: StageListener }): PlanInputs {
   const { site, constraints, window } = given;
+  options.onStage?.('nights');
   const nights = computeNights(site, window.start, window.end, constraints.twilight);
   const catalogueSetups = setupTargets(given);
   const observed = observedVisits(given, setupStars(given, catalogueSetups));
@@ -39,12 +41,14 @@ export function planInputs(given: Campaign, options: ReplanOptions): PlanInputs 
   const campaign = rv.campaign;
   const setups = rv.fits.size > 0 ? setupTargets(campaign) : catalogueSetups;
   const stars = setupStars(campaign, setups);
+  options.onStage?.('visibility windows');
   const { windows } = computeWindows(site, starTargets(stars), nights, constraints);
   const past = history(campaign, observed, options);
   const open = openSlot(campaign, past, options.now);
   const allNights = scheduleNights(campaign, nights);
   const left = remaining(campaign, past, options.previous, allNights);
   const dates = new Set(left.nights.map((n) => n.localDate));
+  options.onStage?.('candidate visits');
   const details = candidateSlots(campaign, nights, windows, stars).filter((d) => dates.has(d.localDate) && open(d));
   const whole: ScheduleProblem = {
     nights: left.nights,

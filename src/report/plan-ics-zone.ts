@@ -48,11 +48,21 @@ function observance(zone: string, onsetMs: number, stateMs: number, fromOffset: 
   ];
 }
 
-/** The VTIMEZONE block (CRLF lines) valid from fromMs to toMs. */
+/** How far back the first observance is looked for: a zone with summer time changes at least once a year. */
+const YEAR_MS = 366 * 86_400_000;
+
+/**
+ * The VTIMEZONE block (CRLF lines) valid from fromMs to toMs. The first observance is the zone's
+ * last offset change before fromMs, with its true offsets on either side; a zone without a change
+ * in the year before has one STANDARD observance, a day before fromMs.
+ */
 export function vtimezone(zone: string, fromMs: number, toMs: number): string {
-  const initial = offsetAt(zone, fromMs);
-  // The first observance starts a day early so that fromMs itself lies strictly inside it.
-  const lines = ['BEGIN:VTIMEZONE', `TZID:${zone}`, ...observance(zone, Math.floor(fromMs / 86_400_000) * 86_400_000 - 86_400_000, fromMs, initial)];
+  const last = offsetChangesMs(zone, fromMs - YEAR_MS, fromMs).at(-1);
+  const first =
+    last === undefined
+      ? observance(zone, Math.floor(fromMs / 86_400_000) * 86_400_000 - 86_400_000, fromMs, offsetAt(zone, fromMs))
+      : observance(zone, last, last, offsetAt(zone, last - 1));
+  const lines = ['BEGIN:VTIMEZONE', `TZID:${zone}`, ...first];
   for (const changeMs of offsetChangesMs(zone, fromMs, toMs)) lines.push(...observance(zone, changeMs, changeMs, offsetAt(zone, changeMs - 1)));
   lines.push('END:VTIMEZONE');
   return `${lines.join('\r\n')}\r\n`;

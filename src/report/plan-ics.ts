@@ -3,7 +3,9 @@ import { DateTime } from 'luxon';
 import type { Plan, PlannedVisit } from '../plan/plan-schema.js';
 import { sameCampaign, visitUids } from './ics-uid.js';
 import { vtimezone } from './plan-ics-zone.js';
+import { nightInterval } from './night-interval.js';
 import { phasesText } from './plan-rows.js';
+import { starPlaceAtVisit } from './star-place.js';
 
 export interface PlanIcsOptions {
   /** The plan.json this plan replaces; its visits missing from this plan are written as cancelled. */
@@ -14,6 +16,7 @@ export interface PlanIcsOptions {
 
 /**
  * plan.ics (RFC 5545): one event per visit in the site's time zone, with its VTIMEZONE.
+ * Each event names its night (night-interval.ts) and carries the star's ICRS place and the site's GEO.
  * UIDs are `<star>-<localDate>-<k>@crest` (ics-uid.ts), so re-importing a re-plan updates events;
  * SEQUENCE is the visit's icsSequence (ics-sequence.ts). Every visit of a previous plan of the
  * same campaign whose UID this plan lacks is written at its old time with STATUS:CANCELLED
@@ -73,6 +76,8 @@ function addEvent(calendar: ICalCalendar, plan: Plan, visit: PlannedVisit, id: E
   // ending in the second occurrence of a repeated hour can only be written in UTC.
   const repeated = secondOccurrence(start) || secondOccurrence(start.plus({ seconds: visit.durationSec }));
   const phase = visit.phases.length === 0 ? '' : `; predicted phase ${phasesText(visit)}`;
+  const night = nightInterval(visit.localDate);
+  const place = starPlaceAtVisit(plan, visit);
   calendar.createEvent({
     id: id.uid,
     sequence: id.sequence,
@@ -81,10 +86,10 @@ function addEvent(calendar: ICalCalendar, plan: Plan, visit: PlannedVisit, id: E
     end: (repeated ? start.toUTC() : start).plus({ seconds: visit.durationSec }),
     stamp: id.stamp,
     timezone: repeated ? null : site.timeZone,
-    summary: `${id.cancelled ? 'Cancelled: ' : ''}RV ${visit.starId}`,
-    location: site.name,
+    summary: `${id.cancelled ? 'Cancelled: ' : ''}RV ${visit.starId} (night ${night})`,
+    location: { title: site.name, geo: { lat: site.latitudeDeg, lon: site.longitudeDeg } },
     description:
-      `Star ${visit.starId}; exposure ${visit.exposureSec.toFixed(0)} s (block ${visit.durationSec.toFixed(0)} s with overheads); ` +
+      `Night ${night}. Star ${visit.starId} at RA ${place.raIcrs} Dec ${place.decIcrs} (ICRS, at the visit's epoch); exposure ${visit.exposureSec.toFixed(0)} s (block ${visit.durationSec.toFixed(0)} s with overheads); ` +
       `airmass ${visit.airmass.toFixed(2)}${phase}; expected sigma ${visit.effectiveSigmaMps.toFixed(2)} m/s. ` +
       'Advisory: observatory safety rules take precedence.',
   });

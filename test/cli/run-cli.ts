@@ -1,5 +1,5 @@
 import { execFile, spawnSync } from 'node:child_process';
-import { mkdtempSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -32,7 +32,10 @@ export function runCliAsync(args: string[], cwd?: string): Promise<CliResult> {
 /** Writes the given files into a fresh temporary folder and returns its path. */
 export function tempFiles(files: Record<string, string>): string {
   const dir = mkdtempSync(path.join(tmpdir(), 'crest-cli-'));
-  for (const [name, text] of Object.entries(files)) writeFileSync(path.join(dir, name), text);
+  for (const [name, text] of Object.entries(files)) {
+    mkdirSync(path.dirname(path.join(dir, name)), { recursive: true });
+    writeFileSync(path.join(dir, name), text);
+  }
   return dir;
 }
 

@@ -3,6 +3,7 @@
 import ICAL from 'ical.js';
 import { DateTime } from 'luxon';
 import type { Plan, PlannedVisit } from '../../src/plan/plan-schema.js';
+import { parseDecDeg, parseRaDeg } from '../../src/io/sexagesimal.js';
 import { secondOccurrence } from '../../src/report/plan-ics.js';
 
 export interface IcsEvent {
@@ -11,6 +12,9 @@ export interface IcsEvent {
   startMs: number;
   endMs: number;
   description: string;
+  summary: string;
+  /** GEO (RFC 5545 3.8.1.6) as [latitude, longitude] in degrees; null when absent. */
+  geo: [number, number] | null;
   /** DTSTAMP is in UTC form (RFC 5545 3.8.7.2 requires it). */
   stampIsUtc: boolean;
   stampMs: number;
@@ -50,6 +54,8 @@ export function parseIcs(text: string): ParsedIcs {
       startMs: instant(start.getFirstValue() as ICAL.Time, tzid),
       endMs: instant(end.getFirstValue() as ICAL.Time, (end.getParameter('tzid') as string | undefined) ?? null),
       description: String(event.getFirstPropertyValue('description')),
+      summary: String(event.getFirstPropertyValue('summary')),
+      geo: (event.getFirstPropertyValue('geo') as [number, number] | null) ?? null,
       stampIsUtc: stamp.zone === ICAL.Timezone.utcTimezone,
       stampMs: stamp.toUnixTime() * 1000,
       status: (event.getFirstPropertyValue('status') as string | null) ?? null,
@@ -82,6 +88,27 @@ export function documentedUids(plan: Plan): Map<string, PlannedVisit> {
  * campaign, one STATUS:CANCELLED event (RFC 5545 3.8.1.11) at its old time for each of its
  * visits whose UID the plan no longer has.
  */
+/**
+ * What an event says of where and when: its summary names the night by the evening's date, its
+ * GEO is the site's, and its description's RA and Dec lie within 0.1 arcsec of the catalogue place
+ * moved by the proper motion since its epoch (small angles).
+ */
+function placeProblems(plan: Plan, v: PlannedVisit, e: IcsEvent): string[] {
+  const problems: string[] = [];
+  const { site } = plan.campaign;
+  if (!e.summary.includes(`night ${v.localDate}/`)) problems.push(`summary "${e.summary}" does not name the night of ${v.localDate}`);
+  if (!e.geo || Math.abs(e.geo[0] - site.latitudeDeg) > 1e-6 || Math.abs(e.geo[1] - site.longitudeDeg) > 1e-6) problems.push(`GEO ${e.geo} is not the site's`);
+  const m = /RA (\d\d:\d\d:\d\d\.\d+) Dec ([+-]\d\d:\d\d:\d\d\.\d+)/.exec(e.description);
+  const star = plan.campaign.targets.find((t) => t.starId === v.starId)!;
+  if (!m) return [...problems, 'description lacks RA and Dec'];
+  const years = (Date.parse(v.startUtc) - Date.UTC(2000, 0, 1, 12)) / (365.25 * 86_400_000) + 2000 - star.epochYear;
+  const cosDec = Math.cos((star.decDeg * Math.PI) / 180);
+  const dRa = (((parseRaDeg(m[1]!) - star.raDeg + 540) % 360) - 180) * 3.6e6 * cosDec - star.pmRaMasYr * years;
+  const dDec = (parseDecDeg(m[2]!) - star.decDeg) * 3.6e6 - star.pmDecMasYr * years;
+  if (Math.hypot(dRa, dDec) > 100) problems.push(`RA ${m[1]} Dec ${m[2]} is ${Math.hypot(dRa, dDec).toFixed(0)} mas from the star's place`);
+  return problems;
+}
+
 export function icsMismatches(plan: Plan, text: string, previous?: Plan): string[] {
   const zone = plan.campaign.site.timeZone;
   const { timezoneIds, events } = parseIcs(text);
@@ -111,6 +138,7 @@ export function icsMismatches(plan: Plan, text: string, previous?: Plan): string
       problems.push(`${label}: description lacks target or exposure`);
     if (v.phases.some((p) => !e.description.includes(p.phase.toFixed(3)))) problems.push(`${label}: description lacks the phase`);
     if (!e.stampIsUtc) problems.push(`${label}: DTSTAMP not in UTC form`);
+    problems.push(...placeProblems(plan, v, e).map((p) => `${label}: ${p}`));
   }
   const gone = previous?.campaign.name === plan.campaign.name ? [...documentedUids(previous)].filter(([uid]) => !uids.has(uid)) : [];
   if (cancelled.length !== gone.length) problems.push(`${cancelled.length} cancelled events for ${gone.length} visits gone from the previous plan`);

@@ -53,6 +53,36 @@ describe('VTIMEZONE against the time-zone database', () => {
   });
 });
 
+describe('the first observance is the last real offset change before the span', () => {
+  const first = (zone: string, fromMs: number) =>
+    vtimezone(zone, fromMs, fromMs + 30 * 86_400_000)
+      .split('\r\n')
+      .slice(2, 7);
+  it('a March 2027 window in Chile opens with the summer time begun 6 September 2026 at 00:00 local (tz database Chile rule, from memory)', () => {
+    expect(first('America/Santiago', Date.UTC(2027, 2, 1))).toEqual([
+      'BEGIN:DAYLIGHT',
+      'DTSTART:20260906T000000',
+      'TZOFFSETFROM:-0400',
+      'TZOFFSETTO:-0300',
+      'END:DAYLIGHT',
+    ]);
+  });
+  it('a January 2027 window in London opens with the winter time begun 25 October 2026 at 02:00 local (EU rule, last Sunday of October at 01:00 UTC, from memory)', () => {
+    expect(first('Europe/London', Date.UTC(2027, 0, 10))).toEqual([
+      'BEGIN:STANDARD',
+      'DTSTART:20261025T020000',
+      'TZOFFSETFROM:+0100',
+      'TZOFFSETTO:+0000',
+      'END:STANDARD',
+    ]);
+  });
+  it('a zone without summer time has one standard observance whose offsets agree (Hawaii, -10:00 since 1947, from memory)', () => {
+    const lines = vtimezone('Pacific/Honolulu', Date.UTC(2027, 0, 10), Date.UTC(2027, 3, 10)).split('\r\n');
+    expect(lines.filter((l) => l.startsWith('BEGIN:'))).toEqual(['BEGIN:VTIMEZONE', 'BEGIN:STANDARD']);
+    expect(lines.filter((l) => l.startsWith('TZOFFSET'))).toEqual(['TZOFFSETFROM:-1000', 'TZOFFSETTO:-1000']);
+  });
+});
+
 describe('plan.ics in the week after 1 April 2029 at a Chilean site', () => {
   // One plan for both tests (neither changes it).
   let plan: Plan;

@@ -77,6 +77,36 @@ describe('crest plan --nights', () => {
   });
 });
 
+describe('plan.json names its inputs from the output folder', () => {
+  it('a campaign given by absolute path: every file path is relative and resolves from the folder to the file read', async () => {
+    const dir = tempFiles({
+      'in/campaign.yaml':
+        'name: paths\nsite: la-silla\ninstrument: stable-4m\ntargets: targets.csv\n' +
+        'window: { start: 2027-04-01, end: 2027-04-04 }\ntime: { mode: choose-nights, nights: 2 }\n',
+      'in/targets.csv': read(path.dirname(fixture('small')), 'targets.csv'),
+    });
+    const out = path.join(dir, 'results', 'run1');
+    const r = await runCliInProcess(['plan', path.join(dir, 'in', 'campaign.yaml'), '--out', out]);
+    expect(r.status).toBe(0);
+    const plan = JSON.parse(read(out, 'plan.json')) as {
+      campaign: { file: string; targetsFile: string; site: { file: string }; instrument: { file: string }; targets: { source: string }[] };
+    };
+    const c = plan.campaign;
+    const expected = [
+      [c.file, path.join(dir, 'in', 'campaign.yaml')],
+      [c.targetsFile, path.join(dir, 'in', 'targets.csv')],
+      [c.site.file, path.resolve('sites', 'la-silla.json')],
+      [c.instrument.file, path.resolve('sites', 'instruments', 'stable-4m.json')],
+    ];
+    for (const [written, file] of expected) {
+      expect(path.isAbsolute(written!), written).toBe(false);
+      expect(path.resolve(out, written!)).toBe(file);
+    }
+    expect(c.file).toBe(path.join('..', '..', 'in', 'campaign.yaml'));
+    for (const t of c.targets) expect(t.source.startsWith(`${c.targetsFile} row `), t.source).toBe(true);
+  });
+});
+
 describe('crest plan on bad input', () => {
   it('a campaign asking for 0 nights: exit 2, one line naming the field', async () => {
     const dir = tempFiles({

@@ -8,6 +8,7 @@ import { PLAN_CSV_HEADER, renderPlanCsv } from '../../src/report/plan-csv.js';
 import { renderPlanIcs } from '../../src/report/plan-ics.js';
 import { checkVisits, REFERENCE_TOLERANCE_MIN } from './check-visits.js';
 import { icsMismatches } from './check-ics.js';
+import { parseDecDeg, parseRaDeg } from '../../src/io/sexagesimal.js';
 import { CSV_ROUNDING, csvVisits, kOverSigmaKFromCsv, parsePlanCsv } from './recompute-k.js';
 
 /** Few weather trials: the weather is not what these tests check. */
@@ -75,10 +76,48 @@ export function describePlanProperties(names: string[], planOf: (name: string) =
     });
   });
 
+  describe('plan.csv night, end, priority and place', () => {
+    it.each(names)('%s: each row against its visit and its star', (name) => {
+      const plan = planOf(name);
+      const { rows } = parsePlanCsv(renderPlanCsv(plan));
+      for (const r of rows) {
+        const visit = plan.visits.find((v) => v.starId === r.starId && v.startUtc === r.startUtc)!;
+        // The night column spans the evening's date to the next (ISO 8601 interval, end abbreviated):
+        // a visit before noon local time lies on the morning's date.
+        const [evening, morning] = expandInterval(r.night!);
+        expect(evening).toBe(visit.localDate);
+        expect(Date.parse(`${morning}T00:00:00Z`) - Date.parse(`${evening}T00:00:00Z`)).toBe(86_400_000);
+        const localHour = Number(r.startLocal!.slice(11, 13));
+        expect(r.startLocal!.slice(0, 10)).toBe(localHour >= 12 ? evening : morning);
+        // The block ends durationSec after it starts, in UTC and in local time alike.
+        expect(Date.parse(r.endUtc!) - Date.parse(r.startUtc!)).toBe(Number(r.durationSec) * 1000);
+        expect(Date.parse(r.endLocal!)).toBe(Date.parse(r.endUtc!));
+        const rows = plan.campaign.targets.filter((t) => t.starId === r.starId);
+        expect(Number(r.priority)).toBe(Math.max(...rows.map((t) => t.priority)));
+        // The written place is the catalogue place moved by the proper motion over the years since
+        // its epoch (a small-angle property, independent of the module's vectors), within the
+        // text's rounding (1 ms of RA, 10 mas of Dec) plus 1 mas.
+        const star = rows[0]!;
+        const years = (Date.parse(r.startUtc!) - Date.UTC(2000, 0, 1, 12)) / (365.25 * 86_400_000) + 2000 - star.epochYear;
+        const cosDec = Math.cos((star.decDeg * Math.PI) / 180);
+        const dRaMas = (((parseRaDeg(r.raIcrs!) - star.raDeg + 540) % 360) - 180) * 3.6e6 * cosDec - star.pmRaMasYr * years;
+        const dDecMas = (parseDecDeg(r.decIcrs!) - star.decDeg) * 3.6e6 - star.pmDecMasYr * years;
+        expect(Math.abs(dRaMas)).toBeLessThanOrEqual(7.5 * cosDec + 1);
+        expect(Math.abs(dDecMas)).toBeLessThanOrEqual(5 + 1);
+      }
+    });
+  });
+
   describe('plan.ics read back with ical.js', () => {
     it.each(names)('%s: one VEVENT per visit, DTSTART in the site zone at the visit start', (name) => {
       const plan = planOf(name);
       expect(icsMismatches(plan, renderPlanIcs(plan))).toEqual([]);
     });
   });
+}
+
+/** `2027-03-31/04-01` → both dates in full: the end takes the start's leading parts it leaves out (ISO 8601:2004, 4.4.5). */
+function expandInterval(text: string): [string, string] {
+  const [start, end] = text.split('/') as [string, string];
+  return [start, start.slice(0, start.length - end.length) + end];
 }

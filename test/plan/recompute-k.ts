@@ -46,7 +46,8 @@ function parsePhases(text: string): Map<string, { phase: number; phaseErr: numbe
 export function csvVisits(rows: Record<string, string>[]): CsvVisit[] {
   return rows.map((r) => ({
     starId: r.starId!,
-    localDate: r.localDate!,
+    // The night column names the evening's date first (2027-03-03/04).
+    localDate: r.night!.slice(0, 10),
     startUtc: r.startUtc!,
     midBjdTdb: Number(r.midBjdTdb),
     phases: parsePhases(r.phases!),
