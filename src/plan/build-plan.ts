@@ -34,7 +34,7 @@ export interface PlanOptions extends ReplanOptions {
 export function buildPlan(given: Campaign, options: PlanOptions = {}): Plan {
   const seed = options.seed ?? given.seed;
   const { site, window, time } = given;
-  const { campaign, rv, setups, windows, nights, observed, past, left, details, problem } = planInputs(given, options);
+  const { campaign, rv, setups, windows, dropped, nights, observed, past, left, details, problem } = planInputs(given, options);
   // The margin over each goal the plan values, from the weather over the nights it may use (utility.ts).
   const overshootWeight = problemWeatherMargin(problem, campaign.goals.probability);
   options.onStage?.('optimisation');
@@ -104,7 +104,9 @@ export function buildPlan(given: Campaign, options: PlanOptions = {}): Plan {
     },
     warnings: [],
   };
-  plan.warnings = [...rv.warnings, ...planWarnings(plan, setups, windows, transitRule(campaign))];
+  const candidateDates = new Map<string, Set<string>>();
+  for (const d of details) candidateDates.set(d.slot.targetId, (candidateDates.get(d.slot.targetId) ?? new Set()).add(d.localDate));
+  plan.warnings = [...rv.warnings, ...planWarnings(plan, setups, { windows, dropped, candidateDates }, transitRule(campaign))];
   return plan;
 }
 

@@ -6,7 +6,7 @@ import type { Campaign } from './campaign.js';
 import type { ObservedVisit } from './plan-schema.js';
 import type { ScheduleProblem } from '../schedule/types.js';
 import { computeNights } from '../sky/nights.js';
-import { computeWindows } from '../sky/visibility.js';
+import { computeWindows, type DroppedWindow } from '../sky/visibility.js';
 import { candidateSlots, scheduleNights, setupStars, setupTargets, starTargets, type SlotDetail, type StarSetup, type TargetSetup } from './candidates.js';
 import { splitHalves } from './half-nights.js';
 import { observedVisits } from './observed-visits.js';
@@ -22,6 +22,8 @@ export interface PlanInputs {
   stars: StarSetup[];
   nights: Night[];
   windows: Window[];
+  /** The nights without a window for a star, and why (src/sky/visibility.ts). */
+  dropped: DroppedWindow[];
   observed: ObservedVisit[];
   past: History;
   left: Remaining;
@@ -42,7 +44,7 @@ export function planInputs(given: Campaign, options: ReplanOptions & { onStage?:
   const setups = rv.fits.size > 0 ? setupTargets(campaign) : catalogueSetups;
   const stars = setupStars(campaign, setups);
   options.onStage?.('visibility windows');
-  const { windows } = computeWindows(site, starTargets(stars), nights, constraints);
+  const { windows, dropped } = computeWindows(site, starTargets(stars), nights, constraints);
   const past = history(campaign, observed, options);
   const open = openSlot(campaign, past, options.now);
   const allNights = scheduleNights(campaign, nights);
@@ -63,5 +65,5 @@ export function planInputs(given: Campaign, options: ReplanOptions & { onStage?:
     prior: priorVisits(past, rv.fittedStars, allNights),
   };
   const problem = campaign.time.mode === 'choose-nights' && campaign.time.halfNights ? splitHalves(whole, nights) : whole;
-  return { campaign, rv, setups, stars, nights, windows, observed, past, left, details, problem };
+  return { campaign, rv, setups, stars, nights, windows, dropped, observed, past, left, details, problem };
 }

@@ -1,11 +1,11 @@
 // Warnings an observer must see: targets never observable, goals out of reach, ephemerides that
 // must be recovered before quadratures can be aimed at, transits too uncertain to avoid,
 // exposures the instrument cannot make.
-import type { Window } from '../model.js';
 import type { Plan, TargetSummary } from './plan-schema.js';
 import { nearestEpoch, type TransitRule, transitHalfWidthDays } from '../orbit/ephemeris.js';
 import { visitsNeeded } from '../rv/detect.js';
 import { starCaps, type TargetSetup } from './candidates.js';
+import { dropSummary, missingWindowsText, noVisitCause, type SkyFacts } from './visit-causes.js';
 
 /**
  * Phase error (cycles) above which the linearised information model stops being trustworthy:
@@ -47,25 +47,35 @@ function capText(plan: Plan, summary: TargetSummary, setup: TargetSetup): string
 }
 
 /** Fills each target's warnings in place and returns the plan-wide ones. */
-export function planWarnings(plan: Plan, setups: TargetSetup[], windows: Window[], rule: TransitRule): string[] {
-  const observable = new Set(windows.map((w) => w.targetId));
+export function planWarnings(plan: Plan, setups: TargetSetup[], sky: SkyFacts, rule: TransitRule): string[] {
+  const observable = new Set(sky.windows.map((w) => w.targetId));
   // JD (UTC) of the window's last dark end: within minutes of its BJD_TDB, enough to pick the transit epoch.
+  const allDates = plan.nights.map((n) => n.localDate);
   const windowEndJd = Math.max(...plan.nights.map((n) => (n.darkEnd ? n.darkEnd.getTime() / 86_400_000 + 2_440_587.5 : -Infinity)));
   for (const summary of plan.targets) {
     const setup = setups.find((s) => s.target.id === summary.targetId)!;
     const w = summary.warnings;
     if (setup.skipped) w.push(setup.skipped);
     const neverObservable = !observable.has(summary.starId);
-    if (neverObservable) w.push('never observable in the window under the constraints (altitude, airmass, Moon, dark time)');
-    if (setup.exposure.warning) w.push(setup.exposure.warning);
-    if (!neverObservable && summary.goalSignificance !== undefined && summary.kOverSigmaK !== undefined && summary.kOverSigmaK < summary.goalSignificance) {
+    // A star never observable gets that one warning, with its cause; what its visits would cost is moot.
+    if (neverObservable)
       w.push(
-        `goal K/sigma_K = ${summary.goalSignificance} not reached: ` +
-          `${summary.kOverSigmaK.toFixed(1)} with ${summary.visits} visits${visitsHint(summary, setup)}`,
+        `never observable in the window: ${dropSummary(
+          sky.dropped.filter((d) => d.targetId === summary.starId),
+          allDates,
+          'window',
+        )}`,
       );
+    else if (setup.exposure.warning) w.push(setup.exposure.warning);
+    const shortfall = () =>
+      summary.visits === 0 && !summary.priorVisits
+        ? `no visit: ${noVisitCause(plan, summary.starId, sky)}`
+        : `${summary.visits} visit${summary.visits === 1 ? '' : 's'}${missingWindowsText(plan, summary.starId, sky)}`;
+    if (!neverObservable && summary.goalSignificance !== undefined && summary.kOverSigmaK !== undefined && summary.kOverSigmaK < summary.goalSignificance) {
+      w.push(`goal K/sigma_K = ${summary.goalSignificance} not reached: ${summary.kOverSigmaK.toFixed(1)} with ${shortfall()}${visitsHint(summary, setup)}`);
     }
     if (!neverObservable && summary.goalCompleteness !== undefined && summary.completeness !== undefined && summary.completeness < summary.goalCompleteness) {
-      w.push(`goal completeness = ${summary.goalCompleteness} not reached: ${summary.completeness.toFixed(2)} with ${summary.visits} visits`);
+      w.push(`goal completeness = ${summary.goalCompleteness} not reached: ${summary.completeness.toFixed(2)} with ${shortfall()}`);
     }
     if (summary.phaseErrAtEnd !== undefined && summary.phaseErrAtEnd > LOST_PHASE_ERR_CYCLES && summary.kMps !== undefined) {
       const n = recoveryVisits(summary.kMps, setup.exposure.budget.effectiveSigmaMps);

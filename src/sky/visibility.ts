@@ -17,10 +17,30 @@ const MASK_STEP_MS = 5 * 60_000;
 const MOON_STEP_MS = 20 * 60_000;
 const EDGE_TOLERANCE_MS = 1000;
 
+/** Why a target has no window in a night, as a kind the plan's warnings can count over nights. */
+export type DropCause = 'no dark time' | 'never rises' | 'too low' | 'daylight' | 'hour-angle limits' | 'horizon mask' | 'Moon' | 'short window';
+
 export interface DroppedWindow {
   targetId: string;
   localDate: string;
+  cause: DropCause;
   reason: string;
+}
+
+type Dropped = Pick<DroppedWindow, 'cause' | 'reason'>;
+
+/** Geometric altitude (deg) below which a star's centre is never seen: refraction at the horizon lifts it by 34′ (Meeus 1998, ch. 16). */
+const HORIZON_TRUE_DEG = -34 / 60;
+
+/**
+ * A star that never reaches the floor: it never rises, or it culminates below the floor. The
+ * culmination altitude is 90° − |φ − δ| (geometric; Meeus 1998, ch. 13).
+ */
+function belowFloor(p: PreparedPosition, limits: Limits): Dropped {
+  const culminationDeg = 90 - Math.abs(p.clock.latitudeDeg - p.decDeg);
+  if (culminationDeg < HORIZON_TRUE_DEG)
+    return { cause: 'never rises', reason: `never rises at this site (culminates ${Math.abs(culminationDeg).toFixed(1)} deg below the horizon)` };
+  return { cause: 'too low', reason: `culminates at ${culminationDeg.toFixed(1)} deg, never above ${limits.floorText}` };
 }
 
 /** What stays fixed for a whole call: the altitude floor from the site and the airmass limit. */
@@ -86,33 +106,37 @@ interface NightContext {
 }
 
 /** Windows of one target in one night, or the reason there are none. */
-function targetNight(site: Site, target: Target, ctx: NightContext, limits: Limits, constraints: Constraints): { windows: Window[] } | { reason: string } {
+function targetNight(site: Site, target: Target, ctx: NightContext, limits: Limits, constraints: Constraints): { windows: Window[] } | Dropped {
   const p = preparePosition(target, ctx.clock);
   const halfDeg = halfArcDeg(p, limits.floorTrueDeg);
-  if (halfDeg === null) return { reason: `never above ${limits.floorText}` };
+  if (halfDeg === null) return belowFloor(p, limits);
   const ha = site.hourAngleLimitsHours;
   const loDeg = Math.max(-halfDeg, ha ? ha.east * 15 : -180);
   const hiDeg = Math.min(halfDeg, ha ? ha.west * 15 : 180);
-  if (loDeg >= hiDeg) return { reason: 'outside the hour-angle limits whenever it is high enough' };
+  if (loDeg >= hiDeg) return { cause: 'hour-angle limits', reason: 'outside the hour-angle limits whenever it is high enough' };
   let spans = hourAngleSpans(p, loDeg, hiDeg, ctx.dark);
-  if (spans.length === 0) return { reason: `not above ${limits.floorText}${ha ? ' inside the hour-angle limits' : ''} during the dark span` };
+  if (spans.length === 0)
+    return {
+      cause: 'daylight',
+      reason: `above ${limits.floorText}${ha ? ' inside the hour-angle limits' : ''} only outside the dark span (daylight or twilight)`,
+    };
   const mask = site.horizon;
   if (mask) {
     const clear = (t: number) => altitudeDeg(p, t) - maskAltitudeDeg(mask, azimuthDeg(p, t));
     spans = spans.flatMap((s) => spansWhereNonNegative(clear, s, MASK_STEP_MS, EDGE_TOLERANCE_MS));
-    if (spans.length === 0) return { reason: 'behind the horizon mask whenever it is otherwise observable' };
+    if (spans.length === 0) return { cause: 'horizon mask', reason: 'behind the horizon mask whenever it is otherwise observable' };
   }
   if (ctx.moonLimitDeg > 0) {
     const tooClose = (t: number) => ctx.moonLimitDeg - moonSeparationDeg(ctx.moon, p.vector, t);
     const closeSpans = intersectSpans(spans, ctx.moon.upSpans).flatMap((s) => spansWhereNonNegative(tooClose, s, MOON_STEP_MS, EDGE_TOLERANCE_MS));
     spans = subtractSpans(spans, closeSpans);
-    if (spans.length === 0) return { reason: `within ${ctx.moonLimitDeg.toFixed(1)} deg of the Moon whenever it is otherwise observable` };
+    if (spans.length === 0) return { cause: 'Moon', reason: `within ${ctx.moonLimitDeg.toFixed(1)} deg of the Moon whenever it is otherwise observable` };
   }
   const minMs = constraints.minWindowMinutes * 60_000;
   const kept = spans.filter(([s, e]) => e - s >= minMs);
   if (kept.length === 0) {
     const longestMin = Math.max(...spans.map(([s, e]) => e - s)) / 60_000;
-    return { reason: `longest window ${longestMin.toFixed(0)} min is shorter than the minimum ${constraints.minWindowMinutes} min` };
+    return { cause: 'short window', reason: `longest window ${longestMin.toFixed(0)} min is shorter than the minimum ${constraints.minWindowMinutes} min` };
   }
   return {
     windows: kept.map((span) => {
@@ -146,7 +170,7 @@ export function computeWindows(site: Site, targets: Target[], nights: Night[], c
   for (const night of nights) {
     if (!night.darkStart || !night.darkEnd) {
       const reason = `no dark span${night.note ? `: ${night.note}` : ''}`;
-      for (const t of targets) dropped.push({ targetId: t.id, localDate: night.localDate, reason });
+      for (const t of targets) dropped.push({ targetId: t.id, localDate: night.localDate, cause: 'no dark time', reason });
       continue;
     }
     const dark: Span = [night.darkStart.getTime(), night.darkEnd.getTime()];
@@ -160,7 +184,7 @@ export function computeWindows(site: Site, targets: Target[], nights: Night[], c
     };
     for (const target of targets) {
       const result = targetNight(site, target, ctx, limits, constraints);
-      if ('reason' in result) dropped.push({ targetId: target.id, localDate: night.localDate, reason: result.reason });
+      if ('reason' in result) dropped.push({ targetId: target.id, localDate: night.localDate, ...result });
       else windows.push(...result.windows);
     }
   }

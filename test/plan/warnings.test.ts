@@ -4,6 +4,7 @@
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
+import { Body, Equator, MakeTime, Observer } from 'astronomy-engine';
 import { DateTime } from 'luxon';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { readCampaign } from '../../src/io/campaign.js';
@@ -32,6 +33,17 @@ describe('never observable', () => {
     for (const night of plan.nights) expect(referenceWindows(campaign.site, [polar], night, campaign.constraints)).toEqual([]);
     expect(warningsOf('Polar-7').some((w) => w.includes('never observable'))).toBe(true);
     expect(plan.visits.some((v) => v.starId === 'Polar-7')).toBe(false);
+  });
+
+  it('says it never rises, by how much, and nothing of what its exposures would cost', () => {
+    const polar = campaign.targets.find((t) => t.id === 'Polar-7')!;
+    const belowDeg = Math.abs(90 - Math.abs(campaign.site.latitudeDeg - polar.decDeg));
+    const [warning, ...others] = warningsOf('Polar-7');
+    expect(others).toEqual([]);
+    const m = /^never observable in the window: never rises at this site \(culminates ([\d.]+) deg below the horizon\)$/.exec(warning!);
+    expect(m, warning).not.toBeNull();
+    // Precession moves the declination of date by 0.15 deg at most by 2027 (20″/yr × 27 yr, Meeus 1998, ch. 21).
+    expect(Math.abs(Number(m![1]) - belowDeg)).toBeLessThan(0.2);
   });
 
   it('observable targets do not get it', () => {
@@ -84,6 +96,46 @@ describe('goal not reached on the demo cut to 7 nights', () => {
       const n = Math.ceil(((t.goalSignificance! * sigma) / t.kMps!) ** 2);
       expect(t.warnings.join(' ')).toContain(`about ${n} visits at quadratures`);
     }
+  });
+});
+
+/** A target list and a campaign of the given time model at La Silla, in a temporary folder. */
+function smallCampaign(rows: string, time: string, extraColumn?: string): Campaign {
+  const dir = mkdtempSync(path.join(tmpdir(), 'crest-causes-'));
+  const header = `id,ra,dec,vmag,teffK,periodDays,tcBjdTdb,planetMsiniEarth,priority${extraColumn ? `,${extraColumn}` : ''}`;
+  writeFileSync(path.join(dir, 'targets.csv'), `${header}\n${rows}`);
+  writeFileSync(
+    path.join(dir, 'campaign.yaml'),
+    `name: Causes\nsite: la-silla\ninstrument: stable-4m\ntargets: targets.csv\nwindow: { start: 2027-03-15, end: 2027-03-28 }\ntime: ${time}\n` +
+      'constraints: { maxAirmass: 2.0, moonSeparationDeg: 30 }\n',
+  );
+  return readCampaign(path.join(dir, 'campaign.yaml'));
+}
+
+describe('why a star got no visit', () => {
+  it('the Moon on the one given night: a star placed where the Moon stands that night (astronomy-engine geocentric place)', () => {
+    // Full Moon on 2027-03-22 (from memory); its place at local midnight at La Silla (03:00 UTC).
+    const moon = Equator(Body.Moon, MakeTime(new Date('2027-03-22T03:00:00Z')), new Observer(-29.2567, -70.73, 2400), false, true);
+    const ra = `${Math.floor(moon.ra)}:${String(Math.round((moon.ra % 1) * 60)).padStart(2, '0')}:00`;
+    const dec = `${moon.dec < 0 ? '-' : '+'}${String(Math.abs(Math.trunc(moon.dec))).padStart(2, '0')}:00:00`;
+    const plan = buildPlan(smallCampaign(`Luna-9,${ra},${dec},9.0,5500,4.5,2461400.1,30,1\n`, '{ mode: given-nights, dates: [2027-03-21] }'), {
+      weatherTrials: 10,
+    });
+    const [warning] = plan.targets[0]!.warnings;
+    expect(plan.visits).toEqual([]);
+    expect(warning).toMatch(
+      /^goal K\/sigma_K = 5 not reached: 0\.0 with no visit: no window on the planned night \(too close to the Moon on the planned night\); it has windows on \d+ other nights of the window/,
+    );
+  });
+
+  it('the budget: a low-priority star beside a high-priority one, time for one long visit in all', () => {
+    // Each visit exposes 3000 s (the target's own exposureSec), so 1.2 hours hold one block.
+    const rows = 'Alto-1,10:00:00,-30:00:00,9.0,5500,4.5,2461400.1,30,10,3000\nBajo-2,10:20:00,-32:00:00,9.0,5500,5.5,2461400.3,30,0.1,3000\n';
+    const plan = buildPlan(smallCampaign(rows, '{ mode: hours, hours: 1.2 }', 'exposureSec'), { weatherTrials: 10 });
+    expect(plan.visits.length).toBe(1);
+    expect(plan.visits.every((v) => v.starId === 'Alto-1')).toBe(true);
+    const bajo = plan.targets.find((t) => t.targetId === 'Bajo-2')!;
+    expect(bajo.warnings.join(' ')).toMatch(/no visit: the usable time went to visits of more value, though it has windows on 14 of the 14 usable nights/);
   });
 });
 

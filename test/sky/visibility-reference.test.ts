@@ -91,7 +91,7 @@ describe('computeWindows against the one-minute reference sampler', () => {
       circumpolar += result.windows.filter(
         (w) => w.targetId.endsWith('circumpolar') && w.start.getTime() === night.darkStart!.getTime() && w.end.getTime() === night.darkEnd!.getTime(),
       ).length;
-      neverUp += result.dropped.filter((d) => d.reason.startsWith('never above')).length;
+      neverUp += result.dropped.filter((d) => d.cause === 'never rises' || d.cause === 'too low').length;
     }
     const comparison = compareWithReference(fast, reference);
     // The sample covers what it should: windows, whole-night (circumpolar) windows, never-rising stars.

@@ -65,10 +65,19 @@ describe('computeWindows', () => {
     expect(w.minAirmass).toBeLessThan(1.01);
   });
 
-  it('drops a star that never rises above the floor, and a short window, with reasons', () => {
-    const { windows, dropped } = computeWindows(laSilla, [star('north', 150, 60), star('late', 40, -30)], nights, { ...base, minWindowMinutes: 120 });
+  it('drops a star that never gets above the floor, one that never rises, and a short window, with causes and reasons', () => {
+    const targets = [star('north', 150, 60), star('far-north', 150, 70), star('late', 40, -30)];
+    const { windows, dropped } = computeWindows(laSilla, targets, nights, { ...base, minWindowMinutes: 120 });
     expect(windows).toEqual([]);
-    expect(dropped.find((d) => d.targetId === 'north')!.reason).toMatch(/^never above 29\.9 deg/);
+    const of = (id: string) => dropped.find((d) => d.targetId === id)!;
+    // Culmination 90 - |phi - delta| (Meeus 1998, ch. 13): 90 - |-29.26 - 60| = 0.74 deg above the
+    // horizon, 90 - |-29.26 - 70| = 9.26 deg below it; precession to 2027 lowers the declination of
+    // date at RA 150 deg by 20″/yr × 27 yr × |cos 150°| = 0.13 deg (Meeus 1998, ch. 21).
+    expect(of('north')).toMatchObject({ cause: 'too low' });
+    expect(of('north').reason).toMatch(/^culminates at 0\.[6-9] deg, never above 29\.9 deg/);
+    expect(of('far-north')).toMatchObject({ cause: 'never rises' });
+    expect(of('far-north').reason).toMatch(/^never rises at this site \(culminates 9\.[0-3] deg below the horizon\)$/);
+    expect(of('late').cause).toBe('short window');
     expect(dropped.find((d) => d.targetId === 'late')!.reason).toMatch(/longest window 79 min is shorter than the minimum 120 min/);
   });
 
