@@ -44,6 +44,6 @@ export async function narrowLayout(page: Page): Promise<NarrowLayout> {
         const svg = text.ownerSVGElement!;
         return (Number.parseFloat(getComputedStyle(text).fontSize) * svg.getBoundingClientRect().width) / svg.viewBox.baseVal.width;
       });
-    return { pageWidthPx: document.documentElement.scrollWidth, wide, smallestChartTextPx: Math.min(...sizes) };
+    return { pageWidthPx: document.documentElement.scrollWidth, wide, smallestChartTextPx: sizes.reduce((a, b) => Math.min(a, b), Number.POSITIVE_INFINITY) };
   });
 }

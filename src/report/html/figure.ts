@@ -1,4 +1,5 @@
 import type { TopLevelSpec } from 'vega-lite';
+import { extent } from '../../extent.js';
 import type { Column } from '../table.js';
 import { anchorId, escapeHtml, scrollTable } from './html.js';
 import { MIN_CHART_TEXT_PX, PHONE_CONTENT_PX } from './narrow-style.js';
@@ -36,7 +37,7 @@ export function scopeSvgIds(svg: string, prefix: string): string {
  */
 export function legibleWidthPx(svg: string): number {
   const widthPx = Number(/<svg[^>]*\bwidth="([\d.]+)"/.exec(svg)?.[1] ?? 0);
-  const smallestFontPx = Math.min(...[...svg.matchAll(/font-size="([\d.]+)px"/g)].map((m) => Number(m[1])));
+  const smallestFontPx = extent([...svg.matchAll(/font-size="([\d.]+)px"/g)].map((m) => Number(m[1]))).min;
   return Math.ceil(Math.min(widthPx, (widthPx * MIN_CHART_TEXT_PX) / smallestFontPx));
 }
 
