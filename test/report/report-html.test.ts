@@ -51,7 +51,7 @@ describe('report.html is one self-contained file', () => {
     for (const f of all) {
       expect(f.html).toMatch(/<svg[^>]*width="\d+"/);
       expect(f.html).toMatch(/<figcaption id="[^"]+"><strong>[^<]+\.<\/strong> \S/);
-      expect(f.html).toMatch(/<details><summary>Data table<\/summary><table>/);
+      expect(f.html).toMatch(/<details><summary>Data table<\/summary><div class="table-wrap[^"]*"><table>/);
       expect(f.html).toContain('role-title-text');
     }
   });

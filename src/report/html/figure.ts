@@ -1,6 +1,8 @@
 import type { TopLevelSpec } from 'vega-lite';
+import { extent } from '../../extent.js';
 import type { Column } from '../table.js';
-import { anchorId, escapeHtml, htmlTable } from './html.js';
+import { anchorId, escapeHtml, scrollTable } from './html.js';
+import { MIN_CHART_TEXT_PX, PHONE_CONTENT_PX } from './narrow-style.js';
 import { renderSvg } from './vega-svg.js';
 
 /** One chart of the report: its spec, the words around it, and the same data as a table. */
@@ -30,6 +32,23 @@ export function scopeSvgIds(svg: string, prefix: string): string {
 }
 
 /**
+ * The width (px) at which an SVG's smallest text is drawn at MIN_CHART_TEXT_PX: its own width
+ * times MIN_CHART_TEXT_PX / smallest font-size, never more than its own width (scaling is linear).
+ */
+export function legibleWidthPx(svg: string): number {
+  const widthPx = Number(/<svg[^>]*\bwidth="([\d.]+)"/.exec(svg)?.[1] ?? 0);
+  const smallestFontPx = extent([...svg.matchAll(/font-size="([\d.]+)px"/g)].map((m) => Number(m[1]))).min;
+  return Math.ceil(Math.min(widthPx, (widthPx * MIN_CHART_TEXT_PX) / smallestFontPx));
+}
+
+/** The chart's box: on a phone the SVG shrinks to its legible width, then scrolls (narrow-style.ts). */
+function svgBox(svg: string): string {
+  const legiblePx = legibleWidthPx(svg);
+  const hint = legiblePx > PHONE_CONTENT_PX ? ' side-scroll' : '';
+  return `<div class="svg-box${hint}" style="--legible-width: ${legiblePx}px">${svg}</div>`;
+}
+
+/**
  * A `<figure>`: the inlined SVG, a caption, and the chart's data as a table inside `<details>`
  * for screen readers and for readers who want the numbers.
  */
@@ -38,9 +57,9 @@ export async function renderFigure(figure: ChartFigure): Promise<string> {
   const svg = await renderSvg({ ...figure.spec, title: figure.title, description: `${figure.title}. ${figure.caption}` } as TopLevelSpec);
   return [
     `<figure class="chart chart-${figure.kind}" id="${id}" aria-labelledby="${id}-caption">`,
-    `<div class="svg-box">${scopeSvgIds(svg, id)}</div>`,
+    svgBox(scopeSvgIds(svg, id)),
     `<figcaption id="${id}-caption"><strong>${escapeHtml(figure.title)}.</strong> ${escapeHtml(figure.caption)}</figcaption>`,
-    `<details><summary>Data table</summary>${htmlTable(figure.columns, figure.rows, figure.title)}</details>`,
+    `<details><summary>Data table</summary>${scrollTable(figure.columns, figure.rows, figure.title)}</details>`,
     '</figure>',
   ].join('\n');
 }

@@ -16,6 +16,15 @@ export function htmlTable(columns: Column[], rows: string[][], caption?: string)
   return `<table>${cap}<thead><tr>${head}</tr></thead>\n<tbody>\n${body}\n</tbody></table>`;
 }
 
+/** Tables of more columns than this are too wide for a phone (measured in Chromium at 390 px: the report's 3-column tables fit, its 6-column ones do not). */
+const PHONE_COLUMNS = 4;
+
+/** A table in a box that scrolls sideways; one too wide for a phone is marked for the narrow style's "scroll sideways" hint. */
+export function scrollTable(columns: Column[], rows: string[][], caption?: string): string {
+  const hint = columns.length > PHONE_COLUMNS ? ' side-scroll' : '';
+  return `<div class="table-wrap${hint}">${htmlTable(columns, rows, caption)}</div>`;
+}
+
 /** A short id for anchors and aria references: `SELVA-12` → `selva-12`. */
 export function anchorId(...parts: string[]): string {
   return parts

@@ -2,9 +2,9 @@ import { ACCENT_PALE, CAUTION_PALE, INK, MUTED, OKABE_ITO, RULE } from './palett
 import { FONT_STACK } from './theme.js';
 
 /**
- * The page's own style: one readable column, system fonts only (nothing is fetched), tables with
- * light rules, figures that never split across printed pages. Print: A4 and US Letter share one
- * margin set that fits both (the narrower width of A4, the shorter height of Letter).
+ * The page's own style on a screen: one readable column, system fonts only (nothing is fetched),
+ * tables with light rules. Print and phone widths add their own rules (print-style.ts,
+ * narrow-style.ts), placed after this sheet.
  */
 export const PAGE_CSS = `
 :root { color-scheme: light; }
@@ -28,7 +28,7 @@ th { border-bottom: 2px solid ${MUTED}; font-weight: 600; }
 .num { text-align: right; padding-left: 10px; }
 td:first-child { white-space: nowrap; }
 .table-wrap { overflow-x: auto; }
-figure.chart { margin: 14px 0 22px; break-inside: avoid; page-break-inside: avoid; }
+figure.chart { margin: 14px 0 22px; }
 .svg-box svg { max-width: 100%; height: auto; display: block; }
 figcaption { font-size: 13.5px; color: ${MUTED}; max-width: 70ch; margin-top: 4px; }
 figcaption strong { color: ${INK}; }
@@ -38,16 +38,4 @@ summary { cursor: pointer; color: ${OKABE_ITO.blue}; }
 .pair > figure { flex: 1 1 380px; min-width: 0; }
 .warnings li { margin: 2px 0; }
 footer { margin-top: 36px; font-size: 12.5px; color: ${MUTED}; border-top: 1px solid ${RULE}; padding-top: 8px; }
-@page { size: auto; margin: 16mm 14mm 18mm; }
-@media print {
-  body { background: #ffffff; font-size: 10.5pt; }
-  main { max-width: none; padding: 0; }
-  h2 { break-after: avoid; page-break-after: avoid; }
-  h3 { break-after: avoid; page-break-after: avoid; }
-  table, figure, .caution, .proposal-text { break-inside: avoid; page-break-inside: avoid; }
-  details { display: block; }
-  details > summary { display: none; }
-  details:not([open]) > table { display: none; }
-  .svg-box svg { max-height: 120mm; width: auto; }
-}
 `;

@@ -9,8 +9,10 @@ import { nightFigure } from './chart-night.js';
 import { nightsSweepFigure } from './chart-nights-sweep.js';
 import { rvPhaseFigure } from './chart-rv-phase.js';
 import { renderFigure } from './figure.js';
-import { escapeHtml, htmlTable } from './html.js';
+import { escapeHtml, scrollTable } from './html.js';
+import { NARROW_CSS } from './narrow-style.js';
 import { PAGE_CSS } from './page-style.js';
+import { PRINT_CSS } from './print-style.js';
 import { PROPOSAL_COLUMNS, proposalParagraph, proposalRows } from './proposal-summary.js';
 import { targetOf } from './target-visits.js';
 
@@ -48,12 +50,14 @@ async function targetSections(plan: Plan, maps: ReadonlyMap<string, DetectionMap
     out.push('<h2 id="orbits">Orbital phase coverage</h2>');
     for (const s of ephemeris) {
       out.push(
+        '<section class="planet-block">',
         `<h3>${escapeHtml(s.targetId)}</h3>`,
         ...[rvUpdateParagraph(plan, s)].filter(Boolean),
         '<div class="pair">',
         await renderFigure(rvPhaseFigure(plan, s)),
         await renderFigure(kGrowthFigure(plan, s)),
         '</div>',
+        '</section>',
       );
     }
   }
@@ -67,11 +71,13 @@ async function targetSections(plan: Plan, maps: ReadonlyMap<string, DetectionMap
     return { text: rvUpdateParagraph(plan, s), figures: [...(figure ? [figure] : []), ...(map ? [detectionMapFigure(map)] : [])] };
   });
   if (parts.some((p) => p.text || p.figures.length)) {
-    out.push('<h2 id="search">Blind-search sensitivity</h2>');
+    out.push('<h2 id="search">Blind-search sensitivity</h2>', '<div class="search-blocks">');
     for (const part of parts) {
-      if (part.text) out.push(part.text);
+      out.push('<section class="search-block">', ...[part.text].filter(Boolean));
       for (const figure of part.figures) out.push(await renderFigure(figure));
+      out.push('</section>');
     }
+    out.push('</div>');
   }
   return out;
 }
@@ -86,30 +92,35 @@ function warnings(plan: Plan): string {
 
 /**
  * report.html: the whole plan as one self-contained page (inline CSS and SVG charts, no scripts,
- * no external references), readable on screen and printable on A4 or US Letter. `maps` (by target
+ * no external references), readable on screen and on a phone, and printable on A4 or US Letter
+ * with the proposal summary on page 1. `maps` (by target
  * id, from `crest map`) adds a detection-probability map to a blind-search target's section.
  */
 export async function renderReportHtml(plan: Plan, maps: ReadonlyMap<string, DetectionMapData> = new Map()): Promise<string> {
   const body: string[] = [
+    '<section class="first-page">',
     head(plan),
     '<h2 id="proposal">Proposal summary</h2>',
-    `<div class="table-wrap">${htmlTable(PROPOSAL_COLUMNS, proposalRows(plan), 'Time request by target')}</div>`,
+    scrollTable(PROPOSAL_COLUMNS, proposalRows(plan), 'Time request by target'),
     ...tableNotes(plan),
     `<p class="proposal-text">${escapeHtml(proposalParagraph(plan, maps))}</p>`,
+    '</section>',
     '<h2 id="calendar-section">Campaign calendar</h2>',
     await renderFigure(calendarFigure(plan)),
     ...(plan.nightsSweep?.length
       ? ['<h2 id="sweep-section">How many nights</h2>', await renderFigure(nightsSweepFigure(plan.nightsSweep, plan.campaign.goals.probability))]
       : []),
     '<h2 id="nights">Planned nights</h2>',
+    '<div class="chart-grid">',
   ];
   for (const [date, visits] of visitsByNight(plan)) {
     if (visits.length) body.push(await renderFigure(nightFigure(plan, date, visits)));
   }
+  body.push('</div>');
   body.push(...(await targetSections(plan, maps)));
   body.push(
     '<h2 id="detectability">Detectability of every target</h2>',
-    `<div class="table-wrap">${htmlTable(targetColumns(plan), targetRows(plan), 'Expected result per target')}</div>`,
+    scrollTable(targetColumns(plan), targetRows(plan), 'Expected result per target'),
     ...tableNotes(plan),
     warnings(plan),
     `<footer>Written by ${escapeHtml(plan.generator)} from plan schema version ${plan.schemaVersion}. ` +
@@ -122,7 +133,7 @@ export async function renderReportHtml(plan: Plan, maps: ReadonlyMap<string, Det
     '<meta charset="utf-8">',
     '<meta name="viewport" content="width=device-width, initial-scale=1">',
     `<title>${escapeHtml(plan.campaign.name)}: observing plan</title>`,
-    `<style>${PAGE_CSS}</style>`,
+    `<style>${PAGE_CSS}${PRINT_CSS}${NARROW_CSS}</style>`,
     '</head>',
     '<body><main>',
     ...body.filter((part) => part !== ''),
