@@ -1,6 +1,6 @@
 import type { TopLevelSpec } from 'vega-lite';
 import type { Column } from '../table.js';
-import { anchorId, escapeHtml, htmlTable } from './html.js';
+import { anchorId, htmlTable, htmlText } from './html.js';
 import { renderSvg } from './vega-svg.js';
 
 /** One chart of the report: its spec, the words around it, and the same data as a table. */
@@ -39,7 +39,7 @@ export async function renderFigure(figure: ChartFigure): Promise<string> {
   return [
     `<figure class="chart chart-${figure.kind}" id="${id}" aria-labelledby="${id}-caption">`,
     `<div class="svg-box">${scopeSvgIds(svg, id)}</div>`,
-    `<figcaption id="${id}-caption"><strong>${escapeHtml(figure.title)}.</strong> ${escapeHtml(figure.caption)}</figcaption>`,
+    `<figcaption id="${id}-caption"><strong>${htmlText(figure.title)}.</strong> ${htmlText(figure.caption)}</figcaption>`,
     `<details><summary>Data table</summary>${htmlTable(figure.columns, figure.rows, figure.title)}</details>`,
     '</figure>',
   ].join('\n');
