@@ -29,6 +29,8 @@ function logEdges(values: number[]): number[] {
 const PANEL_HEIGHT_PX = 240;
 /** The least gap between two mass labels (px): a label's height and a little. */
 const MIN_TICK_GAP_PX = 16;
+/** The least gap between two period labels (px): a label's width and a little. */
+const MIN_PERIOD_GAP_PX = 28;
 
 const massText = (m: LevelMass) => (m.where === 'inside' ? fmt(m.msiniEarth, 1) : m.where);
 
@@ -45,7 +47,13 @@ function panelSpec(data: DetectionMapData, panel: DetectionMapData['panels'][num
       msiniEarth: mass.where === 'inside' ? mass.msiniEarth : null,
     })),
   );
-  const x = { type: 'quantitative' as const, title: 'Orbital period (days)', scale: { type: 'log', domain: [pEdges[0], pEdges.at(-1)], nice: false } };
+  const periodTicks = logTicks(pEdges[0]!, pEdges.at(-1)!, width, MIN_PERIOD_GAP_PX);
+  const x = {
+    type: 'quantitative' as const,
+    title: 'Orbital period (days)',
+    scale: { type: 'log', domain: [pEdges[0], pEdges.at(-1)], nice: false },
+    axis: { values: periodTicks, format: '~g', labelOverlap: false },
+  };
   const massTicks = logTicks(mEdges[0]!, mEdges.at(-1)!, PANEL_HEIGHT_PX, MIN_TICK_GAP_PX);
   const y = {
     type: 'quantitative' as const,

@@ -240,6 +240,7 @@ export function nightFigure(plan: Plan, localDate: string, visits: PlannedVisit[
       {
         width: WIDTH_PX,
         height: 42,
+        view: { stroke: null },
         data: { values: clocks },
         name: 'clock_labels',
         mark: { type: 'text', fontSize: 10, color: INK },
