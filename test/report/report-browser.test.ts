@@ -63,7 +63,7 @@ describe.skipIf(skip)(title, () => {
     rmSync(profile, { recursive: true, force: true });
   });
 
-  it('opens from disk with no console error, every chart drawn at a non-zero size, and a screenshot', async () => {
+  it('opens from disk with no console error, every chart drawn at a non-zero size, each visit labelled, and a screenshot', async () => {
     const plan = fixturePlan();
     mkdirSync(outDir, { recursive: true });
     const file = path.join(outDir, 'report.html');
@@ -95,6 +95,22 @@ describe.skipIf(skip)(title, () => {
     expect(errors).toEqual([]);
     // The page itself is the only thing loaded.
     expect(requests).toEqual([pathToFileURL(file).href]);
+
+    // Every night chart, as the browser drew it: one thick segment per visit and a label naming its star.
+    const nights = await page.$$eval('figure.chart-night', (figs) =>
+      figs.map((f) => ({
+        id: f.id,
+        segments: f.querySelectorAll('g.visit_segments_marks path').length,
+        labels: [...f.querySelectorAll('g.visit_labels_marks text')].map((t) => t.textContent ?? ''),
+      })),
+    );
+    const dates = [...new Set(plan.visits.map((v) => v.localDate))].sort();
+    expect(nights.map((n) => n.id)).toEqual(dates.map((d) => `night-${d}`));
+    for (const [i, date] of dates.entries()) {
+      const stars = plan.visits.filter((v) => v.localDate === date).map((v) => v.starId);
+      expect(nights[i]!.segments).toBe(stars.length);
+      expect([...nights[i]!.labels].sort()).toEqual([...stars].sort());
+    }
 
     const shot = path.join(outDir, 'report.png');
     await page.screenshot({ path: shot, fullPage: true });

@@ -50,7 +50,7 @@ describe('report.html is one self-contained file', () => {
     expect(all.length).toBeGreaterThan(0);
     for (const f of all) {
       expect(f.html).toMatch(/<svg[^>]*width="\d+"/);
-      expect(f.html).toMatch(/<figcaption id="[^"]+"><strong>[^<]+\.<\/strong> \S/);
+      expect(f.html).toMatch(/<figcaption id="[^"]+"><strong>.+?\.<\/strong> \S/);
       expect(f.html).toMatch(/<details><summary>Data table<\/summary><div class="table-wrap[^"]*"><table>/);
       expect(f.html).toContain('role-title-text');
     }
@@ -67,15 +67,17 @@ describe('the charts hold one mark per planned item', () => {
     expect(markCount(calendar!.html, 'moon_bars')).toBe(plan.nights.length);
   });
 
-  it('nights: one chart per night with visits, one block per visit, one altitude curve per target', () => {
+  it('nights: one chart per night with visits, one segment and one label per visit, one altitude track per star', () => {
     const nights = figures(page, 'night');
     const dates = [...new Set(plan.visits.map((v) => v.localDate))].sort();
     expect(nights.map((n) => n.id)).toEqual(dates.map((d) => `night-${d}`));
     for (const [i, date] of dates.entries()) {
       const visits = plan.visits.filter((v) => v.localDate === date);
-      expect(markCount(nights[i]!.html, 'visit_blocks')).toBe(visits.length);
+      expect(markCount(nights[i]!.html, 'visit_segments')).toBe(visits.length);
+      expect(markCount(nights[i]!.html, 'visit_labels')).toBe(visits.length);
       expect(markCount(nights[i]!.html, 'altitude_lines')).toBe(new Set(visits.map((v) => v.starId)).size);
-      expect(markCount(nights[i]!.html, 'twilight_bands')).toBeGreaterThanOrEqual(5);
+      // The sky strip: one five-minute step after another across the drawn span (at least a 6 h night).
+      expect(markCount(nights[i]!.html, 'sky_strip')).toBeGreaterThanOrEqual(72);
     }
   });
 

@@ -38,6 +38,7 @@ const EXPECTED_SEC: Record<string, number> = {
   'plan/rv-replan.test.ts': 5,
   'plan/several-a-night.test.ts': 5,
   'rv/monte-carlo-k-stale-phase.test.ts': 5,
+  'report/night-chart.test.ts': 5,
   'plan/plan-cli.test.ts': 5,
   'sky/visibility-reference.test.ts': 5,
   'fuzz/fuzz-plan-json.test.ts': 5,

@@ -1,6 +1,7 @@
 import type { TopLevelSpec } from 'vega-lite';
 import type { Plan } from '../../plan/plan-schema.js';
 import { OKABE_ITO, ACCENT_PALE, CAUTION_PALE, MUTED } from './palette.js';
+import { calendarTicks } from './calendar-ticks.js';
 import type { ChartFigure } from './figure.js';
 
 const DAY_MS = 86_400_000;
@@ -32,9 +33,8 @@ export function calendarFigure(plan: Plan): ChartFigure {
   const moon = plan.nights.map((n) => ({ night: dayMs(n.localDate), nightEnd: dayMs(n.localDate) + DAY_MS, moonPct: n.moon.illumination * 100 }));
   const domain = [dayMs(dates[0]!), dayMs(dates[dates.length - 1]!) + DAY_MS];
   const width = Math.min(900, Math.max(480, dates.length * 9));
-  // Quantitative ms on a UTC day axis, ticks at whole days labelled with utcFormat.
-  const tickStep = dates.length > 21 ? 7 : 2;
-  const ticks = dates.filter((_, i) => i % tickStep === 0).map(dayMs);
+  // Quantitative ms on a UTC day axis: week or month ticks, labelled with utcFormat and the year.
+  const ticks = calendarTicks(domain[0]!, domain[1]!, width);
   const x = { field: 'night', type: 'quantitative' as const, scale: { domain, nice: false, zero: false } };
   /** Planned and backup nights: columns filled and outlined differently (backups dashed), one shared legend. */
   const nightColumns = (name: string, values: object[], stroke: string, strokeDash: number[]) => ({
@@ -82,7 +82,7 @@ export function calendarFigure(plan: Plan): ChartFigure {
               x: {
                 ...x,
                 title: 'Night (local date of the evening)',
-                axis: { values: ticks, labelExpr: "utcFormat(datum.value, '%d %b')", labelAngle: 0, labelOverlap: true },
+                axis: { values: ticks.values, labelExpr: `utcFormat(datum.value, '${ticks.format}')`, labelAngle: 0, labelOverlap: false },
               },
               y: { field: 'target', type: 'nominal', title: 'Target', scale: { domain: targetIds }, axis: { grid: true } },
             },

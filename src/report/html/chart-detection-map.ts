@@ -2,7 +2,9 @@ import type { TopLevelSpec } from 'vega-lite';
 import { levelRows, type LevelMass } from '../../rv/injection-map.js';
 import { fmt } from '../table.js';
 import type { ChartFigure } from './figure.js';
+import { logTicks } from './log-ticks.js';
 import { INK, MUTED } from './palette.js';
+import { MSINI_EARTH } from './typography.js';
 
 /** One detection-probability map of a target (what `crest map` computes), ready to draw. */
 export interface DetectionMapData {
@@ -24,6 +26,12 @@ function logEdges(values: number[]): number[] {
   return [values[0]! ** 2 / mids[0]!, ...mids, values.at(-1)! ** 2 / mids.at(-1)!];
 }
 
+const PANEL_HEIGHT_PX = 240;
+/** The least gap between two mass labels (px): a label's height and a little. */
+const MIN_TICK_GAP_PX = 16;
+/** The least gap between two period labels (px): a label's width and a little. */
+const MIN_PERIOD_GAP_PX = 28;
+
 const massText = (m: LevelMass) => (m.where === 'inside' ? fmt(m.msiniEarth, 1) : m.where);
 
 function panelSpec(data: DetectionMapData, panel: DetectionMapData['panels'][number], width: number) {
@@ -39,8 +47,20 @@ function panelSpec(data: DetectionMapData, panel: DetectionMapData['panels'][num
       msiniEarth: mass.where === 'inside' ? mass.msiniEarth : null,
     })),
   );
-  const x = { type: 'quantitative' as const, title: 'Orbital period (days)', scale: { type: 'log', domain: [pEdges[0], pEdges.at(-1)], nice: false } };
-  const y = { type: 'quantitative' as const, title: 'm sin i (M⊕)', scale: { type: 'log', domain: [mEdges[0], mEdges.at(-1)], nice: false } };
+  const periodTicks = logTicks(pEdges[0]!, pEdges.at(-1)!, width, MIN_PERIOD_GAP_PX);
+  const x = {
+    type: 'quantitative' as const,
+    title: 'Orbital period (days)',
+    scale: { type: 'log', domain: [pEdges[0], pEdges.at(-1)], nice: false },
+    axis: { values: periodTicks, format: '~g', labelOverlap: false },
+  };
+  const massTicks = logTicks(mEdges[0]!, mEdges.at(-1)!, PANEL_HEIGHT_PX, MIN_TICK_GAP_PX);
+  const y = {
+    type: 'quantitative' as const,
+    title: MSINI_EARTH,
+    scale: { type: 'log', domain: [mEdges[0], mEdges.at(-1)], nice: false },
+    axis: { values: massTicks, format: '~g', labelOverlap: false },
+  };
   const layers: unknown[] = [
     {
       data: { values: cells },
@@ -84,7 +104,7 @@ function panelSpec(data: DetectionMapData, panel: DetectionMapData['panels'][num
       encoding: { y: { ...y, field: 'msiniEarth' } },
     });
   }
-  return { title: { text: panel.label, fontSize: 12, fontWeight: 500 }, width, height: 240, layer: layers };
+  return { title: { text: panel.label, fontSize: 12, fontWeight: 500 }, width, height: PANEL_HEIGHT_PX, layer: layers };
 }
 
 /**

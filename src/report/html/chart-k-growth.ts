@@ -139,7 +139,7 @@ export function kGrowthFigure(plan: Plan, summary: TargetSummary & { kMps: numbe
           'the thick segment joins it to the first visit ahead.'
         : ''),
     spec,
-    columns: [{ header: 'visit', align: 'right' }, { header: 'night' }, { header: 'K/sigma_K', align: 'right' }],
+    columns: [{ header: 'visit', align: 'right' }, { header: 'night' }, { header: 'K/σ_K', align: 'right' }],
     rows: series.map((p) => [p.visit === 0 ? `0 (${priorVisits} made)` : String(p.visit), p.date, fmt(p.kOverSigmaK, 2)]),
   };
 }

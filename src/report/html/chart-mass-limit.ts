@@ -101,7 +101,7 @@ export function massLimitFigure(plan: Plan, summary: TargetSummary, target: Targ
     columns: [
       { header: 'period (d)', align: 'right' },
       { header: 'K min (m/s)', align: 'right' },
-      { header: 'm sin i min (Earth masses)', align: 'right' },
+      { header: 'm sin i min (M⊕)', align: 'right' },
     ],
     rows: shown.map((r) => [fmt(r.periodDays, 2), fmt(r.kMinRandomMps, 2), fmt(r.massMinRandomEarth, 2)]),
   };

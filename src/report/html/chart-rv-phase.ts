@@ -143,7 +143,7 @@ export function rvPhaseFigure(plan: Plan, summary: TargetSummary & { kMps: numbe
       { header: 'phase', align: 'right' },
       { header: 'phase error', align: 'right' },
       { header: keyed ? 'RV: model if planned, measured if done (m/s)' : 'model RV (m/s)', align: 'right' },
-      { header: 'sigma (m/s)', align: 'right' },
+      { header: 'σ (m/s)', align: 'right' },
     ],
     rows: [
       ...visits.map((v) => [String(v.n), v.date, fmt(v.phase, 3), fmt(v.phaseHi - v.phase, 3), fmt(v.rv, 2), fmt(v.rvHi - v.rv, 2)]),

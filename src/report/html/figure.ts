@@ -1,7 +1,7 @@
 import type { TopLevelSpec } from 'vega-lite';
 import { extent } from '../../extent.js';
 import type { Column } from '../table.js';
-import { anchorId, escapeHtml, scrollTable } from './html.js';
+import { anchorId, htmlText, scrollTable } from './html.js';
 import { MIN_CHART_TEXT_PX, PHONE_CONTENT_PX } from './narrow-style.js';
 import { renderSvg } from './vega-svg.js';
 
@@ -58,7 +58,7 @@ export async function renderFigure(figure: ChartFigure): Promise<string> {
   return [
     `<figure class="chart chart-${figure.kind}" id="${id}" aria-labelledby="${id}-caption">`,
     svgBox(scopeSvgIds(svg, id)),
-    `<figcaption id="${id}-caption"><strong>${escapeHtml(figure.title)}.</strong> ${escapeHtml(figure.caption)}</figcaption>`,
+    `<figcaption id="${id}-caption"><strong>${htmlText(figure.title)}.</strong> ${htmlText(figure.caption)}</figcaption>`,
     `<details><summary>Data table</summary>${scrollTable(figure.columns, figure.rows, figure.title)}</details>`,
     '</figure>',
   ].join('\n');

@@ -1,4 +1,5 @@
 import type { Column } from '../table.js';
+import { htmlSymbols } from './typography.js';
 
 const ENTITIES: Record<string, string> = { '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' };
 
@@ -7,11 +8,14 @@ export function escapeHtml(text: string): string {
   return text.replace(/[&<>"']/g, (ch) => ENTITIES[ch]!);
 }
 
-/** An HTML table from the same columns and rows the text renderers use; numbers align right. */
+/** Text as HTML content: escaped, and σ_X with X as a subscript (typography.ts). */
+export const htmlText = (text: string): string => htmlSymbols(escapeHtml(text));
+
+/** An HTML table from the same columns and rows the text renderers use; numbers align right, σ_X subscripted. */
 export function htmlTable(columns: Column[], rows: string[][], caption?: string): string {
   const cls = (c: Column) => (c.align === 'right' ? ' class="num"' : '');
-  const head = columns.map((c) => `<th scope="col"${cls(c)}>${escapeHtml(c.header)}</th>`).join('');
-  const body = rows.map((row) => `<tr>${row.map((cell, i) => `<td${cls(columns[i]!)}>${escapeHtml(cell)}</td>`).join('')}</tr>`).join('\n');
+  const head = columns.map((c) => `<th scope="col"${cls(c)}>${htmlText(c.header)}</th>`).join('');
+  const body = rows.map((row) => `<tr>${row.map((cell, i) => `<td${cls(columns[i]!)}>${htmlText(cell)}</td>`).join('')}</tr>`).join('\n');
   const cap = caption ? `<caption>${escapeHtml(caption)}</caption>` : '';
   return `<table>${cap}<thead><tr>${head}</tr></thead>\n<tbody>\n${body}\n</tbody></table>`;
 }

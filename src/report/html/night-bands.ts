@@ -1,44 +1,31 @@
-import type { Night } from '../../model.js';
+import { Body, type Observer } from 'astronomy-engine';
+import { bodyAltitudeDeg } from '../../sky/crossings.js';
 
-export type SkyState = 'day' | 'civil twilight' | 'nautical twilight' | 'astronomical twilight' | 'night';
-export const SKY_STATES: readonly SkyState[] = ['day', 'civil twilight', 'nautical twilight', 'astronomical twilight', 'night'];
-
-export interface SkyBand {
-  state: SkyState;
+/** One step of a night chart's sky strip: the Sun's altitude at its middle. */
+export interface SunStep {
   startMs: number;
   endMs: number;
+  sunAltitudeDeg: number;
 }
 
 /**
- * The sky's state between two instants from a night's Sun crossings (sunset, the civil, nautical
- * and astronomical twilight edges, and their dawn mirrors): one band per state change, so a
- * night where the Sun never reaches a level simply has no band of that level.
+ * The sky strip of a night chart: [fromMs, toMs] cut into steps of `stepMs`, each with the Sun's
+ * geometric topocentric altitude at its middle (astronomy-engine, src/sky/crossings.ts), so the
+ * strip shades day, civil, nautical and astronomical twilight and night by the Sun itself.
  */
-export function skyBands(night: Night, fromMs: number, toMs: number): SkyBand[] {
-  const events: { at: Date | null; before: SkyState; after: SkyState }[] = [
-    { at: night.sunset, before: 'day', after: 'civil twilight' },
-    { at: night.civil.dusk, before: 'civil twilight', after: 'nautical twilight' },
-    { at: night.nautical.dusk, before: 'nautical twilight', after: 'astronomical twilight' },
-    { at: night.astronomical.dusk, before: 'astronomical twilight', after: 'night' },
-    { at: night.astronomical.dawn, before: 'night', after: 'astronomical twilight' },
-    { at: night.nautical.dawn, before: 'astronomical twilight', after: 'nautical twilight' },
-    { at: night.civil.dawn, before: 'nautical twilight', after: 'civil twilight' },
-    { at: night.sunrise, before: 'civil twilight', after: 'day' },
-  ];
-  const crossings = events
-    .filter((e): e is { at: Date; before: SkyState; after: SkyState } => e.at !== null)
-    .map((e) => ({ ms: e.at.getTime(), before: e.before, after: e.after }))
-    .sort((a, b) => a.ms - b.ms);
-  const bands: SkyBand[] = [];
-  let state: SkyState = crossings[0]?.before ?? (night.darkHours > 0 ? 'night' : 'day');
-  let start = fromMs;
-  for (const c of crossings) {
-    if (c.ms > start && c.ms < toMs) {
-      bands.push({ state, startMs: start, endMs: c.ms });
-      start = c.ms;
-    }
-    state = c.after;
+export function sunSteps(observer: Observer, fromMs: number, toMs: number, stepMs: number): SunStep[] {
+  const steps: SunStep[] = [];
+  for (let start = fromMs; start < toMs; start += stepMs) {
+    const end = Math.min(toMs, start + stepMs);
+    steps.push({ startMs: start, endMs: end, sunAltitudeDeg: bodyAltitudeDeg(Body.Sun, observer, new Date((start + end) / 2)) });
   }
-  if (toMs > start) bands.push({ state, startMs: start, endMs: toMs });
-  return bands;
+  return steps;
+}
+
+/** The Moon's geometric altitude (deg) at each instant, null while it is below the horizon. */
+export function moonAltitudes(observer: Observer, instantsMs: number[]): (number | null)[] {
+  return instantsMs.map((t) => {
+    const alt = bodyAltitudeDeg(Body.Moon, observer, new Date(t));
+    return alt >= 0 ? alt : null;
+  });
 }

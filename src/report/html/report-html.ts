@@ -9,7 +9,7 @@ import { nightFigure } from './chart-night.js';
 import { nightsSweepFigure } from './chart-nights-sweep.js';
 import { rvPhaseFigure } from './chart-rv-phase.js';
 import { renderFigure } from './figure.js';
-import { escapeHtml, scrollTable } from './html.js';
+import { escapeHtml, htmlText, scrollTable } from './html.js';
 import { NARROW_CSS } from './narrow-style.js';
 import { PAGE_CSS } from './page-style.js';
 import { PRINT_CSS } from './print-style.js';
@@ -40,7 +40,7 @@ function head(plan: Plan): string {
 /** What the RVs so far changed for one target (its fit or its search peak), as a paragraph; '' without RVs. */
 function rvUpdateParagraph(plan: Plan, s: TargetSummary): string {
   const lines = targetRvUpdateLines(plan, s);
-  return lines.length ? `<p class="rv-update"><strong>RVs so far:</strong> ${lines.map(escapeHtml).join('<br>')}</p>` : '';
+  return lines.length ? `<p class="rv-update"><strong>RVs so far:</strong> ${lines.map(htmlText).join('<br>')}</p>` : '';
 }
 
 async function targetSections(plan: Plan, maps: ReadonlyMap<string, DetectionMapData>): Promise<string[]> {
@@ -82,12 +82,12 @@ async function targetSections(plan: Plan, maps: ReadonlyMap<string, DetectionMap
   return out;
 }
 
-const tableNotes = (plan: Plan) => targetNotes(plan).map((note) => `<p class="table-note">${escapeHtml(note)}</p>`);
+const tableNotes = (plan: Plan) => targetNotes(plan).map((note) => `<p class="table-note">${htmlText(note)}</p>`);
 
 function warnings(plan: Plan): string {
   const all = [...plan.warnings, ...plan.targets.flatMap((t) => t.warnings.map((w) => `${t.targetId}: ${w}`))];
   if (!all.length) return '';
-  return `<h2 id="warnings">Warnings</h2>\n<ul class="warnings">${[...new Set(all)].map((w) => `<li>${escapeHtml(w)}</li>`).join('')}</ul>`;
+  return `<h2 id="warnings">Warnings</h2>\n<ul class="warnings">${[...new Set(all)].map((w) => `<li>${htmlText(w)}</li>`).join('')}</ul>`;
 }
 
 /**
@@ -103,7 +103,7 @@ export async function renderReportHtml(plan: Plan, maps: ReadonlyMap<string, Det
     '<h2 id="proposal">Proposal summary</h2>',
     scrollTable(PROPOSAL_COLUMNS, proposalRows(plan), 'Time request by target'),
     ...tableNotes(plan),
-    `<p class="proposal-text">${escapeHtml(proposalParagraph(plan, maps))}</p>`,
+    `<p class="proposal-text">${htmlText(proposalParagraph(plan, maps))}</p>`,
     '</section>',
     '<h2 id="calendar-section">Campaign calendar</h2>',
     await renderFigure(calendarFigure(plan)),
@@ -124,7 +124,8 @@ export async function renderReportHtml(plan: Plan, maps: ReadonlyMap<string, Det
     ...tableNotes(plan),
     warnings(plan),
     `<footer>Written by ${escapeHtml(plan.generator)} from plan schema version ${plan.schemaVersion}. ` +
-      'Chart colours: the Okabe–Ito palette (Okabe & Ito 2008, Color Universal Design), safe for common colour-vision deficiencies.</footer>',
+      'Chart colours: the Okabe–Ito palette first (Okabe & Ito 2008, Color Universal Design), safe for common colour-vision deficiencies; ' +
+      'past eight stars, generated colours, and every visit labelled with its star.</footer>',
   );
   return [
     '<!DOCTYPE html>',

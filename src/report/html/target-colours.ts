@@ -1,23 +1,13 @@
 import type { Plan } from '../../plan/plan-schema.js';
-import { CATEGORY_COLOURS } from './palette.js';
-
-const DASHES: readonly number[][] = [
-  [1, 0],
-  [6, 3],
-  [2, 2],
-];
+import { distinctColours } from './palette.js';
 
 /**
- * Each target's colour and line dash, fixed by its place in the campaign's target list so they are
- * the same in every chart; after the eight colours the dash changes, so no two targets look alike.
+ * One colour per star of a chart, none repeated: the stars are taken in the campaign's target
+ * order, so the colour-blind-safe colours go first and the same stars always get the same colours.
  */
-export function targetStyles(plan: Plan, ids: string[]): Map<string, { colour: string; dash: number[] }> {
-  const order = new Map(plan.campaign.targets.map((t, i) => [t.id, i]));
-  return new Map(
-    ids.map((id) => {
-      const i = order.get(id) ?? 0;
-      const n = CATEGORY_COLOURS.length;
-      return [id, { colour: CATEGORY_COLOURS[i % n]!, dash: DASHES[Math.floor(i / n) % DASHES.length]! }];
-    }),
-  );
+export function targetColours(plan: Plan, starIds: string[]): Map<string, string> {
+  const order = new Map(plan.campaign.targets.map((t, i) => [t.starId, i]));
+  const sorted = [...new Set(starIds)].sort((a, b) => (order.get(a) ?? Infinity) - (order.get(b) ?? Infinity));
+  const colours = distinctColours(sorted.length);
+  return new Map(sorted.map((id, i) => [id, colours[i]!]));
 }
