@@ -3,11 +3,11 @@
 // walkthrough runs from that folder with that `crest` first on the PATH. Each must exit 0, print
 // nothing on stderr, and print what the README shows under it.
 import { spawnSync } from 'node:child_process';
-import { mkdtempSync, readdirSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { describe, expect, it } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 import { readWalkthrough, type ShownCommand } from './readme-walkthrough.js';
 import { shownMismatch } from './shown-output.js';
 
@@ -17,7 +17,17 @@ const commandsOf = (kind: 'run' | 'install'): ShownCommand[] => steps.flatMap((s
 
 /** A folder of npm's own layout (`bin/`, `lib/node_modules/`) standing in for the global one. */
 const prefix = mkdtempSync(path.join(tmpdir(), 'crest-prefix-'));
-const env = { ...process.env, npm_config_prefix: prefix, PATH: `${path.join(prefix, 'bin')}${path.delimiter}${process.env.PATH}` };
+/** The test's environment without the npm settings of the `npm test` or `npx vitest` that started it, and that prefix. */
+const inherited = Object.fromEntries(Object.entries(process.env).filter(([name]) => !name.toLowerCase().startsWith('npm_config_')));
+const env = { ...inherited, npm_config_prefix: prefix, PATH: `${path.join(prefix, 'bin')}${path.delimiter}${process.env.PATH}` };
+const folder = mkdtempSync(path.join(tmpdir(), 'crest-walk-'));
+
+afterAll(() => {
+  // The two links npm made first (the checkout itself is behind one of them), then the folders.
+  for (const link of [path.join(prefix, 'bin', 'crest'), path.join(prefix, 'lib', 'node_modules', 'crest')]) rmSync(link, { force: true });
+  rmSync(prefix, { recursive: true, force: true });
+  rmSync(folder, { recursive: true, force: true });
+});
 
 /** A README command line in bash (pipes as written; a failure anywhere in a pipe fails it). */
 function runShell(command: string, cwd: string) {
@@ -48,7 +58,6 @@ describe('README walkthrough "Plan your own campaign"', () => {
   });
 
   it('writes its files into an empty folder and runs its commands there, printing what the README shows', () => {
-    const folder = mkdtempSync(path.join(tmpdir(), 'crest-walk-'));
     const files = steps.flatMap((s) => (s.kind === 'file' ? [s] : []));
     for (const file of files) writeFileSync(path.join(folder, file.name), file.text);
     expect(readdirSync(folder).sort()).toEqual(['campaign.yaml', 'site.json', 'spectrograph.json', 'stars.csv']);
