@@ -28,6 +28,7 @@ const EXPECTED_SEC: Record<string, number> = {
   'schedule/exhaustive.test.ts': 9,
   'plan/ics-cli.test.ts': 8,
   'plan/nights-sweep.test.ts': 8,
+  'readme/walkthrough.test.ts': 8,
   'cli/map-shard.test.ts': 7,
   'plan/caps-plan.test.ts': 7,
   'plan/search-vs-random-demo.test.ts': 7,
