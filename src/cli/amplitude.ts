@@ -1,17 +1,15 @@
 import type { Command } from 'commander';
-import { EARTH_PER_JUPITER } from '../astro/constants.js';
 import { inputError } from '../errors.js';
 import { planetMassFromKApproxEarth, planetMassFromKEarth } from '../orbit/minimum-mass.js';
 import { summarizeOrbit, type OrbitSummary } from '../orbit/summary.js';
+import { MASS_SYMBOL, MASS_UNITS, type MassUnit, massInEarth, massInUnit } from '../report/mass-unit.js';
 import { renderTable } from '../report/table.js';
 import { choiceFlag, numberFlag, printJson } from './options.js';
-
-const MASS_UNITS = ['earth', 'jupiter'] as const;
 
 interface AmplitudeOptions {
   starMass?: number;
   planetMass?: number;
-  massUnit: (typeof MASS_UNITS)[number];
+  massUnit: MassUnit;
   k?: number;
   period?: number;
   ecc: number;
@@ -29,8 +27,8 @@ const sig = (value: number) => String(Number(value.toPrecision(5)));
 
 function rowsFor(s: OrbitSummary, inverse: { massSinIApproxEarth: number } | undefined): string[][] {
   const mass = (label: string, earth: number) => [
-    [label, sig(earth), 'Earth masses'],
-    ['', sig(earth / EARTH_PER_JUPITER), 'Jupiter masses'],
+    [label, sig(earth), MASS_SYMBOL.earth],
+    ['', sig(massInUnit(earth, 'jupiter')), MASS_SYMBOL.jupiter],
   ];
   const rows: string[][] = [['semi-amplitude K', sig(s.kMps), 'm/s']];
   if (inverse) {
@@ -89,9 +87,9 @@ export function registerAmplitude(program: Command): Command {
       if (opts.k !== undefined) {
         planetMassEarth = planetMassFromKEarth({ ...orbit, kMps: opts.k });
         const massSinIApproxEarth = planetMassFromKApproxEarth({ ...orbit, kMps: opts.k }) * Math.sin((opts.incl * Math.PI) / 180);
-        inverse = { massSinIApproxEarth, massSinIApproxJupiter: massSinIApproxEarth / EARTH_PER_JUPITER };
+        inverse = { massSinIApproxEarth, massSinIApproxJupiter: massInUnit(massSinIApproxEarth, 'jupiter') };
       } else {
-        planetMassEarth = opts.planetMass! * (opts.massUnit === 'jupiter' ? EARTH_PER_JUPITER : 1);
+        planetMassEarth = massInEarth(opts.planetMass!, opts.massUnit);
       }
       const summary = summarizeOrbit({ ...orbit, planetMassEarth });
       if (opts.json) return printJson({ mode: inverse ? 'inverse' : 'forward', ...summary, ...inverse });

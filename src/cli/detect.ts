@@ -3,11 +3,15 @@ import { inputError } from '../errors.js';
 import { instrumentFromFlag } from '../io/site-list.js';
 import { readTargets } from '../io/targets.js';
 import { toCsv } from '../report/csv.js';
+import { MASS_SYMBOL, MASS_UNITS, type MassUnit, massInEarth, massInUnit } from '../report/mass-unit.js';
 import { fmt, renderTable, type Column } from '../report/table.js';
 import { periodGridDays } from '../rv/detect.js';
 import { targetDetectability, type DetectOptions, type DetectStar, type TargetDetectability } from '../rv/target-detect.js';
 import { addExposureFlags, addStarFlags, checkExposureFlags, starFromFlags, type StarFlags } from './precision.js';
-import { numberFlag, printJson } from './options.js';
+import { choiceFlag, numberFlag, printJson } from './options.js';
+
+/** The heaviest hypothetical planet (M⊕): past about 94 MJup a companion is a star. */
+const MAX_PLANET_MASS_EARTH = 3e4;
 
 /** Period grid of the mass-limit table (days). */
 const LIMIT_PERIODS_DAYS = periodGridDays(1, 1000);
@@ -19,6 +23,7 @@ interface DetectFlags extends StarFlags {
   significance: number;
   visits?: number;
   planetMass?: number;
+  massUnit: MassUnit;
   period?: number;
   ecc?: number;
   exposure?: number;
@@ -49,6 +54,11 @@ function detectOptions(opts: DetectFlags): DetectOptions {
     throw inputError({ file: 'command line', field: '--ecc', value: String(opts.ecc), allowed: 'only with --planet-mass and --period' });
   }
   checkExposureFlags(opts);
+  const planetMassEarth = opts.planetMass === undefined ? undefined : massInEarth(opts.planetMass, opts.massUnit);
+  if (planetMassEarth !== undefined && planetMassEarth > MAX_PLANET_MASS_EARTH) {
+    const allowed = `at most ${MAX_PLANET_MASS_EARTH} M⊕ (${fmt(massInUnit(MAX_PLANET_MASS_EARTH, 'jupiter'), 1)} MJup)`;
+    throw inputError({ file: 'command line', field: '--planet-mass', value: String(opts.planetMass), allowed });
+  }
   return {
     goalSignificance: opts.significance,
     airmass: opts.airmass,
@@ -56,15 +66,17 @@ function detectOptions(opts: DetectFlags): DetectOptions {
     targetVisitSigmaMps: opts.targetSigma,
     seeingArcsec: opts.seeing,
     visits: opts.visits,
-    hypothetical: opts.planetMass === undefined ? undefined : { msiniEarth: opts.planetMass, periodDays: opts.period!, ecc: opts.ecc },
+    hypothetical: planetMassEarth === undefined ? undefined : { msiniEarth: planetMassEarth, periodDays: opts.period!, ecc: opts.ecc },
     periodsDays: opts.visits === undefined ? undefined : LIMIT_PERIODS_DAYS,
   };
 }
 
 const pair = (a: number | undefined, b: number | undefined, decimals: number) => (a === undefined ? '-' : `${fmt(a, decimals)}/${fmt(b, decimals)}`);
 
-function printTable(rows: TargetDetectability[], options: DetectOptions): void {
+function printTable(rows: TargetDetectability[], options: DetectOptions, unit: MassUnit): void {
   const n = options.goalSignificance;
+  const mass = (earth: number | undefined) => (earth === undefined ? undefined : massInUnit(earth, unit));
+  const massDecimals = unit === 'jupiter' ? 3 : 1;
   const levels = [...new Set([3, 5, n])].sort((a, b) => a - b);
   const columns: Column[] = [
     { header: 'target' },
@@ -80,8 +92,8 @@ function printTable(rows: TargetDetectability[], options: DetectOptions): void {
   if (at !== undefined) {
     columns.push(
       { header: `P(${n}sig|N=${at})`, align: 'right' },
-      { header: `min msini (Me)`, align: 'right' },
-      { header: 'msini 50%/90% (Me)', align: 'right' },
+      { header: `min m sin i (${MASS_SYMBOL[unit]})`, align: 'right' },
+      { header: `m sin i 50%/90% (${MASS_SYMBOL[unit]})`, align: 'right' },
     );
   }
   columns.push({ header: 'verdict' });
@@ -102,8 +114,8 @@ function printTable(rows: TargetDetectability[], options: DetectOptions): void {
       const p = r.atPlannedVisits!;
       cells.push(
         pair(p.probabilityRandom, p.probabilityQuadrature, 2),
-        pair(p.massMinRandomEarth, p.massMinQuadratureEarth, 1),
-        pair(p.mass50RandomEarth, p.mass90RandomEarth, 1),
+        pair(mass(p.massMinRandomEarth), mass(p.massMinQuadratureEarth), massDecimals),
+        pair(mass(p.mass50RandomEarth), mass(p.mass90RandomEarth), massDecimals),
       );
     }
     cells.push(r.verdict.level);
@@ -114,7 +126,7 @@ function printTable(rows: TargetDetectability[], options: DetectOptions): void {
     '\nPairs a/b: at random orbital phases / at ideal quadratures. sigma per visit includes floor and jitter; the floor does not average down. ' +
       '"!": exposure at the maximum; "-": never.',
   );
-  if (at !== undefined) console.log(`msini 50%/90%: the m sin i detected (K/sigma_K > ${n}) in half / nine in ten of such campaigns at random phases.`);
+  if (at !== undefined) console.log(`m sin i 50%/90%: the m sin i detected (K/sigma_K > ${n}) in half / nine in ten of such campaigns at random phases.`);
 }
 
 function printNotes(rows: TargetDetectability[]): void {
@@ -129,11 +141,13 @@ function printNotes(rows: TargetDetectability[]): void {
   }
 }
 
-function printLimits(rows: TargetDetectability[], options: DetectOptions): void {
+function printLimits(rows: TargetDetectability[], options: DetectOptions, unit: MassUnit): void {
   const first = rows[0]?.atPlannedVisits?.massLimits;
   if (!first) return;
-  console.log(`\nSmallest detectable m sin i (Earth masses) for K/sigma_K = ${options.goalSignificance} with ${options.visits} visits at random phases:`);
-  const body = first.map((limit, i) => [fmt(limit.periodDays, 0), ...rows.map((r) => fmt(r.atPlannedVisits!.massLimits![i]!.massMinRandomEarth, 1))]);
+  const what = `Smallest detectable m sin i (${MASS_SYMBOL[unit]}) for K/sigma_K = ${options.goalSignificance}`;
+  console.log(`\n${what} with ${options.visits} visits at random phases:`);
+  const limit = (r: TargetDetectability, i: number) => fmt(massInUnit(r.atPlannedVisits!.massLimits![i]!.massMinRandomEarth, unit), unit === 'jupiter' ? 3 : 1);
+  const body = first.map((l, i) => [fmt(l.periodDays, 0), ...rows.map((r) => limit(r, i))]);
   console.log(renderTable([{ header: 'P (d)', align: 'right' }, ...rows.map((r) => ({ header: r.targetId, align: 'right' as const }))], body));
 }
 
@@ -224,8 +238,14 @@ export function registerDetect(program: Command): Command {
     )
     .option(
       '--planet-mass <MEARTH>',
-      'hypothetical planet around every star: m sin i (Earth masses)',
-      numberFlag('--planet-mass', 'Earth masses, more than 0 and at most 30000', 0, 3e4, { exclusiveMin: true }),
+      'hypothetical planet around every star: m sin i, in --mass-unit',
+      numberFlag('--planet-mass', 'a mass more than 0 and at most 30000', 0, 3e4, { exclusiveMin: true }),
+    )
+    .option(
+      '--mass-unit <unit>',
+      'unit of --planet-mass and of the masses the table prints: earth (M⊕) or jupiter (MJup); --json and --csv stay in M⊕',
+      choiceFlag('--mass-unit', MASS_UNITS),
+      'earth',
     )
     .option('--period <DAYS>', 'hypothetical planet: orbital period (days)', numberFlag('--period', 'days, from 0.01 to 100000', 0.01, 1e5))
     .option('--ecc <E>', 'hypothetical planet: eccentricity (default 0)', numberFlag('--ecc', 'an eccentricity from 0 to 0.99', 0, 0.99));
@@ -245,9 +265,9 @@ export function registerDetect(program: Command): Command {
       if (opts.csv) return void process.stdout.write(csvRows(rows, options));
       console.log(`Instrument: ${instrument.id} (${instrument.name}); airmass ${options.airmass}; goal K/sigma_K = ${options.goalSignificance}`);
       console.log('');
-      printTable(rows, options);
+      printTable(rows, options, opts.massUnit);
       printNotes(rows);
-      printLimits(rows, options);
+      printLimits(rows, options, opts.massUnit);
       if (options.visits === undefined) console.log('\nAdd --visits N for detection probabilities and the smallest detectable m sin i at N visits.');
     });
 }

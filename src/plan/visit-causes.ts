@@ -65,7 +65,8 @@ export function noVisitCause(plan: Plan, starId: string, sky: SkyFacts): string 
   const candidates = sky.candidateDates.get(starId) ?? new Set<string>();
   if (!withWindow.some((d) => candidates.has(d)))
     return `its visit block fits none of its windows on the ${kind} nights (windows too short, or all in predicted transits)`;
-  return `the ${kind} time went to visits of more value, though it has windows on ${withWindow.length} of the ${dates.length} ${kind} nights: raise its priority or ask for more time`;
+  const windows = `${withWindow.length} of the ${dates.length} ${kind} nights`;
+  return `the ${kind} time went to visits of more value, though it has windows on ${windows}: raise its priority or ask for more time`;
 }
 
 /** For a star with visits that falls short: the nights that matter on which it had no window, when there are any. */

@@ -89,7 +89,8 @@ function addEvent(calendar: ICalCalendar, plan: Plan, visit: PlannedVisit, id: E
     summary: `${id.cancelled ? 'Cancelled: ' : ''}RV ${visit.starId} (night ${night})`,
     location: { title: site.name, geo: { lat: site.latitudeDeg, lon: site.longitudeDeg } },
     description:
-      `Night ${night}. Star ${visit.starId} at RA ${place.raIcrs} Dec ${place.decIcrs} (ICRS, at the visit's epoch); exposure ${visit.exposureSec.toFixed(0)} s (block ${visit.durationSec.toFixed(0)} s with overheads); ` +
+      `Night ${night}. Star ${visit.starId} at RA ${place.raIcrs} Dec ${place.decIcrs} (ICRS, at the visit's epoch); ` +
+      `exposure ${visit.exposureSec.toFixed(0)} s (block ${visit.durationSec.toFixed(0)} s with overheads); ` +
       `airmass ${visit.airmass.toFixed(2)}${phase}; expected sigma ${visit.effectiveSigmaMps.toFixed(2)} m/s. ` +
       'Advisory: observatory safety rules take precedence.',
   });

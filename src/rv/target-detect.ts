@@ -51,7 +51,7 @@ export function planetOfTarget(target: DetectStar, hypothetical?: HypotheticalPl
       kMps: kOf(hypothetical.msiniEarth, hypothetical.periodDays, ecc),
       periodDays: hypothetical.periodDays,
       ecc,
-      note: `hypothetical ${hypothetical.msiniEarth} M_earth at P = ${hypothetical.periodDays} d`,
+      note: `hypothetical ${hypothetical.msiniEarth} M⊕ at P = ${hypothetical.periodDays} d`,
     };
   }
   const { planet, ephemeris, search } = target;
@@ -65,7 +65,7 @@ export function planetOfTarget(target: DetectStar, hypothetical?: HypotheticalPl
       kMps: kOf(msiniEarth, periodDays, planet.ecc),
       periodDays,
       ecc: planet.ecc,
-      note: `${msiniEarth} M_earth at P = ${periodDays} d`,
+      note: `${msiniEarth} M⊕ at P = ${periodDays} d`,
     };
   }
   if (search) {
@@ -77,8 +77,7 @@ export function planetOfTarget(target: DetectStar, hypothetical?: HypotheticalPl
       periodDays,
       ecc: 0,
       note:
-        `search: ${search.msiniEarth} M_earth at P = ${periodDays.toFixed(1)} d, ` +
-        `the logarithmic middle of ${search.periodMinDays}-${search.periodMaxDays} d`,
+        `search: ${search.msiniEarth} M⊕ at P = ${periodDays.toFixed(1)} d, ` + `the logarithmic middle of ${search.periodMinDays}-${search.periodMaxDays} d`,
     };
   }
   return undefined;

@@ -124,7 +124,10 @@ describe('why a star got no visit', () => {
     const [warning] = plan.targets[0]!.warnings;
     expect(plan.visits).toEqual([]);
     expect(warning).toMatch(
-      /^goal K\/sigma_K = 5 not reached: 0\.0 with no visit: no window on the planned night \(too close to the Moon on the planned night\); it has windows on \d+ other nights of the window/,
+      new RegExp(
+        '^goal K/sigma_K = 5 not reached: 0\\.0 with no visit: no window on the planned night ' +
+          '\\(too close to the Moon on the planned night\\); it has windows on \\d+ other nights of the window',
+      ),
     );
   });
 

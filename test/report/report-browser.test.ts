@@ -176,7 +176,7 @@ describe.skipIf(skip)(title, () => {
       await printed.close();
     });
 
-    it(`fits the ${name} report to a 390 px phone: no sideways page, wide tables and charts scroll in their box with a hint, chart text at least 8 px`, async () => {
+    it(`fits the ${name} report to a 390 px phone: no sideways page, wide boxes scroll with a hint, chart text >= 8 px`, async () => {
       const page = await open(`${name}-narrow.html`, await render(), 390);
       const layout = await narrowLayout(page);
       expect(layout.pageWidthPx).toBeLessThanOrEqual(390);

@@ -60,4 +60,30 @@ describe('crest detect', () => {
     expect(r.stderr).toMatch(pattern);
     expect(r.stderr.trim().split('\n')).toHaveLength(1);
   });
+
+  it('--mass-unit jupiter: --planet-mass read in Jupiter masses, the text table in MJup, --json still in M⊕', async () => {
+    // 1 MJup = 317.83 M⊕ (IAU 2015 nominal GM ratio, from memory).
+    const star = ['detect', '--instrument', 'stable-4m', '--vmag', '9', '--teff', '4800', '--period', '20', '--visits', '40'];
+    const inJupiter = await runCliInProcess([...star, '--planet-mass', '0.05', '--mass-unit', 'jupiter', '--json']);
+    const inEarth = await runCliInProcess([...star, '--planet-mass', String(0.05 * 317.83), '--json']);
+    const [a] = JSON.parse(inJupiter.stdout).targets;
+    const [b] = JSON.parse(inEarth.stdout).targets;
+    expect(a.planet.msiniEarth).toBeCloseTo(0.05 * 317.83, 1);
+    expect(a.planet.kMps).toBeCloseTo(b.planet.kMps, 3);
+    const text = await runCliInProcess([...star, '--planet-mass', '0.05', '--mass-unit', 'jupiter']);
+    expect(text.status).toBe(0);
+    expect(text.stdout).toContain('min m sin i (MJup)');
+    expect(text.stdout).toContain('Smallest detectable m sin i (MJup)');
+    // The table's minimum mass at random phases, in MJup, is the JSON's M⊕ value over 317.83 (3 decimals).
+    const expected = (b.atPlannedVisits.massMinRandomEarth / 317.83).toFixed(3);
+    expect(text.stdout).toMatch(new RegExp(`\\s${expected.replace('.', '\\.')}/`));
+  });
+
+  it('--planet-mass beyond the heaviest planet in either unit: one line, exit 2', async () => {
+    const star = ['detect', '--instrument', 'stable-4m', '--vmag', '9', '--teff', '4800', '--period', '20'];
+    const r = await runCliInProcess([...star, '--planet-mass', '200', '--mass-unit', 'jupiter']);
+    expect(r.status).toBe(2);
+    expect(r.stderr.trim().split('\n')).toHaveLength(1);
+    expect(r.stderr).toMatch(/--planet-mass.*200.*at most 30000 M⊕ \(94\.4 MJup\)/);
+  });
 });
