@@ -42,9 +42,9 @@ function chartSpanMs(night: Night | undefined, visits: PlannedVisit[]): [number,
   return [from - HOUR_MS / 2, to + HOUR_MS / 2];
 }
 
-/** Altitude axis labels: the altitude and, above the horizon, the airmass there ("30° X 1.99"). */
+/** Altitude axis labels: the altitude and, above the horizon, the airmass there ("30°  X=1.99"). */
 function altitudeLabelExpr(): string {
-  const label = (a: number) => (a <= 0 ? `${a}°` : `${a}° X ${fmt(kastenYoungAirmass(a), 2)}`);
+  const label = (a: number) => (a <= 0 ? `${a}°` : `${a}°  X=${fmt(kastenYoungAirmass(a), 2)}`);
   return `${ALTITUDE_TICKS_DEG.map((a) => `datum.value === ${a} ? '${label(a)}'`).join(' : ')} : ''`;
 }
 
