@@ -7,6 +7,7 @@ import { toCsv } from '../report/csv.js';
 import { fmt, renderTable } from '../report/table.js';
 import { clockTime, isoTime } from '../sky/local-time.js';
 import { computeNights } from '../sky/nights.js';
+import { groupNoWindow } from '../sky/no-window.js';
 import { computeWindows } from '../sky/visibility.js';
 import { checkRange, dateFlag, twilightFlag } from './nights.js';
 import { numberFlag, printJson } from './options.js';
@@ -86,7 +87,7 @@ export function registerVisibility(program: Command): Command {
             minAirmass: Number(w.minAirmass.toFixed(3)),
             moonSeparationDeg: Number(w.moonSeparationDeg.toFixed(1)),
           })),
-          dropped,
+          noWindow: groupNoWindow(dropped),
         });
       }
       if (opts.csv) {
@@ -133,10 +134,8 @@ export function registerVisibility(program: Command): Command {
         ),
       );
       if (dropped.length) {
-        const counts = new Map<string, number>();
-        for (const d of dropped) counts.set(`${d.targetId}\u0000${d.reason}`, (counts.get(`${d.targetId}\u0000${d.reason}`) ?? 0) + 1);
         console.log(`\nNo window (${dropped.length} target-nights):`);
-        const dropRows = [...counts].map(([key, n]) => [...key.split('\u0000'), String(n)] as string[]).map(([t, r, n]) => [t!, n!, r!]);
+        const dropRows = groupNoWindow(dropped).map((g) => [g.targetId, String(g.localDates.length), g.reason]);
         console.log(renderTable([{ header: 'target' }, { header: 'nights', align: 'right' }, { header: 'reason' }], dropRows));
       }
     });
