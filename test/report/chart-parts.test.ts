@@ -119,7 +119,7 @@ describe('the time ruler', () => {
 describe('symbols', () => {
   it('draw σ_X with a subscript in SVG text and HTML, never an underscore', () => {
     const svg = svgSymbols('<svg><text aria-label="K/σ_K" x="1">Expected K/σ_K and sigma_K</text></svg>');
-    expect(svg).toContain('aria-label="K/σ_K"');
+    expect(svg).toContain('aria-label="K/sigma K"');
     expect(svg.replace(/<[^>]*>/g, '')).toBe('Expected K/σK and σK');
     expect(htmlSymbols('K/sigma_K, σ_RV')).toBe('K/σ<sub>K</sub>, σ<sub>RV</sub>');
   });

@@ -41,6 +41,14 @@ describe('report.html is one self-contained file', () => {
     expect(page).toContain(ADVISORY.replace(/'/g, '&#39;'));
   });
 
+  it('shows and speaks no underscore of a subscript: σ_K nowhere in text or aria-labels', () => {
+    const text = page.replace(/<style>[\s\S]*?<\/style>/g, '').replace(/<[^>]*>/g, ' ');
+    expect(text).not.toMatch(/(σ|sigma)_[A-Za-z]/);
+    const labels = [...page.matchAll(/aria-label="([^"]*)"/g)].map((m) => m[1]!);
+    expect(labels.length).toBeGreaterThan(0);
+    expect(labels.filter((l) => /(σ|sigma)_/.test(l))).toEqual([]);
+  });
+
   it('is the same bytes when rendered again in the same process', async () => {
     expect(await renderReportHtml(plan)).toBe(page);
   });

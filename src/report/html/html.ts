@@ -16,7 +16,7 @@ export function htmlTable(columns: Column[], rows: string[][], caption?: string)
   const cls = (c: Column) => (c.align === 'right' ? ' class="num"' : '');
   const head = columns.map((c) => `<th scope="col"${cls(c)}>${htmlText(c.header)}</th>`).join('');
   const body = rows.map((row) => `<tr>${row.map((cell, i) => `<td${cls(columns[i]!)}>${htmlText(cell)}</td>`).join('')}</tr>`).join('\n');
-  const cap = caption ? `<caption>${escapeHtml(caption)}</caption>` : '';
+  const cap = caption ? `<caption>${htmlText(caption)}</caption>` : '';
   return `<table>${cap}<thead><tr>${head}</tr></thead>\n<tbody>\n${body}\n</tbody></table>`;
 }
 

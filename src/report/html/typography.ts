@@ -14,10 +14,12 @@ export function htmlSymbols(escapedHtml: string): string {
 
 /**
  * An SVG with every σ_X in its text content drawn as σ and a lowered, smaller X; the text after the
- * subscript is raised back (a tspan's dy moves every glyph after it). Attributes are untouched.
+ * subscript is raised back (a tspan's dy moves every glyph after it). In aria-label attributes,
+ * read by screen readers, σ_X becomes "sigma X"; other attributes are untouched.
  */
 export function svgSymbols(svg: string): string {
-  return svg.replace(/>([^<]*)</g, (whole, text: string) => {
+  const spoken = svg.replace(/aria-label="([^"]*)"/g, (_, label: string) => `aria-label="${label.replace(SUBSCRIPTED, 'sigma $1')}"`);
+  return spoken.replace(/>([^<]*)</g, (whole, text: string) => {
     if (!SUBSCRIPTED.test(text)) return whole;
     SUBSCRIPTED.lastIndex = 0;
     const parts = text.split(SUBSCRIPTED);
