@@ -3,11 +3,10 @@ import { DateTime } from 'luxon';
 import { inputError } from '../errors.js';
 import { siteFromFlag } from '../io/site-list.js';
 import type { Night, Site, TwilightLevel } from '../model.js';
-import { toCsv } from '../report/csv.js';
 import { fmt, renderTable } from '../report/table.js';
 import { clockTime, isoTime, localDateRange } from '../sky/local-time.js';
 import { computeNights } from '../sky/nights.js';
-import { choiceFlag, printJson } from './options.js';
+import { choiceFlag, printCsv, printJson } from './options.js';
 
 export const TWILIGHT_LEVELS = ['civil', 'nautical', 'astronomical'] as const;
 export const twilightFlag = choiceFlag<TwilightLevel>('--twilight', TWILIGHT_LEVELS);
@@ -117,7 +116,7 @@ export function registerNights(program: Command): Command {
           String(n.moon.upDuringDark),
           n.note ?? '',
         ]);
-        return void process.stdout.write(toCsv(header, rows));
+        return printCsv(header, rows);
       }
       const hm = (d: Date | null) => clockTime(d, site.timeZone, utc);
       console.log(`${site.name}: nights ${opts.from} to ${opts.to}, dark span = ${opts.twilight} twilight; times ${utc ? 'UTC' : `local (${site.timeZone})`}`);

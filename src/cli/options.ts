@@ -1,6 +1,7 @@
 import { DateTime } from 'luxon';
 import { inputError } from '../errors.js';
 import { parseDecimal } from '../io/decimal.js';
+import { csvChunks } from '../report/csv.js';
 import { jsonChunks } from '../report/json-chunks.js';
 
 /** A commander argument parser for a number flag in [min, max]; bad values are input errors. */
@@ -21,6 +22,11 @@ export function choiceFlag<T extends string>(flag: string, choices: readonly T[]
     }
     return text as T;
   };
+}
+
+/** Prints a CSV table on stdout, in pieces of rows (csvChunks). */
+export function printCsv(header: string[], rows: (string | number | null | undefined)[][]): void {
+  for (const piece of csvChunks(header, rows)) process.stdout.write(piece);
 }
 
 /** Prints one JSON document on stdout, in pieces (a document may be longer than a string can be). */

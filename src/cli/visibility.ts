@@ -3,14 +3,13 @@ import { DEFAULT_CONSTRAINTS } from '../io/campaign.js';
 import { siteFromFlag } from '../io/site-list.js';
 import { readTargets } from '../io/targets.js';
 import type { Constraints, TwilightLevel } from '../model.js';
-import { toCsv } from '../report/csv.js';
 import { fmt, renderTable } from '../report/table.js';
 import { clockTime, isoTime } from '../sky/local-time.js';
 import { computeNights } from '../sky/nights.js';
 import { groupNoWindow } from '../sky/no-window.js';
 import { computeWindows } from '../sky/visibility.js';
 import { checkRange, dateFlag, twilightFlag } from './nights.js';
-import { numberFlag, printJson } from './options.js';
+import { numberFlag, printCsv, printJson } from './options.js';
 
 interface VisibilityOptions {
   site: string;
@@ -101,7 +100,7 @@ export function registerVisibility(program: Command): Command {
           w.minAirmass.toFixed(3),
           w.moonSeparationDeg.toFixed(1),
         ]);
-        return void process.stdout.write(toCsv(['localDate', 'targetId', 'start', 'end', 'hours', 'bestTime', 'minAirmass', 'moonSeparationDeg'], rows));
+        return printCsv(['localDate', 'targetId', 'start', 'end', 'hours', 'bestTime', 'minAirmass', 'moonSeparationDeg'], rows);
       }
       const hm = (d: Date) => clockTime(d, site.timeZone, utc);
       console.log(
