@@ -2,7 +2,9 @@
 // scheduler may choose among, one star at a time (a visit observes a star and so all its planets),
 // each with its airmass, precision and the predicted phase of each planet.
 import { DateTime } from 'luxon';
-import { starBjdTdb } from '../astro/bjd.js';
+import { bjdTdbOnTrack } from '../astro/bjd.js';
+import { earthTrack, type EarthTrack } from '../astro/earth-track.js';
+import { properMotionVectorJ2000 } from '../astro/position.js';
 import type { Night, Target, Window } from '../model.js';
 import type { Campaign } from './campaign.js';
 import type { VisitPhase } from './plan-schema.js';
@@ -11,10 +13,10 @@ import { semiAmplitudeMps } from '../orbit/semi-amplitude.js';
 import { targetKMps } from '../orbit/target-k.js';
 import { chooseExposureSec, fixedExposure, visitCostSec, type ExposureChoice } from '../rv/exposure.js';
 import { normalQuantile } from '../rv/normal-cdf.js';
-import { visitPrecision } from '../rv/precision.js';
+import { visitPrecisionByAirmass, type PrecisionBudget } from '../rv/precision.js';
 import { TYPICAL_AIRMASS } from '../rv/target-detect.js';
-import { moonSeparationDeg, moonTrack } from '../sky/moon-track.js';
-import { airmassAt, preparePosition, siteClock } from '../sky/target-position.js';
+import { moonSeparationDeg, moonTrack, type MoonTrack } from '../sky/moon-track.js';
+import { airmassAt, preparePosition, siteClock, type SiteClock } from '../sky/target-position.js';
 import type { CandidateSlot, ScheduleNight, ScheduleTarget } from '../schedule/types.js';
 import { starNoise, whiteSigmaMps, type StarNoise } from '../rv/star-noise.js';
 import { planetRows, starModel, starsOf } from './star-model.js';
@@ -185,15 +187,42 @@ export function transitRule(campaign: Campaign): TransitRule {
   return { zScore: normalQuantile((1 + campaign.transits.confidence) / 2), maxOrbitFraction: campaign.transits.maxOrbitFraction };
 }
 
+/** What a star's slots share on every night: its planets' ephemerides, its block's timing and its precision by airmass. */
+interface StarSlotSetup {
+  setup: StarSetup;
+  ephemerides: { id: string; eph: NonNullable<Target['ephemeris']> }[];
+  transiting: NonNullable<Target['ephemeris']>[];
+  durationMs: number;
+  /** From the block's start to mid-exposure. */
+  midOffsetMs: number;
+  halfExposureDays: number;
+  precisionAt: (airmass: number) => PrecisionBudget;
+}
+
+function starSlotSetup(campaign: Campaign, setup: StarSetup): StarSlotSetup {
+  const { instrument, site } = campaign;
+  const { exposureSec } = setup.exposure;
+  return {
+    setup,
+    ephemerides: setup.rows.filter((r) => r.role === 'ephemeris').map((r) => ({ id: r.target.id, eph: r.target.ephemeris! })),
+    transiting: setup.rows.flatMap((r) => (r.target.ephemeris?.transitDurationHours !== undefined ? [r.target.ephemeris] : [])),
+    durationMs: setup.durationSec * 1000,
+    midOffsetMs: instrument.acquisitionSec * 1000 + (exposureSec * 1000) / 2,
+    halfExposureDays: exposureSec / 2 / 86_400,
+    precisionAt: visitPrecisionByAirmass(instrument, setup.star, exposureSec, { seeingArcsec: site.medianSeeingArcsec }),
+  };
+}
+
 /**
  * Visit blocks every SLOT_STEP_MIN inside each of a star's windows (none whose exposure overlaps a
  * predicted transit of one of its planets, as transitRule says): acquisition, exposure, readout,
  * the whole block inside the window. Airmass, Moon distance, precision and phases at mid-exposure.
+ * Per night the Earth's barycentric track (BJD_TDB) and the Moon; per star and night its place and
+ * its J2000 direction with proper motion; per star its precision's airmass-free part.
  */
 export function candidateSlots(campaign: Campaign, nights: Night[], windows: Window[], stars: StarSetup[]): SlotDetail[] {
-  const { site, instrument } = campaign;
   const rule = transitRule(campaign);
-  const byStar = new Map(stars.filter((s) => s.scheduleTarget).map((s) => [s.starId, s]));
+  const byStar = new Map(stars.filter((s) => s.scheduleTarget).map((s) => [s.starId, starSlotSetup(campaign, s)]));
   const nightIndex = new Map(nights.map((n, i) => [n.localDate, i]));
   const perNight = new Map<string, Window[]>();
   for (const w of windows) {
@@ -204,50 +233,55 @@ export function candidateSlots(campaign: Campaign, nights: Night[], windows: Win
   for (const [localDate, nightWindows] of perNight) {
     const n = nightIndex.get(localDate)!;
     const night = nights[n]!;
-    const clock = siteClock(site, new Date((night.darkStart!.getTime() + night.darkEnd!.getTime()) / 2));
+    const clock = siteClock(campaign.site, new Date((night.darkStart!.getTime() + night.darkEnd!.getTime()) / 2));
     const moon = moonTrack(night, clock);
-    for (const w of nightWindows) {
-      const setup = byStar.get(w.targetId)!;
-      const { star } = setup;
-      const ephemerides = setup.rows.filter((r) => r.role === 'ephemeris').map((r) => ({ id: r.target.id, eph: r.target.ephemeris! }));
-      const transiting = setup.rows.flatMap((r) => (r.target.ephemeris?.transitDurationHours !== undefined ? [r.target.ephemeris] : []));
-      const position = preparePosition(star, clock);
-      const durationMs = setup.durationSec * 1000;
-      const leadMs = instrument.acquisitionSec * 1000;
-      const exposureMs = setup.exposure.exposureSec * 1000;
-      const stepMs = SLOT_STEP_MIN * 60_000;
-      // Blocks start on whole minutes, so the plan reads 21:06, not 21:05:43.9.
-      const firstMs = Math.ceil(w.start.getTime() / 60_000) * 60_000;
-      for (let startMs = firstMs; startMs + durationMs <= w.end.getTime(); startMs += stepMs) {
-        const midMs = startMs + leadMs + exposureMs / 2;
-        const midBjdTdb = starBjdTdb(new Date(midMs), star);
-        const halfExposureDays = setup.exposure.exposureSec / 2 / 86_400;
-        if (transiting.some((eph) => overlapsTransit(eph, midBjdTdb - halfExposureDays, midBjdTdb + halfExposureDays, rule))) continue;
-        const airmass = airmassAt(position, midMs);
-        const budget = visitPrecision(instrument, star, setup.exposure.exposureSec, airmass, { seeingArcsec: site.medianSeeingArcsec });
-        const slot: CandidateSlot = {
-          slotId: `${setup.starId}|${localDate}|${startMs}`,
-          targetId: setup.starId,
-          nightIndex: n,
-          startMs,
-          durationSec: setup.durationSec,
-          whiteSigmaMps: whiteSigmaMps(budget.visitSigmaMps, setup.noise),
-          midBjdTdb,
-        };
-        details.push({
-          slot,
-          localDate,
-          exposureSec: setup.exposure.exposureSec,
-          airmass,
-          moonSeparationDeg: moonSeparationDeg(moon, position.vector, midMs),
-          midBjdTdb,
-          visitSigmaMps: budget.visitSigmaMps,
-          effectiveSigmaMps: budget.effectiveSigmaMps,
-          phases: ephemerides.map(({ id, eph }) => ({ targetId: id, phase: phaseAt(eph, midBjdTdb), phaseErr: phaseErrCycles(eph, midBjdTdb) })),
-          snrPerPixel: budget.snrPerPixel,
-        });
-      }
-    }
+    const earth = earthTrack(Math.min(...nightWindows.map((w) => w.start.getTime())), Math.max(...nightWindows.map((w) => w.end.getTime())));
+    for (const w of nightWindows) details.push(...windowSlots(byStar.get(w.targetId)!, w, { n, clock, moon, earth }, rule));
   }
   return details;
+}
+
+/** One window's slots, with the night's shared state. */
+function windowSlots(
+  star: StarSlotSetup,
+  w: Window,
+  night: { n: number; clock: SiteClock; moon: MoonTrack; earth: EarthTrack },
+  rule: TransitRule,
+): SlotDetail[] {
+  const { setup, ephemerides, transiting, durationMs, midOffsetMs, halfExposureDays } = star;
+  const position = preparePosition(setup.star, night.clock);
+  const direction = properMotionVectorJ2000(setup.star, night.clock.frame.epochYear);
+  const stepMs = SLOT_STEP_MIN * 60_000;
+  const slots: SlotDetail[] = [];
+  // Blocks start on whole minutes, so the plan reads 21:06, not 21:05:43.9.
+  const firstMs = Math.ceil(w.start.getTime() / 60_000) * 60_000;
+  for (let startMs = firstMs; startMs + durationMs <= w.end.getTime(); startMs += stepMs) {
+    const midMs = startMs + midOffsetMs;
+    const midBjdTdb = bjdTdbOnTrack(night.earth, new Date(midMs), direction);
+    if (transiting.some((eph) => overlapsTransit(eph, midBjdTdb - halfExposureDays, midBjdTdb + halfExposureDays, rule))) continue;
+    const airmass = airmassAt(position, midMs);
+    const budget = star.precisionAt(airmass);
+    const slot: CandidateSlot = {
+      slotId: `${setup.starId}|${w.localDate}|${startMs}`,
+      targetId: setup.starId,
+      nightIndex: night.n,
+      startMs,
+      durationSec: setup.durationSec,
+      whiteSigmaMps: whiteSigmaMps(budget.visitSigmaMps, setup.noise),
+      midBjdTdb,
+    };
+    slots.push({
+      slot,
+      localDate: w.localDate,
+      exposureSec: setup.exposure.exposureSec,
+      airmass,
+      moonSeparationDeg: moonSeparationDeg(night.moon, position.vector, midMs),
+      midBjdTdb,
+      visitSigmaMps: budget.visitSigmaMps,
+      effectiveSigmaMps: budget.effectiveSigmaMps,
+      phases: ephemerides.map(({ id, eph }) => ({ targetId: id, phase: phaseAt(eph, midBjdTdb), phaseErr: phaseErrCycles(eph, midBjdTdb) })),
+      snrPerPixel: budget.snrPerPixel,
+    });
+  }
+  return slots;
 }

@@ -99,61 +99,78 @@ function spectralType(instrument: Instrument, star: Pick<PrecisionStar, 'teffK' 
   }
 }
 
+/** The photon-noise part of a budget. */
+export type PhotonBudget = Omit<PrecisionBudget, 'floorMps' | 'visitSigmaMps' | 'jitterMps' | 'whiteSigmaMps' | 'effectiveSigmaMps'>;
+
 /**
  * Photon noise of one visit (m/s) and its factors. σ ∝ 1/(S/N) at fixed spectrum ([Bouchy2001]),
  * so σ = σ_ref · (S/N_ref / S/N) · line-width factor · spectral-type factor, with S/N per pixel
  * from signalToNoise (star, sky, read noise; extinction and entrance losses at the airmass).
  * In the photon limit this is σ_ref · 10^(0.2 Δm) · (t/t_ref)^(−1/2) · (D/D_ref)^(−1) · ...
+ * What does not depend on the airmass is computed once; the result gives the budget at any airmass.
  */
+export function photonNoiseByAirmass(
+  instrument: Instrument,
+  star: Pick<PrecisionStar, 'vmag' | 'teffK' | 'vsiniKms' | 'mags' | 'source'>,
+  exposureSec: number,
+  options: PrecisionOptions = {},
+): (airmass: number) => PhotonBudget {
+  const ref = instrument.reference;
+  const apertureM = options.apertureM ?? instrument.apertureM;
+  const refObs = referenceObservation(instrument);
+  const { mag, estimated } = magnitudeIn(star, instrument.band);
+  const efficiency = instrumentEfficiency(instrument);
+  const refSnr = signalToNoise(instrument, refObs, efficiency);
+  const spectral = spectralType(instrument, star);
+  const widthKms = lineWidthKms(instrument.resolvingPower);
+  const lineWidth = lineWidthFactor(star.vsiniKms, ref.vsiniKms, widthKms);
+  // Photon-limited S/N is √S; the detector factor is what sky and read noise take off it.
+  const photonLimit = (s: SignalToNoise) => Math.sqrt(s.starElectrons) / s.snrPerPixel;
+  return (airmass) => {
+    const obs = { mag, exposureSec, airmass, apertureM, seeingZenithArcsec: options.seeingArcsec ?? refObs.seeingZenithArcsec };
+    const snr = signalToNoise(instrument, obs, efficiency);
+    const factors: PrecisionFactors = {
+      magnitude: 10 ** (0.2 * (mag - ref.mag)),
+      exposure: (exposureSec / ref.exposureSec) ** -0.5,
+      aperture: instrument.apertureM / apertureM,
+      extinction: 10 ** (0.2 * instrument.extinctionMagPerAirmass * (airmass - ref.airmass)),
+      entrance: Math.sqrt(refSnr.coupling / snr.coupling),
+      detector: photonLimit(snr) / photonLimit(refSnr),
+      lineWidth,
+      spectralType: spectral.factor,
+    };
+    const product = Object.values(factors).reduce((a, b) => a * b, 1);
+    const budget: PhotonBudget = {
+      instrumentId: instrument.id,
+      exposureSec,
+      airmass,
+      apertureM,
+      band: instrument.band,
+      mag,
+      magEstimated: estimated,
+      snrPerPixel: snr.snrPerPixel,
+      snrWavelengthNm: instrument.wavelengthNm,
+      snr,
+      referencePhotonSigmaMps: ref.photonSigmaMps,
+      factors,
+      spectralTypeSource: spectral.source,
+      lineWidthKms: widthKms,
+      photonSigmaMps: ref.photonSigmaMps * product,
+    };
+    if (spectral.warning) budget.teffWarning = spectral.warning;
+    return budget;
+  };
+}
+
+/** Photon noise of one visit at one airmass (photonNoiseByAirmass). */
 export function photonNoise(
   instrument: Instrument,
   star: Pick<PrecisionStar, 'vmag' | 'teffK' | 'vsiniKms' | 'mags' | 'source'>,
   exposureSec: number,
   airmass: number,
   options: PrecisionOptions = {},
-): Omit<PrecisionBudget, 'floorMps' | 'visitSigmaMps' | 'jitterMps' | 'whiteSigmaMps' | 'effectiveSigmaMps'> {
-  const ref = instrument.reference;
-  const apertureM = options.apertureM ?? instrument.apertureM;
-  const refObs = referenceObservation(instrument);
-  const { mag, estimated } = magnitudeIn(star, instrument.band);
-  const efficiency = instrumentEfficiency(instrument);
-  const obs = { mag, exposureSec, airmass, apertureM, seeingZenithArcsec: options.seeingArcsec ?? refObs.seeingZenithArcsec };
-  const snr = signalToNoise(instrument, obs, efficiency);
-  const refSnr = signalToNoise(instrument, refObs, efficiency);
-  const spectral = spectralType(instrument, star);
-  const widthKms = lineWidthKms(instrument.resolvingPower);
-  // Photon-limited S/N is √S; the detector factor is what sky and read noise take off it.
-  const photonLimit = (s: SignalToNoise) => Math.sqrt(s.starElectrons) / s.snrPerPixel;
-  const factors: PrecisionFactors = {
-    magnitude: 10 ** (0.2 * (mag - ref.mag)),
-    exposure: (exposureSec / ref.exposureSec) ** -0.5,
-    aperture: instrument.apertureM / apertureM,
-    extinction: 10 ** (0.2 * instrument.extinctionMagPerAirmass * (airmass - ref.airmass)),
-    entrance: Math.sqrt(refSnr.coupling / snr.coupling),
-    detector: photonLimit(snr) / photonLimit(refSnr),
-    lineWidth: lineWidthFactor(star.vsiniKms, ref.vsiniKms, widthKms),
-    spectralType: spectral.factor,
-  };
-  const product = Object.values(factors).reduce((a, b) => a * b, 1);
-  const budget: ReturnType<typeof photonNoise> = {
-    instrumentId: instrument.id,
-    exposureSec,
-    airmass,
-    apertureM,
-    band: instrument.band,
-    mag,
-    magEstimated: estimated,
-    snrPerPixel: snr.snrPerPixel,
-    snrWavelengthNm: instrument.wavelengthNm,
-    snr,
-    referencePhotonSigmaMps: ref.photonSigmaMps,
-    factors,
-    spectralTypeSource: spectral.source,
-    lineWidthKms: widthKms,
-    photonSigmaMps: ref.photonSigmaMps * product,
-  };
-  if (spectral.warning) budget.teffWarning = spectral.warning;
-  return budget;
+): PhotonBudget {
+  return photonNoiseByAirmass(instrument, star, exposureSec, options)(airmass);
 }
 
 /** Quadrature sum √(Σ x²) of independent noise terms (common practice). */
@@ -163,8 +180,31 @@ export function quadratureSum(...terms: number[]): number {
 
 /**
  * The precision budget of one visit: σ_visit² = σ_photon² + σ_floor², σ_white² = σ_photon² +
- * σ_jitter², σ_eff² = σ_visit² + σ_jitter² (common practice).
+ * σ_jitter², σ_eff² = σ_visit² + σ_jitter² (common practice). The star's part once; the result
+ * gives the budget at any airmass, e.g. for every candidate slot of a star.
  */
+export function visitPrecisionByAirmass(
+  instrument: Instrument,
+  star: PrecisionStar,
+  exposureSec: number,
+  options: PrecisionOptions = {},
+): (airmass: number) => PrecisionBudget {
+  const photonAt = photonNoiseByAirmass(instrument, star, exposureSec, options);
+  return (airmass) => {
+    const photon = photonAt(airmass);
+    const visitSigmaMps = quadratureSum(photon.photonSigmaMps, instrument.floorMps);
+    // Filled in place: a spread copy of the photon part cost more than the arithmetic.
+    return Object.assign(photon, {
+      floorMps: instrument.floorMps,
+      visitSigmaMps,
+      jitterMps: star.jitterMps,
+      whiteSigmaMps: quadratureSum(photon.photonSigmaMps, star.jitterMps),
+      effectiveSigmaMps: quadratureSum(visitSigmaMps, star.jitterMps),
+    });
+  };
+}
+
+/** The precision budget of one visit at one airmass (visitPrecisionByAirmass). */
 export function visitPrecision(
   instrument: Instrument,
   star: PrecisionStar,
@@ -172,14 +212,5 @@ export function visitPrecision(
   airmass: number,
   options: PrecisionOptions = {},
 ): PrecisionBudget {
-  const photon = photonNoise(instrument, star, exposureSec, airmass, options);
-  const visitSigmaMps = quadratureSum(photon.photonSigmaMps, instrument.floorMps);
-  return {
-    ...photon,
-    floorMps: instrument.floorMps,
-    visitSigmaMps,
-    jitterMps: star.jitterMps,
-    whiteSigmaMps: quadratureSum(photon.photonSigmaMps, star.jitterMps),
-    effectiveSigmaMps: quadratureSum(visitSigmaMps, star.jitterMps),
-  };
+  return visitPrecisionByAirmass(instrument, star, exposureSec, options)(airmass);
 }
