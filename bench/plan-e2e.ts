@@ -60,7 +60,7 @@ async function runSize(candidates: number): Promise<Record<string, unknown> & { 
       stageSec: f.stageSec,
       peakRssMb: f.peakRssMb,
       heapLimitMb: f.heapLimitMb,
-      /** The machine's load when the run started (other work shares the cores). */
+      // The machine's load when the run started (other work shares the cores).
       loadAverage1m,
     };
   } finally {
