@@ -5,8 +5,9 @@ import { visibilityBench } from './visibility.js';
 import { scheduleBenches } from './schedule.js';
 import { injectionBench } from './injection.js';
 import { nextBench } from './next.js';
+import { planE2eBenches } from './plan-e2e.js';
 
-const BENCHES: BenchModule[] = [visibilityBench, ...scheduleBenches, injectionBench, nextBench];
+const BENCHES: BenchModule[] = [visibilityBench, ...scheduleBenches, ...planE2eBenches(), injectionBench, nextBench];
 
 /** Runs the benches named on the command line (all when none), one JSON line each on stdout. */
 async function main(names: string[]): Promise<void> {

@@ -1,4 +1,5 @@
 import path from 'node:path';
+import v8 from 'node:v8';
 import type { Command } from 'commander';
 import { inputError } from '../errors.js';
 import type { Campaign } from '../plan/campaign.js';
@@ -136,7 +137,8 @@ async function runPlan(file: string | undefined, opts: PlanFlags, stages: Progre
   // The plan the folder holds: its visits before --now are kept, and plan.ics cancels what it no longer has.
   const previous = previousPlan(outDir, campaign.name, (line) => console.error(line));
   const replan = opts.now ? { now: opts.now, ...(previous ? { previous } : {}) } : {};
-  const planOptions = { seed: opts.seed, ...replan };
+  // The heap limit bounds the campaign's size (src/plan/visit-budget.ts).
+  const planOptions = { seed: opts.seed, heapLimitBytes: v8.getHeapStatistics().heap_size_limit, ...replan };
   const stage = (name: (typeof RUN_STAGES)[number]) => stages.update(`crest plan: ${name}`, RUN_STAGES.indexOf(name), RUN_STAGES.length);
   const plan = withIcsSequences(buildPlan(campaign, { ...planOptions, onStage: stage }), previous);
   if (opts.sweepNights && campaign.time.mode === 'choose-nights') {

@@ -18,12 +18,13 @@ import type { StageListener } from './plan-stages.js';
 import { planRequest } from './request.js';
 import type { ReplanOptions } from './replan.js';
 import { planWarnings } from './warnings.js';
+import type { MemoryBudget } from './visit-budget.js';
 
 export const GENERATOR = 'crest 0.1.0';
 /** Weather trials per plan (issue: 1,000). */
 export const WEATHER_TRIALS = 1000;
 
-export interface PlanOptions extends ReplanOptions {
+export interface PlanOptions extends ReplanOptions, MemoryBudget {
   /** Overrides the campaign's seed. */
   seed?: number;
   weatherTrials?: number;

@@ -13,6 +13,7 @@ import { observedVisits } from './observed-visits.js';
 import { updateFromRvs, type RvUpdate } from './orbit-update.js';
 import type { StageListener } from './plan-stages.js';
 import { history, openSlot, priorVisits, remaining, type History, type Remaining, type ReplanOptions } from './replan.js';
+import { candidateVisitCount, checkVisitBudget, type MemoryBudget } from './visit-budget.js';
 
 export interface PlanInputs {
   /** The campaign with its targets updated by the RVs so far. */
@@ -32,7 +33,7 @@ export interface PlanInputs {
   problem: ScheduleProblem;
 }
 
-export function planInputs(given: Campaign, options: ReplanOptions & { onStage?: StageListener }): PlanInputs {
+export function planInputs(given: Campaign, options: ReplanOptions & MemoryBudget & { onStage?: StageListener }): PlanInputs {
   const { site, constraints, window } = given;
   options.onStage?.('nights');
   const nights = computeNights(site, window.start, window.end, constraints.twilight);
@@ -51,6 +52,8 @@ export function planInputs(given: Campaign, options: ReplanOptions & { onStage?:
   const left = remaining(campaign, past, options.previous, allNights);
   const dates = new Set(left.nights.map((n) => n.localDate));
   options.onStage?.('candidate visits');
+  // A campaign too large for the heap stops here, before its visits are built (visit-budget.ts).
+  if (options.heapLimitBytes !== undefined) checkVisitBudget(campaign, candidateVisitCount(windows, stars, dates), stars.length, options.heapLimitBytes);
   const details = candidateSlots(campaign, nights, windows, stars).filter((d) => dates.has(d.localDate) && open(d));
   const whole: ScheduleProblem = {
     nights: left.nights,
