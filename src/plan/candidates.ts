@@ -227,7 +227,9 @@ export function candidateSlots(campaign: Campaign, nights: Night[], windows: Win
   const perNight = new Map<string, Window[]>();
   for (const w of windows) {
     if (!byStar.has(w.targetId)) continue;
-    perNight.set(w.localDate, [...(perNight.get(w.localDate) ?? []), w]);
+    const list = perNight.get(w.localDate);
+    if (list) list.push(w);
+    else perNight.set(w.localDate, [w]);
   }
   const details: SlotDetail[] = [];
   for (const [localDate, nightWindows] of perNight) {
