@@ -158,7 +158,11 @@ export function updateSearchStats(stats: Float64Array, offset: number, grid: Sea
   }
 }
 
-/** z* for N visits of total weight W and time moments (file comment); Infinity below MIN_SEARCH_VISITS. */
+/**
+ * z* for N visits of total weight W and time moments (file comment); Infinity below MIN_SEARCH_VISITS.
+ * p* starts from the grid's last one for N (powerGuess), so it depends on the calls before only
+ * below Newton's stopping step (1e-14); a run stays deterministic.
+ */
 export function searchThreshold(grid: SearchGrid, n: number, w: number, swt: number, swt2: number): number {
   if (n < MIN_SEARCH_VISITS - 0.5) return Infinity;
   const mean = swt / w;
