@@ -84,25 +84,37 @@ export function fapBaluev(power: number, ctx: FapContext): number {
 }
 
 /**
- * The power p* whose Baluev FAP equals `fap` for N points, band width and T_eff, by 32 bisection
- * steps on p (to 2e-10), with γ_H computed once: powerAtFap's Baluev case for hot loops.
+ * The power p* whose Baluev FAP equals `fap` for N points, band width and T_eff, with γ_H computed
+ * once: powerAtFap's Baluev case for hot loops. Newton's method on p (common practice) from
+ * `guess` (a nearby solution, e.g. the last one for the same N; 0 for none), kept inside a
+ * bracket that bisects whenever a step would leave it, until the step is below 1e-14.
  */
-export function baluevPowerAtFap(fap: number, n: number, bandPerDay: number, effectiveSpanDays: number): number {
+export function baluevPowerAtFap(fap: number, n: number, bandPerDay: number, effectiveSpanDays: number, guess = 0): number {
   const nH = n - 1;
   const nK = n - 3;
   const gammaH = Math.sqrt(2 / nH) * Math.exp(logGamma(nH / 2) - logGamma((nH - 1) / 2));
   const w = bandPerDay * effectiveSpanDays;
   let lo = 0;
   let hi = 1;
-  for (let i = 0; i < 32; i++) {
-    const p = 0.5 * (lo + hi);
-    // fapBaluev's formula (above).
-    const tau = gammaH * w * (1 - p) ** ((nK - 1) / 2) * Math.sqrt((nH * p) / 2);
-    const value = -Math.expm1(-tau) + (1 - p) ** (nK / 2) * Math.exp(-tau);
+  let p = guess > 0 && guess < 1 ? guess : 0.5;
+  for (let i = 0; i < 100; i++) {
+    // fapBaluev's formula (above): FAP = 1 − e^(−τ) + s e^(−τ), s = (1 − p)^(N_K/2), and its derivative in p,
+    // e^(−τ) ((1 − s) τ' + s'), τ' = τ (1/(2p) − (N_K − 1)/(2(1 − p))), s' = −N_K s / (2(1 − p)).
+    const logRest = Math.log1p(-p);
+    const tau = gammaH * w * Math.exp(((nK - 1) / 2) * logRest) * Math.sqrt((nH * p) / 2);
+    const single = Math.exp((nK / 2) * logRest);
+    const decay = Math.exp(-tau);
+    const value = -Math.expm1(-tau) + single * decay;
     if (value > fap) lo = p;
     else hi = p;
+    const slope = decay * ((1 - single) * tau * (0.5 / p - (nK - 1) / (2 * (1 - p))) - (nK * single) / (2 * (1 - p)));
+    let next = p - (value - fap) / slope;
+    if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
+    const step = Math.abs(next - p);
+    p = next;
+    if (step < 1e-14) break;
   }
-  return 0.5 * (lo + hi);
+  return p;
 }
 
 export type FapMethod = 'baluev' | 'independent';

@@ -3,7 +3,7 @@
 // its running sums. Built once per optimisation.
 import { designRow, type StarModel } from '../rv/information-model.js';
 import type { InformationVisit } from '../rv/information.js';
-import { searchGrid, searchStatsLength, trigValues, type SearchGrid } from './objective-search.js';
+import { searchGrid, searchStatsLength, type SearchGrid } from './objective-search.js';
 import { extent } from '../extent.js';
 import { compilePrior, type CompiledPrior } from './prior.js';
 import type { ScheduleProblem, ScheduleTarget } from './types.js';
@@ -31,8 +31,6 @@ export interface CompiledProblem {
   searchGoalCompleteness: Float64Array;
   statsOffset: Int32Array;
   statsLength: number;
-  /** Per slot of a search star: its time's trigValues on the star's grid, filled on first use (slotTrig). */
-  slotTrig: (Float64Array | undefined)[];
   /** Per star with a search: the median weight of its slots. */
   searchMedianWeight: Float64Array;
   /** Per star: largest visit weight among its slots. */
@@ -179,7 +177,6 @@ export function compileProblem(problem: ScheduleProblem): CompiledProblem {
     searchGoalCompleteness: Float64Array.from(problem.targets, (t) => t.search?.goalCompleteness ?? 1),
     statsOffset: new Int32Array(T),
     statsLength: 0,
-    slotTrig: new Array(S),
     searchMedianWeight: new Float64Array(T),
     maxWeight: new Float64Array(T),
     targetSlots: [],
@@ -283,16 +280,6 @@ export function compileProblem(problem: ScheduleProblem): CompiledProblem {
   c.statsLength = offset;
   c.prior = compilePrior(c);
   return c;
-}
-
-/** trigValues of slot j's time on its star's search grid, computed once per slot. */
-export function slotTrig(c: CompiledProblem, j: number): Float64Array {
-  let values = c.slotTrig[j];
-  if (!values) {
-    values = trigValues(c.grids[c.slotTarget[j]!]!, c.midBjdTdb[j]!);
-    c.slotTrig[j] = values;
-  }
-  return values;
 }
 
 /**

@@ -58,36 +58,24 @@ export interface SearchGrid {
   fap: number;
   /** Ridge added to the diagonal of M. */
   eps: number;
-  /** Time origin of the moments (days): the first time the star's visits can have. */
+  /** Time origin of the moments and phases (days): the first time the star's visits can have. */
   epochDays: number;
   /** Campaign span the visits can cover, days. */
   spanDays: number;
-  /** sin and cos of every grid frequency at each visit time seen so far (prior visits; slots use compile.ts slotTrig). */
-  trig: Map<number, Float64Array>;
+  /** Per visit count N (below POWER_GUESSES): the last p* found, the next search's start (searchThreshold); 0 for none. */
+  powerGuess: Float64Array;
 }
 
 /** Head of a star's running sums: W, sum w tau, sum w tau^2 (tau = t - epoch), visit count; then 5 per frequency. */
 const HEAD = 4;
-
-/** [sin, cos] of angularFreq[k] * tDays for every grid frequency k. */
-export function trigValues(grid: SearchGrid, tDays: number): Float64Array {
-  const freq = grid.angularFreq;
-  const values = new Float64Array(2 * freq.length);
-  for (let k = 0; k < freq.length; k++) {
-    values[2 * k] = Math.sin(freq[k]! * tDays);
-    values[2 * k + 1] = Math.cos(freq[k]! * tDays);
-  }
-  return values;
-}
-
-function trigAt(grid: SearchGrid, tDays: number): Float64Array {
-  let values = grid.trig.get(tDays);
-  if (!values) {
-    values = trigValues(grid, tDays);
-    grid.trig.set(tDays, values);
-  }
-  return values;
-}
+/** Visit counts whose last threshold power is kept as the next one's starting guess. */
+const POWER_GUESSES = 512;
+/**
+ * The phases w_k tau of one visit come from the rotation by (w_1 - w_0) tau, one step per
+ * frequency (the grid is uniform in frequency; angle addition, common practice), and afresh from
+ * sin and cos every TRIG_RESTART frequencies, so rounding cannot build up past about 1e-14.
+ */
+const TRIG_RESTART = 32;
 
 export function searchStatsLength(grid: SearchGrid): number {
   return HEAD + 5 * grid.angularFreq.length;
@@ -136,64 +124,63 @@ export function searchGrid(input: SearchGridInput): SearchGrid {
     eps: input.eps,
     epochDays: input.fromDays,
     spanDays,
-    trig: new Map(),
+    powerGuess: new Float64Array(POWER_GUESSES),
   };
 }
 
 /** Adds (sign 1) or removes (sign -1) a visit of weight w at time tDays. */
 export function updateSearchStats(stats: Float64Array, offset: number, grid: SearchGrid, w: number, tDays: number, sign: number): void {
-  updateSearchStatsWith(stats, offset, grid, sign, w, tDays, trigAt(grid, tDays));
-}
-
-/** updateSearchStats with the visit time's trigValues given. */
-export function updateSearchStatsWith(stats: Float64Array, offset: number, grid: SearchGrid, sign: number, w: number, tDays: number, trig: Float64Array): void {
   const sw = sign * w;
   const tau = tDays - grid.epochDays;
   stats[offset] += sw;
   stats[offset + 1] += sw * tau;
   stats[offset + 2] += sw * tau * tau;
   stats[offset + 3] += sign;
-  for (let k = 0, o = offset + HEAD; k < grid.angularFreq.length; k++, o += 5) {
-    const sn = trig[2 * k]!;
-    const cs = trig[2 * k + 1]!;
+  const freq = grid.angularFreq;
+  const stepAngle = freq.length > 1 ? (freq[1]! - freq[0]!) * tau : 0;
+  const stepSin = Math.sin(stepAngle);
+  const stepCos = Math.cos(stepAngle);
+  let sn = 0;
+  let cs = 1;
+  for (let k = 0, o = offset + HEAD; k < freq.length; k++, o += 5) {
+    if (k % TRIG_RESTART === 0) {
+      sn = Math.sin(freq[k]! * tau);
+      cs = Math.cos(freq[k]! * tau);
+    }
     stats[o] += sw * sn;
     stats[o + 1] += sw * cs;
     stats[o + 2] += sw * sn * sn;
     stats[o + 3] += sw * sn * cs;
     stats[o + 4] += sw * cs * cs;
+    const next = sn * stepCos + cs * stepSin;
+    cs = cs * stepCos - sn * stepSin;
+    sn = next;
   }
 }
 
-/** z* for N visits of total weight W and time moments (file comment); Infinity below MIN_SEARCH_VISITS. */
+/**
+ * z* for N visits of total weight W and time moments (file comment); Infinity below MIN_SEARCH_VISITS.
+ * p* starts from the grid's last one for N (powerGuess), so it depends on the calls before only
+ * below Newton's stopping step (1e-14); a run stays deterministic.
+ */
 export function searchThreshold(grid: SearchGrid, n: number, w: number, swt: number, swt2: number): number {
   if (n < MIN_SEARCH_VISITS - 0.5) return Infinity;
   const mean = swt / w;
   const varDays2 = Math.max(0, swt2 / w - mean * mean);
   // Baluev's T_eff = sqrt(4 pi D_t), D_t the weighted variance of the times (src/rv/fap.ts).
   const count = Math.round(n);
-  const p = baluevPowerAtFap(grid.fap, count, grid.bandPerDay, Math.sqrt(4 * Math.PI * varDays2));
+  const guess = count < POWER_GUESSES ? grid.powerGuess[count]! : 0;
+  const p = baluevPowerAtFap(grid.fap, count, grid.bandPerDay, Math.sqrt(4 * Math.PI * varDays2), guess);
+  if (count < POWER_GUESSES) grid.powerGuess[count] = p;
   return ((count - 3) * p) / (1 - p);
 }
 
-/** Completeness (file comment), optionally with one visit added (sign 1) or removed (-1). */
+/** Completeness (file comment), optionally with one visit of weight w at tDays added (sign 1) or removed (-1). */
 export function searchCompleteness(stats: Float64Array, offset: number, grid: SearchGrid, sign = 0, w = 0, tDays = 0): number {
-  return searchCompletenessWith(stats, offset, grid, sign, w, tDays, sign !== 0 ? trigAt(grid, tDays) : undefined);
-}
-
-/** searchCompleteness with the trial visit's trigValues given (undefined: as it is). */
-export function searchCompletenessWith(
-  stats: Float64Array,
-  offset: number,
-  grid: SearchGrid,
-  sign: number,
-  w: number,
-  tDays: number,
-  trig: Float64Array | undefined,
-): number {
-  const sw = trig ? sign * w : 0;
+  const sw = sign * w;
   const tau = tDays - grid.epochDays;
   const weight = stats[offset]! + sw;
-  const n = stats[offset + 3]! + (trig ? sign : 0);
+  const n = stats[offset + 3]! + sign;
   const zStar = searchThreshold(grid, n, weight, stats[offset + 1]! + sw * tau, stats[offset + 2]! + sw * tau * tau);
   if (zStar === Infinity) return 0;
   const b = Math.sqrt(zStar);
@@ -204,22 +191,27 @@ export function searchCompletenessWith(
   const noneSq = b > 9 ? (b - 9) ** 2 : -1;
   const eps = grid.eps;
   const a = weight + eps;
+  const freq = grid.angularFreq;
+  // The trial visit's phases as in updateSearchStats (sw = 0 leaves the sums as they are).
+  const stepAngle = freq.length > 1 ? (freq[1]! - freq[0]!) * tau : 0;
+  const stepSin = Math.sin(stepAngle);
+  const stepCos = Math.cos(stepAngle);
+  let sn = 0;
+  let cs = 1;
   let completeness = 0;
-  for (let k = 0, o = offset + HEAD; k < grid.angularFreq.length; k++, o += 5) {
-    let s = stats[o]!,
-      c = stats[o + 1]!,
-      ss = stats[o + 2]! + eps,
-      sc = stats[o + 3]!,
-      cc = stats[o + 4]! + eps;
-    if (trig) {
-      const sn = trig[2 * k]!;
-      const cs = trig[2 * k + 1]!;
-      s += sw * sn;
-      c += sw * cs;
-      ss += sw * sn * sn;
-      sc += sw * sn * cs;
-      cc += sw * cs * cs;
+  for (let k = 0, o = offset + HEAD; k < freq.length; k++, o += 5) {
+    if (k % TRIG_RESTART === 0) {
+      sn = Math.sin(freq[k]! * tau);
+      cs = Math.cos(freq[k]! * tau);
     }
+    const s = stats[o]! + sw * sn;
+    const c = stats[o + 1]! + sw * cs;
+    const ss = stats[o + 2]! + eps + sw * sn * sn;
+    const sc = stats[o + 3]! + sw * sn * cs;
+    const cc = stats[o + 4]! + eps + sw * cs * cs;
+    const next = sn * stepCos + cs * stepSin;
+    cs = cs * stepCos - sn * stepSin;
+    sn = next;
     // Schur complement S = [[ss - s^2/a, sc - s c/a], [sc - s c/a, cc - c^2/a]].
     const s11 = ss - (s * s) / a;
     const s12 = sc - (s * c) / a;

@@ -3,8 +3,8 @@
 // the visits already made always included (prior.ts). The weather replay (weather.ts) and the
 // sizing of the request from need (need.ts) share it, so both count exactly what the optimiser does.
 import { StarInformation } from '../rv/information.js';
-import { type CompiledProblem, SlotVisit, slotTrig } from './compile.js';
-import { searchCompletenessWith, searchStatsLength, updateSearchStatsWith } from './objective-search.js';
+import { type CompiledProblem, SlotVisit } from './compile.js';
+import { searchCompleteness, searchStatsLength, updateSearchStats } from './objective-search.js';
 import { seedInformation, seedSearchStats } from './prior.js';
 
 export class StarOutcomes {
@@ -70,7 +70,7 @@ export class StarOutcomes {
   add(j: number): void {
     const c = this.c;
     const grid = c.grids[this.star];
-    if (grid) updateSearchStatsWith(this.stats, 0, grid, 1, c.weight[j]!, c.midBjdTdb[j]!, slotTrig(c, j));
+    if (grid) updateSearchStats(this.stats, 0, grid, c.weight[j]!, c.midBjdTdb[j]!, 1);
     const info = this.information[this.star];
     if (info) {
       this.visit.slot = j;
@@ -99,9 +99,7 @@ export class StarOutcomes {
     const grid = c.grids[t];
     if (grid) {
       out[this.searchOutcome[t]!] =
-        without >= 0
-          ? searchCompletenessWith(this.stats, 0, grid, -1, c.weight[without]!, c.midBjdTdb[without]!, slotTrig(c, without))
-          : searchCompletenessWith(this.stats, 0, grid, 0, 0, 0, undefined);
+        without >= 0 ? searchCompleteness(this.stats, 0, grid, -1, c.weight[without]!, c.midBjdTdb[without]!) : searchCompleteness(this.stats, 0, grid);
     }
   }
 }

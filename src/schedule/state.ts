@@ -3,9 +3,10 @@
 // visit costs what that star's model costs (O(samples x parameters^2), or O(observed nights^2)
 // with correlated activity), plus O(period grid) for a search: never a recomputation of the plan.
 import { StarInformation, type InformationVisit } from '../rv/information.js';
-import { SlotVisit, slotTrig, type CompiledProblem } from './compile.js';
-import { idealCompleteness, MIN_SEARCH_VISITS, searchCompletenessWith, updateSearchStatsWith } from './objective-search.js';
+import { SlotVisit, type CompiledProblem } from './compile.js';
+import { idealCompleteness, MIN_SEARCH_VISITS, searchCompleteness, updateSearchStats } from './objective-search.js';
 import { seedInformation, seedSearchStats } from './prior.js';
+import { slotCodeHigh, slotCodeLow } from './set-key.js';
 import { goalValue, overshootAfterPrior } from './utility.js';
 
 /** Position of the first element of the sorted `list` greater than or equal to `value`. */
@@ -36,11 +37,17 @@ export class PlanState {
   /** Var(K) of every planet as the plan stands (compiled planet order). */
   readonly kVariance: Float64Array;
   readonly targetUtility: Float64Array;
-  /** Bumped whenever a star's visits change: a gain priced at the same version is still exact. */
-  private readonly targetVersion: Int32Array;
-  /** Per slot: the last gain priced and its star's version then (-1: none). */
+  /**
+   * Per star: the key of its set of visits (set-key.ts), which returns to a former value when the
+   * visits do (a night swap tried and undone): a gain priced under the same key is still exact.
+   */
+  private readonly targetKeyLow: Int32Array;
+  private readonly targetKeyHigh: Int32Array;
+  /** Per slot: the last gain priced and its star's key then (gainKnown 0: none). */
   private readonly gainValue: Float64Array;
-  private readonly gainVersion: Int32Array;
+  private readonly gainKeyLow: Int32Array;
+  private readonly gainKeyHigh: Int32Array;
+  private readonly gainKnown: Uint8Array;
   utility = 0;
   hoursUsed = 0;
   openNights = 0;
@@ -88,9 +95,12 @@ export class PlanState {
       if (grid) this.setSearchCredit(t);
     });
     this.targetUtility = new Float64Array(c.targetCount);
-    this.targetVersion = new Int32Array(c.targetCount);
+    this.targetKeyLow = new Int32Array(c.targetCount);
+    this.targetKeyHigh = new Int32Array(c.targetCount);
     this.gainValue = new Float64Array(c.slotCount);
-    this.gainVersion = new Int32Array(c.slotCount).fill(-1);
+    this.gainKeyLow = new Int32Array(c.slotCount);
+    this.gainKeyHigh = new Int32Array(c.slotCount);
+    this.gainKnown = new Uint8Array(c.slotCount);
     for (let t = 0; t < c.targetCount; t++) {
       this.targetUtility[t] = this.targetValue(t, 0, 0);
       this.utility += this.targetUtility[t]!;
@@ -116,8 +126,8 @@ export class PlanState {
   /** Completeness of star t's search with slot j added (sign 1), removed (-1), or as it is (0). */
   searchCompleteness(t: number, sign: number, j: number): number {
     const c = this.c;
-    if (sign === 0) return searchCompletenessWith(this.stats, c.statsOffset[t]!, c.grids[t]!, 0, 0, 0, undefined);
-    return searchCompletenessWith(this.stats, c.statsOffset[t]!, c.grids[t]!, sign, c.weight[j]!, c.midBjdTdb[j]!, slotTrig(c, j));
+    if (sign === 0) return searchCompleteness(this.stats, c.statsOffset[t]!, c.grids[t]!);
+    return searchCompleteness(this.stats, c.statsOffset[t]!, c.grids[t]!, sign, c.weight[j]!, c.midBjdTdb[j]!);
   }
 
   /** Completeness/goal of star t's search with slot j added (sign 1), removed (-1), or as it is (0). */
@@ -172,10 +182,14 @@ export class PlanState {
   /** Exact change of the total utility if slot j were added. */
   gain(j: number): number {
     const t = this.c.slotTarget[j]!;
-    if (this.gainVersion[j] === this.targetVersion[t]) return this.gainValue[j]!;
+    const low = this.targetKeyLow[t]!;
+    const high = this.targetKeyHigh[t]!;
+    if (this.gainKnown[j] && this.gainKeyLow[j] === low && this.gainKeyHigh[j] === high) return this.gainValue[j]!;
     const gain = this.targetValue(t, 1, j) - this.targetUtility[t]!;
     this.gainValue[j] = gain;
-    this.gainVersion[j] = this.targetVersion[t]!;
+    this.gainKeyLow[j] = low;
+    this.gainKeyHigh[j] = high;
+    this.gainKnown[j] = 1;
     return gain;
   }
 
@@ -289,7 +303,7 @@ export class PlanState {
     if (grid) {
       // No visits left: back to the prior's sums exactly rather than keep the rounding residue of the removals.
       if (mine.length === 0) seedSearchStats(this.stats, c, c.prior, t);
-      else updateSearchStatsWith(this.stats, c.statsOffset[t]!, grid, sign, c.weight[j]!, c.midBjdTdb[j]!, slotTrig(c, j));
+      else updateSearchStats(this.stats, c.statsOffset[t]!, grid, c.weight[j]!, c.midBjdTdb[j]!, sign);
     }
     const info = this.information[t];
     if (info) {
@@ -299,7 +313,8 @@ export class PlanState {
     const value = this.targetValue(t, 0, 0);
     this.utility += value - this.targetUtility[t]!;
     this.targetUtility[t] = value;
-    this.targetVersion[t]++;
+    this.targetKeyLow[t] ^= slotCodeLow(j);
+    this.targetKeyHigh[t] ^= slotCodeHigh(j);
   }
 
   /** kVariance of star t's planets from its information as it stands. */

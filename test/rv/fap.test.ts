@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { fapBaluev, fapContext, fapIndependent, fapSingle, logGamma, powerAtFap } from '../../src/rv/fap.js';
+import { baluevPowerAtFap, fapBaluev, fapContext, fapIndependent, fapSingle, logGamma, powerAtFap } from '../../src/rv/fap.js';
 import { frequencyGrid } from '../../src/rv/frequency-grid.js';
 import { argMax } from '../../src/rv/periodogram-peaks.js';
 import { glsAt, glsKernel } from '../../src/rv/periodogram.js';
@@ -85,5 +85,20 @@ describe('false-alarm probability', () => {
     const level = powerAtFap(0.01, ctx);
     expect(fapIndependent(level, ctx)).toBeGreaterThan(0.001);
     expect(fapIndependent(level, ctx)).toBeLessThan(0.1);
+  });
+});
+
+describe("the hot loop's Baluev threshold power", () => {
+  it('equals the level where fapBaluev crosses the FAP (within 1e-12), from any starting guess', () => {
+    for (const n of [5, 8, 20, 60, 200]) {
+      for (const effectiveSpanDays of [3, 40, 300]) {
+        const ctx = { n, bandPerDay: 0.48, baselineDays: 180, effectiveSpanDays };
+        // 60 bisections of fapBaluev itself (powerAtFap): the level to 1e-16.
+        const expected = powerAtFap(0.01, ctx);
+        for (const guess of [0, 1e-9, 0.3, expected * 1.01, 0.999999]) {
+          expect(Math.abs(baluevPowerAtFap(0.01, n, 0.48, effectiveSpanDays, guess) - expected)).toBeLessThan(1e-12);
+        }
+      }
+    }
   });
 });
