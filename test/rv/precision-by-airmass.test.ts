@@ -12,7 +12,9 @@ describe('precision prepared once per star, evaluated per airmass', () => {
   it('gives, in any order of airmasses, the one-shot budget at each, with nothing carried between calls', () => {
     const at = visitPrecisionByAirmass(instrument, star, 1200, { seeingArcsec: 1.1 });
     const budgets = airmasses.map((x) => at(x));
-    airmasses.forEach((x, i) => expect(budgets[i]).toEqual(visitPrecision(instrument, star, 1200, x, { seeingArcsec: 1.1 })));
+    airmasses.forEach((x, i) => {
+      expect(budgets[i]).toEqual(visitPrecision(instrument, star, 1200, x, { seeingArcsec: 1.1 }));
+    });
     expect(budgets[1]).not.toBe(budgets[4]);
   });
 
