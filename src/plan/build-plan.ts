@@ -35,7 +35,7 @@ export interface PlanOptions extends ReplanOptions, MemoryBudget {
 export function buildPlan(given: Campaign, options: PlanOptions = {}): Plan {
   const seed = options.seed ?? given.seed;
   const { site, window, time } = given;
-  const { campaign, rv, setups, windows, dropped, nights, observed, past, left, details, problem } = planInputs(given, options);
+  const { campaign, rv, setups, windows, dropped, nights, observed, past, left, candidates, detail, problem } = planInputs(given, options);
   // The margin over each goal the plan values, from the weather over the nights it may use (utility.ts).
   const overshootWeight = problemWeatherMargin(problem, campaign.goals.probability);
   options.onStage?.('optimisation');
@@ -43,8 +43,8 @@ export function buildPlan(given: Campaign, options: PlanOptions = {}): Plan {
   const trials = options.weatherTrials ?? WEATHER_TRIALS;
   options.onStage?.('weather trials');
   const weather = simulateWeather(problem, result, trials, seed, { overshootWeight });
-  const bySlot = new Map(details.map((d) => [d.slot.slotId, d]));
-  const ahead = result.slotIds.map((id) => plannedVisit(bySlot.get(id)!, campaign));
+  const bySlot = new Map(candidates.map((d) => [d.slot.slotId, d]));
+  const ahead = result.slotIds.map((id) => plannedVisit(detail(bySlot.get(id)!), campaign));
   const visits = [...past.kept, ...ahead].sort((a, b) => a.startUtc.localeCompare(b.startUtc));
   const windowEndBjdTdb = (t: TargetSetup) => starBjdTdb(DateTime.fromISO(window.end, { zone: site.timeZone }).plus({ days: 1 }).toJSDate(), t.target);
   const lost = new Set(campaign.lostDates);
@@ -106,7 +106,7 @@ export function buildPlan(given: Campaign, options: PlanOptions = {}): Plan {
     warnings: [],
   };
   const candidateDates = new Map<string, Set<string>>();
-  for (const d of details) candidateDates.set(d.slot.targetId, (candidateDates.get(d.slot.targetId) ?? new Set()).add(d.localDate));
+  for (const d of candidates) candidateDates.set(d.slot.targetId, (candidateDates.get(d.slot.targetId) ?? new Set()).add(d.localDate));
   plan.warnings = [...rv.warnings, ...planWarnings(plan, setups, { windows, dropped, candidateDates }, transitRule(campaign))];
   return plan;
 }

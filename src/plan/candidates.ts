@@ -2,6 +2,7 @@
 // scheduler may choose among, one star at a time (a visit observes a star and so all its planets),
 // each with its airmass, precision and the predicted phase of each planet.
 import { DateTime } from 'luxon';
+import { extent } from '../extent.js';
 import { bjdTdbOnTrack } from '../astro/bjd.js';
 import { earthTrack, type EarthTrack } from '../astro/earth-track.js';
 import { properMotionVectorJ2000 } from '../astro/position.js';
@@ -24,10 +25,14 @@ import { planetRows, starModel, starsOf } from './star-model.js';
 /** Spacing of candidate start times inside a window (Crest's choice: fine enough for phase, coarse enough to stay fast). */
 export const SLOT_STEP_MIN = 10;
 
-/** What a candidate slot means for the plan, beyond what the scheduler needs. */
-export interface SlotDetail {
+/** A candidate visit as the optimiser gets it, with the evening it belongs to. */
+export interface Candidate {
   slot: CandidateSlot;
   localDate: string;
+}
+
+/** What a candidate slot means for the plan, beyond what the scheduler needs (made only for the visits shown). */
+export interface SlotDetail extends Candidate {
   exposureSec: number;
   airmass: number;
   moonSeparationDeg: number;
@@ -213,14 +218,31 @@ function starSlotSetup(campaign: Campaign, setup: StarSetup): StarSlotSetup {
   };
 }
 
+/** A night's shared state for its slots: its index, clock, Moon and the Earth's track. */
+interface NightState {
+  n: number;
+  clock: SiteClock;
+  moon: MoonTrack;
+  earth: EarthTrack;
+}
+
+/** The candidate visits of a campaign and, for any of them, what it means for the plan. */
+export interface CandidateSet {
+  candidates: Candidate[];
+  /** The visit's airmass, Moon distance, precision and phases, computed as the candidates were (the same numbers). */
+  detail: (candidate: Candidate) => SlotDetail;
+}
+
 /**
  * Visit blocks every SLOT_STEP_MIN inside each of a star's windows (none whose exposure overlaps a
  * predicted transit of one of its planets, as transitRule says): acquisition, exposure, readout,
- * the whole block inside the window. Airmass, Moon distance, precision and phases at mid-exposure.
+ * the whole block inside the window, with their white σ at the airmass of mid-exposure.
  * Per night the Earth's barycentric track (BJD_TDB) and the Moon; per star and night its place and
- * its J2000 direction with proper motion; per star its precision's airmass-free part.
+ * its J2000 direction with proper motion; per star its precision's airmass-free part. Only the
+ * scheduler's part of each candidate is kept (a survey has millions); `detail` makes the rest for
+ * the few visits a plan shows.
  */
-export function candidateSlots(campaign: Campaign, nights: Night[], windows: Window[], stars: StarSetup[]): SlotDetail[] {
+export function candidateSlots(campaign: Campaign, nights: Night[], windows: Window[], stars: StarSetup[]): CandidateSet {
   const rule = transitRule(campaign);
   const byStar = new Map(stars.filter((s) => s.scheduleTarget).map((s) => [s.starId, starSlotSetup(campaign, s)]));
   const nightIndex = new Map(nights.map((n, i) => [n.localDate, i]));
@@ -231,38 +253,33 @@ export function candidateSlots(campaign: Campaign, nights: Night[], windows: Win
     if (list) list.push(w);
     else perNight.set(w.localDate, [w]);
   }
-  const details: SlotDetail[] = [];
+  const states = new Map<string, NightState>();
+  const candidates: Candidate[] = [];
   for (const [localDate, nightWindows] of perNight) {
     const n = nightIndex.get(localDate)!;
     const night = nights[n]!;
     const clock = siteClock(campaign.site, new Date((night.darkStart!.getTime() + night.darkEnd!.getTime()) / 2));
-    const moon = moonTrack(night, clock);
-    const earth = earthTrack(Math.min(...nightWindows.map((w) => w.start.getTime())), Math.max(...nightWindows.map((w) => w.end.getTime())));
-    for (const w of nightWindows) details.push(...windowSlots(byStar.get(w.targetId)!, w, { n, clock, moon, earth }, rule));
+    const earth = earthTrack(extent(nightWindows.map((w) => w.start.getTime())).min, extent(nightWindows.map((w) => w.end.getTime())).max);
+    const state = { n, clock, moon: moonTrack(night, clock), earth };
+    states.set(localDate, state);
+    for (const w of nightWindows) windowSlots(byStar.get(w.targetId)!, w, state, rule, candidates);
   }
-  return details;
+  const detail = (c: Candidate): SlotDetail => slotDetail(byStar.get(c.slot.targetId)!, c, states.get(c.localDate)!);
+  return { candidates, detail };
 }
 
-/** One window's slots, with the night's shared state. */
-function windowSlots(
-  star: StarSlotSetup,
-  w: Window,
-  night: { n: number; clock: SiteClock; moon: MoonTrack; earth: EarthTrack },
-  rule: TransitRule,
-): SlotDetail[] {
-  const { setup, ephemerides, transiting, durationMs, midOffsetMs, halfExposureDays } = star;
+/** One window's slots, with the night's shared state, appended to `out`. */
+function windowSlots(star: StarSlotSetup, w: Window, night: NightState, rule: TransitRule, out: Candidate[]): void {
+  const { setup, transiting, durationMs, midOffsetMs, halfExposureDays } = star;
   const position = preparePosition(setup.star, night.clock);
   const direction = properMotionVectorJ2000(setup.star, night.clock.frame.epochYear);
   const stepMs = SLOT_STEP_MIN * 60_000;
-  const slots: SlotDetail[] = [];
   // Blocks start on whole minutes, so the plan reads 21:06, not 21:05:43.9.
   const firstMs = Math.ceil(w.start.getTime() / 60_000) * 60_000;
   for (let startMs = firstMs; startMs + durationMs <= w.end.getTime(); startMs += stepMs) {
-    const midMs = startMs + midOffsetMs;
-    const midBjdTdb = bjdTdbOnTrack(night.earth, new Date(midMs), direction);
+    const midBjdTdb = bjdTdbOnTrack(night.earth, new Date(startMs + midOffsetMs), direction);
     if (transiting.some((eph) => overlapsTransit(eph, midBjdTdb - halfExposureDays, midBjdTdb + halfExposureDays, rule))) continue;
-    const airmass = airmassAt(position, midMs);
-    const budget = star.precisionAt(airmass);
+    const budget = star.precisionAt(airmassAt(position, startMs + midOffsetMs));
     const slot: CandidateSlot = {
       slotId: `${setup.starId}|${w.localDate}|${startMs}`,
       targetId: setup.starId,
@@ -272,18 +289,27 @@ function windowSlots(
       whiteSigmaMps: whiteSigmaMps(budget.visitSigmaMps, setup.noise),
       midBjdTdb,
     };
-    slots.push({
-      slot,
-      localDate: w.localDate,
-      exposureSec: setup.exposure.exposureSec,
-      airmass,
-      moonSeparationDeg: moonSeparationDeg(night.moon, position.vector, midMs),
-      midBjdTdb,
-      visitSigmaMps: budget.visitSigmaMps,
-      effectiveSigmaMps: budget.effectiveSigmaMps,
-      phases: ephemerides.map(({ id, eph }) => ({ targetId: id, phase: phaseAt(eph, midBjdTdb), phaseErr: phaseErrCycles(eph, midBjdTdb) })),
-      snrPerPixel: budget.snrPerPixel,
-    });
+    out.push({ slot, localDate: w.localDate });
   }
-  return slots;
+}
+
+/** A candidate's airmass, Moon distance, precision and phases at mid-exposure, as windowSlots computes them. */
+function slotDetail(star: StarSlotSetup, c: Candidate, night: NightState): SlotDetail {
+  const { setup, ephemerides, midOffsetMs } = star;
+  const position = preparePosition(setup.star, night.clock);
+  const midMs = c.slot.startMs + midOffsetMs;
+  const { midBjdTdb } = c.slot;
+  const airmass = airmassAt(position, midMs);
+  const budget = star.precisionAt(airmass);
+  return {
+    ...c,
+    exposureSec: setup.exposure.exposureSec,
+    airmass,
+    moonSeparationDeg: moonSeparationDeg(night.moon, position.vector, midMs),
+    midBjdTdb,
+    visitSigmaMps: budget.visitSigmaMps,
+    effectiveSigmaMps: budget.effectiveSigmaMps,
+    phases: ephemerides.map(({ id, eph }) => ({ targetId: id, phase: phaseAt(eph, midBjdTdb), phaseErr: phaseErrCycles(eph, midBjdTdb) })),
+    snrPerPixel: budget.snrPerPixel,
+  };
 }

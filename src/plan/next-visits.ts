@@ -58,11 +58,11 @@ export function nextVisits(given: Campaign, at: Date): NextAnswer {
   // One night: the evening of `at`, granted; the RVs and visits so far as the campaign holds them.
   const night: Campaign = { ...given, window: { start: localDate, end: localDate }, time: { mode: 'given-nights', dates: [localDate] }, lostDates: [] };
   const inputs = planInputs(night, { now: at });
-  const { problem, details } = inputs;
+  const { problem, candidates, detail } = inputs;
   const c = compileProblem(problem);
   const state = new PlanState(c, Infinity, OVERSHOOT);
   for (let n = 0; n < c.nightCount; n++) state.openNight(n);
-  const detailOf = new Map(details.map((d) => [d.slot.slotId, d]));
+  const candidateOf = new Map(candidates.map((d) => [d.slot.slotId, d]));
   const firstOfStar = new Map<number, number>();
   const latestStartMs = at.getTime() + SLOT_STEP_MIN * 60_000;
   for (let j = 0; j < c.slotCount; j++) {
@@ -92,7 +92,7 @@ export function nextVisits(given: Campaign, at: Date): NextAnswer {
   };
   const choices: NextChoice[] = [];
   for (const [t, j] of firstOfStar) {
-    const d = detailOf.get(problem.slots[c.slotSource[j]!]!.slotId)!;
+    const d = detail(candidateOf.get(problem.slots[c.slotSource[j]!]!.slotId)!);
     const gain = state.gain(j);
     const before = ratios(t);
     state.add(j);

@@ -7,7 +7,17 @@ import type { ObservedVisit } from './plan-schema.js';
 import type { ScheduleProblem } from '../schedule/types.js';
 import { computeNights } from '../sky/nights.js';
 import { computeWindows, type DroppedWindow } from '../sky/visibility.js';
-import { candidateSlots, scheduleNights, setupStars, setupTargets, starTargets, type SlotDetail, type StarSetup, type TargetSetup } from './candidates.js';
+import {
+  candidateSlots,
+  scheduleNights,
+  setupStars,
+  setupTargets,
+  starTargets,
+  type Candidate,
+  type SlotDetail,
+  type StarSetup,
+  type TargetSetup,
+} from './candidates.js';
 import { splitHalves } from './half-nights.js';
 import { observedVisits } from './observed-visits.js';
 import { updateFromRvs, type RvUpdate } from './orbit-update.js';
@@ -29,7 +39,9 @@ export interface PlanInputs {
   past: History;
   left: Remaining;
   /** The candidate visits still open, and the problem made of them. */
-  details: SlotDetail[];
+  candidates: Candidate[];
+  /** What one of them means for the plan (airmass, Moon, precision, phases), made on demand. */
+  detail: (candidate: Candidate) => SlotDetail;
   problem: ScheduleProblem;
 }
 
@@ -54,11 +66,12 @@ export function planInputs(given: Campaign, options: ReplanOptions & MemoryBudge
   options.onStage?.('candidate visits');
   // A campaign too large for the heap stops here, before its visits are built (visit-budget.ts).
   if (options.heapLimitBytes !== undefined) checkVisitBudget(campaign, candidateVisitCount(windows, stars, dates), stars.length, options.heapLimitBytes);
-  const details = candidateSlots(campaign, nights, windows, stars).filter((d) => dates.has(d.localDate) && open(d));
+  const all = candidateSlots(campaign, nights, windows, stars);
+  const candidates = all.candidates.filter((d) => dates.has(d.localDate) && open(d));
   const whole: ScheduleProblem = {
     nights: left.nights,
     targets: stars.flatMap((s) => (s.scheduleTarget ? [s.scheduleTarget] : [])),
-    slots: details.map((d) => d.slot),
+    slots: candidates.map((d) => d.slot),
     time: left.time,
     constraints: {
       minSpacingHours: constraints.minSpacingHours,
@@ -68,5 +81,5 @@ export function planInputs(given: Campaign, options: ReplanOptions & MemoryBudge
     prior: priorVisits(past, rv.fittedStars, allNights),
   };
   const problem = campaign.time.mode === 'choose-nights' && campaign.time.halfNights ? splitHalves(whole, nights) : whole;
-  return { campaign, rv, setups, stars, nights, windows, dropped, observed, past, left, details, problem };
+  return { campaign, rv, setups, stars, nights, windows, dropped, observed, past, left, candidates, detail: all.detail, problem };
 }

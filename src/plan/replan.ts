@@ -13,7 +13,7 @@
 import type { Campaign } from './campaign.js';
 import type { ObservedVisit, Plan, PlannedVisit } from './plan-schema.js';
 import type { PriorVisit, ScheduleNight, ScheduleTimeModel } from '../schedule/types.js';
-import type { SlotDetail } from './candidates.js';
+import type { Candidate } from './candidates.js';
 import { eveningDate } from './observed-visits.js';
 
 export interface ReplanOptions {
@@ -61,7 +61,7 @@ export function priorVisits(h: History, fittedStars: ReadonlySet<string>, nights
  * a star with visitsPerNight > 1, whose count the scheduler holds to the cap; on other evenings by
  * minSpacingHours).
  */
-export function openSlot(campaign: Campaign, h: History, now: Date | undefined): (d: SlotDetail) => boolean {
+export function openSlot(campaign: Campaign, h: History, now: Date | undefined): (d: Candidate) => boolean {
   const lost = new Set(campaign.lostDates);
   const { minSpacingHours, sameNightSpacingHours } = campaign.constraints;
   const onePerNight = minSpacingHours >= 12;
@@ -77,7 +77,7 @@ export function openSlot(campaign: Campaign, h: History, now: Date | undefined):
     const prior = byStar.get(d.slot.targetId) ?? [];
     const several = (perNight.get(d.slot.targetId) ?? 1) > 1;
     return !prior.some((p) => {
-      const apartDays = Math.abs(p.bjdTdb - d.midBjdTdb);
+      const apartDays = Math.abs(p.bjdTdb - d.slot.midBjdTdb);
       if (onePerNight && p.date === d.localDate) return !several || apartDays < sameNightSpacingHours / 24;
       return apartDays < minSpacingHours / 24;
     });

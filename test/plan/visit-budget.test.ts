@@ -31,14 +31,14 @@ describe('candidate visits counted from the windows', () => {
   const inputs = planInputs(campaign, {});
 
   it('equal the visits built when no block overlaps a transit', () => {
-    expect(inputs.details.length).toBeGreaterThan(100);
-    expect(candidateVisitCount(inputs.windows, inputs.stars, openDates(inputs))).toBe(inputs.details.length);
+    expect(inputs.candidates.length).toBeGreaterThan(100);
+    expect(candidateVisitCount(inputs.windows, inputs.stars, openDates(inputs))).toBe(inputs.candidates.length);
   });
 
   it('are an upper bound when transits take blocks out (the demo)', () => {
     const demo = readCampaign(DEMO_CAMPAIGN);
     const short = planInputs({ ...demo, window: { start: '2027-03-01', end: '2027-03-05' }, time: { mode: 'choose-nights', nights: 2 } }, {});
-    expect(candidateVisitCount(short.windows, short.stars, openDates(short))).toBeGreaterThanOrEqual(short.details.length);
+    expect(candidateVisitCount(short.windows, short.stars, openDates(short))).toBeGreaterThanOrEqual(short.candidates.length);
   });
 
   it('count only the nights still open', () => {
@@ -48,7 +48,7 @@ describe('candidate visits counted from the windows', () => {
 
 describe('a campaign too large for the heap', () => {
   const campaign = smallCampaign();
-  const visits = planInputs(campaign, {}).details.length;
+  const visits = planInputs(campaign, {}).candidates.length;
   /** The heap limit at which these visits just fit their share. */
   const fitLimitBytes = (FIXED_HEAP_BYTES + visits * HEAP_BYTES_PER_VISIT) / HEAP_SHARE;
 
@@ -71,7 +71,7 @@ describe('a campaign too large for the heap', () => {
   });
 
   it('is planned when the limit holds it', () => {
-    expect(planInputs(campaign, { heapLimitBytes: fitLimitBytes * 1.01 }).details).toHaveLength(visits);
+    expect(planInputs(campaign, { heapLimitBytes: fitLimitBytes * 1.01 }).candidates).toHaveLength(visits);
   });
 });
 

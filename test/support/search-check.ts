@@ -28,8 +28,9 @@ export function searchChecks(campaign: Campaign, plan: Plan, minVisits: number, 
       const planned: Visit[] = plan.visits
         .filter((v) => v.starId === target.starId)
         .map((v) => ({ bjdTdb: v.midBjdTdb, sigmaMps: v.effectiveSigmaMps, night: v.localDate }));
-      const candidates: Visit[] = inputs.details
-        .filter((d) => d.slot.targetId === target.starId)
+      const candidates: Visit[] = inputs.candidates
+        .filter((c) => c.slot.targetId === target.starId)
+        .map((c) => inputs.detail(c))
         .map((d) => ({ bjdTdb: d.midBjdTdb, sigmaMps: d.effectiveSigmaMps, night: d.localDate }));
       const nights = new Set(planned.map((v) => v.night));
       const spacing = { minSpacingHours, onePerNight: minSpacingHours >= 12, perNight: target.visitsPerNight ?? 1, sameNightSpacingHours };
