@@ -6,7 +6,6 @@ import type { Night } from '../model.js';
 import type { Campaign } from './campaign.js';
 import type { Plan, PlannedVisit, TargetSummary } from './plan-schema.js';
 import { phaseErrCycles } from '../orbit/ephemeris.js';
-import { compileProblem } from '../schedule/compile.js';
 import { optimiseSchedule } from '../schedule/optimise.js';
 import type { ScheduleResult } from '../schedule/types.js';
 import { problemWeatherMargin } from '../schedule/utility.js';
@@ -40,13 +39,10 @@ export function buildPlan(given: Campaign, options: PlanOptions = {}): Plan {
   // The margin over each goal the plan values, from the weather over the nights it may use (utility.ts).
   const overshootWeight = problemWeatherMargin(problem, campaign.goals.probability);
   options.onStage?.('optimisation');
-  // One compiled problem for the optimiser, the weather replay and the need (compiling a survey's
-  // millions of candidates takes seconds; none of the three changes it).
-  const compiled = compileProblem(problem);
-  const result = optimiseSchedule(problem, { seed, overshootWeight }, compiled);
+  const result = optimiseSchedule(problem, { seed, overshootWeight });
   const trials = options.weatherTrials ?? WEATHER_TRIALS;
   options.onStage?.('weather trials');
-  const weather = simulateWeather(problem, result, trials, seed, { overshootWeight }, compiled);
+  const weather = simulateWeather(problem, result, trials, seed, { overshootWeight });
   const bySlot = new Map(candidates.map((d) => [d.slot.slotId, d]));
   const ahead = result.slotIds.map((id) => plannedVisit(detail(bySlot.get(id)!), campaign));
   const visits = [...past.kept, ...ahead].sort((a, b) => a.startUtc.localeCompare(b.startUtc));
@@ -61,7 +57,7 @@ export function buildPlan(given: Campaign, options: PlanOptions = {}): Plan {
   const plannedHalves = chosen.halves.filter((h) => !past.kept.some((v) => v.localDate === h.localDate));
   options.onStage?.('time request');
   const request = planRequest(
-    needFromPlan(problem, result, campaign.goals.probability, trials, seed, compiled),
+    needFromPlan(problem, result, campaign.goals.probability, trials, seed),
     new Map(result.slotIds.map((id) => [id, { ...bySlot.get(id)!.slot, localDate: bySlot.get(id)!.localDate }])),
     nights,
     plannedDates,

@@ -15,7 +15,7 @@
 // planned visit when even all of them fall short. A star's request is the largest need of its
 // outcomes; at the full count the probabilities are the weather replay's exactly.
 import { createRng } from '../rv/random.js';
-import { type CompiledProblem, compileProblem } from './compile.js';
+import { compileProblem } from './compile.js';
 import { StarOutcomes } from './star-outcomes.js';
 import type { ScheduleProblem, ScheduleResult } from './types.js';
 import { drawWeather, plannedSlots, reachesGoal } from './weather.js';
@@ -78,14 +78,8 @@ function byValue(outcomes: StarOutcomes, t: number, slots: number[]): number[] {
  * The visits each star of `result` needs to reach its goals with `probability` under `trials`
  * weather draws of `seed` (those of simulateWeather with the same seed).
  */
-export function needFromPlan(
-  problem: ScheduleProblem,
-  result: ScheduleResult,
-  probability: number,
-  trials: number,
-  seed: number,
-  c: CompiledProblem = compileProblem(problem),
-): NeedResult {
+export function needFromPlan(problem: ScheduleProblem, result: ScheduleResult, probability: number, trials: number, seed: number): NeedResult {
+  const c = compileProblem(problem);
   const { perTarget, usedNights, clearProbability } = plannedSlots(c, result);
   const outcomes = new StarOutcomes(c);
   const order = perTarget.map((slots, t) => byValue(outcomes, t, slots));

@@ -209,7 +209,8 @@ export function optimiseCompiled(c: CompiledProblem, options: ScheduleOptions): 
  * Chooses visits (and nights) for `problem`; deterministic for `options.seed`.
  * Throws a plain Error if the problem is inconsistent (unknown target or night, missing phase).
  */
-export function optimiseSchedule(problem: ScheduleProblem, options: ScheduleOptions, c: CompiledProblem = compileProblem(problem)): ScheduleResult {
+export function optimiseSchedule(problem: ScheduleProblem, options: ScheduleOptions): ScheduleResult {
+  const c = compileProblem(problem);
   const state = optimiseCompiled(c, options);
   const chosen = state.chosenSlots();
   const targets = outcomes(state);

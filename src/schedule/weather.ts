@@ -64,14 +64,8 @@ export function drawWeather(rng: Rng, usedNights: number[], clearProbability: nu
 export const reachesGoal = (value: number, goal: number) => value >= goal * (1 - 1e-9);
 
 /** Replays `result`'s visits of `problem` under `trials` seeded weather draws. */
-export function simulateWeather(
-  problem: ScheduleProblem,
-  result: ScheduleResult,
-  trials: number,
-  seed: number,
-  options: WeatherOptions = {},
-  c: CompiledProblem = compileProblem(problem),
-): WeatherOutcome {
+export function simulateWeather(problem: ScheduleProblem, result: ScheduleResult, trials: number, seed: number, options: WeatherOptions = {}): WeatherOutcome {
+  const c = compileProblem(problem);
   const overshoot = options.overshootWeight ?? 0.1;
   const { perTarget, usedNights, clearProbability } = plannedSlots(c, result);
   const rng = createRng(seed);
