@@ -17,6 +17,7 @@ import { planInputs } from './plan-inputs.js';
 import type { StageListener } from './plan-stages.js';
 import { planRequest } from './request.js';
 import type { ReplanOptions } from './replan.js';
+import { skyFacts } from './visit-causes.js';
 import { planWarnings } from './warnings.js';
 import type { MemoryBudget } from './visit-budget.js';
 
@@ -105,9 +106,7 @@ export function buildPlan(given: Campaign, options: PlanOptions = {}): Plan {
     },
     warnings: [],
   };
-  const candidateDates = new Map<string, Set<string>>();
-  for (const d of candidates) candidateDates.set(d.slot.targetId, (candidateDates.get(d.slot.targetId) ?? new Set()).add(d.localDate));
-  plan.warnings = [...rv.warnings, ...planWarnings(plan, setups, { windows, dropped, candidateDates }, transitRule(campaign))];
+  plan.warnings = [...rv.warnings, ...planWarnings(plan, setups, skyFacts(windows, dropped, candidates), transitRule(campaign))];
   return plan;
 }
 

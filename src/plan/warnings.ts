@@ -5,7 +5,7 @@ import type { Plan, TargetSummary } from './plan-schema.js';
 import { nearestEpoch, type TransitRule, transitHalfWidthDays } from '../orbit/ephemeris.js';
 import { visitsNeeded } from '../rv/detect.js';
 import { starCaps, type TargetSetup } from './candidates.js';
-import { dropSummary, missingWindowsText, noVisitCause, type SkyFacts } from './visit-causes.js';
+import { droppedOf, dropSummary, missingWindowsText, noVisitCause, type SkyFacts } from './visit-causes.js';
 
 /**
  * Phase error (cycles) above which the linearised information model stops being trustworthy:
@@ -48,7 +48,7 @@ function capText(plan: Plan, summary: TargetSummary, setup: TargetSetup): string
 
 /** Fills each target's warnings in place and returns the plan-wide ones. */
 export function planWarnings(plan: Plan, setups: TargetSetup[], sky: SkyFacts, rule: TransitRule): string[] {
-  const observable = new Set(sky.windows.map((w) => w.targetId));
+  const observable = sky.windowDates;
   // JD (UTC) of the window's last dark end: within minutes of its BJD_TDB, enough to pick the transit epoch.
   const allDates = plan.nights.map((n) => n.localDate);
   const windowEndJd = Math.max(...plan.nights.map((n) => (n.darkEnd ? n.darkEnd.getTime() / 86_400_000 + 2_440_587.5 : -Infinity)));
@@ -58,14 +58,7 @@ export function planWarnings(plan: Plan, setups: TargetSetup[], sky: SkyFacts, r
     if (setup.skipped) w.push(setup.skipped);
     const neverObservable = !observable.has(summary.starId);
     // A star never observable gets that one warning, with its cause; what its visits would cost is moot.
-    if (neverObservable)
-      w.push(
-        `never observable in the window: ${dropSummary(
-          sky.dropped.filter((d) => d.targetId === summary.starId),
-          allDates,
-          'window',
-        )}`,
-      );
+    if (neverObservable) w.push(`never observable in the window: ${dropSummary(droppedOf(sky, summary.starId), allDates, 'window')}`);
     else if (setup.exposure.warning) w.push(setup.exposure.warning);
     const shortfall = () =>
       summary.visits === 0 && !summary.priorVisits
