@@ -3,7 +3,7 @@ import { inputError } from '../errors.js';
 import { instrumentFromFlag } from '../io/site-list.js';
 import { readTargets } from '../io/targets.js';
 import { toCsv } from '../report/csv.js';
-import { MASS_SYMBOL, MASS_UNITS, type MassUnit, massInEarth, massInUnit } from '../report/mass-unit.js';
+import { MASS_DECIMALS, MASS_SYMBOL, MASS_UNITS, type MassUnit, massInEarth, massInUnit } from '../report/mass-unit.js';
 import { fmt, renderTable, type Column } from '../report/table.js';
 import { periodGridDays } from '../rv/detect.js';
 import { targetDetectability, type DetectOptions, type DetectStar, type TargetDetectability } from '../rv/target-detect.js';
@@ -76,7 +76,7 @@ const pair = (a: number | undefined, b: number | undefined, decimals: number) =>
 function printTable(rows: TargetDetectability[], options: DetectOptions, unit: MassUnit): void {
   const n = options.goalSignificance;
   const mass = (earth: number | undefined) => (earth === undefined ? undefined : massInUnit(earth, unit));
-  const massDecimals = unit === 'jupiter' ? 3 : 1;
+  const massDecimals = MASS_DECIMALS[unit];
   const levels = [...new Set([3, 5, n])].sort((a, b) => a - b);
   const columns: Column[] = [
     { header: 'target' },
@@ -146,7 +146,7 @@ function printLimits(rows: TargetDetectability[], options: DetectOptions, unit: 
   if (!first) return;
   const what = `Smallest detectable m sin i (${MASS_SYMBOL[unit]}) for K/sigma_K = ${options.goalSignificance}`;
   console.log(`\n${what} with ${options.visits} visits at random phases:`);
-  const limit = (r: TargetDetectability, i: number) => fmt(massInUnit(r.atPlannedVisits!.massLimits![i]!.massMinRandomEarth, unit), unit === 'jupiter' ? 3 : 1);
+  const limit = (r: TargetDetectability, i: number) => fmt(massInUnit(r.atPlannedVisits!.massLimits![i]!.massMinRandomEarth, unit), MASS_DECIMALS[unit]);
   const body = first.map((l, i) => [fmt(l.periodDays, 0), ...rows.map((r) => limit(r, i))]);
   console.log(renderTable([{ header: 'P (d)', align: 'right' }, ...rows.map((r) => ({ header: r.targetId, align: 'right' as const }))], body));
 }

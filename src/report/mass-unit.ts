@@ -7,6 +7,9 @@ export type MassUnit = (typeof MASS_UNITS)[number];
 
 export const MASS_SYMBOL: Record<MassUnit, string> = { earth: 'M⊕', jupiter: 'MJup' };
 
+/** Decimals a printed mass takes: 0.1 M⊕, 0.001 MJup (a third of an Earth mass). */
+export const MASS_DECIMALS: Record<MassUnit, number> = { earth: 1, jupiter: 3 };
+
 /** A mass given in Earth masses, in `unit`. */
 export function massInUnit(earth: number, unit: MassUnit): number {
   return unit === 'jupiter' ? earth / EARTH_PER_JUPITER : earth;

@@ -3,7 +3,7 @@
 import ICAL from 'ical.js';
 import { DateTime } from 'luxon';
 import type { Plan, PlannedVisit } from '../../src/plan/plan-schema.js';
-import { parseDecDeg, parseRaDeg } from '../../src/io/sexagesimal.js';
+import { placeOffsetMas } from './place-offset.js';
 import { secondOccurrence } from '../../src/report/plan-ics.js';
 
 export interface IcsEvent {
@@ -101,11 +101,9 @@ function placeProblems(plan: Plan, v: PlannedVisit, e: IcsEvent): string[] {
   const m = /RA (\d\d:\d\d:\d\d\.\d+) Dec ([+-]\d\d:\d\d:\d\d\.\d+)/.exec(e.description);
   const star = plan.campaign.targets.find((t) => t.starId === v.starId)!;
   if (!m) return [...problems, 'description lacks RA and Dec'];
-  const years = (Date.parse(v.startUtc) - Date.UTC(2000, 0, 1, 12)) / (365.25 * 86_400_000) + 2000 - star.epochYear;
-  const cosDec = Math.cos((star.decDeg * Math.PI) / 180);
-  const dRa = (((parseRaDeg(m[1]!) - star.raDeg + 540) % 360) - 180) * 3.6e6 * cosDec - star.pmRaMasYr * years;
-  const dDec = (parseDecDeg(m[2]!) - star.decDeg) * 3.6e6 - star.pmDecMasYr * years;
-  if (Math.hypot(dRa, dDec) > 100) problems.push(`RA ${m[1]} Dec ${m[2]} is ${Math.hypot(dRa, dDec).toFixed(0)} mas from the star's place`);
+  const { eastMas, northMas } = placeOffsetMas(star, m[1]!, m[2]!, v.startUtc);
+  const offMas = Math.hypot(eastMas, northMas);
+  if (offMas > 100) problems.push(`RA ${m[1]} Dec ${m[2]} is ${offMas.toFixed(0)} mas from the star's place`);
   return problems;
 }
 

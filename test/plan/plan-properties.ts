@@ -8,7 +8,7 @@ import { PLAN_CSV_HEADER, renderPlanCsv } from '../../src/report/plan-csv.js';
 import { renderPlanIcs } from '../../src/report/plan-ics.js';
 import { checkVisits, REFERENCE_TOLERANCE_MIN } from './check-visits.js';
 import { icsMismatches } from './check-ics.js';
-import { parseDecDeg, parseRaDeg } from '../../src/io/sexagesimal.js';
+import { placeOffsetMas } from './place-offset.js';
 import { CSV_ROUNDING, csvVisits, kOverSigmaKFromCsv, parsePlanCsv } from './recompute-k.js';
 
 /** Few weather trials: the weather is not what these tests check. */
@@ -98,12 +98,9 @@ export function describePlanProperties(names: string[], planOf: (name: string) =
         // its epoch (a small-angle property, independent of the module's vectors), within the
         // text's rounding (1 ms of RA, 10 mas of Dec) plus 1 mas.
         const star = rows[0]!;
-        const years = (Date.parse(r.startUtc!) - Date.UTC(2000, 0, 1, 12)) / (365.25 * 86_400_000) + 2000 - star.epochYear;
-        const cosDec = Math.cos((star.decDeg * Math.PI) / 180);
-        const dRaMas = (((parseRaDeg(r.raIcrs!) - star.raDeg + 540) % 360) - 180) * 3.6e6 * cosDec - star.pmRaMasYr * years;
-        const dDecMas = (parseDecDeg(r.decIcrs!) - star.decDeg) * 3.6e6 - star.pmDecMasYr * years;
-        expect(Math.abs(dRaMas)).toBeLessThanOrEqual(7.5 * cosDec + 1);
-        expect(Math.abs(dDecMas)).toBeLessThanOrEqual(5 + 1);
+        const { eastMas, northMas, cosDec } = placeOffsetMas(star, r.raIcrs!, r.decIcrs!, r.startUtc!);
+        expect(Math.abs(eastMas)).toBeLessThanOrEqual(7.5 * cosDec + 1);
+        expect(Math.abs(northMas)).toBeLessThanOrEqual(5 + 1);
       }
     });
   });
